@@ -1,0 +1,81 @@
+import { InputError } from '../units/input-error.js';
+import { parseFrequency } from '../units/parse-frequency.js';
+import { hz, type Hz } from '../units/quantities.js';
+import type { Band } from '../math/band.js';
+import type { Guard } from '../report/windows-report.js';
+
+/** A frequency option that must be above zero. */
+export function positiveFrequency(text: string, option: string): Hz {
+  const value = parseFrequency(text, option);
+  if (value <= 0) throw new InputError(option, 'a frequency above zero', text);
+  return value;
+}
+
+/** A guard band: a frequency, or a percentage of the band's width (`5%`). */
+export function guardWidth(text: string, option: string, bandwidth: Hz): Hz {
+  const percent = /^\s*(\d+\.?\d*|\.\d+)\s*%\s*$/.exec(text);
+  if (percent) return hz((Number(percent[1]) / 100) * bandwidth);
+  return parseFrequency(text, option);
+}
+
+export interface BandOptions {
+  low?: string;
+  high?: string;
+  center?: string;
+  width?: string;
+}
+
+/** The band from either --low/--high or --center/--width, never a mix. */
+export function bandFromOptions(options: BandOptions): Band {
+  const byEdges = options.low !== undefined || options.high !== undefined;
+  const byCentre = options.center !== undefined || options.width !== undefined;
+  if (byEdges && byCentre) {
+    throw new InputError('--low/--high', 'either --low and --high, or --center and --width, not both', 'both');
+  }
+  if (byCentre) {
+    const center = positiveFrequency(required(options.center, '--center'), '--center');
+    const width = positiveFrequency(required(options.width, '--width'), '--width');
+    if (width / 2 > center) throw new InputError('--width', `a width of at most twice the centre (${options.center})`, options.width ?? '');
+    return { low: hz(center - width / 2), high: hz(center + width / 2) };
+  }
+  const low = parseFrequency(required(options.low, '--low'), '--low');
+  const high = parseFrequency(required(options.high, '--high'), '--high');
+  if (high <= low) throw new InputError('--high', `a frequency above --low (${options.low})`, options.high ?? '');
+  return { low, high };
+}
+
+export interface GuardOptions {
+  guard?: string;
+  guardLow?: string;
+  guardHigh?: string;
+}
+
+/** The guards from --guard (both sides) or --guard-low/--guard-high. */
+export function guardFromOptions(options: GuardOptions, band: Band): Guard {
+  const width = hz(band.high - band.low);
+  if (options.guard !== undefined) {
+    if (options.guardLow !== undefined || options.guardHigh !== undefined) {
+      throw new InputError('--guard', 'either --guard, or --guard-low/--guard-high, not both', options.guard);
+    }
+    const both = guardWidth(options.guard, '--guard', width);
+    return { low: both, high: both };
+  }
+  return {
+    low: options.guardLow === undefined ? hz(0) : guardWidth(options.guardLow, '--guard-low', width),
+    high: options.guardHigh === undefined ? hz(0) : guardWidth(options.guardHigh, '--guard-high', width),
+  };
+}
+
+function required(value: string | undefined, option: string): string {
+  if (value === undefined) throw new InputError(option, `${option} with a frequency`, 'nothing');
+  return value;
+}
+
+/** A whole number within bounds, for counts such as --multiples. */
+export function wholeNumber(text: string, option: string, least: number, most: number): number {
+  const value = Number(text);
+  if (!/^\s*\d+\s*$/.test(text) || value < least || value > most) {
+    throw new InputError(option, `a whole number from ${least} to ${most}`, text);
+  }
+  return value;
+}

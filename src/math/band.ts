@@ -1,0 +1,39 @@
+import { hz, type Hz } from '../units/quantities.js';
+import { sameEdge } from './edge-tolerance.js';
+
+/** A real frequency band [low, high], Hz. */
+export interface Band {
+  readonly low: Hz;
+  readonly high: Hz;
+}
+
+/** A band after sampling: its zone and its image inside [0, rate/2]. */
+export interface BandImage extends Band {
+  readonly zone: number;
+  readonly inverted: boolean;
+}
+
+/**
+ * Where a whole band lands after sampling, or null when it straddles a zone
+ * boundary (then its image folds onto itself). Edges on a boundary count as
+ * inside. The image keeps low < high; `inverted` says it is mirrored.
+ *
+ * @param band the band, Hz
+ * @param rate sampling rate, Hz
+ * @example bandImage({ low: 60e6, high: 80e6 }, 100e6) // zone 2, inverted, 20–40 MHz
+ */
+export function bandImage(band: Band, rate: Hz): BandImage | null {
+  const zone = Math.max(1, Math.ceil((band.low + band.high) / rate));
+  const zoneLow = ((zone - 1) * rate) / 2;
+  const zoneHigh = (zone * rate) / 2;
+  const fits = (band.low >= zoneLow || sameEdge(band.low, zoneLow)) && (band.high <= zoneHigh || sameEdge(band.high, zoneHigh));
+  if (!fits) return null;
+  const inverted = zone % 2 === 0;
+  const clamp = (f: number) => hz(Math.min(Math.max(f, 0), rate / 2));
+  if (inverted) {
+    const shift = (zone / 2) * rate;
+    return { zone, inverted, low: clamp(shift - band.high), high: clamp(shift - band.low) };
+  }
+  const shift = ((zone - 1) / 2) * rate;
+  return { zone, inverted, low: clamp(band.low - shift), high: clamp(band.high - shift) };
+}

@@ -1,0 +1,51 @@
+import { InputError } from './input-error.js';
+import { hz, type Hz } from './quantities.js';
+
+const NUMBER = String.raw`(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?`;
+const WRITTEN = new RegExp(String.raw`^(${NUMBER})\s*([A-Za-z]*)$`);
+const PREFIX_SCALE: Readonly<Record<string, number>> = { '': 1, k: 1e3, M: 1e6, G: 1e9 };
+
+/**
+ * Reads a frequency as engineers write it: plain hertz (`70000000`, `70e6`) or
+ * a number with an SI prefix and an optional unit (`70M`, `70 MHz`, `455k`,
+ * `2.4G`, `10.7e6 Hz`). Prefixes are case-sensitive as in SI; the unit `Hz`
+ * is accepted in any case. A plain JSON number is taken as hertz.
+ *
+ * @param written the text (or number of hertz) to read
+ * @param where the option or path named in an error, e.g. `--low`
+ * @returns the frequency in Hz, finite and not negative
+ * @throws InputError naming `where` and the value, for an empty text, NaN,
+ *   an infinity, a negative value, an unknown unit, or a lower-case `m`
+ *   (milli, nearly always a typo for M)
+ * @example parseFrequency('12.288 MHz', '--rate') // 12288000
+ */
+export function parseFrequency(written: string | number, where: string): Hz {
+  if (typeof written === 'number') return checkedNumber(written, String(written), where);
+  const text = written.trim();
+  if (text === '') throw new InputError(where, 'a frequency such as 70M or 455 kHz', written);
+  if (/^[-−]/.test(text)) throw new InputError(where, 'a frequency that is not negative', written);
+  const match = WRITTEN.exec(text);
+  if (!match) throw new InputError(where, 'a frequency such as 70M, 70 MHz, 455k or 70e6', written);
+  const [, digits = '', suffix = ''] = match;
+  const prefix = unitPrefix(suffix, digits, written, where);
+  const scale = PREFIX_SCALE[prefix] ?? 1;
+  return checkedNumber(Number(digits) * scale, written, where);
+}
+
+function unitPrefix(suffix: string, digits: string, written: string, where: string): string {
+  const prefix = /hz$/i.test(suffix) ? suffix.slice(0, -2) : suffix;
+  if (prefix in PREFIX_SCALE) return prefix;
+  if (prefix === 'm') {
+    throw new InputError(where, `a frequency; 'm' is milli, write ${digits}M for megahertz`, written);
+  }
+  if (prefix === 'K') throw new InputError(where, `a frequency; the SI prefix for kilo is lower-case: ${digits}k`, written);
+  if (prefix === 'g') throw new InputError(where, `a frequency; the SI prefix for giga is upper-case: ${digits}G`, written);
+  throw new InputError(where, 'a frequency with unit Hz, kHz, MHz or GHz (or k, M, G)', written);
+}
+
+function checkedNumber(value: number, written: string, where: string): Hz {
+  if (Number.isNaN(value)) throw new InputError(where, 'a frequency, not NaN', written);
+  if (!Number.isFinite(value)) throw new InputError(where, 'a finite frequency', written);
+  if (value < 0) throw new InputError(where, 'a frequency that is not negative', written);
+  return hz(value);
+}

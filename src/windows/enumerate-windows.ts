@@ -1,0 +1,63 @@
+import { hz, type Hz } from '../units/quantities.js';
+import type { Band } from '../math/band.js';
+import { floorTolerant, sameEdge } from '../math/edge-tolerance.js';
+import type { RateLimits, RateWindow } from './rate-window.js';
+
+const NO_LIMITS: RateLimits = { minRate: hz(0), maxRate: hz(Infinity) };
+
+/**
+ * Every uniform sampling-rate window that holds a band whole in one Nyquist
+ * zone (Vaughan, Scott & White, "The theory of bandpass sampling", 1991):
+ * for each zone n = 1..⌊high/width⌋, 2·high/n ≤ rate ≤ 2·low/(n − 1), the
+ * upper bound absent for n = 1. Each edge is computed from the inputs in one
+ * expression; a window whose edges cross by floating-point noise only (the
+ * exact twice-the-width point) is kept with zero width.
+ *
+ * @param band the band to hold, Hz, already widened by any guard bands;
+ *   0 ≤ low < high
+ * @param limits rates outside [minRate, maxRate] are cut away
+ * @returns windows in ascending zone order (descending rate), clipped to the
+ *   limits; empty when none fits
+ * @example rateWindows({ low: 10e3, high: 14e3 }) // zones 1–3: [28k, ∞), [14k, 20k], [9.333k, 10k]
+ */
+export function rateWindows(band: Band, limits: RateLimits = NO_LIMITS): RateWindow[] {
+  const width = band.high - band.low;
+  const highestZone = Math.max(1, floorTolerant(band.high / width));
+  const windows: RateWindow[] = [];
+  for (let zone = 1; zone <= highestZone; zone++) {
+    const lowest = (2 * band.high) / zone;
+    const highest = zone === 1 ? Infinity : (2 * band.low) / (zone - 1);
+    const window = clipped(zone, lowest, highest, limits);
+    if (window) windows.push(window);
+  }
+  return windows;
+}
+
+function clipped(zone: number, lowest: number, highest: number, limits: RateLimits): RateWindow | null {
+  let minRate = Math.max(lowest, limits.minRate);
+  let maxRate = Math.min(highest, limits.maxRate);
+  if (maxRate < minRate) {
+    if (!sameEdge(maxRate, minRate)) return null;
+    maxRate = minRate;
+  }
+  if (maxRate === Infinity && minRate === Infinity) return null;
+  return { zone, minRate: hz(minRate), maxRate: hz(maxRate), inverted: zone % 2 === 0 };
+}
+
+/**
+ * Widens a band by its guard bands; a lower guard reaching below DC stops at
+ * DC (the band is then low-pass and only zone 1 can hold it).
+ *
+ * @param band the wanted band, Hz
+ * @param guardLow guard below the band, Hz
+ * @param guardHigh guard above the band, Hz
+ */
+export function guardedBand(band: Band, guardLow: Hz, guardHigh: Hz): Band {
+  return { low: hz(Math.max(0, band.low - guardLow)), high: hz(band.high + guardHigh) };
+}
+
+/** The lowest legal rate among the windows, Hz, or null when there is none. */
+export function lowestLegalRate(windows: readonly RateWindow[]): Hz | null {
+  if (windows.length === 0) return null;
+  return hz(Math.min(...windows.map((w) => w.minRate)));
+}
