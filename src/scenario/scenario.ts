@@ -1,0 +1,111 @@
+import type { Db, Hz, Ppm, Seconds } from '../units/quantities.js';
+import type { Band } from '../math/band.js';
+
+/**
+ * The validated scenario: one receiver variant, every frequency in Hz, every
+ * level in dB, every default filled in. The file format (strings such as
+ * `70 MHz`, `extends`, percentages) is read into this by the scenario schema;
+ * every later stage reads only this.
+ */
+export interface Scenario {
+  /** Variant name, e.g. "Heron-4 base". */
+  readonly name: string;
+  readonly description: string;
+  /** The wanted IF band and the levels at which it is planned. */
+  readonly wanted: WantedBand;
+  /** Guard bands for the anti-alias filter's transitions, Hz. */
+  readonly guard: { readonly low: Hz; readonly high: Hz };
+  readonly converter: Converter;
+  /** Highest harmonic order checked (wanted band, neighbours), ≥ 2. */
+  readonly harmonicOrder: number;
+  readonly boardSpurs: readonly BoardSpur[];
+  readonly neighbours: readonly Neighbour[];
+  /** The analog anti-alias filter, or null when none is stated (no attenuation). */
+  readonly filter: AntiAliasFilter | null;
+  readonly requirements: Requirements;
+  readonly clocks: readonly ClockCandidate[];
+  readonly goal: Goal;
+}
+
+export interface WantedBand extends Band {
+  /** Weakest wanted level at which the requirements apply, dBFS. */
+  readonly weakestLevel: Db;
+  /** Strongest wanted level, dBFS: the level at which harmonic figures are quoted. */
+  readonly strongestLevel: Db;
+}
+
+export interface Converter {
+  readonly label: string;
+  /** Slowest and fastest sample clock the converter accepts, Hz. */
+  readonly minRate: Hz;
+  readonly maxRate: Hz;
+  /** Analog input bandwidth, Hz: a wanted band above it is refused. */
+  readonly inputBandwidth: Hz;
+  readonly bits: number;
+  /** Harmonic levels by order (2, 3, ...), dBc at the strongest wanted level. */
+  readonly harmonics: ReadonlyMap<number, Db>;
+  /** Third-order input intercept referred to full scale, dBFS; null: derived from the 3rd harmonic. */
+  readonly intercept3: Db | null;
+  /** Rate-tied spurs, dBFS; null where not stated. */
+  readonly rateSpurs: { readonly dc: Db | null; readonly halfRate: Db | null; readonly quarterRate: Db | null };
+  /** M-way interleaving, or null for a single core. */
+  readonly interleave: Interleave | null;
+  /** Aperture jitter, s rms (0 when not stated). */
+  readonly apertureJitter: Seconds;
+}
+
+export interface Interleave {
+  /** Number of interleaved cores M ≥ 2. */
+  readonly ways: number;
+  /** Offset (gain-independent) spurs at k·rate/M, dBFS. */
+  readonly offsetSpur: Db;
+  /** Images of the input at k·rate/M ± f, dBc. */
+  readonly imageLevel: Db;
+}
+
+/** Where a board spur enters: ahead of the anti-alias filter or past it. */
+export type Coupling = 'before-filter' | 'after-filter';
+
+export interface BoardSpur {
+  readonly label: string;
+  /** A tone is a band with low = high. */
+  readonly low: Hz;
+  readonly high: Hz;
+  /** Level, dBFS at the converter (before the filter's attenuation when coupling is before-filter). */
+  readonly level: Db;
+  readonly coupling: Coupling;
+  /** Highest harmonic order of the spur itself (1: the fundamental only). */
+  readonly harmonics: number;
+}
+
+export interface Neighbour extends Band {
+  readonly label: string;
+  /** Level at the filter's input, dBFS (referred to converter full scale). */
+  readonly level: Db;
+}
+
+export type AntiAliasFilter =
+  | { readonly kind: 'butterworth'; readonly order: number; readonly passLow: Hz; readonly passHigh: Hz }
+  | { readonly kind: 'table'; readonly points: ReadonlyArray<{ readonly frequency: Hz; readonly attenuation: Db }> };
+
+export interface Requirements {
+  /** Frequency margin to keep between an interferer's alias and the wanted alias, Hz. */
+  readonly margin: Hz;
+  /** An interferer this far below the weakest wanted level may land anywhere, dB. */
+  readonly rejection: Db;
+  /** Drift a rate found by the solver (not a listed clock) must survive, ±ppm. */
+  readonly tolerancePpm: Ppm;
+}
+
+export interface ClockCandidate {
+  readonly label: string;
+  readonly rate: Hz;
+  readonly tolerancePpm: Ppm;
+}
+
+/** What "best" means for a rate inside a feasible interval. */
+export type Goal =
+  | { readonly kind: 'widest-margin' }
+  | { readonly kind: 'lowest-rate' }
+  | { readonly kind: 'quarter-rate' }
+  | { readonly kind: 'decimation'; readonly outputRate: Hz };
