@@ -36,10 +36,9 @@ export function rateWindows(band: Band, limits: RateLimits = NO_LIMITS): RateWin
 function clipped(zone: number, lowest: number, highest: number, limits: RateLimits): RateWindow | null {
   let minRate = Math.max(lowest, limits.minRate);
   let maxRate = Math.min(highest, limits.maxRate);
-  if (maxRate < minRate) {
-    if (!sameEdge(maxRate, minRate)) return null;
-    maxRate = minRate;
-  }
+  // Edges within noise of each other are one rate, whichever way the noise fell.
+  if (maxRate !== Infinity && sameEdge(maxRate, minRate)) maxRate = minRate;
+  else if (maxRate < minRate) return null;
   if (maxRate === Infinity && minRate === Infinity) return null;
   return { zone, minRate: hz(minRate), maxRate: hz(maxRate), inverted: zone % 2 === 0 };
 }
