@@ -3,7 +3,9 @@ import { hz, type Hz } from './quantities.js';
 
 const NUMBER = String.raw`(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?`;
 const WRITTEN = new RegExp(String.raw`^(${NUMBER})\s*([A-Za-z]*)$`);
-const PREFIX_SCALE: Readonly<Record<string, number>> = { '': 1, k: 1e3, M: 1e6, G: 1e9 };
+// Prefixes as powers of ten: the prefix joins the decimal exponent, so '1.001M' reads as
+// the double nearest 1 001 000 (multiplying by 1e6 would give 1000999.9999999999).
+const PREFIX_POWER: Readonly<Record<string, number>> = { '': 0, k: 3, M: 6, G: 9 };
 
 /**
  * Reads a frequency as engineers write it: plain hertz (`70000000`, `70e6`) or
@@ -28,13 +30,14 @@ export function parseFrequency(written: string | number, where: string): Hz {
   if (!match) throw new InputError(where, 'a frequency such as 70M, 70 MHz, 455k or 70e6', written);
   const [, digits = '', suffix = ''] = match;
   const prefix = unitPrefix(suffix, digits, written, where);
-  const scale = PREFIX_SCALE[prefix] ?? 1;
-  return checkedNumber(Number(digits) * scale, written, where);
+  const [mantissa = '', exponent = '0'] = digits.split(/[eE]/);
+  const power = Number(exponent) + (PREFIX_POWER[prefix] ?? 0);
+  return checkedNumber(Number(`${mantissa}e${power}`), written, where);
 }
 
 function unitPrefix(suffix: string, digits: string, written: string, where: string): string {
   const prefix = /hz$/i.test(suffix) ? suffix.slice(0, -2) : suffix;
-  if (prefix in PREFIX_SCALE) return prefix;
+  if (Object.hasOwn(PREFIX_POWER, prefix)) return prefix;
   if (prefix === 'm') {
     throw new InputError(where, `a frequency; 'm' is milli, write ${digits}M for megahertz`, written);
   }
