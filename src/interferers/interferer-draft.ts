@@ -1,0 +1,27 @@
+import type { Db, Hz } from '../units/quantities.js';
+import type { Scenario } from '../scenario/scenario.js';
+import type { Interferer } from '../solve/interferer.js';
+import { isBlocking } from './level-threshold.js';
+
+/** An interferer before the scenario-wide fields (margin, blocking) are filled in. */
+export type InterfererDraft = Omit<Interferer, 'requiredMargin' | 'blocking'>;
+
+/**
+ * Completes a draft with the scenario's required margin and its blocking flag.
+ *
+ * @param draft label, kind, order, source, extent (Hz) and level (dBFS)
+ * @param scenario the validated scenario
+ * @returns the interferer
+ * @example complete({ label: 'DC', kind: 'converter', order: null, source: '…', rateMultiple: 0, low: hz(0), high: hz(0), level: db(-80) }, s)
+ */
+export function complete(draft: InterfererDraft, scenario: Scenario): Interferer {
+  return { ...draft, requiredMargin: scenario.requirements.margin, blocking: isBlocking(draft.level, scenario) };
+}
+
+/** A fixed extent k·[low, high] for k ≥ 0, Hz. */
+export function scaled(k: number, band: { readonly low: Hz; readonly high: Hz }): { low: Hz; high: Hz } {
+  return { low: (k * band.low) as Hz, high: (k * band.high) as Hz };
+}
+
+/** A level in dB from a plain sum. */
+export const level = (value: number): Db => value as Db;
