@@ -1,5 +1,5 @@
 import { hz, type Hz } from '../units/quantities.js';
-import { ceilTolerant } from './edge-tolerance.js';
+import { ceilTolerant, sameEdge } from './edge-tolerance.js';
 
 /** Where one real frequency shows after uniform sampling. */
 export interface Fold {
@@ -36,6 +36,8 @@ export function nyquistZone(frequency: Hz, rate: Hz): number {
 export function foldFrequency(frequency: Hz, rate: Hz): Fold {
   const zone = nyquistZone(frequency, rate);
   const inverted = zone % 2 === 0;
+  // On the zone's top edge (within tolerance) the alias is the edge itself, not the noise of a subtraction.
+  if (sameEdge((2 * frequency) / rate, zone)) return { alias: hz(inverted ? 0 : rate / 2), zone, inverted };
   const alias = inverted ? (zone / 2) * rate - frequency : frequency - ((zone - 1) / 2) * rate;
   return { alias: hz(Math.min(Math.max(alias, 0), rate / 2)), zone, inverted };
 }
