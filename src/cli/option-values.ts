@@ -1,8 +1,7 @@
 import { InputError } from '../units/input-error.js';
 import { parseFrequency } from '../units/parse-frequency.js';
 import { hz, type Hz } from '../units/quantities.js';
-import type { Band } from '../math/band.js';
-import type { Guard } from '../report/windows-report.js';
+import type { Band, Guard } from '../math/band.js';
 
 /** A frequency option that must be above zero. */
 export function positiveFrequency(text: string, option: string): Hz {

@@ -7,6 +7,12 @@ export interface Band {
   readonly high: Hz;
 }
 
+/** Guard bands below and above a band, Hz: room for the anti-alias filter's transitions. */
+export interface Guard {
+  readonly low: Hz;
+  readonly high: Hz;
+}
+
 /** A band after sampling: its zone and its image inside [0, rate/2]. */
 export interface BandImage extends Band {
   readonly zone: number;

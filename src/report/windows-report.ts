@@ -1,14 +1,8 @@
 import { hz, ppm, type Hz, type Ppm } from '../units/quantities.js';
-import { bandImage, type Band, type BandImage } from '../math/band.js';
+import { bandImage, type Band, type BandImage, type Guard } from '../math/band.js';
 import { guardedBand, lowestLegalRate, rateWindows } from '../windows/enumerate-windows.js';
 import type { RateLimits, RateWindow } from '../windows/rate-window.js';
 import { PAPER_DESIGN_CAUTION } from './caution.js';
-
-/** Guard bands below and above the wanted band, Hz. */
-export interface Guard {
-  readonly low: Hz;
-  readonly high: Hz;
-}
 
 /** One legal window with what an engineer reads off it. */
 export interface WindowRow extends RateWindow {

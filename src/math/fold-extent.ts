@@ -1,0 +1,29 @@
+import { mergeIntervals, type Interval } from './interval-set.js';
+
+/**
+ * Where a band of input frequencies shows after sampling: its aliased
+ * segments in [0, rate/2]. A negative extent folds as its magnitude. Each
+ * piece inside one half-zone [(k−1)·rate/2, k·rate/2] maps by one expression
+ * (odd k shifts down, even k mirrors); an extent at least rate/2 wide covers
+ * a whole half-zone and so the whole first zone.
+ *
+ * @param low, high the extent, Hz, low ≤ high (may be negative)
+ * @param rate sampling rate, Hz, positive
+ * @returns merged segments, ascending
+ * @example foldExtent(60e6, 70e6, 100e6) // [{low: 30e6, high: 40e6}]
+ */
+export function foldExtent(low: number, high: number, rate: number): Interval[] {
+  const half = rate / 2;
+  const magnitude = high <= 0 ? { low: -high, high: -low } : low >= 0 ? { low, high } : { low: 0, high: Math.max(-low, high) };
+  if (magnitude.high - magnitude.low >= half) return [{ low: 0, high: half }];
+  const k = Math.floor(magnitude.low / half) + 1;
+  const boundary = k * half;
+  const pieces = magnitude.high <= boundary ? [[k, magnitude.low, magnitude.high] as const] : [[k, magnitude.low, boundary] as const, [k + 1, boundary, magnitude.high] as const];
+  return mergeIntervals(pieces.map(([zone, a, b]) => foldedPiece(zone, a, b, rate)));
+}
+
+function foldedPiece(zone: number, low: number, high: number, rate: number): Interval {
+  const clamp = (f: number) => Math.min(Math.max(f, 0), rate / 2);
+  if (zone % 2 === 0) return { low: clamp((zone / 2) * rate - high), high: clamp((zone / 2) * rate - low) };
+  return { low: clamp(low - ((zone - 1) / 2) * rate), high: clamp(high - ((zone - 1) / 2) * rate) };
+}

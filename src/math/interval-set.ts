@@ -1,0 +1,64 @@
+import { sameEdge } from './edge-tolerance.js';
+
+/** An interval [low, high] of numbers (rates or frequencies, Hz). */
+export interface Interval {
+  readonly low: number;
+  readonly high: number;
+}
+
+/**
+ * Sorts intervals and merges those that overlap or touch.
+ *
+ * @param intervals any order, low ≤ high
+ * @returns disjoint intervals in ascending order
+ * @example mergeIntervals([{low: 3, high: 5}, {low: 1, high: 3}]) // [{low: 1, high: 5}]
+ */
+export function mergeIntervals(intervals: readonly Interval[]): Interval[] {
+  const sorted = [...intervals].sort((a, b) => a.low - b.low);
+  const merged: Interval[] = [];
+  for (const next of sorted) {
+    const last = merged[merged.length - 1];
+    if (last && next.low <= last.high) merged[merged.length - 1] = { low: last.low, high: Math.max(last.high, next.high) };
+    else merged.push(next);
+  }
+  return merged;
+}
+
+/**
+ * A closed interval minus a union of open intervals: the closed pieces left.
+ * A piece narrower than the edge tolerance is floating-point residue between
+ * two open intervals that meet exactly in theory, and is dropped, unless the
+ * closed interval itself is a single point.
+ *
+ * @param closed the interval kept from, low ≤ high
+ * @param open removed open intervals (low, high), any order
+ * @returns disjoint closed pieces in ascending order
+ * @example subtractOpen({low: 0, high: 10}, [{low: 2, high: 4}]) // [{0, 2}, {4, 10}]
+ */
+export function subtractOpen(closed: Interval, open: readonly Interval[]): Interval[] {
+  const pieces: Interval[] = [];
+  let start = closed.low;
+  for (const hole of mergeIntervals(open)) {
+    if (hole.high <= start) continue;
+    if (hole.low >= closed.high) break;
+    if (hole.low < start) {
+      start = hole.high;
+      continue;
+    }
+    pieces.push({ low: start, high: hole.low });
+    start = hole.high;
+  }
+  if (start <= closed.high) pieces.push({ low: start, high: closed.high });
+  const point = closed.low === closed.high;
+  return pieces.filter((p) => point || !sameEdge(p.low, p.high));
+}
+
+/** Whether [low, high] lies inside one of the closed intervals. */
+export function containedIn(range: Interval, intervals: readonly Interval[]): boolean {
+  return intervals.some((i) => range.low >= i.low && range.high <= i.high);
+}
+
+/** Whether a closed range meets one of the open intervals. */
+export function meetsOpen(range: Interval, open: readonly Interval[]): boolean {
+  return open.some((o) => range.high > o.low && range.low < o.high);
+}

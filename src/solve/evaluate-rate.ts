@@ -1,0 +1,134 @@
+import { db, hz, type Db, type Hz, type Ppm } from '../units/quantities.js';
+import { bandImage, type Band, type Guard } from '../math/band.js';
+import { foldExtent } from '../math/fold-extent.js';
+import { EDGE_TOLERANCE } from '../math/edge-tolerance.js';
+import { meetsOpen, type Interval } from '../math/interval-set.js';
+import { imageMargin, marginBreakpoints, nearbyImages, normalisedExtent } from './fold-images.js';
+import { forbiddenRates } from './forbidden-rates.js';
+import type { Interferer, InterfererKind } from './interferer.js';
+import { driftRange, type PlanContext } from './plan-context.js';
+
+/** One interferer measured at one rate. */
+export interface CheckResult {
+  readonly label: string;
+  readonly kind: InterfererKind;
+  readonly source: string;
+  /** Aliased segments at the nominal rate, Hz, as [low, high] pairs. */
+  readonly alias: ReadonlyArray<readonly [Hz, Hz]>;
+  /** Least frequency margin to the wanted alias over the drift range, Hz; negative: overlap width. */
+  readonly margin: Hz;
+  readonly requiredMargin: Hz;
+  /** Level at the converter, dBFS. */
+  readonly level: Db;
+  /** Level threshold minus level, dB: ≥ 0 means weak enough to land anywhere. */
+  readonly levelMargin: Db;
+  readonly blocking: boolean;
+  /** Non-blocking, or the margin holds over the whole drift range. */
+  readonly pass: boolean;
+}
+
+/** A rate judged exactly. */
+export interface RateEvaluation {
+  readonly rate: Hz;
+  readonly tolerancePpm: Ppm;
+  /** Zone, inversion and aliased centre of the wanted band; null when it straddles a zone edge. */
+  readonly zone: number | null;
+  readonly inverted: boolean | null;
+  readonly center: Hz | null;
+  /** Aliased wanted band at the nominal rate, Hz; null when it straddles. */
+  readonly image: { readonly low: Hz; readonly high: Hz } | null;
+  /** Least distance from the guarded band to a fold edge over the drift range, Hz (negative: crosses). */
+  readonly zoneEdgeMargin: Hz;
+  readonly checks: readonly CheckResult[];
+  /** The check with the least slack (margin − required): an interferer label or "zone edge". */
+  readonly limitedBy: string;
+  /** That check's margin, Hz. */
+  readonly worstMargin: Hz;
+  /** That check's margin minus its requirement, Hz: the figure candidates are ranked by. */
+  readonly worstSlack: Hz;
+  readonly pass: boolean;
+}
+
+export const ZONE_EDGE = 'zone edge';
+
+/**
+ * Judges one sampling rate against every check, exactly, over the clock's
+ * whole ±tolerance: pass/fail from the exact forbidden intervals; margins as
+ * the least over the drift range, found at its ends and at the rates where a
+ * margin changes slope (it is linear between them).
+ *
+ * @param context the plan
+ * @param rate nominal sampling rate, Hz
+ * @param tolerancePpm ± drift of that rate, ppm
+ */
+export function evaluateRate(context: PlanContext, rate: Hz, tolerancePpm: Ppm): RateEvaluation {
+  const drift = driftRange(rate, tolerancePpm);
+  const image = bandImage(context.band, rate);
+  const zone = image?.zone ?? Math.max(1, Math.ceil((context.band.low + context.band.high) / rate));
+  const zoneEdgeMargin = hz(Math.min(zoneEdgeMarginAt(context.band, context.guard, zone, drift.low), zoneEdgeMarginAt(context.band, context.guard, zone, drift.high)));
+  const zonePass = image !== null && zoneEdgeMargin >= -EDGE_TOLERANCE * rate;
+  const checks = context.interferers.map((i) => checkInterferer(context, i, rate, drift));
+  let limitedBy = ZONE_EDGE;
+  let worstMargin: number = zoneEdgeMargin;
+  let worstSlack: number = zoneEdgeMargin;
+  for (const check of checks) {
+    if (!check.blocking) continue;
+    const slack = check.margin - check.requiredMargin;
+    if (slack < worstSlack) [limitedBy, worstMargin, worstSlack] = [check.label, check.margin, slack];
+  }
+  return {
+    rate,
+    tolerancePpm,
+    zone: image ? zone : null,
+    inverted: image ? image.inverted : null,
+    center: image ? hz((image.low + image.high) / 2) : null,
+    image: image ? { low: image.low, high: image.high } : null,
+    zoneEdgeMargin,
+    checks,
+    limitedBy,
+    worstMargin: hz(worstMargin),
+    worstSlack: hz(worstSlack),
+    pass: zonePass && checks.every((c) => c.pass),
+  };
+}
+
+/** Distance from the guarded band to the nearer edge of zone n at rate r, Hz. */
+export function zoneEdgeMarginAt(band: Band, guard: Guard, zone: number, rate: number): number {
+  const below = band.low - guard.low - ((zone - 1) * rate) / 2;
+  const above = (zone * rate) / 2 - (band.high + guard.high);
+  return Math.min(below, above);
+}
+
+function checkInterferer(context: PlanContext, interferer: Interferer, rate: Hz, drift: Interval): CheckResult {
+  const margin = leastMargin(interferer, context.band, drift);
+  const levelMargin = db(context.levelThreshold - interferer.level);
+  const blocked = interferer.blocking && meetsOpen(drift, forbiddenRates(interferer, context.band, drift.low, drift.high));
+  const alias = foldExtent(interferer.rateMultiple * rate + interferer.low, interferer.rateMultiple * rate + interferer.high, rate);
+  return {
+    label: interferer.label,
+    kind: interferer.kind,
+    source: interferer.source,
+    alias: alias.map((s) => [hz(s.low), hz(s.high)] as const),
+    margin: hz(margin),
+    requiredMargin: interferer.requiredMargin,
+    level: interferer.level,
+    levelMargin,
+    blocking: interferer.blocking,
+    pass: !blocked,
+  };
+}
+
+/**
+ * The least signed margin of an interferer to the wanted band over a range of
+ * rates: the minimum over every nearby image, each image's margin being
+ * piecewise linear with known breakpoints.
+ */
+export function leastMargin(interferer: Interferer, band: Band, range: Interval): number {
+  const extent = normalisedExtent(interferer);
+  let least = Infinity;
+  for (const term of nearbyImages(extent, band, 0, range.low, range.high)) {
+    const rates = [range.low, range.high, ...marginBreakpoints(extent, band, term).filter((r) => r > range.low && r < range.high)];
+    for (const r of rates) least = Math.min(least, imageMargin(extent, band, term, r));
+  }
+  return least;
+}

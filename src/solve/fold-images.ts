@@ -1,0 +1,108 @@
+import type { Band } from '../math/band.js';
+import type { Interval } from '../math/interval-set.js';
+import type { Interferer } from './interferer.js';
+
+/**
+ * One image of the wanted band among the input frequencies that alias onto
+ * it: j·r + s·[low, high] for an integer j and a side s = ±1. Every input
+ * frequency whose alias falls on the wanted alias lies in one such image, and
+ * the distance between two aliases is the distance from an input frequency to
+ * the nearest image (folding is an isometry on each half-zone), so every
+ * margin and every forbidden rate is linear algebra over these images.
+ *
+ * Against an interferer extent a·r + [l, h] the image moves relative to it at
+ * slope c = j − a: all conditions take the form c·r compared with a constant.
+ */
+export interface BandImageTerm {
+  readonly j: number;
+  readonly side: 1 | -1;
+  /** c = j − rateMultiple of the interferer. */
+  readonly slope: number;
+}
+
+/** The extent with a non-negative rate multiple: folding is symmetric under negation. */
+export interface NormalisedExtent {
+  readonly rateMultiple: number;
+  readonly low: number;
+  readonly high: number;
+}
+
+/** Flips a·r + [l, h] with a < 0 to −(…) so that a ≥ 0; aliases are unchanged. */
+export function normalisedExtent(interferer: Pick<Interferer, 'rateMultiple' | 'low' | 'high'>): NormalisedExtent {
+  const { rateMultiple, low, high } = interferer;
+  return rateMultiple < 0 ? { rateMultiple: -rateMultiple, low: -high, high: -low } : { rateMultiple, low, high };
+}
+
+/**
+ * Image edges as c·r thresholds: the image [j·r + s·band] lies at
+ * [c·r + near, c·r + far] relative to the moving extent origin a·r.
+ * Returns the offsets of the image's lower and upper edges (s = +1:
+ * [low, high]; s = −1: [−high, −low]).
+ */
+export function imageOffsets(band: Band, side: 1 | -1): Interval {
+  return side === 1 ? { low: band.low, high: band.high } : { low: -band.high, high: -band.low };
+}
+
+/**
+ * The images that can come within `reach` of the extent for some rate in
+ * [minRate, maxRate]: c·r must fall within (l − imageHigh − reach,
+ * h − imageLow + reach), which bounds c, hence j, from the range ends.
+ *
+ * @param extent the interferer, rate multiple ≥ 0
+ * @param band the wanted band, Hz
+ * @param reach margin, Hz, ≥ 0
+ * @param minRate, maxRate the rate range, Hz, 0 < minRate ≤ maxRate < ∞
+ */
+export function nearbyImages(extent: NormalisedExtent, band: Band, reach: number, minRate: number, maxRate: number): BandImageTerm[] {
+  const terms: BandImageTerm[] = [];
+  for (const side of [1, -1] as const) {
+    const image = imageOffsets(band, side);
+    const lowest = extent.low - image.high - reach;
+    const highest = extent.high - image.low + reach;
+    const cLow = Math.min(lowest / minRate, lowest / maxRate);
+    const cHigh = Math.max(highest / minRate, highest / maxRate);
+    const jFirst = Math.ceil(extent.rateMultiple + cLow) - 1;
+    const jLast = Math.floor(extent.rateMultiple + cHigh) + 1;
+    for (let j = jFirst; j <= jLast; j++) terms.push({ j, side, slope: j - extent.rateMultiple });
+  }
+  return terms;
+}
+
+/**
+ * The open set of rates at which the extent comes closer than `reach` to this
+ * image: c·r ∈ (l − imageHigh − reach, h − imageLow + reach). Empty, one
+ * interval, or all rates (slope 0 with the extent inside the reach).
+ */
+export function closeRates(extent: NormalisedExtent, band: Band, term: BandImageTerm, reach: number): Interval | null {
+  const image = imageOffsets(band, term.side);
+  const lowest = extent.low - image.high - reach;
+  const highest = extent.high - image.low + reach;
+  const c = term.slope;
+  if (c === 0) return lowest < 0 && 0 < highest ? { low: -Infinity, high: Infinity } : null;
+  return c > 0 ? { low: lowest / c, high: highest / c } : { low: highest / c, high: lowest / c };
+}
+
+/**
+ * Signed distance, Hz, between the extent and one image at rate r: the gap
+ * when apart, minus the overlap's width when they overlap.
+ */
+export function imageMargin(extent: NormalisedExtent, band: Band, term: BandImageTerm, rate: number): number {
+  const image = imageOffsets(band, term.side);
+  const shift = term.slope * rate;
+  const imageLow = shift + image.low;
+  const imageHigh = shift + image.high;
+  const overlap = Math.min(extent.high, imageHigh) - Math.max(extent.low, imageLow);
+  if (overlap >= 0) return -overlap;
+  return Math.max(imageLow - extent.high, extent.low - imageHigh);
+}
+
+/**
+ * The rates at which `imageMargin` changes slope: where an extent edge meets
+ * an image edge. Between them the margin is linear in the rate.
+ */
+export function marginBreakpoints(extent: NormalisedExtent, band: Band, term: BandImageTerm): number[] {
+  if (term.slope === 0) return [];
+  const image = imageOffsets(band, term.side);
+  const c = term.slope;
+  return [extent.low - image.low, extent.low - image.high, extent.high - image.low, extent.high - image.high].map((k) => k / c);
+}

@@ -1,0 +1,25 @@
+import type { Db, Hz, Ppm } from '../units/quantities.js';
+import type { Band, Guard } from '../math/band.js';
+import type { Goal, ClockCandidate } from '../scenario/scenario.js';
+import type { RateLimits } from '../windows/rate-window.js';
+import type { Interferer } from './interferer.js';
+
+/** Everything the solver needs, independent of how the scenario was written. */
+export interface PlanContext {
+  readonly band: Band;
+  readonly guard: Guard;
+  /** The converter's rate range searched, Hz (finite). */
+  readonly limits: RateLimits;
+  readonly interferers: readonly Interferer[];
+  /** Weakest wanted level minus the required rejection, dBFS. */
+  readonly levelThreshold: Db;
+  readonly clocks: readonly ClockCandidate[];
+  readonly goal: Goal;
+  /** Drift a solver-chosen rate must survive, ±ppm. */
+  readonly tolerancePpm: Ppm;
+}
+
+/** The rates a clock at `rate` may take over its ±tolerance, Hz. */
+export function driftRange(rate: Hz, tolerancePpm: Ppm): { low: number; high: number } {
+  return { low: rate * (1 - tolerancePpm * 1e-6), high: rate * (1 + tolerancePpm * 1e-6) };
+}

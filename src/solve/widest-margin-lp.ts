@@ -1,0 +1,86 @@
+import lpModule, { type SolverAPI } from 'javascript-lp-solver';
+import type { Band, Guard } from '../math/band.js';
+import type { Interval } from '../math/interval-set.js';
+import { imageOffsets, nearbyImages, normalisedExtent } from './fold-images.js';
+import type { Interferer } from './interferer.js';
+
+// The package's typings describe its CommonJS build; Node's ESM import gets the
+// solver itself as the default export. Accept either shape.
+const lpSolver = ('Solve' in lpModule ? lpModule : (lpModule as { default: unknown }).default) as SolverAPI;
+
+/** t ≤ slope·r + offset: one slack that is linear in the rate inside an interval, Hz. */
+export interface LinearSlack {
+  readonly slope: number;
+  readonly offset: number;
+}
+
+/**
+ * The slacks (margin − requirement, Hz) that bound the worst margin at rate
+ * r inside one feasible interval of zone n, each linear in r: inside a
+ * feasible interval no blocking extent overlaps an image, so each image stays
+ * on one side of each extent and its gap is linear. Each is taken at both
+ * drift ends r·(1 ± ε), which keeps it linear in the nominal rate.
+ *
+ * @param range the nominal rates allowed (drift ends inside the interval), Hz
+ * @param drift ε = tolerance in ppm × 1e-6
+ */
+export function linearSlacks(band: Band, guard: Guard, zone: number, blocking: readonly Interferer[], range: Interval, drift: number): LinearSlack[] {
+  const scales = [1 - drift, 1 + drift];
+  const middle = (range.low + range.high) / 2;
+  const slacks: LinearSlack[] = [];
+  for (const k of scales) {
+    slacks.push({ slope: (-(zone - 1) * k) / 2, offset: band.low - guard.low });
+    slacks.push({ slope: (zone * k) / 2, offset: -(band.high + guard.high) });
+  }
+  const ceiling = range.high / 4;
+  for (const interferer of blocking) {
+    const extent = normalisedExtent(interferer);
+    const reach = interferer.requiredMargin;
+    for (const term of nearbyImages(extent, band, reach, range.low * scales[0]!, range.high * scales[1]!)) {
+      const image = imageOffsets(band, term.side);
+      const above = term.slope * middle + image.low >= extent.high;
+      for (const k of scales) {
+        const slack = above
+          ? { slope: term.slope * k, offset: image.low - extent.high - reach }
+          : { slope: -term.slope * k, offset: extent.low - image.high - reach };
+        const atEnds = Math.min(slack.slope * range.low + slack.offset, slack.slope * range.high + slack.offset);
+        if (atEnds <= ceiling) slacks.push(slack);
+      }
+    }
+  }
+  return slacks;
+}
+
+/** The LP's answer: the nominal rate and the worst slack it promises, Hz. */
+export interface LpAnswer {
+  readonly rate: number;
+  readonly worstSlack: number;
+}
+
+/**
+ * Maximises t subject to t ≤ slopeᵢ·r + offsetᵢ for r in the range, with
+ * javascript-lp-solver. The model is scaled (r = low + x·width, t in units
+ * of `unit`) because that solver rounds its answers to 1e-8 and loses
+ * precision on raw hertz coefficients.
+ *
+ * @param slacks linear bounds on t, Hz
+ * @param range the rate range, Hz, low < high
+ * @param unit scale for t, Hz (e.g. the wanted bandwidth)
+ * @returns the optimum, or null when the LP is infeasible
+ */
+export function maximiseWorstSlack(slacks: readonly LinearSlack[], range: Interval, unit: number): LpAnswer | null {
+  const width = range.high - range.low;
+  const constraints: Record<string, { max: number }> = { span: { max: 1 } };
+  const t: Record<string, number> = {};
+  const x: Record<string, number> = { span: 1 };
+  slacks.forEach((s, i) => {
+    const name = `s${i}`;
+    constraints[name] = { max: (s.slope * range.low + s.offset) / unit };
+    t[name] = 1;
+    x[name] = (-s.slope * width) / unit;
+  });
+  const solution = lpSolver.Solve({ optimize: 't', opType: 'max', constraints, variables: { t, x }, unrestricted: { t: 1 } }) as Record<string, unknown>;
+  if (solution['feasible'] !== true) return null;
+  const fraction = Math.min(Math.max(Number(solution['x'] ?? 0), 0), 1);
+  return { rate: range.low + fraction * width, worstSlack: Number(solution['t'] ?? 0) * unit };
+}
