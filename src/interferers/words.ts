@@ -20,6 +20,6 @@ export function ordinal(n: number): string {
  * @example dbText(-70, 'dBc') // '−70.0 dBc'
  */
 export function dbText(value: number, unit: string): string {
-  const text = value.toFixed(1);
+  const text = (Math.abs(value) < 0.05 ? 0 : value).toFixed(1); // no "−0.0"
   return `${text.startsWith('-') ? `−${text.slice(1)}` : text} ${unit}`;
 }
