@@ -3,6 +3,7 @@ import { InputError } from '../units/input-error.js';
 import { EXIT, type ExitCode, type Io } from './io.js';
 import { addWindowsCommand } from './commands/windows-command.js';
 import { addAliasCommand } from './commands/alias-command.js';
+import { addSolveCommand } from './commands/solve-command.js';
 
 const VERSION = '0.1.0';
 
@@ -33,6 +34,7 @@ export async function runCli(args: readonly string[], io: Io): Promise<ExitCode>
     });
   addWindowsCommand(program, io, settle);
   addAliasCommand(program, io, settle);
+  addSolveCommand(program, io, settle);
   try {
     await program.parseAsync(args.filter((a) => a !== '--debug'), { from: 'user' });
     return exitCode;
@@ -44,7 +46,8 @@ export async function runCli(args: readonly string[], io: Io): Promise<ExitCode>
 function failure(error: unknown, io: Io, debug: boolean): ExitCode {
   if (error instanceof CommanderError) {
     const finished = error.code === 'commander.helpDisplayed' || error.code === 'commander.version' || error.code === 'commander.help';
-    return finished ? EXIT.answered : EXIT.badInput;
+    // Help shown because no command was given comes with exit code 1: that is a usage error.
+    return finished && error.exitCode === 0 ? EXIT.answered : EXIT.badInput;
   }
   if (error instanceof InputError) {
     io.err(`ifzone: ${oneLine(error.message)}\n`);

@@ -1,0 +1,27 @@
+import { execFileSync, spawnSync } from 'node:child_process';
+import { existsSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
+
+/** The repository root (test/helpers/../..). */
+export const ROOT = fileURLToPath(new URL('../../', import.meta.url));
+
+/**
+ * Compiles src/ into dist/ when dist/cli/main.js is missing, so a test file
+ * run on its own still drives the real bin/ifzone. `npm test` builds first.
+ */
+export function ensureBuilt(): void {
+  if (existsSync(new URL('../../dist/cli/main.js', import.meta.url))) return;
+  execFileSync(process.execPath, ['node_modules/typescript/bin/tsc', '-p', 'tsconfig.json'], { cwd: ROOT, stdio: 'inherit' });
+}
+
+export interface Run {
+  readonly status: number | null;
+  readonly stdout: string;
+  readonly stderr: string;
+}
+
+/** Runs `node bin/ifzone ...args` as a separate process and collects what it wrote. */
+export function runBin(...args: string[]): Run {
+  const result = spawnSync(process.execPath, ['bin/ifzone', ...args], { cwd: ROOT, encoding: 'utf8' });
+  return { status: result.status, stdout: result.stdout, stderr: result.stderr };
+}
