@@ -3,7 +3,6 @@ import { InputError } from '../units/input-error.js';
 import { EXIT, type ExitCode, type Io } from './io.js';
 import { addWindowsCommand } from './commands/windows-command.js';
 import { addAliasCommand } from './commands/alias-command.js';
-import { addSolveCommand } from './commands/solve-command.js';
 
 const VERSION = '0.1.0';
 
@@ -34,7 +33,6 @@ export async function runCli(args: readonly string[], io: Io): Promise<ExitCode>
     });
   addWindowsCommand(program, io, settle);
   addAliasCommand(program, io, settle);
-  addSolveCommand(program, io, settle);
   try {
     await program.parseAsync(args.filter((a) => a !== '--debug'), { from: 'user' });
     return exitCode;
