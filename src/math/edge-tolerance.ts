@@ -8,8 +8,9 @@
  */
 export const EDGE_TOLERANCE = 1e-12;
 
-/** Whether a and b are the same edge within EDGE_TOLERANCE of the larger. */
+/** Whether a and b are the same edge within EDGE_TOLERANCE of the larger; an infinite edge equals only itself. */
 export function sameEdge(a: number, b: number): boolean {
+  if (!Number.isFinite(a) || !Number.isFinite(b)) return a === b;
   return Math.abs(a - b) <= EDGE_TOLERANCE * Math.max(Math.abs(a), Math.abs(b));
 }
 

@@ -14,12 +14,21 @@ import { mergeIntervals, type Interval } from './interval-set.js';
  */
 export function foldExtent(low: number, high: number, rate: number): Interval[] {
   const half = rate / 2;
-  const magnitude = high <= 0 ? { low: -high, high: -low } : low >= 0 ? { low, high } : { low: 0, high: Math.max(-low, high) };
+  const magnitude = extentMagnitude(low, high);
   if (magnitude.high - magnitude.low >= half) return [{ low: 0, high: half }];
   const k = Math.floor(magnitude.low / half) + 1;
   const boundary = k * half;
   const pieces = magnitude.high <= boundary ? [[k, magnitude.low, magnitude.high] as const] : [[k, magnitude.low, boundary] as const, [k + 1, boundary, magnitude.high] as const];
   return mergeIntervals(pieces.map(([zone, a, b]) => foldedPiece(zone, a, b, rate)));
+}
+
+/**
+ * The magnitudes of an extent's frequencies: a real signal at −f is the one
+ * at f. [−3, −1] → [1, 3]; [−1, 2] → [0, 2].
+ */
+export function extentMagnitude(low: number, high: number): Interval {
+  if (high <= 0) return { low: -high, high: -low };
+  return low >= 0 ? { low, high } : { low: 0, high: Math.max(-low, high) };
 }
 
 function foldedPiece(zone: number, low: number, high: number, rate: number): Interval {

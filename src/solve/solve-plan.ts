@@ -1,3 +1,4 @@
+import { hz } from '../units/quantities.js';
 import { guardedBand, rateWindows } from '../windows/enumerate-windows.js';
 import type { RateWindow } from '../windows/rate-window.js';
 import { bestRateIn, goalScore } from './best-rate.js';
@@ -8,8 +9,12 @@ import type { PlanContext } from './plan-context.js';
 /** A rate put forward: a listed clock, or the best rate of a feasible interval. */
 export interface Candidate {
   readonly label: string;
-  /** "clock" for a listed part, "interval" for a rate the solver chose. */
-  readonly origin: 'clock' | 'interval';
+  /**
+   * "clock" for a listed part, "interval" for the best rate of a feasible
+   * interval, "window" for a window's centre, put forward only when nothing
+   * is feasible so that the report can say what blocks.
+   */
+  readonly origin: 'clock' | 'interval' | 'window';
   readonly evaluation: RateEvaluation;
   /** Higher is better for the goal. */
   readonly score: number;
@@ -46,6 +51,12 @@ export function solvePlan(context: PlanContext): PlanResult {
     perZone.set(interval.zone, index);
     const evaluation = bestRateIn(context, interval);
     if (evaluation) candidates.push({ label: `Z${interval.zone}.${index}`, origin: 'interval', evaluation, score: 0 });
+  }
+  if (feasible.length === 0) {
+    for (const window of windows) {
+      const evaluation = evaluateRate(context, hz((window.minRate + window.maxRate) / 2), context.tolerancePpm);
+      candidates.push({ label: `W${window.zone}`, origin: 'window', evaluation, score: 0 });
+    }
   }
   const scored = candidates.map((c) => ({ ...c, score: goalScore(context, c.evaluation) }));
   scored.sort((a, b) => Number(b.evaluation.pass) - Number(a.evaluation.pass) || b.score - a.score || b.evaluation.worstSlack - a.evaluation.worstSlack);

@@ -18,10 +18,12 @@ const NO_LIMITS: RateLimits = { minRate: hz(0), maxRate: hz(Infinity) };
  * @param limits rates outside [minRate, maxRate] are cut away
  * @returns windows in ascending zone order (descending rate), clipped to the
  *   limits; empty when none fits
+ * @throws RangeError for a band without width (the zone count would be unbounded)
  * @example rateWindows({ low: 10e3, high: 14e3 }) // zones 1–3: [28k, ∞), [14k, 20k], [9.333k, 10k]
  */
 export function rateWindows(band: Band, limits: RateLimits = NO_LIMITS): RateWindow[] {
   const width = band.high - band.low;
+  if (!(width > 0) || band.low < 0) throw new RangeError(`a band needs 0 ≤ low < high, got ${band.low}–${band.high} Hz`);
   const highestZone = Math.max(1, floorTolerant(band.high / width));
   const windows: RateWindow[] = [];
   for (let zone = 1; zone <= highestZone; zone++) {
