@@ -92,9 +92,9 @@ export function evaluateRate(context: PlanContext, rate: Hz, tolerancePpm: Ppm):
   };
 }
 
-/** Distance from the guarded band to the nearer edge of zone n at rate r, Hz. */
+/** Distance from the guarded band to the nearer edge of zone n at rate r, Hz. A lower guard stops at DC, as in guardedBand. */
 export function zoneEdgeMarginAt(band: Band, guard: Guard, zone: number, rate: number): number {
-  const below = band.low - guard.low - ((zone - 1) * rate) / 2;
+  const below = Math.max(0, band.low - guard.low) - ((zone - 1) * rate) / 2;
   const above = (zone * rate) / 2 - (band.high + guard.high);
   return Math.min(below, above);
 }

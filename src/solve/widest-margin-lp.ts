@@ -29,7 +29,7 @@ export function linearSlacks(band: Band, guard: Guard, zone: number, blocking: r
   const middle = (range.low + range.high) / 2;
   const slacks: LinearSlack[] = [];
   for (const k of scales) {
-    slacks.push({ slope: (-(zone - 1) * k) / 2, offset: band.low - guard.low });
+    slacks.push({ slope: (-(zone - 1) * k) / 2, offset: Math.max(0, band.low - guard.low) }); // a guard stops at DC
     slacks.push({ slope: (zone * k) / 2, offset: -(band.high + guard.high) });
   }
   const ceiling = range.high / 4;

@@ -1,0 +1,43 @@
+import { describe, expect, it } from 'vitest';
+import { db, hz, ppm } from '../../src/units/quantities.js';
+import { guardedBand, rateWindows } from '../../src/windows/enumerate-windows.js';
+import { feasibleSet } from '../../src/solve/feasible-set.js';
+import { evaluateRate } from '../../src/solve/evaluate-rate.js';
+import type { PlanContext } from '../../src/solve/plan-context.js';
+import { brutePasses } from '../helpers/brute-force-plan.js';
+
+const MHZ = 1e6;
+
+describe('evaluateRate: a lower guard reaching below DC', () => {
+  // Minimal case shrunk by fast-check from the brute-force agreement test: band 1–5 MHz,
+  // 2 MHz lower guard, no interferers. The guard stops at DC (guardedBand's documented rule),
+  // so the guarded band is 0–5 MHz, whole in zone 1 for every rate ≥ 10 MHz (Vaughan, Scott &
+  // White 1991, n = 1: fs ≥ 2·fH). The feasible set says so; evaluateRate measured the zone-edge
+  // margin from 1 − 2 = −1 MHz instead of from DC and failed every rate.
+  const context: PlanContext = {
+    band: { low: hz(1 * MHZ), high: hz(5 * MHZ) },
+    guard: { low: hz(2 * MHZ), high: hz(0) },
+    limits: { minRate: hz(5 * MHZ), maxRate: hz(30 * MHZ) },
+    interferers: [],
+    levelThreshold: db(-90),
+    clocks: [],
+    goal: { kind: 'widest-margin' },
+    tolerancePpm: ppm(0),
+  };
+
+  it('passes at 20 MHz, as the feasible set and the brute force say', () => {
+    const windows = rateWindows(guardedBand(context.band, context.guard.low, context.guard.high), context.limits);
+    expect(feasibleSet(windows, [], context.band).feasible).toEqual([{ zone: 1, inverted: false, minRate: 10 * MHZ, maxRate: 30 * MHZ }]);
+    // Independent brute-force evaluator (definition of aliasing; common practice, no source).
+    expect(brutePasses(context, 20 * MHZ)).toBe(true);
+    const judged = evaluateRate(context, hz(20 * MHZ), ppm(0));
+    expect(judged.pass).toBe(true);
+    // The guarded band 0–5 MHz touches DC and lies 10 − 5 = 5 MHz under rate/2: the nearer edge is DC.
+    expect(judged.zoneEdgeMargin).toBe(0);
+  });
+
+  it('still fails below the zone-1 edge 2·5 MHz = 10 MHz', () => {
+    expect(brutePasses(context, 9.9 * MHZ)).toBe(false);
+    expect(evaluateRate(context, hz(9.9 * MHZ), ppm(0)).pass).toBe(false);
+  });
+});
