@@ -1,0 +1,72 @@
+import { z } from 'zod';
+import type { Db } from '../units/quantities.js';
+import type { Converter } from './scenario.js';
+import { refuseAt } from './band-forms.js';
+import { formatFrequency } from '../units/format-frequency.js';
+import { label, level, positiveFrequency, time, wholeNumber } from './scenario-fields.js';
+
+const HARMONIC_ORDER_KEY = /^(?:[2-9]|[1-9]\d+)$/;
+
+const optionalLevel = (description: string) => level(description).nullable().prefault(null);
+
+/** The converter's rate-tied spurs, dBFS; any may be left out. */
+const rateSpurs = z
+  .strictObject({
+    dc: optionalLevel('Spur at DC (offset), dBFS'),
+    halfRate: optionalLevel('Spur at rate/2, dBFS'),
+    quarterRate: optionalLevel('Spur at rate/4, dBFS'),
+  })
+  .meta({ description: 'Spurs tied to the sample rate, dBFS' });
+
+/** M-way interleaving: offset spurs at k·rate/M, images at k·rate/M ± f. */
+const interleave = z
+  .strictObject({
+    ways: wholeNumber(2, 64, 'Number of interleaved cores M'),
+    offsetSpur: level('Offset spurs at k·rate/M, dBFS'),
+    imageLevel: level('Images of the input at k·rate/M ± f, dBc'),
+  })
+  .meta({ description: 'Interleaved cores; leave out (or null) for a single core' });
+
+/**
+ * The converter as written in a scenario file: rate limits, input bandwidth,
+ * resolution, harmonic levels by order and its rate-tied spurs. Checks that
+ * the slowest rate is not above the fastest.
+ */
+export const converterSchema = z
+  .strictObject({
+    label,
+    minRate: positiveFrequency('Slowest sample clock the converter accepts'),
+    maxRate: positiveFrequency('Fastest sample clock the converter accepts'),
+    inputBandwidth: positiveFrequency('Analog input bandwidth; a wanted band above it is refused'),
+    bits: wholeNumber(1, 32, 'Resolution, bits'),
+    harmonics: z
+      .record(z.string().regex(HARMONIC_ORDER_KEY, { error: 'a harmonic order as the key: a whole number 2 or more, e.g. "3"' }), level('dBc'))
+      .meta({ description: 'Harmonic levels by order, dBc at the strongest wanted level, e.g. { "2": -75, "3": -80 }' }),
+    intercept3: optionalLevel('Third-order input intercept referred to full scale, dBFS; leave out to derive it from the 3rd harmonic'),
+    rateSpurs: rateSpurs.nullable().prefault(null),
+    interleave: interleave.nullable().prefault(null),
+    apertureJitter: time.meta({ description: 'Aperture jitter, rms: seconds as a number, or text such as "80 fs", "0.2 ps" (default 0)' }).prefault(0),
+  })
+  .meta({ description: 'The analog-to-digital converter' })
+  .transform((written, ctx): Converter => {
+    if (written.minRate > written.maxRate) {
+      refuseAt(ctx, ['maxRate'], `a rate at or above minRate (${formatFrequency(written.minRate)})`, formatFrequency(written.maxRate));
+    }
+    const harmonics = new Map<number, Db>(
+      Object.entries(written.harmonics)
+        .map(([order, value]) => [Number(order), value] as const)
+        .sort(([a], [b]) => a - b),
+    );
+    return {
+      label: written.label,
+      minRate: written.minRate,
+      maxRate: written.maxRate,
+      inputBandwidth: written.inputBandwidth,
+      bits: written.bits,
+      harmonics,
+      intercept3: written.intercept3,
+      rateSpurs: written.rateSpurs ?? { dc: null, halfRate: null, quarterRate: null },
+      interleave: written.interleave,
+      apertureJitter: written.apertureJitter,
+    };
+  });
