@@ -4,8 +4,9 @@ import { mergeIntervals, type Interval } from './interval-set.js';
  * Where a band of input frequencies shows after sampling: its aliased
  * segments in [0, rate/2]. A negative extent folds as its magnitude. Each
  * piece inside one half-zone [(k−1)·rate/2, k·rate/2] maps by one expression
- * (odd k shifts down, even k mirrors); an extent at least rate/2 wide covers
- * a whole half-zone and so the whole first zone.
+ * (odd k shifts down, even k mirrors); an extent at least rate wide holds a
+ * whole half-zone and so covers the whole first zone (one only rate/2 wide
+ * need not: [0.7, 1.3] at rate 1 folds onto [0, 0.3]).
  *
  * @param low, high the extent, Hz, low ≤ high (may be negative)
  * @param rate sampling rate, Hz, positive
@@ -15,10 +16,11 @@ import { mergeIntervals, type Interval } from './interval-set.js';
 export function foldExtent(low: number, high: number, rate: number): Interval[] {
   const half = rate / 2;
   const magnitude = extentMagnitude(low, high);
-  if (magnitude.high - magnitude.low >= half) return [{ low: 0, high: half }];
+  // Only an extent at least rate wide surely holds a whole half-zone; a narrower one (up to three pieces) is folded piece by piece.
+  if (magnitude.high - magnitude.low >= rate) return [{ low: 0, high: half }];
   const k = Math.floor(magnitude.low / half) + 1;
-  const boundary = k * half;
-  const pieces = magnitude.high <= boundary ? [[k, magnitude.low, magnitude.high] as const] : [[k, magnitude.low, boundary] as const, [k + 1, boundary, magnitude.high] as const];
+  const pieces: (readonly [number, number, number])[] = [[k, magnitude.low, Math.min(magnitude.high, k * half)]];
+  for (let next = k + 1; (next - 1) * half < magnitude.high; next++) pieces.push([next, (next - 1) * half, Math.min(magnitude.high, next * half)]);
   return mergeIntervals(pieces.map(([zone, a, b]) => foldedPiece(zone, a, b, rate)));
 }
 
