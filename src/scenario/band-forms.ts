@@ -18,9 +18,19 @@ export const TONE_OR_EDGES: BandForms = [['frequency'], ['low', 'high']];
 /**
  * Pushes a refusal onto a zod context, with the received value already in
  * words (a frequency written for people, or `nothing`).
+ *
+ * @param path where the refusal sits, relative to the object being checked
+ * @param related other fields the check compared, relative to the same
+ *   object: the refusal is charged to whichever file wrote any of them last
  */
-export function refuseAt(ctx: z.RefinementCtx, path: readonly PropertyKey[], expected: string, received: string): void {
-  ctx.issues.push({ code: 'custom', path: [...path], message: expected, input: received, params: { received } });
+export function refuseAt(
+  ctx: z.RefinementCtx,
+  path: readonly (string | number)[],
+  expected: string,
+  received: string,
+  related: readonly (readonly (string | number)[])[] = [],
+): void {
+  ctx.issues.push({ code: 'custom', path: [...path], message: expected, input: received, params: { received, related, depth: path.length } });
 }
 
 /**
@@ -66,7 +76,7 @@ export function bandFromForm(
   if (center !== undefined && width !== undefined) return centred(center, width, ctx, zeroWidth);
   if (low === undefined || high === undefined) return null;
   if (high < low || (high === low && !zeroWidth)) {
-    refuseAt(ctx, ['high'], `a frequency above low (${formatFrequency(low)})`, formatFrequency(high));
+    refuseAt(ctx, ['high'], `a frequency above low (${formatFrequency(low)})`, formatFrequency(high), [['low']]);
     return null;
   }
   return { low, high };
@@ -78,7 +88,7 @@ function centred(center: Hz, width: Hz, ctx: z.RefinementCtx, zeroWidth: boolean
     return null;
   }
   if (width / 2 > center) {
-    refuseAt(ctx, ['width'], `a width of at most twice the centre (${formatFrequency(center)})`, formatFrequency(width));
+    refuseAt(ctx, ['width'], `a width of at most twice the centre (${formatFrequency(center)})`, formatFrequency(width), [['center']]);
     return null;
   }
   return { low: hz(center - width / 2), high: hz(center + width / 2) };

@@ -50,7 +50,7 @@ export const converterSchema = z
   .meta({ description: 'The analog-to-digital converter' })
   .transform((written, ctx): Converter => {
     if (written.minRate > written.maxRate) {
-      refuseAt(ctx, ['maxRate'], `a rate at or above minRate (${formatFrequency(written.minRate)})`, formatFrequency(written.maxRate));
+      refuseAt(ctx, ['maxRate'], `a rate at or above minRate (${formatFrequency(written.minRate)})`, formatFrequency(written.maxRate), [['minRate']]);
     }
     const harmonics = new Map<number, Db>(
       Object.entries(written.harmonics)

@@ -34,7 +34,7 @@ export const filterSchema = z
   .transform((written, ctx): AntiAliasFilter => {
     if (written.kind === 'butterworth') {
       if (written.passLow >= written.passHigh) {
-        refuseAt(ctx, ['passHigh'], `a frequency above passLow (${formatFrequency(written.passLow)})`, formatFrequency(written.passHigh));
+        refuseAt(ctx, ['passHigh'], `a frequency above passLow (${formatFrequency(written.passLow)})`, formatFrequency(written.passHigh), [['passLow']]);
       }
       return { kind: 'butterworth', order: written.order, passLow: written.passLow, passHigh: written.passHigh };
     }
@@ -42,7 +42,7 @@ export const filterSchema = z
     points.forEach((point, i) => {
       const before = points[i - 1];
       if (before && point.frequency <= before.frequency) {
-        refuseAt(ctx, ['points', i, 0], `a frequency above the point before (${formatFrequency(before.frequency)})`, formatFrequency(point.frequency));
+        refuseAt(ctx, ['points', i, 0], `a frequency above the point before (${formatFrequency(before.frequency)})`, formatFrequency(point.frequency), [['points', i - 1, 0]]);
       }
     });
     return { kind: 'table', points };

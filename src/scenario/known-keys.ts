@@ -5,7 +5,7 @@ type SchemaNode = Readonly<Record<string, unknown>>;
 /**
  * The keys a JSON Schema allows in the object at a path of a document: the
  * `properties` of every object sub-schema reachable there, following
- * `anyOf`/`oneOf` branches and, where a branch pins a key with `const` (a
+ * `anyOf`/`oneOf`/`then`/`else` branches and, where a branch pins a key with `const` (a
  * `kind` discriminator), only the branches the document's value agrees with.
  * Reading the emitted schema rather than zod internals keeps this exact for
  * whatever the schema says.
@@ -31,7 +31,7 @@ export function knownKeys(schema: SchemaNode, path: DocumentPath, document: unkn
 }
 
 function branches(node: SchemaNode): SchemaNode[] {
-  const alternatives = [node.anyOf, node.oneOf].flatMap((list) => (Array.isArray(list) ? list.filter(isJsonObject) : []));
+  const alternatives = [node.anyOf, node.oneOf, [node.then, node.else]].flatMap((list) => (Array.isArray(list) ? list.filter(isJsonObject) : []));
   return [node, ...alternatives.flatMap(branches)];
 }
 

@@ -47,28 +47,46 @@ function mergeObjects(base: Readonly<Record<string, unknown>>, over: Readonly<Re
  * @example fileOfPath(layers, ['converter', 'bits']) // 'heron-lowif.json' when that variant sets bits
  */
 export function fileOfPath(layers: readonly Layer[], path: DocumentPath): string {
+  return layers[supplierIndex(layers, path)]?.file ?? '';
+}
+
+/**
+ * The most derived file among those that supplied any of the paths: where a
+ * check compares two fields, the file that wrote either of them last.
+ *
+ * @param layers the chain, most derived first
+ * @param paths paths in the merged document
+ * @returns the file's name
+ * @example fileOfPaths(layers, ['converter', 'maxRate'], ['converter', 'minRate']) // the variant, when it set minRate
+ */
+export function fileOfPaths(layers: readonly Layer[], paths: readonly DocumentPath[]): string {
+  const index = Math.min(...paths.map((path) => supplierIndex(layers, path)));
+  return layers[index]?.file ?? layers[0]?.file ?? '';
+}
+
+function supplierIndex(layers: readonly Layer[], path: DocumentPath): number {
   // Contributors at the current depth, furthest base first, as the merge folds them.
-  let contributors: ReadonlyArray<{ readonly file: string; readonly value: unknown }> = [...layers]
-    .reverse()
-    .map((layer) => ({ file: layer.file, value: layer.document }));
+  let contributors: ReadonlyArray<{ readonly index: number; readonly value: unknown }> = layers
+    .map((layer, index) => ({ index, value: layer.document as unknown }))
+    .reverse();
   for (const step of path) {
-    let next: Array<{ file: string; value: unknown }> = [];
+    let next: Array<{ index: number; value: unknown }> = [];
     let merged: unknown;
-    for (const { file, value: holder } of contributors) {
+    for (const { index, value: holder } of contributors) {
       const value = childOf(holder, step);
       if (value === undefined) continue;
       if (merged !== undefined && merges(merged, value)) {
-        next.push({ file, value });
+        next.push({ index, value });
         merged = mergeObjects(merged, value as Readonly<Record<string, unknown>>);
       } else {
-        next = [{ file, value }];
+        next = [{ index, value }];
         merged = value;
       }
     }
     if (next.length === 0) break;
     contributors = next;
   }
-  return contributors.at(-1)?.file ?? layers[0]?.file ?? '';
+  return contributors.at(-1)?.index ?? 0;
 }
 
 /** Whether a base value and its override merge key by key (else the override replaces). */

@@ -18,7 +18,7 @@ export const wantedSchema = z
   .transform((written, ctx): WantedBand => {
     const band = bandFromForm(written, EDGES_OR_CENTRE, ctx, false);
     if (written.strongestLevel < written.weakestLevel) {
-      refuseAt(ctx, ['strongestLevel'], `a level at or above weakestLevel (${written.weakestLevel} dBFS)`, `${written.strongestLevel} dBFS`);
+      refuseAt(ctx, ['strongestLevel'], `a level at or above weakestLevel (${written.weakestLevel} dBFS)`, `${written.strongestLevel} dBFS`, [['weakestLevel']]);
     }
     if (!band) return z.NEVER;
     return { ...band, weakestLevel: written.weakestLevel, strongestLevel: written.strongestLevel };

@@ -3,7 +3,7 @@ import type { Scenario } from './scenario.js';
 import { ScenarioError, type ScenarioIssue } from './scenario-issue.js';
 import { parseJsonText } from './json-text.js';
 import { describeValue, expectedWords, issuesFromZod } from './zod-issues.js';
-import { fileOfPath, mergeLayers, type Layer } from './merge-layers.js';
+import { fileOfPaths, mergeLayers, type Layer } from './merge-layers.js';
 import { isJsonObject, pathText, type DocumentPath } from './document-path.js';
 import { scenarioFileSchema } from './scenario-file-schema.js';
 import { scenarioJsonSchema } from './scenario-json-schema.js';
@@ -119,7 +119,7 @@ function validateLayers(layers: readonly Layer[]): Scenario {
   const result = scenarioFileSchema.safeParse(document, { reportInput: true, error: expectedWords });
   if (result.success) return result.data;
   const issues: ScenarioIssue[] = issuesFromZod(result.error.issues, {
-    fileOf: (path) => fileOfPath(layers, path),
+    fileOf: (...paths) => fileOfPaths(layers, paths),
     document,
     jsonSchema: scenarioJsonSchema,
   });

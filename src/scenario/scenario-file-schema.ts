@@ -49,6 +49,7 @@ export const scenarioFileSchema = z
         ['wanted', 'high'],
         `a wanted band at or below the converter's input bandwidth (converter.inputBandwidth ${formatFrequency(converter.inputBandwidth)})`,
         `wanted band up to ${formatFrequency(wanted.high)}`,
+        [['converter', 'inputBandwidth']],
       );
     }
     refuseRepeatedLabels(ctx, [
@@ -82,13 +83,16 @@ const outputIsScenario: Same<z.output<typeof scenarioFileSchema>, Scenario> = tr
 void outputIsScenario;
 
 function refuseRepeatedLabels(ctx: z.RefinementCtx, lists: ReadonlyArray<readonly [string, ReadonlyArray<{ readonly label: string }>]>): void {
-  const firstUse = new Map<string, string>();
+  const firstUse = new Map<string, { text: string; path: (string | number)[] }>();
   for (const [list, items] of lists) {
     items.forEach((item, i) => {
       const here = `${list}[${i}].label`;
       const earlier = firstUse.get(item.label);
-      if (earlier === undefined) firstUse.set(item.label, here);
-      else refuseAt(ctx, [list, i, 'label'], `a label not used elsewhere (${earlier} is already ${JSON.stringify(item.label)})`, JSON.stringify(item.label));
+      if (earlier === undefined) firstUse.set(item.label, { text: here, path: [list, i, 'label'] });
+      else {
+        const words = `a label not used elsewhere (${earlier.text} is already ${JSON.stringify(item.label)})`;
+        refuseAt(ctx, [list, i, 'label'], words, JSON.stringify(item.label), [earlier.path]);
+      }
     });
   }
 }

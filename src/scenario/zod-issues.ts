@@ -8,8 +8,8 @@ type ZodIssue = z.core.$ZodIssue;
 
 /** What the translation needs beyond the issues themselves. */
 export interface IssueSetting {
-  /** The file that supplied the value at a path (after `extends` merging). */
-  readonly fileOf: (path: DocumentPath) => string;
+  /** The file that supplied the values at these paths last (after `extends` merging). */
+  readonly fileOf: (...paths: DocumentPath[]) => string;
   /** The validated document, to choose schema branches for key suggestions. */
   readonly document: unknown;
   /** The JSON Schema of the format, read only when a key is unknown. */
@@ -81,7 +81,7 @@ function translated(issues: readonly ZodIssue[], setting: IssueSetting, prefix: 
       if (branch) return translated(branch, setting, path);
     }
     const expected = issue.code === 'invalid_key' ? (issue.issues[0]?.message ?? issue.message) : issue.message;
-    return [{ kind: 'invalid', file: setting.fileOf(path), path: pathText(path), expected, received: receivedWords(issue) }];
+    return [{ kind: 'invalid', file: setting.fileOf(path, ...relatedPaths(issue, path)), path: pathText(path), expected, received: receivedWords(issue) }];
   });
 }
 
@@ -144,6 +144,14 @@ function wrongTypeAtRoot(issue: ZodIssue): boolean {
   // An enum of texts given an object, say: the other branch was meant.
   if (issue.code === 'invalid_value') return issue.values.every((value) => typeof value !== typeof issue.input);
   return issue.code === 'invalid_union' && issue.errors.length > 0 && issue.errors.every((branch) => branch.every(wrongTypeAtRoot));
+}
+
+/** The other fields a cross-field check compared (see refuseAt), as paths from the root. */
+function relatedPaths(issue: ZodIssue, path: DocumentPath): DocumentPath[] {
+  const params = (issue as { params?: { related?: DocumentPath[]; depth?: number } }).params;
+  if (!params?.related || params.depth === undefined) return [];
+  const object = path.slice(0, path.length - params.depth);
+  return params.related.map((related) => [...object, ...related]);
 }
 
 function receivedWords(issue: ZodIssue): string {
