@@ -15,8 +15,11 @@ const MOST_RATIOS_TRIED = 200;
  */
 export function driftSafeRange(interval: FeasibleInterval, tolerancePpm: number): Interval | null {
   const epsilon = tolerancePpm * 1e-6;
-  const low = interval.minRate / (1 - epsilon);
-  const high = interval.maxRate / (1 + epsilon);
+  let low = interval.minRate / (1 - epsilon);
+  let high = interval.maxRate / (1 + epsilon);
+  // (x/(1 − ε))·(1 − ε) may round an ulp below x, putting the drift end inside the open forbidden interval beyond the edge: step in.
+  while (low * (1 - epsilon) < interval.minRate) low += low * Number.EPSILON;
+  while (high * (1 + epsilon) > interval.maxRate) high -= high * Number.EPSILON;
   return low <= high ? { low, high } : null;
 }
 
