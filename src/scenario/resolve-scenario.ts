@@ -1,4 +1,4 @@
-import { dirname, join, normalize } from 'node:path';
+import { dirname, isAbsolute, join, normalize } from 'node:path';
 import type { Scenario } from './scenario.js';
 import { ScenarioError, type ScenarioIssue } from './scenario-issue.js';
 import { parseJsonText } from './json-text.js';
@@ -19,7 +19,7 @@ const MAX_NESTING = 32;
 
 /**
  * Reads a scenario file and the chain of bases it `extends` (each path
- * relative to the file naming it), merges them (objects key by key, lists
+ * relative to the file naming it, unless absolute), merges them (objects key by key, lists
  * replace) and validates the result. Pure but for `readText`.
  *
  * @param path the variant's file
@@ -80,7 +80,7 @@ function readChain(first: string, readText: ReadText): ChainLayer[] {
     const layer = layerOf(parseJsonText(text, file), file);
     chain.push(layer);
     if (layer.extendsPath === null) return chain;
-    const next = normalize(join(dirname(file), layer.extendsPath));
+    const next = normalize(isAbsolute(layer.extendsPath) ? layer.extendsPath : join(dirname(file), layer.extendsPath));
     if (chain.some((seen) => seen.file === next)) {
       throw new ScenarioError([
         {

@@ -52,6 +52,15 @@ export class ScenarioError extends InputError {
  *   // 'b.json: extends: expected a base file that does not lead back to itself (got a cycle); extends chain: a.json → b.json → a.json'
  */
 export function formatScenarioIssue(issue: ScenarioIssue): string {
+  return oneLine(wordsFor(issue));
+}
+
+/** Control characters (a file name with a line feed, say) written as JSON escapes, so a message stays one line. */
+function oneLine(text: string): string {
+  return text.replace(/[\u0000-\u001f\u007f]/g, (char) => JSON.stringify(char).slice(1, -1));
+}
+
+function wordsFor(issue: ScenarioIssue): string {
   const where = issueWhere(issue);
   if (issue.kind === 'unknown-key') {
     return `${where}: unknown key; ${issue.suggestion ? `did you mean "${issue.suggestion}"?` : `expected ${issue.expected}`}`;

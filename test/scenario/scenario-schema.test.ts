@@ -1,0 +1,148 @@
+import { readFileSync } from 'node:fs';
+import { Command } from 'commander';
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { addSchemaCommand } from '../../src/cli/commands/schema-command.js';
+import { readScenarioFile } from '../../src/cli/read-scenario.js';
+import { scenarioFromDocument } from '../../src/scenario/resolve-scenario.js';
+import { scenarioJsonSchema } from '../../src/scenario/scenario-json-schema.js';
+import { jsonSchemaAccepts } from './json-schema-check.js';
+import { scenarioDocument } from './scenario-document.js';
+
+/**
+ * The JSON Schema printed by `ifzone schema`, the committed copy editors
+ * read, and the round trip Scenario → file document → Scenario. The schema
+ * is checked with the independent checker in json-schema-check.ts.
+ */
+const COMMITTED = new URL('../../scenarios/ifzone-scenario.schema.json', import.meta.url);
+
+async function runSchemaCommand(): Promise<{ out: string; err: string; code: number | undefined }> {
+  let out = '';
+  let err = '';
+  let code: number | undefined;
+  const program = new Command('ifzone').exitOverride();
+  addSchemaCommand(program, { out: (t) => (out += t), err: (t) => (err += t) }, (c) => (code = c));
+  await program.parseAsync(['schema'], { from: 'user' });
+  return { out, err, code };
+}
+
+describe('ifzone schema', () => {
+  it('prints the committed scenarios/ifzone-scenario.schema.json byte for byte', async () => {
+    const run = await runSchemaCommand();
+    expect(run.code).toBe(0);
+    expect(run.err).toBe('');
+    // If this fails after a schema change: node bin/ifzone schema > scenarios/ifzone-scenario.schema.json
+    expect(run.out).toBe(readFileSync(COMMITTED, 'utf8'));
+  });
+
+  it('is a draft 2020-12 schema that closes every object', () => {
+    const schema = scenarioJsonSchema();
+    expect(schema.$schema).toBe('https://json-schema.org/draft/2020-12/schema');
+    const open: string[] = [];
+    const visit = (node: unknown, where: string): void => {
+      if (Array.isArray(node)) node.forEach((item, i) => visit(item, `${where}/${i}`));
+      else if (typeof node === 'object' && node !== null) {
+        const record = node as Record<string, unknown>;
+        if (record.type === 'object' && record.additionalProperties !== false && record.propertyNames === undefined) open.push(where);
+        for (const [key, value] of Object.entries(record)) visit(value, `${where}/${key}`);
+      }
+    };
+    visit(schema, '#');
+    expect(open).toEqual([]);
+  });
+
+  it('requires the core sections of a complete scenario but nothing of a variant', () => {
+    const schema = scenarioJsonSchema() as { else: { required: string[] }; then: { required?: string[] } };
+    expect(schema.else.required).toEqual(['name', 'wanted', 'converter', 'requirements']);
+    expect(schema.then.required).toBeUndefined();
+    expect(jsonSchemaAccepts(scenarioJsonSchema(), { extends: 'heron-base.json', converter: { bits: 12 } })).toBe(true);
+    expect(jsonSchemaAccepts(scenarioJsonSchema(), { converter: { bits: 12 } })).toBe(false);
+    expect(jsonSchemaAccepts(scenarioJsonSchema(), { extends: 'heron-base.json', converter: { bitz: 12 } })).toBe(false);
+    // List entries replace, so a variant's must be complete.
+    expect(jsonSchemaAccepts(scenarioJsonSchema(), { extends: 'b.json', clocks: [{ label: 'x' }] })).toBe(false);
+  });
+
+  it('holds a variant to one wanted-band form, with null clearing the base form', () => {
+    const variant = (wanted: object) => jsonSchemaAccepts(scenarioJsonSchema(), { extends: 'b.json', wanted });
+    expect(variant({ low: '1M', high: '2M', center: null, width: null })).toBe(true);
+    expect(variant({ weakestLevel: -60 })).toBe(true);
+    const complete = (wanted: object) =>
+      jsonSchemaAccepts(scenarioJsonSchema(), {
+        name: 'n',
+        wanted: { weakestLevel: -60, ...wanted },
+        converter: { label: 'c', minRate: 1, maxRate: 2, inputBandwidth: 3, bits: 8, harmonics: {} },
+        requirements: { margin: 0, rejection: 0 },
+      });
+    expect(complete({ low: 1, high: 2 })).toBe(true);
+    expect(complete({ center: 1, width: 2 })).toBe(true);
+    expect(complete({ low: 1, high: 2, center: 1 })).toBe(false);
+    expect(complete({ low: 1 })).toBe(false);
+  });
+});
+
+describe('round trip', () => {
+  it.each(['heron-base.json', 'heron-narrow.json', 'heron-wide.json', 'heron-lowif.json'])('%s → document in Hz → the same scenario', (name) => {
+    const scenario = readScenarioFile(new URL(`../../scenarios/${name}`, import.meta.url).pathname);
+    const document = scenarioDocument(scenario);
+    expect(jsonSchemaAccepts(scenarioJsonSchema(), document)).toBe(true);
+    expect(scenarioFromDocument(JSON.parse(JSON.stringify(document)), name)).toEqual(scenario);
+  });
+
+  it('holds for random valid scenarios written with prefixes, percentages and times', () => {
+    const mhz = fc.integer({ min: 1, max: 4000 }).map((n) => n / 4); // 0.25 MHz steps
+    const written = (value: number) => fc.constantFrom(value * 1e6, `${value}M`, `${value} MHz`, `${value * 1000}k`);
+    const level = fc.integer({ min: -120, max: -1 });
+    const scenarioArb = fc
+      .record({
+        low: mhz,
+        width: mhz,
+        rateLow: fc.integer({ min: 1, max: 100 }),
+        rateSpan: fc.integer({ min: 0, max: 400 }),
+        bits: fc.integer({ min: 1, max: 32 }),
+        harmonics: fc.dictionary(fc.integer({ min: 2, max: 15 }).map(String), level, { maxKeys: 5 }),
+        guardPercent: fc.integer({ min: 0, max: 50 }),
+        jitterFs: fc.integer({ min: 0, max: 1000 }),
+        spurs: fc.array(fc.record({ f: mhz, level, harmonics: fc.integer({ min: 1, max: 20 }), before: fc.boolean() }), { maxLength: 4 }),
+        order: fc.integer({ min: 1, max: 20 }),
+        goal: fc.constantFrom<unknown>('widest-margin', 'lowest-rate', 'quarter-rate', { kind: 'decimation', outputRate: '30.72M' }),
+      })
+      .chain((r) =>
+        fc.record({
+          r: fc.constant(r),
+          lowText: written(r.low),
+          highText: written(r.low + r.width),
+          spurTexts: fc.tuple(...r.spurs.map((s) => written(s.f))),
+        }),
+      );
+    fc.assert(
+      fc.property(scenarioArb, ({ r, lowText, highText, spurTexts }) => {
+        const document = {
+          name: 'Heron fuzz',
+          wanted: { low: lowText, high: highText, weakestLevel: -80 },
+          guard: `${r.guardPercent}%`,
+          converter: {
+            label: 'SR-fuzz',
+            minRate: `${r.rateLow}M`,
+            maxRate: `${r.rateLow + r.rateSpan}M`,
+            inputBandwidth: '2.1G',
+            bits: r.bits,
+            harmonics: r.harmonics,
+            apertureJitter: `${r.jitterFs} fs`,
+          },
+          boardSpurs: r.spurs.map((s, i) => ({ label: `spur ${i}`, frequency: spurTexts[i], level: s.level, harmonics: s.harmonics, coupling: s.before ? 'before-filter' : 'after-filter' })),
+          filter: { kind: 'butterworth', order: r.order, passLow: lowText, passHigh: `${r.low + r.width + 1}M` },
+          requirements: { margin: '100k', rejection: 6 },
+          goal: r.goal,
+        };
+        const scenario = scenarioFromDocument(document, 'fuzz.json');
+        expect(scenario.wanted.low).toBeCloseTo(r.low * 1e6, 3);
+        expect(scenario.guard.low).toBeCloseTo((r.guardPercent / 100) * r.width * 1e6, 3);
+        expect(scenario.converter.apertureJitter).toBeCloseTo(r.jitterFs * 1e-15, 27);
+        expect(jsonSchemaAccepts(scenarioJsonSchema(), document)).toBe(true);
+        const again = scenarioFromDocument(JSON.parse(JSON.stringify(scenarioDocument(scenario))), 'again.json');
+        expect(again).toEqual(scenario);
+      }),
+      { numRuns: 500 },
+    );
+  });
+});
