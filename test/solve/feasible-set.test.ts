@@ -59,7 +59,7 @@ describe('feasibleSet and evaluateRate against the brute force (random plans)', 
     // The sweep must actually see both verdicts, or the agreement proves little.
     expect(tally.feasible).toBeGreaterThan(0.05 * tally.compared);
     expect(tally.compared - tally.feasible).toBeGreaterThan(0.05 * tally.compared);
-  });
+  }, 30_000);
 
   it('agree just beside every exact edge (1e-8 to 1e-6 relative away, outside the skip rule)', () => {
     // A grid sweep cannot see this: an edge placed 1e-8·r off its algebraic value (about 1 Hz at
@@ -84,5 +84,5 @@ describe('feasibleSet and evaluateRate against the brute force (random plans)', 
     );
     console.info(`edge probes: ${probed} rates beside exact edges`);
     expect(probed).toBeGreaterThan(1000);
-  });
+  }, 30_000);
 });

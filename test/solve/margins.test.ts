@@ -90,7 +90,7 @@ describe('evaluateRate margins against the brute force (random plans, tolerance 
     expect(counts.apart).toBeGreaterThan(1000);
     expect(counts.overlapping).toBeGreaterThan(1000);
     expect(counts.straddling).toBeGreaterThan(100);
-  });
+  }, 30_000);
 });
 
 describe('aliased segments of an extent between rate/2 and rate wide', () => {
