@@ -3,6 +3,8 @@ import { InputError } from '../units/input-error.js';
 import { EXIT, type ExitCode, type Io } from './io.js';
 import { addWindowsCommand } from './commands/windows-command.js';
 import { addAliasCommand } from './commands/alias-command.js';
+import { addSolveCommand } from './commands/solve-command.js';
+import { addSchemaCommand } from './commands/schema-command.js';
 
 const VERSION = '0.1.0';
 
@@ -16,6 +18,10 @@ const VERSION = '0.1.0';
  */
 export async function runCli(args: readonly string[], io: Io): Promise<ExitCode> {
   const debug = args.includes('--debug');
+  if (args.every((a) => a === '--debug')) {
+    io.err('ifzone: no command given; run ifzone --help to list the commands\n');
+    return EXIT.badInput;
+  }
   let exitCode: ExitCode = EXIT.answered;
   const settle = (code: ExitCode) => {
     exitCode = code;
@@ -33,6 +39,8 @@ export async function runCli(args: readonly string[], io: Io): Promise<ExitCode>
     });
   addWindowsCommand(program, io, settle);
   addAliasCommand(program, io, settle);
+  addSolveCommand(program, io, settle);
+  addSchemaCommand(program, io, settle);
   try {
     await program.parseAsync(args.filter((a) => a !== '--debug'), { from: 'user' });
     return exitCode;

@@ -183,11 +183,11 @@ describe("commander's own usage errors give exit 2", () => {
   ];
   it.each(cases)('%s', (_, args, named) => expectRefusal(runBin(...args), ...named));
 
-  it('no command at all: exit 2, usage on stderr, nothing on stdout', () => {
+  it('no command at all: exit 2, one line on stderr pointing at --help, nothing on stdout', () => {
     const run = runBin();
     expect(run.status).toBe(2);
     expect(run.stdout).toBe('');
-    expect(run.stderr).toMatch(/Usage: ifzone/);
+    expect(run.stderr).toMatch(/^ifzone: no command given; run ifzone --help[^\n]*\n$/);
   });
 
   it('--help and --version answer with exit 0 on stdout', () => {

@@ -1,0 +1,38 @@
+import { InputError } from '../../units/input-error.js';
+import { parseFrequency } from '../../units/parse-frequency.js';
+import type { Goal, Scenario } from '../../scenario/scenario.js';
+import { contextFromScenario } from '../../solve/context-from-scenario.js';
+import { solvePlan } from '../../solve/solve-plan.js';
+import { planReport } from '../../report/plan-report.js';
+import { planTable } from '../../output/plan-table.js';
+import { toJson } from '../../output/json.js';
+import { readScenarioFile } from '../read-scenario.js';
+import { EXIT, type ExitCode, type Io } from '../io.js';
+import type { SolveOptions } from './solve-command.js';
+
+/** Reads, solves and prints one scenario; exit 0 when a candidate passes, 1 when none does. */
+export function runSolve(file: string, options: SolveOptions, io: Io): ExitCode {
+  const scenario = readScenarioFile(file);
+  const goal = goalFromOptions(options, scenario);
+  const context = contextFromScenario({ ...scenario, goal });
+  const report = planReport(scenario.name, context, solvePlan(context));
+  io.out(options.json ? toJson(report) : planTable(report));
+  return report.best === null ? EXIT.noAnswer : EXIT.answered;
+}
+
+const GOALS = ['widest-margin', 'lowest-rate', 'quarter-rate', 'decimation'] as const;
+
+function goalFromOptions(options: SolveOptions, scenario: Scenario): Goal {
+  if (options.goal === undefined) {
+    if (options.outputRate !== undefined) throw new InputError('--output-rate', 'only with --goal decimation', options.outputRate);
+    return scenario.goal;
+  }
+  const kind = GOALS.find((g) => g === options.goal);
+  if (!kind) throw new InputError('--goal', `one of ${GOALS.join(', ')}`, options.goal);
+  if (kind !== 'decimation') return { kind };
+  const fromScenario = scenario.goal.kind === 'decimation' ? scenario.goal.outputRate : undefined;
+  if (options.outputRate === undefined && fromScenario === undefined) throw new InputError('--output-rate', 'an output rate for --goal decimation', 'nothing');
+  const outputRate = options.outputRate === undefined ? fromScenario! : parseFrequency(options.outputRate, '--output-rate');
+  if (outputRate <= 0) throw new InputError('--output-rate', 'a rate above zero', options.outputRate ?? '');
+  return { kind, outputRate };
+}

@@ -1,0 +1,164 @@
+import { hz, ppm, type Db, type Hz, type Ppm } from '../units/quantities.js';
+import type { Band, Guard } from '../math/band.js';
+import { extentMagnitude } from '../math/fold-extent.js';
+import type { Goal } from '../scenario/scenario.js';
+import type { InterfererKind } from '../solve/interferer.js';
+import type { PlanContext } from '../solve/plan-context.js';
+import type { Candidate, PlanResult } from '../solve/solve-plan.js';
+import type { RateEvaluation } from '../solve/evaluate-rate.js';
+import { PAPER_DESIGN_CAUTION } from './caution.js';
+
+/** An interferer as reported: its extent rateMultiple·r + [low, high] and whether it blocks. */
+export interface ReportedInterferer {
+  readonly label: string;
+  readonly kind: InterfererKind;
+  readonly order: number | null;
+  readonly source: string;
+  readonly rateMultiple: number;
+  readonly low: Hz;
+  readonly high: Hz;
+  readonly requiredMargin: Hz;
+  readonly blocking: boolean;
+  readonly level: Db;
+}
+
+export interface ReportedFeasible {
+  readonly zone: number;
+  readonly inverted: boolean;
+  readonly minRate: Hz;
+  readonly maxRate: Hz;
+  readonly width: Hz;
+  /** Drift a rate at the interval's centre may take and stay inside, ±ppm. */
+  readonly widthPpm: Ppm;
+}
+
+export interface ReportedCheck {
+  readonly label: string;
+  readonly kind: InterfererKind;
+  /** Input frequencies at the candidate's nominal rate, Hz (magnitudes). */
+  readonly input: readonly [Hz, Hz];
+  readonly alias: ReadonlyArray<readonly [Hz, Hz]>;
+  readonly margin: Hz;
+  readonly requiredMargin: Hz;
+  readonly level: Db;
+  readonly levelMargin: Db;
+  readonly blocking: boolean;
+  readonly pass: boolean;
+}
+
+export interface ReportedCandidate {
+  readonly label: string;
+  readonly origin: Candidate['origin'];
+  readonly rate: Hz;
+  readonly tolerancePpm: Ppm;
+  readonly zone: number | null;
+  readonly inverted: boolean | null;
+  /** Aliased centre of the wanted band, Hz. */
+  readonly center: Hz | null;
+  /** Frequency the digital down-converter's NCO is tuned to, Hz (the aliased centre). */
+  readonly nco: Hz | null;
+  /** The band arrives inverted: conjugate the complex baseband output (or tune the NCO to −nco). */
+  readonly conjugate: boolean | null;
+  readonly image: { readonly low: Hz; readonly high: Hz } | null;
+  readonly zoneEdgeMargin: Hz;
+  readonly worstMargin: Hz;
+  readonly limitedBy: string;
+  readonly worstSlack: Hz;
+  readonly pass: boolean;
+  readonly checks: readonly ReportedCheck[];
+}
+
+/** The solved plan for people and programs alike: the `solve` JSON contract. */
+export interface PlanReport {
+  readonly scenario: string;
+  readonly band: Band;
+  readonly guard: Guard;
+  readonly search: { readonly minRate: Hz; readonly maxRate: Hz };
+  readonly goal: Goal;
+  readonly interferers: readonly ReportedInterferer[];
+  readonly windows: PlanResult['windows'];
+  readonly feasible: readonly ReportedFeasible[];
+  readonly blocked: PlanResult['blocked'];
+  readonly candidates: readonly ReportedCandidate[];
+  /** Label of the best passing candidate, or null when none passes. */
+  readonly best: string | null;
+  readonly caution: string;
+}
+
+/**
+ * Builds the report of a solved plan.
+ *
+ * @param name the scenario's name
+ * @param context the plan that was solved
+ * @param result what the solver found
+ */
+export function planReport(name: string, context: PlanContext, result: PlanResult): PlanReport {
+  const passing = result.candidates.find((c) => c.evaluation.pass);
+  return {
+    scenario: name,
+    band: context.band,
+    guard: context.guard,
+    search: { minRate: context.limits.minRate, maxRate: context.limits.maxRate },
+    goal: context.goal,
+    interferers: context.interferers.map((i) => ({
+      label: i.label,
+      kind: i.kind,
+      order: i.order,
+      source: i.source,
+      rateMultiple: i.rateMultiple,
+      low: i.low,
+      high: i.high,
+      requiredMargin: i.requiredMargin,
+      blocking: i.blocking,
+      level: i.level,
+    })),
+    windows: result.windows,
+    feasible: result.feasible.map((f) => {
+      const width = hz(f.maxRate - f.minRate);
+      return { ...f, width, widthPpm: ppm((width / (f.maxRate + f.minRate)) * 1e6) };
+    }),
+    blocked: result.blocked,
+    candidates: result.candidates.map((c) => reportedCandidate(context, c)),
+    best: passing ? passing.label : null,
+    caution: PAPER_DESIGN_CAUTION,
+  };
+}
+
+function reportedCandidate(context: PlanContext, candidate: Candidate): ReportedCandidate {
+  const e: RateEvaluation = candidate.evaluation;
+  return {
+    label: candidate.label,
+    origin: candidate.origin,
+    rate: e.rate,
+    tolerancePpm: e.tolerancePpm,
+    zone: e.zone,
+    inverted: e.inverted,
+    center: e.center,
+    nco: e.center,
+    conjugate: e.inverted,
+    image: e.image,
+    zoneEdgeMargin: e.zoneEdgeMargin,
+    worstMargin: e.worstMargin,
+    limitedBy: e.limitedBy,
+    worstSlack: e.worstSlack,
+    pass: e.pass,
+    checks: e.checks.map((check, index) => {
+      const interferer = context.interferers[index]!;
+      const offset = interferer.rateMultiple * e.rate;
+      const magnitude = extentMagnitude(offset + interferer.low, offset + interferer.high);
+      const input = [hz(magnitude.low), hz(magnitude.high)] as const;
+      return {
+        label: check.label,
+        kind: check.kind,
+        input,
+        alias: check.alias,
+        margin: check.margin,
+        requiredMargin: check.requiredMargin,
+        level: check.level,
+        levelMargin: check.levelMargin,
+        blocking: check.blocking,
+        pass: check.pass,
+      };
+    }),
+  };
+}

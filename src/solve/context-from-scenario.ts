@@ -1,0 +1,23 @@
+import type { Scenario } from '../scenario/scenario.js';
+import { deriveInterferers } from '../interferers/derive-interferers.js';
+import { levelThreshold } from '../interferers/level-threshold.js';
+import type { PlanContext } from './plan-context.js';
+
+/**
+ * The solver's view of a scenario: the wanted band, guards, the converter's
+ * rate range, every derived interferer, the clocks and the goal.
+ *
+ * @param scenario the validated scenario
+ */
+export function contextFromScenario(scenario: Scenario): PlanContext {
+  return {
+    band: { low: scenario.wanted.low, high: scenario.wanted.high },
+    guard: scenario.guard,
+    limits: { minRate: scenario.converter.minRate, maxRate: scenario.converter.maxRate },
+    interferers: deriveInterferers(scenario),
+    levelThreshold: levelThreshold(scenario),
+    clocks: scenario.clocks,
+    goal: scenario.goal,
+    tolerancePpm: scenario.requirements.tolerancePpm,
+  };
+}
