@@ -1,0 +1,158 @@
+import type { PlanReport, ReportedCandidate } from '../report/plan-report.js';
+import { formatFrequency, trimmed } from '../units/format-frequency.js';
+import { horizontalAxis, verticalAxis } from './axis.js';
+import { spreadApart, textWidth } from './label-packing.js';
+import { boxSwatch, legendRows } from './legend.js';
+import { candidateMarker, failMarker, passMarker } from './markers.js';
+import { coveringTicks, linearTicks } from './nice-ticks.js';
+import { FILL } from './patterns.js';
+import { linearScale, type Scale } from './scale.js';
+import { findCandidate } from './spectrum.js';
+import { element, pointList, textElement } from './svg-element.js';
+import { svgDocument, type Figure } from './svg-document.js';
+import { allowedWedges, type Wedge } from './wedges.js';
+
+const WIDTH = 900;
+const LEFT = 78;
+const PLOT_RIGHT = 540;
+const TOP = 64;
+const BOTTOM = 520;
+const SMALL = 9.5;
+/** Most candidates labelled beside the design line, best first; the rest are marked only. */
+const MOST_LABELS = 16;
+
+/**
+ * The band-position chart of Vaughan, Scott & White (1991): sampling rate
+ * over bandwidth (fs/B) against upper band edge over bandwidth (fH/B), with
+ * the allowed region of each Nyquist zone n drawn as its exact wedge
+ * (upright zones grey, inverted zones dotted, zone numbers along the right
+ * edge), the design's guarded band as a vertical line at its fH/B (where it
+ * crosses a wedge are the legal windows), the searched rate range, and the
+ * candidates as points on the line (disc: passes; crossed square: fails).
+ *
+ * @param report the solved plan
+ * @param candidateLabel mark only this candidate (the others drawn small), or all when absent
+ * @returns the figure, 900 px wide, about 600 px high
+ * @throws InputError when candidateLabel names no candidate
+ */
+export function bandPositionFigure(report: PlanReport, candidateLabel?: string): Figure {
+  const focus = candidateLabel === undefined ? null : findCandidate(report, candidateLabel);
+  const fL = Math.max(0, report.band.low - report.guard.low);
+  const fH = report.band.high + report.guard.high;
+  const B = fH - fL;
+  const design = fH / B;
+  const rates = report.candidates.map((c) => c.rate / B);
+  const xTicks = coveringTicks(1, Math.max(4, design * 1.12, design + 1), 8);
+  const xMax = xTicks.values[xTicks.values.length - 1]!;
+  const yTicks = coveringTicks(0, Math.max(4, 2.2 * design, ...rates.map((r) => r * 1.08)), 8);
+  const yMax = yTicks.values[yTicks.values.length - 1]!;
+  const x = linearScale([1, xMax], [LEFT, PLOT_RIGHT]);
+  const y = linearScale([0, yMax], [BOTTOM, TOP]);
+
+  const parts: string[] = [heading(report, fL, fH, design)];
+  parts.push(element('rect', { x: LEFT, y: TOP, width: PLOT_RIGHT - LEFT, height: BOTTOM - TOP, fill: '#fff', stroke: '#000', 'stroke-width': 0.8 }));
+  const wedges = allowedWedges(xMax, yMax);
+  // Many wedges crowd towards (fH/B, 2): thinner outlines keep them apart.
+  const outline = wedges.length > 24 ? 0.25 : 0.7;
+  for (const w of wedges) parts.push(element('polygon', { points: pointList(w.points.map(([a, b]) => [x.at(a), y.at(b)])), fill: w.inverted ? FILL.inverted : '#dcdcdc', stroke: '#000', 'stroke-width': outline }));
+  parts.push(zoneNumbers(wedges, x, y, xMax, yMax));
+  parts.push(searchLines(report, B, x, y, yMax));
+  parts.push(element('line', { x1: x.at(design), y1: TOP, x2: x.at(design), y2: BOTTOM, stroke: '#000', 'stroke-width': 1.4, 'stroke-dasharray': '7 3' }));
+  parts.push(textElement(x.at(design), TOP - 6, `this design: fH/B = ${trimmed(design, 5)}`, { 'text-anchor': design > (1 + xMax) / 2 ? 'end' : 'start', 'font-size': SMALL, 'font-weight': 'bold' }));
+  parts.push(candidatePoints(report, focus, B, design, x, y));
+  parts.push(verticalAxis(y, yTicks.values.map((v) => ({ value: v, label: trimmed(v, 6) })), LEFT, 'sampling rate / bandwidth, fs/B', PLOT_RIGHT));
+  parts.push(horizontalAxis(x, linearTicks(1, xMax, 8).values.map((v) => ({ value: v, label: trimmed(v, 6) })), BOTTOM, 'upper band edge / bandwidth, fH/B'));
+  const legend = legendRows(
+    [
+      { swatch: boxSwatch('#dcdcdc'), text: 'allowed, upright zone' },
+      { swatch: boxSwatch(FILL.inverted), text: 'allowed, inverted zone' },
+      { swatch: boxSwatch('#fff'), text: 'aliasing' },
+      { swatch: (a, b) => passMarker(a, b), text: 'candidate passes' },
+      { swatch: (a, b) => failMarker(a, b), text: 'candidate fails' },
+    ],
+    24,
+    BOTTOM + 56,
+    WIDTH - 20,
+  );
+  parts.push(legend.markup);
+  return { width: WIDTH, height: Math.ceil(BOTTOM + 56 + legend.height + 12), title: `Band-position chart: ${report.scenario}`, body: parts.join('') };
+}
+
+/**
+ * The band-position chart as a standalone SVG document (see bandPositionFigure).
+ *
+ * @param report the solved plan
+ * @param candidateLabel mark only this candidate, or all when absent
+ * @returns SVG text, 900 px wide
+ * @example bandPositionSvg(report).includes('fs/B')
+ */
+export function bandPositionSvg(report: PlanReport, candidateLabel?: string): string {
+  return svgDocument(bandPositionFigure(report, candidateLabel));
+}
+
+function heading(report: PlanReport, fL: number, fH: number, design: number): string {
+  const B = fH - fL;
+  return (
+    textElement(24, 22, `Band-position chart: ${report.scenario}`, { 'font-size': 14, 'font-weight': 'bold' }) +
+    textElement(24, 40, `zone n allows 2·fH/n ≤ fs ≤ 2·(fH − B)/(n − 1) (Vaughan, Scott & White 1991); guarded band ${formatFrequency(fL)} – ${formatFrequency(fH)}, B = ${formatFrequency(B)}, fH/B = ${trimmed(design, 6)}`, { 'font-size': 10.5 })
+  );
+}
+
+/** Zone numbers in the gutter right of the plot, each beside its wedge's right end; crowded ones thinned. */
+function zoneNumbers(wedges: readonly Wedge[], x: Scale, y: Scale, xMax: number, yMax: number): string {
+  const parts: string[] = [];
+  let lastY = -Infinity;
+  for (const w of wedges) {
+    // Middle of the wedge's section at the right edge, or where it leaves through the top.
+    const low = (2 * xMax) / w.zone;
+    const high = w.zone === 1 ? yMax : Math.min((2 * (xMax - 1)) / (w.zone - 1), yMax);
+    if (low >= yMax) {
+      const inside = w.points.reduce((sum, [a]) => sum + a, 0) / w.points.length;
+      parts.push(textElement(x.at(inside), y.at(yMax) + 12, String(w.zone), { 'text-anchor': 'middle', 'font-size': SMALL }));
+      continue;
+    }
+    // Zones step down the page as n grows: keep a number only when clear of the one above.
+    const at = y.at((low + high) / 2);
+    if (at < lastY + 11) continue;
+    lastY = at;
+    const name = wedges.length <= 12 ? `zone ${w.zone}${w.inverted ? ' (inv)' : ''}` : String(w.zone);
+    parts.push(element('line', { x1: x.at(xMax), y1: at, x2: x.at(xMax) + 5, y2: at, stroke: '#000', 'stroke-width': 0.6 }));
+    parts.push(textElement(x.at(xMax) + 7, at + 3.5, name, { 'font-size': SMALL }));
+  }
+  return element('g', { class: 'zones' }, parts.join(''));
+}
+
+function searchLines(report: PlanReport, B: number, x: Scale, y: Scale, yMax: number): string {
+  const parts: string[] = [];
+  for (const [rate, text] of [[report.search.minRate, 'slowest rate searched'], [report.search.maxRate, 'fastest rate searched']] as const) {
+    const at = rate / B;
+    if (at <= 0 || at > yMax) continue;
+    parts.push(element('line', { x1: x.range[0], y1: y.at(at), x2: x.range[1], y2: y.at(at), stroke: '#000', 'stroke-width': 0.8, 'stroke-dasharray': '2 2' }));
+    parts.push(element('rect', { x: x.range[0] + 3, y: y.at(at) - 12, width: textWidth(text, 8.5) + 4, height: 11, fill: '#fff', opacity: 0.85 }));
+    parts.push(textElement(x.range[0] + 5, y.at(at) - 3, text, { 'font-size': 8.5, 'font-style': 'italic' }));
+  }
+  return element('g', { class: 'search' }, parts.join(''));
+}
+
+function candidatePoints(report: PlanReport, focus: ReportedCandidate | null, B: number, design: number, x: Scale, y: Scale): string {
+  const parts: string[] = [];
+  const at = x.at(design);
+  const inChart = (c: ReportedCandidate) => c.rate / B <= y.domain[1];
+  const marked = focus ? [focus] : report.candidates.filter(inChart);
+  if (focus) {
+    for (const c of report.candidates.filter((c) => c !== focus && inChart(c))) parts.push(element('circle', { cx: at, cy: y.at(c.rate / B), r: 1.8, fill: '#777' }));
+  }
+  const labelled = marked.slice(0, MOST_LABELS).sort((a, b) => b.rate - a.rate);
+  const wanted = labelled.map((c) => y.at(c.rate / B));
+  const placed = spreadApart(wanted, 12, TOP + 6, BOTTOM - 4);
+  const labelX = Math.max(at, x.range[1]) + 76;
+  labelled.forEach((c, i) => {
+    const text = `${c.label}: ${formatFrequency(c.rate, 7)} = ${trimmed(c.rate / B, 5)}·B`;
+    parts.push(element('path', { d: `M${at + 6} ${wanted[i]}L${labelX - 36} ${wanted[i]}L${labelX - 4} ${placed[i]}`, fill: 'none', stroke: '#777', 'stroke-width': 0.5 }));
+    parts.push(textElement(labelX, placed[i]! + 3.5, text, { 'font-size': SMALL, 'font-weight': c.label === report.best ? 'bold' : undefined }));
+  });
+  for (const c of marked) parts.push(candidateMarker(c.pass, at, y.at(c.rate / B)));
+  const unlabelled = marked.length - labelled.length;
+  if (unlabelled > 0) parts.push(textElement(labelX, BOTTOM + 12, `+${unlabelled} more candidates marked, not labelled`, { 'font-size': SMALL, 'font-style': 'italic' }));
+  return element('g', { class: 'candidates' }, parts.join(''));
+}

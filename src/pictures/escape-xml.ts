@@ -1,0 +1,20 @@
+/** Characters XML 1.0 does not allow at all (C0 controls but tab, LF, CR; U+FFFE, U+FFFF; lone surrogates). */
+const NOT_XML = /[\u0000-\u0008\u000B\u000C\u000E-\u001F\uFFFE\uFFFF]|[\uD800-\uDBFF](?![\uDC00-\uDFFF])|(?<![\uD800-\uDBFF])[\uDC00-\uDFFF]/g;
+
+/**
+ * Escapes text for XML character data and attribute values: &, <, >, " and '
+ * become entities; characters XML cannot carry at all become U+FFFD.
+ *
+ * @param text any string (a label from a scenario file)
+ * @returns text safe inside an element or a quoted attribute
+ * @example escapeXml('IM3 <2·A−B> & "co"') // 'IM3 &lt;2·A−B&gt; &amp; &quot;co&quot;'
+ */
+export function escapeXml(text: string): string {
+  return text
+    .replace(NOT_XML, '\uFFFD')
+    .replace(/&/g, '&amp;')
+    .replace(/</g, '&lt;')
+    .replace(/>/g, '&gt;')
+    .replace(/"/g, '&quot;')
+    .replace(/'/g, '&apos;');
+}

@@ -1,0 +1,47 @@
+import { element, textElement } from './svg-element.js';
+import { textWidth } from './label-packing.js';
+
+/** A legend entry: a swatch drawn centred on (x, y) and its words. */
+export interface LegendEntry {
+  readonly swatch: (x: number, y: number) => string;
+  readonly text: string;
+}
+
+export const LEGEND_FONT = 10.5;
+const ROW = 17;
+const SWATCH = 22;
+
+/**
+ * Legend entries laid out left to right, wrapping to a new row at `right`.
+ *
+ * @param entries in reading order
+ * @param left, top the legend's top-left corner, px
+ * @param right px the entries must not pass
+ * @returns the markup and the height used, px
+ */
+export function legendRows(entries: readonly LegendEntry[], left: number, top: number, right: number): { markup: string; height: number } {
+  const parts: string[] = [];
+  let x = left;
+  let y = top + ROW / 2;
+  for (const entry of entries) {
+    const width = SWATCH + 6 + textWidth(entry.text, LEGEND_FONT) + 18;
+    if (x > left && x + width > right) {
+      x = left;
+      y += ROW;
+    }
+    parts.push(entry.swatch(x + SWATCH / 2, y));
+    parts.push(textElement(x + SWATCH + 6, y + LEGEND_FONT * 0.35, entry.text, { 'font-size': LEGEND_FONT }));
+    x += width;
+  }
+  return { markup: element('g', { class: 'legend' }, parts.join('')), height: entries.length === 0 ? 0 : y + ROW / 2 - top };
+}
+
+/**
+ * A swatch: a small box with the given fill, outlined.
+ *
+ * @param fill a colour or pattern url
+ * @param dashed outline dashed (for things drawn dashed in the plot)
+ */
+export function boxSwatch(fill: string, dashed = false): (x: number, y: number) => string {
+  return (x, y) => element('rect', { x: x - SWATCH / 2, y: y - 6, width: SWATCH, height: 12, fill: '#fff' }) + element('rect', { x: x - SWATCH / 2, y: y - 6, width: SWATCH, height: 12, fill, stroke: '#000', 'stroke-width': 1, 'stroke-dasharray': dashed ? '3 2' : undefined });
+}

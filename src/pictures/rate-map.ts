@@ -1,0 +1,222 @@
+import type { PlanReport, ReportedCandidate } from '../report/plan-report.js';
+import { formatFrequency } from '../units/format-frequency.js';
+import type { RateWindow } from '../windows/rate-window.js';
+import { horizontalAxis } from './axis.js';
+import { frequencyUnit, inUnit } from './frequency-unit.js';
+import { packLabels, textWidth, wrapPhrases, type PlacedLabel } from './label-packing.js';
+import { boxSwatch, legendRows, LEGEND_FONT } from './legend.js';
+import { candidateMarker, failMarker, passMarker } from './markers.js';
+import { linearTicks, logTicks } from './nice-ticks.js';
+import { FILL } from './patterns.js';
+import { rateMapView } from './rate-map-view.js';
+import { linearScale, logScale, type Scale } from './scale.js';
+import { element, px, textElement } from './svg-element.js';
+import { svgDocument, type Figure } from './svg-document.js';
+import { blockingKeys, blockedGroups, type BlockedGroup } from './blocked-groups.js';
+
+const WIDTH = 960;
+const LEFT = 132;
+const RIGHT = 24;
+const TOP = 60;
+const BODY = 16;
+const CANDIDATE_ROWS = 2;
+const CANDIDATE_ROW = 12;
+const BLOCKED_ROWS = 4;
+const BLOCKED_ROW = 13;
+const SMALL = 9.5;
+
+interface Lane {
+  readonly title: string;
+  readonly window: RateWindow | null;
+  readonly candidates: readonly PlacedLabel<ReportedCandidate>[];
+  readonly markers: readonly ReportedCandidate[];
+  readonly blocked: readonly PlacedLabel<BlockedGroup>[];
+  /** Key numbers of the checks whose brackets found no row. */
+  readonly thinned: readonly number[];
+  readonly height: number;
+}
+
+/**
+ * The rate map as a figure: one lane per Nyquist-zone window (zone 1 at the
+ * top, so the lanes step down as the rate falls), each window outlined
+ * (inverted zones dotted and marked "(inv)"), its blocked sub-ranges hatched
+ * with a bracket labelled by the blocking check (ranges with the same edges
+ * share one bracket; a label with no room falls back to its key number and
+ * is left out when even that has none), its feasible intervals solid, and
+ * the candidates as markers (disc: passes; crossed square: fails). The axis
+ * zooms onto the windows drawn and turns logarithmic for long spans (see
+ * rateMapView); a legend lists every blocking label with its key.
+ *
+ * @param report the solved plan
+ * @returns the figure (width 960 px, height from the lanes)
+ */
+export function rateMapFigure(report: PlanReport): Figure {
+  const view = rateMapView(report);
+  const plot: readonly [number, number] = [LEFT, WIDTH - RIGHT];
+  const scale: Scale = view.log ? logScale([view.low, view.high], plot) : linearScale([view.low, view.high], plot);
+  const keys = blockingKeys(report);
+  const inAxis = (rate: number) => rate >= view.low && rate <= view.high;
+  const zonesWithWindow = new Set(report.windows.map((w) => w.zone));
+  const lanes: Lane[] = view.windows.map((w) =>
+    lane(`zone ${w.zone}${w.inverted ? ' (inv)' : ''}`, w, report.candidates.filter((c) => c.zone === w.zone && inAxis(c.rate)), blockedGroups(report, w.zone, keys), scale, report),
+  );
+  const others = report.candidates.filter((c) => (c.zone === null || !zonesWithWindow.has(c.zone)) && inAxis(c.rate));
+  if (others.length > 0) lanes.push(lane('outside windows', null, others, [], scale, report));
+  const drawnCandidates = lanes.reduce((n, l) => n + l.markers.length, 0);
+
+  const parts: string[] = [heading(report)];
+  let y = TOP;
+  for (const [index, l] of lanes.entries()) {
+    parts.push(drawLane(l, y, scale, report, index));
+    y += l.height;
+  }
+  if (lanes.length === 0) {
+    parts.push(textElement((LEFT + WIDTH - RIGHT) / 2, y + 24, 'No legal window inside the search range', { 'text-anchor': 'middle', 'font-size': 12 }));
+    y += 48;
+  }
+  const unit = frequencyUnit(view.high);
+  const tickValues = view.log ? logTicks(view.low, view.high) : linearTicks(view.low, view.high, 8).values;
+  const ticks = tickValues.map((v) => ({ value: v, label: inUnit(v, unit) }));
+  parts.push(horizontalAxis(scale, ticks, y + 4, `sampling rate (${unit.unit})${view.log ? ', logarithmic' : ''}`, TOP));
+  y += 60;
+  const legend = legendRows(
+    [
+      { swatch: boxSwatch('#fff'), text: 'window, upright zone' },
+      { swatch: boxSwatch(FILL.inverted), text: 'window, inverted zone (inv)' },
+      { swatch: boxSwatch(FILL.blocked), text: 'blocked' },
+      { swatch: boxSwatch(FILL.feasible), text: 'feasible' },
+      { swatch: (x, yy) => passMarker(x, yy), text: 'candidate passes' },
+      { swatch: (x, yy) => failMarker(x, yy), text: 'candidate fails' },
+    ],
+    LEFT - 100,
+    y,
+    WIDTH - RIGHT,
+  );
+  parts.push(legend.markup);
+  y += legend.height + 8;
+  const notes = [
+    ...keyLines(keys),
+    ...viewNotes(view, report, drawnCandidates),
+  ];
+  for (const line of notes) {
+    const indent = line.startsWith('  ') ? 16 : 0;
+    parts.push(textElement(LEFT - 100 + indent, y + LEGEND_FONT, line.trim(), { 'font-size': LEGEND_FONT }));
+    y += LEGEND_FONT + 5;
+  }
+  return { width: WIDTH, height: Math.ceil(y + 10), title: `Rate map: ${report.scenario}`, body: parts.join('') };
+}
+
+/**
+ * The rate map as a standalone SVG document (see rateMapFigure).
+ *
+ * @param report the solved plan
+ * @returns SVG text, 960 px wide
+ * @example rateMapSvg(report).includes('zone 2 (inv)')
+ */
+export function rateMapSvg(report: PlanReport): string {
+  return svgDocument(rateMapFigure(report));
+}
+
+function heading(report: PlanReport): string {
+  const { band, guard, search } = report;
+  const sub = `wanted ${formatFrequency(band.low)} – ${formatFrequency(band.high)}, guards ${formatFrequency(guard.low)} / ${formatFrequency(guard.high)}; rates searched ${formatFrequency(search.minRate)} – ${formatFrequency(search.maxRate)}`;
+  return textElement(LEFT - 100, 22, `Sampling-rate map: ${report.scenario}`, { 'font-size': 14, 'font-weight': 'bold' }) + textElement(LEFT - 100, 40, sub, { 'font-size': 11 });
+}
+
+function lane(title: string, window: RateWindow | null, candidates: readonly ReportedCandidate[], groups: readonly BlockedGroup[], scale: Scale, report: PlanReport): Lane {
+  const plot = scale.range;
+  const placedCandidates = packLabels(
+    candidates.map((c) => ({ x: scale.at(c.rate), text: c.label, item: c })),
+    CANDIDATE_ROWS,
+    plot,
+    SMALL,
+  );
+  const placedBlocked = packLabels(
+    groups.map((g) => {
+      const spans = g.ranges.map(([a, b]) => [scale.at(a), scale.at(b)] as const);
+      const [a, b] = spans[0]!;
+      return { x: (a + b) / 2, text: g.labels.join(', '), short: g.keys.join(','), spans, item: g };
+    }),
+    BLOCKED_ROWS,
+    plot,
+    SMALL,
+  );
+  const candidateRows = rowsUsed(placedCandidates);
+  const blockedRows = rowsUsed(placedBlocked);
+  return {
+    title,
+    window,
+    candidates: placedCandidates,
+    markers: candidates,
+    blocked: placedBlocked,
+    thinned: groups.filter((g) => !placedBlocked.some((p) => p.item === g)).flatMap((g) => g.keys).sort((a, b) => a - b),
+    height: Math.max(candidateRows * CANDIDATE_ROW + BODY + blockedRows * BLOCKED_ROW + 10, 34),
+  };
+}
+
+function rowsUsed<T>(placed: readonly PlacedLabel<T>[]): number {
+  return placed.reduce((n, p) => Math.max(n, p.row + 1), 0);
+}
+
+function drawLane(l: Lane, top: number, scale: Scale, report: PlanReport, index: number): string {
+  const parts: string[] = [];
+  if (index % 2 === 1) parts.push(element('rect', { x: 8, y: top, width: WIDTH - 16, height: l.height, fill: '#f6f6f6' }));
+  const candidateRows = rowsUsed(l.candidates);
+  const bodyTop = top + 4 + candidateRows * CANDIDATE_ROW;
+  const mid = bodyTop + BODY / 2;
+  parts.push(textElement(LEFT - 10, mid + 4, l.title, { 'text-anchor': 'end', 'font-size': 11, 'font-weight': 'bold' }));
+  if (l.thinned.length > 0) parts.push(textElement(LEFT - 10, mid + 16, `not marked: ${l.thinned.join(', ')}`, { 'text-anchor': 'end', 'font-size': 8.5, 'font-style': 'italic' }));
+  const w = l.window;
+  if (w) {
+    const [a, b] = [scale.at(w.minRate), scale.at(Math.min(w.maxRate, report.search.maxRate))];
+    const box = (x0: number, x1: number, fill: string) => element('rect', { x: x0, y: bodyTop, width: Math.max(x1 - x0, 1.5), height: BODY, fill });
+    parts.push(box(a, b, w.inverted ? FILL.inverted : '#fff'));
+    for (const g of report.blocked.filter((r) => r.zone === w.zone)) parts.push(box(scale.at(g.minRate), scale.at(g.maxRate), FILL.blocked));
+    for (const f of report.feasible.filter((r) => r.zone === w.zone)) parts.push(box(scale.at(f.minRate), scale.at(f.maxRate), FILL.feasible));
+    parts.push(element('rect', { x: a, y: bodyTop, width: Math.max(b - a, 1.5), height: BODY, fill: 'none', stroke: '#000', 'stroke-width': 1 }));
+  } else {
+    parts.push(element('line', { x1: LEFT, y1: mid, x2: WIDTH - RIGHT, y2: mid, stroke: '#777', 'stroke-dasharray': '2 3' }));
+  }
+  for (const p of l.blocked) {
+    const rowTop = bodyTop + BODY + 3 + p.row * BLOCKED_ROW;
+    const d = p.item.ranges.map(([min, max]) => `M${px(scale.at(min))} ${px(rowTop - 2)}V${px(rowTop + 1)}H${px(scale.at(max))}V${px(rowTop - 2)}`).join('');
+    parts.push(element('path', { d, fill: 'none', stroke: '#8f2d1f', 'stroke-width': 1 }));
+    parts.push(textElement(p.x, rowTop + 10, p.text, { 'text-anchor': 'middle', 'font-size': SMALL }));
+    // The other brackets of the same checks carry the key number where it fits clear of the label.
+    const key = p.item.keys.join(',');
+    const keyWidth = textWidth(key, SMALL);
+    for (const [min, max] of p.item.ranges.slice(1)) {
+      const [a, b] = [scale.at(min), scale.at(max)];
+      const centre = (a + b) / 2;
+      const clear = centre + keyWidth / 2 + 4 < p.x - p.width / 2 || centre - keyWidth / 2 - 4 > p.x + p.width / 2;
+      if (b - a >= keyWidth + 4 && clear) parts.push(textElement(centre, rowTop + 10, key, { 'text-anchor': 'middle', 'font-size': SMALL }));
+    }
+  }
+  for (const p of l.candidates) {
+    const baseline = bodyTop - 3 - (candidateRows - 1 - p.row) * CANDIDATE_ROW;
+    const x = scale.at(p.item.rate);
+    if (Math.abs(p.x - x) > 1 || p.row < candidateRows - 1) parts.push(element('line', { x1: x, y1: baseline + 1, x2: x, y2: mid - 4, stroke: '#000', 'stroke-width': 0.6 }));
+    const best = p.item.label === report.best;
+    parts.push(textElement(p.x, baseline - 1, p.text, { 'text-anchor': 'middle', 'font-size': SMALL, 'font-weight': best ? 'bold' : undefined }));
+  }
+  for (const c of l.markers) parts.push(candidateMarker(c.pass, scale.at(c.rate), mid));
+  return element('g', { class: 'lane' }, parts.join(''));
+}
+
+function keyLines(keys: ReadonlyMap<string, number>): string[] {
+  if (keys.size === 0) return ['Blocking checks: none blocks a rate inside the windows.'];
+  const phrases = [...keys].map(([label, key]) => `${key} = ${label}`);
+  return ['Blocking checks, by key number (a key stands in where a label has no room):', ...wrapPhrases(phrases, WIDTH - LEFT - RIGHT + 80, LEGEND_FONT, ';   ').map((line) => `    ${line}`)];
+}
+
+function viewNotes(view: ReturnType<typeof rateMapView>, report: PlanReport, drawnCandidates: number): string[] {
+  const notes: string[] = [];
+  if (view.hidden > 0) {
+    const zones = view.windows.map((w) => w.zone);
+    notes.push(`Zones ${Math.min(...zones)}–${Math.max(...zones)} drawn; ${view.hidden} more window${view.hidden > 1 ? 's' : ''} inside the search range ${view.hidden > 1 ? 'are' : 'is'} not (see the table or JSON).`);
+  }
+  const missing = report.candidates.length - drawnCandidates;
+  if (missing > 0) notes.push(`${missing} candidate${missing > 1 ? 's' : ''} outside the drawn rates not marked.`);
+  notes.push(view.log ? 'Rate axis logarithmic: the drawn span is wide, so equal widths mean equal relative (ppm) widths.' : 'Rate axis linear.');
+  return notes;
+}

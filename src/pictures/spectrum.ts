@@ -1,0 +1,219 @@
+import type { PlanReport, ReportedCandidate, ReportedCheck } from '../report/plan-report.js';
+import { foldExtent } from '../math/fold-extent.js';
+import { formatFrequency, trimmed } from '../units/format-frequency.js';
+import { InputError } from '../units/input-error.js';
+import { horizontalAxis, verticalAxis } from './axis.js';
+import { checkTable } from './check-table.js';
+import { frequencyUnit, inUnit } from './frequency-unit.js';
+import { packLabels, textWidth } from './label-packing.js';
+import { boxSwatch, legendRows } from './legend.js';
+import { coveringTicks, linearTicks } from './nice-ticks.js';
+import { FILL } from './patterns.js';
+import { linearScale } from './scale.js';
+import { element, textElement } from './svg-element.js';
+import { withMinus } from './typography.js';
+import { svgDocument, type Figure } from './svg-document.js';
+
+const WIDTH = 960;
+const LEFT = 84;
+const RIGHT = 28;
+const LABEL_ROWS = 5;
+const LABEL_ROW = 12;
+const PLOT_HEIGHT = 260;
+const SMALL = 9.5;
+
+/**
+ * The spectrum after sampling at one candidate's nominal rate, over
+ * [0, rate/2]: the wanted band's image (with its guards, mirrored when the
+ * zone is inverted), each interferer's aliased segments as bars as tall as
+ * its level in dBFS (blocking and passing: grey; blocking and failing:
+ * cross-hatched; not blocking: dashed outline, no fill), the blocking
+ * threshold, and the DC, rate/4 and rate/2 marks. Bars carry their label,
+ * level and margin above the plot where there is room, else their key
+ * number; the table below lists every check by key.
+ *
+ * @param report the solved plan
+ * @param candidateLabel a label from report.candidates
+ * @returns the figure, 960 px wide
+ * @throws InputError when no candidate has that label
+ */
+export function spectrumFigure(report: PlanReport, candidateLabel: string): Figure {
+  const candidate = findCandidate(report, candidateLabel);
+  const half = candidate.rate / 2;
+  const checks = candidate.checks;
+  const threshold = checks.length > 0 ? checks[0]!.level + checks[0]!.levelMargin : null;
+  const levels = [...checks.map((c) => c.level).filter(Number.isFinite), ...(threshold === null ? [] : [threshold])];
+  // The level axis runs from 0 dBFS (or the strongest level) down past the weakest, at least to −100 dBFS.
+  const levelTicks = coveringTicks(Math.min(-100, ...levels) - 5, Math.max(0, ...levels), 8);
+  const bottom = levelTicks.values[0]!;
+  const top = levelTicks.values[levelTicks.values.length - 1]!;
+  const plotX: readonly [number, number] = [LEFT, WIDTH - RIGHT];
+  const x = linearScale([0, half], plotX);
+
+  // Labels above the plot: failing first, then blocking by slack, then the strongest of the rest.
+  const order = checks.map((c, i) => ({ c, key: i + 1 })).sort((a, b) => priority(a.c) - priority(b.c) || slack(a.c) - slack(b.c) || b.c.level - a.c.level);
+  const placed = packLabels(
+    order.flatMap(({ c, key }) => {
+      const widest = [...c.alias].sort((p, q) => q[1] - q[0] - (p[1] - p[0]))[0];
+      if (!widest) return [];
+      return [{ x: x.at((widest[0] + widest[1]) / 2), text: withMinus(`${key} ${c.label}, ${trimmed(c.level, 3)} dBFS, ${formatFrequency(c.margin, 3)}`), short: String(key), item: { c, key, at: (widest[0] + widest[1]) / 2 } }];
+    }),
+    LABEL_ROWS,
+    plotX,
+    SMALL,
+  );
+  const rows = placed.reduce((n, p) => Math.max(n, p.row + 1), 0);
+  const plotTop = 64 + rows * LABEL_ROW + 6;
+  const plotBottom = plotTop + PLOT_HEIGHT;
+  const y = linearScale([bottom, top], [plotBottom, plotTop]);
+
+  const parts: string[] = [heading(report, candidate)];
+  const wanted = wantedImage(report, candidate, x, plotTop, plotBottom);
+  parts.push(wanted.fill);
+  // Strongest first, so a weaker bar over a stronger one stays in sight.
+  const drawOrder = checks.map((c, i) => ({ c, key: i + 1 })).sort((a, b) => b.c.level - a.c.level);
+  for (const { c } of drawOrder) parts.push(bars(c, x, y, bottom));
+  parts.push(wanted.outline);
+  if (threshold !== null) {
+    const text = withMinus(`blocking threshold ${trimmed(threshold, 4)} dBFS`);
+    const w = textWidth(text, SMALL) + 6;
+    parts.push(element('line', { x1: LEFT, y1: y.at(threshold), x2: WIDTH - RIGHT, y2: y.at(threshold), stroke: '#000', 'stroke-width': 1, 'stroke-dasharray': '8 3 2 3' }));
+    parts.push(element('rect', { x: WIDTH - RIGHT - 2 - w, y: y.at(threshold) + 2, width: w, height: 12, fill: '#fff', opacity: 0.9 }));
+    parts.push(textElement(WIDTH - RIGHT - 2 - w / 2, y.at(threshold) + 11, text, { 'text-anchor': 'middle', 'font-size': SMALL }));
+  }
+  parts.push(marks(candidate, x, plotTop, plotBottom));
+  for (const p of placed) {
+    const baseline = 64 + (p.row + 1) * LABEL_ROW - 2;
+    const barTop = y.at(Math.max(Math.min(p.item.c.level, top), bottom));
+    const at = x.at(p.item.at);
+    parts.push(element('line', { x1: at, y1: baseline + 2, x2: at, y2: barTop, stroke: '#555', 'stroke-width': 0.5, 'stroke-dasharray': '1 2' }));
+    parts.push(textElement(p.x, baseline, p.text, { 'text-anchor': 'middle', 'font-size': SMALL, 'font-weight': p.item.c.pass ? undefined : 'bold' }));
+  }
+  parts.push(verticalAxis(y, levelTicks.values.map((v) => ({ value: v, label: trimmed(v, 6) })), LEFT, 'level (dBFS)', WIDTH - RIGHT));
+  const unit = frequencyUnit(half);
+  const freqTicks = linearTicks(0, half, 8).values.map((v) => ({ value: v, label: inUnit(v, unit) }));
+  parts.push(horizontalAxis(x, freqTicks, plotBottom, `frequency after sampling (${unit.unit})`));
+  let cursor = plotBottom + 56;
+  const legend = legendRows(
+    [
+      { swatch: boxSwatch(FILL.wanted), text: 'wanted image' },
+      { swatch: boxSwatch(FILL.guard), text: 'guard' },
+      { swatch: boxSwatch(FILL.passing), text: 'blocking check, passes' },
+      { swatch: boxSwatch(FILL.failing), text: 'blocking check, FAILS' },
+      { swatch: boxSwatch('none', true), text: 'below the threshold (does not block)' },
+    ],
+    24,
+    cursor,
+    WIDTH - RIGHT,
+  );
+  parts.push(legend.markup);
+  cursor += legend.height + 10;
+  const table = checkTable(checks, 24, cursor);
+  parts.push(table.markup);
+  cursor += table.height;
+  return { width: WIDTH, height: Math.ceil(cursor + 12), title: `Spectrum after sampling at ${candidate.label}: ${report.scenario}`, body: parts.join('') };
+}
+
+/**
+ * The spectrum after sampling as a standalone SVG document (see spectrumFigure).
+ *
+ * @param report the solved plan
+ * @param candidateLabel a label from report.candidates
+ * @returns SVG text, 960 px wide
+ * @throws InputError when no candidate has that label
+ * @example spectrumSvg(report, report.best ?? report.candidates[0].label)
+ */
+export function spectrumSvg(report: PlanReport, candidateLabel: string): string {
+  return svgDocument(spectrumFigure(report, candidateLabel));
+}
+
+/**
+ * The candidate with the given label.
+ *
+ * @throws InputError naming the labels there are
+ */
+export function findCandidate(report: PlanReport, label: string): ReportedCandidate {
+  const found = report.candidates.find((c) => c.label === label);
+  if (found) return found;
+  const known = report.candidates.map((c) => c.label);
+  throw new InputError('candidate', known.length > 0 ? `one of ${known.join(', ')}` : 'a plan with candidates', label);
+}
+
+function priority(c: ReportedCheck): number {
+  return !c.pass ? 0 : c.blocking ? 1 : 2;
+}
+
+function slack(c: ReportedCheck): number {
+  return c.blocking ? c.margin - c.requiredMargin : 0;
+}
+
+function heading(report: PlanReport, c: ReportedCandidate): string {
+  const zone = c.zone === null ? 'band straddles a zone edge' : `zone ${c.zone}${c.inverted ? ' (inverted)' : ''}, centre ${formatFrequency(c.center ?? 0, 7)}`;
+  const verdict = c.pass ? `passes; worst margin ${formatFrequency(c.worstMargin, 6)} (${c.limitedBy})` : `FAILS; limited by ${c.limitedBy}, margin ${formatFrequency(c.worstMargin, 6)}`;
+  return (
+    textElement(24, 22, `Spectrum after sampling at ${c.label}: ${report.scenario}`, { 'font-size': 14, 'font-weight': 'bold' }) +
+    textElement(24, 40, withMinus(`rate ${formatFrequency(c.rate)} ±${trimmed(c.tolerancePpm, 4)} ppm; ${zone}; ${verdict}`), { 'font-size': 11 }) +
+    textElement(24, 56, 'Labels: key, check, level, margin to the wanted image.', { 'font-size': SMALL, 'font-style': 'italic' })
+  );
+}
+
+/** The wanted image and guards: fills (under the bars) and outlines with the label (over them). */
+function wantedImage(report: PlanReport, c: ReportedCandidate, x: ReturnType<typeof linearScale>, top: number, bottom: number): { fill: string; outline: string } {
+  const half = c.rate / 2;
+  const fills: string[] = [];
+  const outlines: string[] = [];
+  const box = (a: number, b: number, fill: string) => {
+    const shape = { x: x.at(a), y: top, width: Math.max(x.at(b) - x.at(a), 1.5), height: bottom - top };
+    fills.push(element('rect', { ...shape, fill }));
+    outlines.push(element('rect', { ...shape, fill: 'none', stroke: '#1f4e79', 'stroke-width': 1.2 }));
+  };
+  const label = (at: number, text: string) => {
+    const w = textWidth(text, SMALL) + 8;
+    const centre = Math.min(Math.max(at, x.range[0] + w / 2), x.range[1] - w / 2);
+    outlines.push(element('rect', { x: centre - w / 2, y: bottom - 20, width: w, height: 14, fill: '#fff', stroke: '#1f4e79', 'stroke-width': 0.8 }));
+    outlines.push(textElement(centre, bottom - 9, text, { 'text-anchor': 'middle', 'font-size': SMALL, 'font-weight': 'bold' }));
+  };
+  if (c.image) {
+    const below = c.inverted ? report.guard.high : report.guard.low;
+    const above = c.inverted ? report.guard.low : report.guard.high;
+    if (below > 0) box(Math.max(0, c.image.low - below), c.image.low, FILL.guard);
+    if (above > 0) box(c.image.high, Math.min(half, c.image.high + above), FILL.guard);
+    box(c.image.low, c.image.high, FILL.wanted);
+    label(x.at((c.image.low + c.image.high) / 2), c.inverted ? 'wanted (inverted)' : 'wanted');
+  } else {
+    for (const s of foldExtent(report.band.low, report.band.high, c.rate)) box(s.low, s.high, FILL.wanted);
+    label((x.range[0] + x.range[1]) / 2, 'wanted band folds onto itself (straddles a zone edge)');
+  }
+  return { fill: element('g', { class: 'wanted' }, fills.join('')), outline: element('g', { class: 'wanted-outline' }, outlines.join('')) };
+}
+
+function bars(c: ReportedCheck, x: ReturnType<typeof linearScale>, y: ReturnType<typeof linearScale>, bottom: number): string {
+  const [low, high] = [y.domain[0], y.domain[1]];
+  const level = Math.min(Math.max(c.level, low), high);
+  const style = !c.blocking
+    ? { fill: 'none', stroke: '#666', 'stroke-width': 1, 'stroke-dasharray': '3 2' }
+    : { fill: c.pass ? FILL.passing : FILL.failing, stroke: '#000', 'stroke-width': c.pass ? 1 : 1.6 };
+  return c.alias
+    .map(([a, b]) => {
+      const x0 = x.at(a);
+      const w = Math.max(x.at(b) - x0, 2);
+      return element('rect', { x: x0 - (w > 2 ? 0 : 1), y: y.at(level), width: w, height: Math.max(y.at(bottom) - y.at(level), 1), ...style });
+    })
+    .join('');
+}
+
+function marks(c: ReportedCandidate, x: ReturnType<typeof linearScale>, top: number, bottom: number): string {
+  const half = c.rate / 2;
+  const quarter = c.rate / 4;
+  const mark = (f: number, text: string, anchor: 'start' | 'middle' | 'end') => {
+    const at = x.at(f);
+    const w = textWidth(text, SMALL) + 6;
+    const boxLeft = anchor === 'start' ? at + 1 : anchor === 'end' ? at - 1 - w : at - w / 2;
+    return (
+      element('line', { x1: at, y1: top, x2: at, y2: bottom, stroke: '#000', 'stroke-width': 1, 'stroke-dasharray': '6 2 1 2' }) +
+      element('rect', { x: boxLeft, y: top + 2, width: w, height: 13, fill: '#fff', opacity: 0.9 }) +
+      textElement(boxLeft + w / 2, top + 12, text, { 'text-anchor': 'middle', 'font-size': SMALL })
+    );
+  };
+  return element('g', { class: 'marks' }, mark(0, 'DC', 'start') + mark(quarter, `fs/4 = ${formatFrequency(quarter, 6)}`, 'middle') + mark(half, 'fs/2', 'end'));
+}
