@@ -52,7 +52,7 @@ function candidatesSection(report: PlanReport): string {
     c.zone === null ? 'straddles' : String(c.zone),
     c.inverted === null ? '–' : yesNo(c.inverted),
     c.center === null ? '–' : formatFrequency(c.center),
-    formatFrequency(c.worstMargin),
+    formatFrequency(c.worstMargin, 7),
     c.limitedBy,
     c.pass ? 'pass' : 'FAIL',
   ]);
@@ -67,7 +67,7 @@ function checksSection(candidate: ReportedCandidate): string {
   const rows = shown.map((c) => checkRow(c));
   const more = ordered.length - shown.length;
   const inversion = candidate.conjugate ? '; spectrum inverted: conjugate the complex output (or tune the NCO to the negative frequency)' : '';
-  const title = `Checks at ${candidate.label} (${formatFrequency(candidate.rate)}): zone edge margin ${formatFrequency(candidate.zoneEdgeMargin)}` +
+  const title = `Checks at ${candidate.label} (${formatFrequency(candidate.rate)}): zone edge margin ${formatFrequency(candidate.zoneEdgeMargin, 7)}` +
     (candidate.nco === null ? '' : `; NCO ${formatFrequency(candidate.nco)}${inversion}`) + ':';
   return title + '\n' + plainTable(['check', 'kind', 'input at this rate', 'aliased to', 'margin', 'level dBFS', 'level margin dB', 'blocks', 'verdict'], rows) + (more > 0 ? `\n(+${more} more in --json)` : '');
 }
@@ -78,7 +78,7 @@ function checkRow(check: ReportedCheck): string[] {
     check.kind,
     range(check.input[0], check.input[1]),
     check.alias.map(([a, b]) => range(a, b)).join(', '),
-    formatFrequency(check.margin),
+    formatFrequency(check.margin, 7),
     trimmed(check.level, 4),
     trimmed(check.levelMargin, 4),
     yesNo(check.blocking),

@@ -59,26 +59,43 @@ export interface LpAnswer {
 
 /**
  * Maximises t subject to t ≤ slopeᵢ·r + offsetᵢ for r in the range, with
- * javascript-lp-solver. The model is scaled (r = low + x·width, t in units
- * of `unit`) because that solver rounds its answers to 1e-8 and loses
- * precision on raw hertz coefficients.
+ * javascript-lp-solver, lexicographically: first the worst slack t*; then,
+ * holding every slack at t* or above, the worst of the slacks that vary with
+ * the rate. Without the second stage a slack that is constant across the
+ * interval (a neighbour folding in step with the band) makes every rate a
+ * tie, and the solver returns an arbitrary end of the interval. The model is
+ * scaled (r = low + x·width, t in units of `unit`) because that solver rounds
+ * its answers to 1e-8 and loses precision on raw hertz coefficients.
  *
  * @param slacks linear bounds on t, Hz
  * @param range the rate range, Hz, low < high
  * @param unit scale for t, Hz (e.g. the wanted bandwidth)
- * @returns the optimum, or null when the LP is infeasible
+ * @returns the chosen rate and the worst slack t* it keeps, or null when the
+ *   LP is infeasible
  */
 export function maximiseWorstSlack(slacks: readonly LinearSlack[], range: Interval, unit: number): LpAnswer | null {
+  const first = solveStage(slacks, [], range, unit);
+  if (!first) return null;
+  const varying = slacks.filter((s) => Math.abs(s.slope * (range.high - range.low)) > 1e-9 * unit);
+  const floor = first.worstSlack - 1e-6 * unit; // the solver rounds t* to 1e-8 units
+  // Constant slacks are at t* or above by the first stage; only the varying ones need holding.
+  const second = varying.length > 0 ? solveStage(varying, varying.map((s) => ({ ...s, offset: s.offset - floor })), range, unit) : null;
+  return { rate: second ? second.rate : first.rate, worstSlack: first.worstSlack };
+}
+
+/** max t: t ≤ bound(r) for each bound, 0 ≤ held(r) for each held, r in range. */
+function solveStage(bounds: readonly LinearSlack[], held: readonly LinearSlack[], range: Interval, unit: number): LpAnswer | null {
   const width = range.high - range.low;
   const constraints: Record<string, { max: number }> = { span: { max: 1 } };
   const t: Record<string, number> = {};
   const x: Record<string, number> = { span: 1 };
-  slacks.forEach((s, i) => {
-    const name = `s${i}`;
+  const add = (name: string, s: LinearSlack, withT: boolean) => {
     constraints[name] = { max: (s.slope * range.low + s.offset) / unit };
-    t[name] = 1;
+    if (withT) t[name] = 1;
     x[name] = (-s.slope * width) / unit;
-  });
+  };
+  bounds.forEach((s, i) => add(`b${i}`, s, true));
+  held.forEach((s, i) => add(`h${i}`, s, false));
   const solution = lpSolver.Solve({ optimize: 't', opType: 'max', constraints, variables: { t, x }, unrestricted: { t: 1 } }) as Record<string, unknown>;
   if (solution['feasible'] !== true) return null;
   const fraction = Math.min(Math.max(Number(solution['x'] ?? 0), 0), 1);

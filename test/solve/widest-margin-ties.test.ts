@@ -1,0 +1,32 @@
+import { describe, expect, it } from 'vitest';
+import { maximiseWorstSlack } from '../../src/solve/widest-margin-lp.js';
+
+// Worked by hand: on [171, 194.5] (MHz units) with slacks 4 (constant), r − 171
+// and 389 − 2r, the worst slack cannot exceed 4, and every r in [175, 192.5]
+// reaches it. Among those ties the balanced rate keeps the varying slacks
+// equal: r − 171 = 389 − 2r, so r = 560/3 ≈ 186.667 with both at 47/3.
+describe('widest-margin LP with a constant slack (lexicographic second stage)', () => {
+  const MHz = 1e6;
+  const slacks = [
+    { slope: 0, offset: 4 * MHz },
+    { slope: 1, offset: -171 * MHz },
+    { slope: -2, offset: 389 * MHz },
+  ];
+  const range = { low: 171 * MHz, high: 194.5 * MHz };
+
+  it('keeps the first-stage worst slack as its promise', () => {
+    const answer = maximiseWorstSlack(slacks, range, 20 * MHz);
+    expect(answer?.worstSlack).toBeCloseTo(4 * MHz, -2);
+  });
+
+  it('balances the slacks that vary instead of returning an arbitrary tie', () => {
+    const answer = maximiseWorstSlack(slacks, range, 20 * MHz);
+    expect(answer!.rate / MHz).toBeCloseTo(560 / 3, 4);
+  });
+
+  it('without a constant slack, the first stage alone decides (same balanced point)', () => {
+    const answer = maximiseWorstSlack(slacks.slice(1), range, 20 * MHz);
+    expect(answer!.rate / MHz).toBeCloseTo(560 / 3, 4);
+    expect(answer!.worstSlack / MHz).toBeCloseTo(47 / 3, 4);
+  });
+});
