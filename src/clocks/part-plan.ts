@@ -1,0 +1,44 @@
+import type { Db, Hz, Ppm } from '../units/quantities.js';
+import type { ClockPart } from '../scenario/scenario.js';
+import type { RateEvaluation } from '../solve/evaluate-rate.js';
+
+/** The integer settings that turn a part's frequency into a rate: rate = f × N / (M × D). */
+export interface RateSettings {
+  readonly N: number;
+  readonly M: number;
+  readonly D: number;
+}
+
+/** How far a rate may drift each way before its first check fails, ±ppm, and which check fails there. */
+export interface DriftHeadroom {
+  readonly downPpm: Ppm;
+  readonly upPpm: Ppm;
+  /** Label of the check that fails first below (an interferer label or "zone edge"). */
+  readonly downLimitedBy: string;
+  readonly upLimitedBy: string;
+}
+
+/** The SNR figures a part allows at the band's highest frequency, dB. */
+export interface ClockSnr {
+  /** −20·log10(2π·f·σ), σ = √(σ_part² + σ_aperture²); null when the part states no jitter. */
+  readonly jitterSnrDb: Db | null;
+  /** 6.02·bits + 1.76. */
+  readonly quantisationSnrDb: Db;
+  /** Jitter and quantisation limits combined (noise powers add). */
+  readonly combinedSnrDb: Db;
+  /** The combined SNR plus the processing gain 10·log10(rate / (2·bandwidth)). */
+  readonly channelSnrDb: Db;
+}
+
+/** The best rate one part offers for one plan, judged exactly. */
+export interface PartPlan {
+  readonly part: ClockPart;
+  readonly rate: Hz;
+  readonly settings: RateSettings;
+  readonly evaluation: RateEvaluation;
+  /** Null when the nominal rate already fails. */
+  readonly headroom: DriftHeadroom | null;
+  readonly snr: ClockSnr;
+  /** The evaluation passes over the part's whole tolerance. */
+  readonly pass: boolean;
+}

@@ -1,0 +1,116 @@
+import { mkdtempSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { ensureBuilt, ROOT, runBin } from '../helpers/run-bin.js';
+import { rateWindows, guardedBand } from '../../src/windows/enumerate-windows.js';
+import { hz } from '../../src/units/quantities.js';
+
+/**
+ * `ifzone solve` end to end through the real bin/ifzone: the JSON contract of
+ * issue 3, the exit statuses and the "nothing passes" explanation. The demo
+ * family is invented data: these tests check plumbing and contracts, while
+ * the reference values live in the core tests.
+ */
+const BASE = join(ROOT, 'scenarios/heron-base.json');
+const dir = mkdtempSync(join(tmpdir(), 'ifzone-solve-'));
+
+function variant(name: string, overrides: Record<string, unknown>): string {
+  const path = join(dir, name);
+  writeFileSync(path, JSON.stringify({ extends: BASE, name, ...overrides }, null, 2));
+  return path;
+}
+
+beforeAll(() => ensureBuilt());
+
+describe('ifzone solve --json: the contract', () => {
+  it('carries every field the contract names, frequencies in Hz', () => {
+    const run = runBin('solve', BASE, '--json');
+    expect(run.status).toBe(0);
+    expect(run.stderr).toBe('');
+    const plan = JSON.parse(run.stdout);
+    expect(plan.scenario).toBe('Heron-4 base');
+    expect(plan.band).toEqual({ low: 130e6, high: 150e6 });
+    expect(plan.guard).toEqual({ low: 2e6, high: 2e6 });
+    expect(plan.search).toEqual({ minRate: 40e6, maxRate: 250e6 });
+    for (const i of plan.interferers) {
+      expect(Object.keys(i)).toEqual(expect.arrayContaining(['label', 'kind', 'order', 'rateMultiple', 'low', 'high', 'requiredMargin', 'blocking', 'level']));
+      expect(['harmonic', 'spur', 'neighbour', 'intermod', 'converter']).toContain(i.kind);
+    }
+    const labels = plan.interferers.map((i: { label: string }) => i.label);
+    expect(new Set(labels).size).toBe(labels.length);
+    for (const f of plan.feasible) expect(Object.keys(f)).toEqual(expect.arrayContaining(['zone', 'inverted', 'minRate', 'maxRate']));
+    expect(plan.candidates.length).toBeGreaterThan(0);
+    for (const c of plan.candidates) {
+      expect(Object.keys(c)).toEqual(expect.arrayContaining(['label', 'rate', 'tolerancePpm', 'zone', 'inverted', 'center', 'nco', 'worstMargin', 'pass', 'checks']));
+      expect(c.checks.map((k: { label: string }) => k.label)).toEqual(labels);
+      for (const k of c.checks) expect(Object.keys(k)).toEqual(expect.arrayContaining(['label', 'kind', 'alias', 'margin', 'level', 'levelMargin', 'pass']));
+    }
+    expect(plan.caution).toMatch(/paper design/);
+  });
+
+  it('lists the windows of the guarded band that the enumerator gives (Vaughan, Scott & White 1991 condition)', () => {
+    const plan = JSON.parse(runBin('solve', BASE, '--json').stdout);
+    const expected = rateWindows(guardedBand({ low: hz(130e6), high: hz(150e6) }, hz(2e6), hz(2e6)), { minRate: hz(40e6), maxRate: hz(250e6) });
+    expect(plan.windows).toEqual(expected);
+  });
+
+  it('keeps every feasible interval inside a window and every passing candidate inside a feasible interval', () => {
+    const plan = JSON.parse(runBin('solve', BASE, '--json').stdout);
+    for (const f of plan.feasible) {
+      expect(plan.windows.some((w: { minRate: number; maxRate: number }) => f.minRate >= w.minRate && f.maxRate <= w.maxRate)).toBe(true);
+    }
+    for (const c of plan.candidates.filter((x: { pass: boolean }) => x.pass)) {
+      const drift = c.rate * c.tolerancePpm * 1e-6;
+      expect(plan.feasible.some((f: { minRate: number; maxRate: number }) => c.rate - drift >= f.minRate && c.rate + drift <= f.maxRate)).toBe(true);
+    }
+  });
+});
+
+describe('ifzone solve: exit statuses', () => {
+  it('exits 0 with tables when a candidate passes', () => {
+    const run = runBin('solve', BASE);
+    expect(run.status).toBe(0);
+    expect(run.stdout).toMatch(/^Best: /m);
+    expect(run.stdout).toMatch(/paper design/);
+  });
+
+  it('exits 1 and names the blocking check and the shortfall when nothing passes', () => {
+    const impossible = variant('impossible.json', { requirements: { margin: '60M' } });
+    const run = runBin('solve', impossible);
+    expect(run.status).toBe(1);
+    expect(run.stderr).toBe('');
+    expect(run.stdout).toMatch(/No candidate passes\. Nearest: .+ at .+: .+ lands .+ from the band where 60 MHz is required \(short by .+\)\./);
+    const plan = JSON.parse(runBin('solve', impossible, '--json').stdout);
+    expect(plan.best).toBeNull();
+    expect(plan.candidates.every((c: { pass: boolean }) => !c.pass)).toBe(true);
+  });
+
+  it('exits 2 with one line for a bad goal or a missing output rate', () => {
+    for (const args of [
+      ['solve', BASE, '--goal', 'fastest'],
+      ['solve', BASE, '--goal', 'decimation'],
+      ['solve', BASE, '--output-rate', '30.72M'],
+    ]) {
+      const run = runBin(...args);
+      expect(run.status).toBe(2);
+      expect(run.stdout).toBe('');
+      expect(run.stderr).toMatch(/^ifzone: --(goal|output-rate)[^\n]*\n$/);
+    }
+  });
+
+  it('puts every decimation candidate on an integer multiple of the output rate', () => {
+    const plan = JSON.parse(runBin('solve', BASE, '--goal', 'decimation', '--output-rate', '7.68M', '--json').stdout);
+    const chosen = plan.candidates.filter((c: { origin: string }) => c.origin === 'interval');
+    expect(chosen.length).toBeGreaterThan(0);
+    for (const c of chosen) expect(Number.isInteger(Math.round((c.rate / 7.68e6) * 1e9) / 1e9)).toBe(true);
+  });
+
+  it('puts the quarter-rate candidates with their aliased centre at rate/4 where the interval allows (common practice: odd multiple of fs/4)', () => {
+    const plan = JSON.parse(runBin('solve', BASE, '--goal', 'quarter-rate', '--json').stdout);
+    const chosen = plan.candidates.filter((c: { origin: string; pass: boolean }) => c.origin === 'interval' && c.pass);
+    expect(chosen.length).toBeGreaterThan(0);
+    // 4·fc/(2n − 1) with fc = 140 MHz: zone 2 → 186.667 MHz, inside the 171–194.5 MHz interval
+    expect(chosen.some((c: { rate: number; center: number }) => Math.abs(c.rate - 560e6 / 3) < 1 && Math.abs(c.center - c.rate / 4) < 1)).toBe(true);
+  });
+});
