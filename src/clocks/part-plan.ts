@@ -41,4 +41,15 @@ export interface PartPlan {
   readonly snr: ClockSnr;
   /** The evaluation passes over the part's whole tolerance. */
   readonly pass: boolean;
+  /** How the rate was chosen among the part's rates (how far the answer is proven best). */
+  readonly search: PartSearch;
 }
+
+/**
+ * - "every rate": every rate of the part inside the converter's range was judged; the answer is the best of them all.
+ * - "intervals": a passing rate, the best of every feasible interval's integer optimum (enumerated or MILP), within the
+ *   MILP allowance of the best passing rate.
+ * - "near anchors": nothing passes and the part has too many rates to screen them all; the failing rate reported is the
+ *   best of those next to the feasible-interval, blocked-range and zone-centre rates, not proven the nearest.
+ */
+export type PartSearch = 'every rate' | 'intervals' | 'near anchors';

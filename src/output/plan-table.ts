@@ -54,11 +54,22 @@ function candidatesSection(report: PlanReport): string {
     c.center === null ? '–' : formatFrequency(c.center),
     formatFrequency(c.worstMargin, 7),
     c.limitedBy,
+    settingsText(c.settings),
+    c.headroomPpm === null ? '–' : `−${trimmed(c.headroomPpm.down, 3)} / +${trimmed(c.headroomPpm.up, 3)}`,
     c.pass ? 'pass' : 'FAIL',
   ]);
   const more = report.candidates.length - shown.length;
-  const table = plainTable(['#', 'candidate', 'rate', 'ppm', 'zone', 'inverted', 'centre / NCO', 'worst margin', 'limited by', 'verdict'], rows);
-  return 'Candidates, best first (margins hold over each rate\'s whole ±ppm):\n' + table + (more > 0 ? `\n(+${more} more in --json)` : '');
+  const table = plainTable(['#', 'candidate', 'rate', 'ppm', 'zone', 'inverted', 'centre / NCO', 'worst margin', 'limited by', 'from part', 'headroom ppm', 'verdict'], rows);
+  const unplanned = report.unplannedParts.length > 0 ? `\nNot planned (no rate inside the converter's range): ${report.unplannedParts.join(', ')}.` : '';
+  return 'Candidates, best first (margins hold over each rate\'s whole ±ppm):\n' + table + (more > 0 ? `\n(+${more} more in --json)` : '') + unplanned;
+}
+
+/** A part's settings for people: "direct", "÷2" through a divider, "×93/1 ÷5" through a synthesiser (rate = f·N/M ÷ D). */
+function settingsText(settings: ReportedCandidate['settings']): string {
+  if (settings === null) return '–';
+  const { N, M, D } = settings;
+  if (N === 1 && M === 1) return D === 1 ? 'direct' : `÷${D}`;
+  return `×${N}/${M}` + (D === 1 ? '' : ` ÷${D}`);
 }
 
 function checksSection(candidate: ReportedCandidate): string {

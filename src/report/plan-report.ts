@@ -65,6 +65,16 @@ export interface ReportedCandidate {
   readonly limitedBy: string;
   readonly worstSlack: Hz;
   readonly pass: boolean;
+  /** The part's settings, rate = f·N/(M·D); null for a rate not from a part. */
+  readonly settings: { readonly N: number; readonly M: number; readonly D: number } | null;
+  /** How far the nominal rate may move down and up before a check fails, ppm; null when it already fails. */
+  readonly headroomPpm: { readonly down: Ppm; readonly up: Ppm } | null;
+  /** The check met first each way ("zone edge", "rate limit" or an interferer label); null with headroomPpm. */
+  readonly headroomLimitedBy: { readonly down: string; readonly up: string } | null;
+  /** Jitter-limited SNR at the band's highest frequency, dB; null when not from a part or the part states no jitter. */
+  readonly jitterSnrDb: Db | null;
+  /** Combined jitter and quantisation SNR plus the processing gain to the channel, dB; null when not from a part. */
+  readonly channelSnrDb: Db | null;
   readonly checks: readonly ReportedCheck[];
 }
 
@@ -82,6 +92,8 @@ export interface PlanReport {
   readonly candidates: readonly ReportedCandidate[];
   /** Label of the best passing candidate, or null when none passes. */
   readonly best: string | null;
+  /** Clock parts left out: none of their rates lies inside the converter's rate range. */
+  readonly unplannedParts: readonly string[];
   readonly caution: string;
 }
 
@@ -120,6 +132,7 @@ export function planReport(name: string, context: PlanContext, result: PlanResul
     blocked: result.blocked,
     candidates: result.candidates.map((c) => reportedCandidate(context, c)),
     best: passing ? passing.label : null,
+    unplannedParts: result.unplannedParts,
     caution: PAPER_DESIGN_CAUTION,
   };
 }
@@ -142,6 +155,11 @@ function reportedCandidate(context: PlanContext, candidate: Candidate): Reported
     limitedBy: e.limitedBy,
     worstSlack: e.worstSlack,
     pass: e.pass,
+    settings: candidate.settings ? { N: candidate.settings.N, M: candidate.settings.M, D: candidate.settings.D } : null,
+    headroomPpm: candidate.headroom ? { down: candidate.headroom.downPpm, up: candidate.headroom.upPpm } : null,
+    headroomLimitedBy: candidate.headroom ? { down: candidate.headroom.downLimitedBy, up: candidate.headroom.upLimitedBy } : null,
+    jitterSnrDb: candidate.snr ? candidate.snr.jitterSnrDb : null,
+    channelSnrDb: candidate.snr ? candidate.snr.channelSnrDb : null,
     checks: e.checks.map((check, index) => {
       const interferer = context.interferers[index]!;
       const offset = interferer.rateMultiple * e.rate;

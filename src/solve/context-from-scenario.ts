@@ -5,7 +5,8 @@ import type { PlanContext } from './plan-context.js';
 
 /**
  * The solver's view of a scenario: the wanted band, guards, the converter's
- * rate range, every derived interferer, the clocks and the goal.
+ * rate range, every derived interferer, the clock parts with the converter's
+ * clocking (dividers, bits, aperture jitter) and the goal.
  *
  * @param scenario the validated scenario
  */
@@ -17,6 +18,11 @@ export function contextFromScenario(scenario: Scenario): PlanContext {
     interferers: deriveInterferers(scenario),
     levelThreshold: levelThreshold(scenario),
     clocks: scenario.clocks,
+    clocking: {
+      clockDividers: scenario.converter.clockDividers,
+      bits: scenario.converter.bits,
+      apertureJitter: scenario.converter.apertureJitter,
+    },
     goal: scenario.goal,
     tolerancePpm: scenario.requirements.tolerancePpm,
   };

@@ -1,6 +1,6 @@
 import type { Db, Hz, Ppm } from '../units/quantities.js';
 import type { Band, Guard } from '../math/band.js';
-import type { Goal, ClockCandidate } from '../scenario/scenario.js';
+import type { ClockPart, Converter, Goal } from '../scenario/scenario.js';
 import type { RateLimits } from '../windows/rate-window.js';
 import type { Interferer } from './interferer.js';
 
@@ -13,11 +13,17 @@ export interface PlanContext {
   readonly interferers: readonly Interferer[];
   /** Weakest wanted level minus the required rejection, dBFS. */
   readonly levelThreshold: Db;
-  readonly clocks: readonly ClockCandidate[];
+  /** The clock parts to plan; each is put forward at its best rate (src/clocks/plan-part.ts). */
+  readonly clocks: readonly ClockPart[];
+  /** What the part planner needs of the converter: its clock dividers, resolution and aperture jitter. */
+  readonly clocking: ConverterClocking;
   readonly goal: Goal;
   /** Drift a solver-chosen rate must survive, ±ppm. */
   readonly tolerancePpm: Ppm;
 }
+
+/** The converter's side of clock planning. */
+export type ConverterClocking = Pick<Converter, 'clockDividers' | 'bits' | 'apertureJitter'>;
 
 /** The rates a clock at `rate` may take over its ±tolerance, Hz. */
 export function driftRange(rate: Hz, tolerancePpm: Ppm): { low: number; high: number } {

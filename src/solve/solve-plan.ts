@@ -5,6 +5,9 @@ import { bestRateIn, goalScore } from './best-rate.js';
 import { evaluateRate, type RateEvaluation } from './evaluate-rate.js';
 import { feasibleSet, type BlockedRange, type FeasibleInterval } from './feasible-set.js';
 import type { PlanContext } from './plan-context.js';
+import { planPart } from '../clocks/plan-part.js';
+import { driftHeadroom } from '../clocks/drift-headroom.js';
+import type { ClockSnr, DriftHeadroom, PartPlan, RateSettings } from '../clocks/part-plan.js';
 
 /** A rate put forward: a listed clock, or the best rate of a feasible interval. */
 export interface Candidate {
@@ -18,6 +21,12 @@ export interface Candidate {
   readonly evaluation: RateEvaluation;
   /** Higher is better for the goal. */
   readonly score: number;
+  /** The part's settings, rate = f·N/(M·D); null for a rate not from a part. */
+  readonly settings: RateSettings | null;
+  /** Drift the nominal rate survives each way; null when the nominal rate itself fails. */
+  readonly headroom: DriftHeadroom | null;
+  /** The SNR the part allows; null for a rate not from a part. */
+  readonly snr: ClockSnr | null;
 }
 
 /** The solved plan: windows, exact feasible set and ranked candidates. */
@@ -27,39 +36,53 @@ export interface PlanResult {
   readonly blocked: readonly BlockedRange[];
   /** Best first: passing before failing, then by goal, then by worst slack. */
   readonly candidates: readonly Candidate[];
+  /** Each clock part's plan, in the scenario's order (the part's candidate above). */
+  readonly parts: readonly PartPlan[];
+  /** Labels of the parts with no rate inside the converter's rate range (no candidate). */
+  readonly unplannedParts: readonly string[];
 }
 
 /**
  * Solves a plan: the legal windows inside the converter's rate range, minus
- * every blocking interferer's forbidden rates, then the listed clocks and the
- * best rate of each feasible interval, judged exactly and ranked.
+ * every blocking interferer's forbidden rates, then each clock part at its
+ * best rate (planPart: direct, divided or synthesised) and the best rate of
+ * each feasible interval, judged exactly and ranked.
  *
  * @param context the plan, with a finite rate range
+ * @throws Error when a part's integer optimum fails its exact re-check (a bug)
  */
 export function solvePlan(context: PlanContext): PlanResult {
   const windows = rateWindows(guardedBand(context.band, context.guard.low, context.guard.high), context.limits);
-  const { feasible, blocked } = feasibleSet(windows, context.interferers, context.band);
-  const candidates: Candidate[] = context.clocks.map((clock) => ({
-    label: clock.label,
-    origin: 'clock' as const,
-    evaluation: evaluateRate(context, clock.rate, clock.tolerancePpm),
-    score: 0,
-  }));
+  const set = feasibleSet(windows, context.interferers, context.band);
+  const { feasible, blocked } = set;
+  const candidates: Candidate[] = [];
+  const parts: PartPlan[] = [];
+  const unplannedParts: string[] = [];
+  for (const part of context.clocks) {
+    const plan = planPart(context, set, part);
+    if (!plan) {
+      unplannedParts.push(part.label);
+      continue;
+    }
+    parts.push(plan);
+    candidates.push({ label: part.label, origin: 'clock', evaluation: plan.evaluation, score: 0, settings: plan.settings, headroom: plan.headroom, snr: plan.snr });
+  }
+  const unpartnered = (evaluation: RateEvaluation) => ({ evaluation, score: 0, settings: null, headroom: driftHeadroom(set, context.limits, evaluation.rate), snr: null });
   const perZone = new Map<number, number>();
   for (const interval of feasible) {
     const index = (perZone.get(interval.zone) ?? 0) + 1;
     perZone.set(interval.zone, index);
     const evaluation = bestRateIn(context, interval);
-    if (evaluation) candidates.push({ label: `Z${interval.zone}.${index}`, origin: 'interval', evaluation, score: 0 });
+    if (evaluation) candidates.push({ label: `Z${interval.zone}.${index}`, origin: 'interval', ...unpartnered(evaluation) });
   }
   if (feasible.length === 0) {
     for (const window of windows) {
       const evaluation = evaluateRate(context, hz((window.minRate + window.maxRate) / 2), context.tolerancePpm);
-      candidates.push({ label: `W${window.zone}`, origin: 'window', evaluation, score: 0 });
+      candidates.push({ label: `W${window.zone}`, origin: 'window', ...unpartnered(evaluation) });
     }
   }
   const scored = candidates.map((c) => ({ ...c, score: goalScore(context, c.evaluation) }));
   scored.sort((a, b) => Number(b.evaluation.pass) - Number(a.evaluation.pass) || b.score - a.score || b.evaluation.worstSlack - a.evaluation.worstSlack);
-  return { windows, feasible, blocked, candidates: scored };
+  return { windows, feasible, blocked, candidates: scored, parts, unplannedParts };
 }
 

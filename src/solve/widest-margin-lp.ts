@@ -4,9 +4,12 @@ import type { Interval } from '../math/interval-set.js';
 import { imageOffsets, nearbyImages, normalisedExtent } from './fold-images.js';
 import type { Interferer } from './interferer.js';
 
-// The package's typings describe its CommonJS build; Node's ESM import gets the
-// solver itself as the default export. Accept either shape.
-const lpSolver = ('Solve' in lpModule ? lpModule : (lpModule as { default: unknown }).default) as SolverAPI;
+/**
+ * javascript-lp-solver's solver. The package's typings describe its CommonJS
+ * build; Node's ESM import gets the solver itself as the default export.
+ * Accept either shape.
+ */
+export const lpSolver = ('Solve' in lpModule ? lpModule : (lpModule as { default: unknown }).default) as SolverAPI;
 
 /** t ≤ slope·r + offset: one slack that is linear in the rate inside an interval, Hz. */
 export interface LinearSlack {

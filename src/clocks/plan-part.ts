@@ -1,0 +1,247 @@
+import type { ClockPart } from '../scenario/scenario.js';
+import { evaluateRate, type RateEvaluation } from '../solve/evaluate-rate.js';
+import type { FeasibleInterval, FeasibleSet } from '../solve/feasible-set.js';
+import type { PlanContext } from '../solve/plan-context.js';
+import { driftSafeRange } from '../solve/best-rate.js';
+import { linearSlacks, maximiseWorstSlack, type LinearSlack } from '../solve/widest-margin-lp.js';
+import type { Interval } from '../math/interval-set.js';
+import { clockSnr } from './clock-snr.js';
+import { driftHeadroom } from './drift-headroom.js';
+import { bestIntegerN, ENUMERATE_UP_TO, MILP_ALLOWANCE, modelSlack } from './integer-widest-margin.js';
+import type { PartPlan, PartSearch, RateSettings } from './part-plan.js';
+import { nRangeFor, partRates, rateFamilies, rateOf, type RateFamily } from './part-rates.js';
+import { worstSlackAt } from './worst-slack.js';
+
+/** Tuning of planPart's search (the defaults suit the command line; tests force each path). */
+export interface PlanPartOptions {
+  /** A part with at most this many rates inside the converter's range has every rate judged exactly. */
+  readonly everyRateUpTo?: number;
+  /** Inside one feasible interval, N ranges of at most this many values are enumerated, longer ones solved as a MILP. */
+  readonly enumerateUpTo?: number;
+  /** When nothing passes, every rate is screened when there are at most this many; otherwise only rates near anchors. */
+  readonly screenUpTo?: number;
+}
+
+const EVERY_RATE_UP_TO = 64;
+const SCREEN_UP_TO = 20_000;
+
+/**
+ * Relative agreement, in units of the slacks' magnitudes |slope·r| + |offset|,
+ * required between the linear model's worst slack at a chosen rate and the
+ * exact evaluator's: both compute the same distances with a few rounding
+ * steps each (~1e-16 relative), so 1e-9 flags only a real disagreement.
+ */
+const MODEL_AGREEMENT = 1e-9;
+
+/** Settings of a rate with the rate's exact evaluation. */
+interface Judged {
+  readonly settings: RateSettings;
+  readonly evaluation: RateEvaluation;
+}
+
+/**
+ * The best rate one clock part offers for a plan: among the rates the part
+ * gives (directly, through the converter's dividers, or through its
+ * synthesiser), the one that passes over the part's whole tolerance with the
+ * widest worst slack; else the failing one with the largest worst slack.
+ * Small parts have every rate judged exactly. Otherwise each feasible
+ * interval is searched for the best integer N of each (M, D) (enumerated, or
+ * a MILP with javascript-lp-solver), intervals taken in order of their
+ * continuous LP bound and dropped once that bound cannot beat the best found;
+ * every answer is re-checked by evaluateRate.
+ *
+ * @param context the plan (its clocking gives the dividers, bits and aperture jitter)
+ * @param set the plan's exact feasible set, with blocked ranges
+ * @param part the clock part
+ * @param options search tuning
+ * @returns the part's plan, or null when none of its rates lies inside the converter's rate range
+ * @throws Error when an integer answer fails its exact re-check (a bug, not an input error)
+ * @example planPart(context, set, xo122M88).settings // { N: 1, M: 1, D: 1 }
+ */
+export function planPart(context: PlanContext, set: FeasibleSet, part: ClockPart, options: PlanPartOptions = {}): PartPlan | null {
+  const families = rateFamilies(part, context.clocking.clockDividers);
+  const { minRate, maxRate } = context.limits;
+  const spans = families.flatMap((family) => {
+    const span = nRangeFor(part.frequency, family, minRate, maxRate);
+    return span ? [{ family, span }] : [];
+  });
+  const count = spans.reduce((sum, { span }) => sum + span.max - span.min + 1, 0);
+  if (count === 0) return null;
+  let chosen: Judged;
+  let search: PartSearch;
+  if (count <= (options.everyRateUpTo ?? EVERY_RATE_UP_TO)) {
+    chosen = bestOfEvery(context, part);
+    search = 'every rate';
+  } else {
+    const passing = bestPassing(context, set, part, families, options.enumerateUpTo ?? ENUMERATE_UP_TO);
+    if (passing) {
+      chosen = passing;
+      search = 'intervals';
+    } else {
+      const every = count <= (options.screenUpTo ?? SCREEN_UP_TO);
+      chosen = nearestFailing(context, set, part, families, every);
+      search = every ? 'every rate' : 'near anchors';
+    }
+  }
+  const rate = chosen.evaluation.rate;
+  return {
+    part,
+    rate,
+    settings: chosen.settings,
+    evaluation: chosen.evaluation,
+    headroom: driftHeadroom(set, context.limits, rate),
+    snr: clockSnr(context.band, rate, part.jitter, context.clocking.apertureJitter, context.clocking.bits),
+    pass: chosen.evaluation.pass,
+    search,
+  };
+}
+
+/** Ties within this fraction of the bandwidth keep the earlier (simpler) settings. */
+const TIE = 1e-9;
+
+function better(context: PlanContext, a: RateEvaluation, b: RateEvaluation | undefined): boolean {
+  if (!b) return true;
+  if (a.pass !== b.pass) return a.pass;
+  return a.worstSlack > b.worstSlack + TIE * (context.band.high - context.band.low);
+}
+
+/** Every rate in the converter's range judged exactly (each distinct rate once, with its first settings). */
+function bestOfEvery(context: PlanContext, part: ClockPart): Judged {
+  const seen = new Set<number>();
+  let best: Judged | undefined;
+  for (const { rate, settings } of partRates(part, context.clocking.clockDividers, context.limits.minRate, context.limits.maxRate)) {
+    if (seen.has(rate)) continue;
+    seen.add(rate);
+    const evaluation = evaluateRate(context, rate, part.tolerancePpm);
+    if (better(context, evaluation, best?.evaluation)) best = { settings, evaluation };
+  }
+  return best!;
+}
+
+interface Piece {
+  readonly interval: FeasibleInterval;
+  readonly range: Interval;
+  readonly slacks: LinearSlack[];
+  /** The continuous LP optimum over the range: no rate inside does better, Hz. */
+  readonly bound: number;
+}
+
+function bestPassing(context: PlanContext, set: FeasibleSet, part: ClockPart, families: readonly RateFamily[], enumerateUpTo: number): Judged | null {
+  const unit = context.band.high - context.band.low;
+  const pieces = feasiblePieces(context, set, part).sort((a, b) => b.bound - a.bound);
+  const allowance = MILP_ALLOWANCE * unit;
+  let best: Judged | undefined;
+  for (const piece of pieces) {
+    if (best && piece.bound + allowance <= best.evaluation.worstSlack) break;
+    const lines = new Set<string>();
+    for (const family of families) {
+      const span = nRangeFor(part.frequency, family, piece.range.low, piece.range.high);
+      if (!span) continue;
+      const key = `${family.M * family.D}:${span.min}:${span.max}`; // the same rates as an earlier family
+      if (lines.has(key)) continue;
+      lines.add(key);
+      const rateAt = (N: number) => rateOf(part.frequency, { N, M: family.M, D: family.D });
+      const answer = bestIntegerN(piece.slacks, { first: span.min, last: span.max, rateAt }, unit, enumerateUpTo);
+      const settings = { N: answer.N, M: family.M, D: family.D };
+      const evaluation = evaluateRate(context, rateAt(answer.N), part.tolerancePpm);
+      recheck(part, piece, evaluation, answer.worstSlack);
+      if (better(context, evaluation, best?.evaluation)) best = { settings, evaluation };
+      // Within the allowance of this piece's bound, and so of every later piece's: nothing left can do better.
+      if (best && best.evaluation.worstSlack >= piece.bound - allowance) return best;
+    }
+  }
+  return best ?? null;
+}
+
+/** The feasible intervals wide enough for the part's drift, their linear slacks and LP bounds. */
+function feasiblePieces(context: PlanContext, set: FeasibleSet, part: ClockPart): Piece[] {
+  const unit = context.band.high - context.band.low;
+  const blocking = context.interferers.filter((i) => i.blocking);
+  const pieces: Piece[] = [];
+  for (const interval of set.feasible) {
+    const range = driftSafeRange(interval, part.tolerancePpm);
+    if (!range) continue;
+    const slacks = linearSlacks(context.band, context.guard, interval.zone, blocking, range, part.tolerancePpm * 1e-6);
+    let bound: number;
+    if (range.low === range.high) {
+      bound = modelSlack(slacks, range.low);
+    } else {
+      const answer = maximiseWorstSlack(slacks, range, unit);
+      if (!answer) throw new Error(`widest-margin LP infeasible on ${interval.minRate}–${interval.maxRate} Hz, a feasible interval`);
+      bound = answer.worstSlack;
+    }
+    pieces.push({ interval, range, slacks, bound });
+  }
+  return pieces;
+}
+
+/** The exact evaluator must pass a rate whose drift lies inside a feasible interval, and agree with the linear slacks. */
+function recheck(part: ClockPart, piece: Piece, evaluation: RateEvaluation, modelled: number): void {
+  const { interval } = piece;
+  const where = `${part.label} at ${evaluation.rate} Hz (feasible interval ${interval.minRate}–${interval.maxRate} Hz)`;
+  if (!evaluation.pass) throw new Error(`${where}: its drift range lies inside the interval, yet the exact evaluator fails it (${evaluation.limitedBy})`);
+  let scale = 0;
+  for (const s of piece.slacks) scale = Math.max(scale, Math.abs(s.slope * evaluation.rate) + Math.abs(s.offset));
+  if (Math.abs(evaluation.worstSlack - modelled) > MODEL_AGREEMENT * scale) {
+    throw new Error(`${where}: the linear slacks give a worst slack of ${modelled} Hz, the exact evaluator ${evaluation.worstSlack} Hz (${evaluation.limitedBy})`);
+  }
+}
+
+/**
+ * When nothing passes: the rate with the largest worst slack, screened with
+ * worstSlackAt (every rate, or only rates next to anchors: the edges of the
+ * feasible intervals and blocked ranges, the converter's limits and the
+ * rates that centre the band in each zone), then judged by evaluateRate.
+ */
+function nearestFailing(context: PlanContext, set: FeasibleSet, part: ClockPart, families: readonly RateFamily[], every: boolean): Judged {
+  const blocking = context.interferers.filter((i) => i.blocking);
+  const { minRate, maxRate } = context.limits;
+  let best: { settings: RateSettings; slack: number } | undefined;
+  const consider = (settings: RateSettings) => {
+    const slack = worstSlackAt(context, blocking, rateOf(part.frequency, settings), part.tolerancePpm);
+    if (!best || slack > best.slack + TIE * (context.band.high - context.band.low)) best = { settings, slack };
+  };
+  if (every) {
+    for (const { settings } of partRates(part, context.clocking.clockDividers, minRate, maxRate)) consider(settings);
+  } else {
+    const anchors = anchorRates(context, set);
+    for (const family of families) {
+      const K = family.M * family.D;
+      const tried = new Set<number>();
+      for (const anchor of anchors) {
+        const near = (anchor * K) / part.frequency;
+        for (const N of [Math.floor(near), Math.ceil(near)]) {
+          if (N < family.nMin || N > family.nMax || tried.has(N)) continue;
+          tried.add(N);
+          const rate = rateOf(part.frequency, { N, M: family.M, D: family.D });
+          if (rate >= minRate && rate <= maxRate) consider({ N, M: family.M, D: family.D });
+        }
+      }
+    }
+  }
+  if (!best) throw new Error(`${part.label}: no rate near the anchors inside the converter's range`);
+  const evaluation = evaluateRate(context, rateOf(part.frequency, best.settings), part.tolerancePpm);
+  if (evaluation.worstSlack !== best.slack) {
+    throw new Error(`${part.label} at ${evaluation.rate} Hz: the screen found a worst slack of ${best.slack} Hz, the exact evaluator ${evaluation.worstSlack} Hz`);
+  }
+  return { settings: best.settings, evaluation };
+}
+
+function anchorRates(context: PlanContext, set: FeasibleSet): number[] {
+  const { minRate, maxRate } = context.limits;
+  const anchors: number[] = [minRate, maxRate];
+  for (const f of set.feasible) anchors.push(f.minRate, f.maxRate, (f.minRate + f.maxRate) / 2);
+  for (const b of set.blocked) anchors.push(b.minRate, b.maxRate);
+  // The band's centre c sits mid-zone n at rate 4c/(2n − 1).
+  const centre = (context.band.low + context.band.high) / 2;
+  for (let n = 1; (4 * centre) / (2 * n - 1) >= minRate; n++) {
+    const rate = (4 * centre) / (2 * n - 1);
+    if (rate <= maxRate) anchors.push(rate);
+  }
+  return anchors;
+}
+
+/** The best rate of every part of the plan, in the plan's order; null for a part with no rate inside the converter's range. */
+export function planParts(context: PlanContext, set: FeasibleSet, options: PlanPartOptions = {}): Array<PartPlan | null> {
+  return context.clocks.map((part) => planPart(context, set, part, options));
+}
