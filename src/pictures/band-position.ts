@@ -108,28 +108,35 @@ function zoneNumbers(wedges: readonly Wedge[], x: Scale, y: Scale, xMax: number,
     const high = w.zone === 1 ? yMax : Math.min((2 * (xMax - 1)) / (w.zone - 1), yMax);
     if (low >= yMax) {
       const inside = w.points.reduce((sum, [a]) => sum + a, 0) / w.points.length;
-      parts.push(textElement(x.at(inside), y.at(yMax) + 12, String(w.zone), { 'text-anchor': 'middle', 'font-size': SMALL }));
+      parts.push(textElement(x.at(inside), y.at(yMax) + 12, zoneName(w, wedges.length), { 'text-anchor': 'middle', 'font-size': SMALL }));
       continue;
     }
     // Zones step down the page as n grows: keep a number only when clear of the one above.
     const at = y.at((low + high) / 2);
     if (at < lastY + 11) continue;
     lastY = at;
-    const name = wedges.length <= 12 ? `zone ${w.zone}${w.inverted ? ' (inv)' : ''}` : String(w.zone);
+    const name = zoneName(w, wedges.length);
     parts.push(element('line', { x1: x.at(xMax), y1: at, x2: x.at(xMax) + 5, y2: at, stroke: '#000', 'stroke-width': 0.6 }));
     parts.push(textElement(x.at(xMax) + 7, at + 3.5, name, { 'font-size': SMALL }));
   }
   return element('g', { class: 'zones' }, parts.join(''));
 }
 
+/** "zone n (inv)" while there are few zones, the bare number when many crowd the gutter. */
+function zoneName(w: Wedge, count: number): string {
+  return count <= 12 ? `zone ${w.zone}${w.inverted ? ' (inv)' : ''}` : String(w.zone);
+}
+
 function searchLines(report: PlanReport, B: number, x: Scale, y: Scale, yMax: number): string {
   const parts: string[] = [];
-  for (const [rate, text] of [[report.search.minRate, 'slowest rate searched'], [report.search.maxRate, 'fastest rate searched']] as const) {
+  // The slowest rate is labelled under its line and the fastest over it, so close lines keep both labels clear.
+  for (const [rate, text, below] of [[report.search.minRate, 'slowest rate searched', true], [report.search.maxRate, 'fastest rate searched', false]] as const) {
     const at = rate / B;
     if (at <= 0 || at > yMax) continue;
+    const top = below ? y.at(at) + 1 : y.at(at) - 12;
     parts.push(element('line', { x1: x.range[0], y1: y.at(at), x2: x.range[1], y2: y.at(at), stroke: '#000', 'stroke-width': 0.8, 'stroke-dasharray': '2 2' }));
-    parts.push(element('rect', { x: x.range[0] + 3, y: y.at(at) - 12, width: textWidth(text, 8.5) + 4, height: 11, fill: '#fff', opacity: 0.85 }));
-    parts.push(textElement(x.range[0] + 5, y.at(at) - 3, text, { 'font-size': 8.5, 'font-style': 'italic' }));
+    parts.push(element('rect', { x: x.range[0] + 3, y: top, width: textWidth(text, 8.5) + 4, height: 11, fill: '#fff', opacity: 0.85 }));
+    parts.push(textElement(x.range[0] + 5, top + 9, text, { 'font-size': 8.5, 'font-style': 'italic' }));
   }
   return element('g', { class: 'search' }, parts.join(''));
 }

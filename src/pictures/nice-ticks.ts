@@ -32,17 +32,11 @@ export function tickValue(k: number, step: TickStep): number {
  * @param low, high the range, any unit, low ≤ high, finite
  * @param count wanted number of intervals (≥ 1)
  * @returns the step and the ticks inside [low, high]
- * @example linearTicks(0, 61.44e6, 6).values // [0, 1e7, 2e7, 3e7, 4e7, 5e7, 6e7]
+ * @example linearTicks(0, 61.44e6, 8).values // [0, 1e7, 2e7, 3e7, 4e7, 5e7, 6e7]
  */
 export function linearTicks(low: number, high: number, count: number): Ticks {
-  const step = niceStep((high - low) / Math.max(1, count) || Math.abs(high) || 1);
-  const size = tickValue(1, step);
-  // A bound within 1e-9 of a step below a multiple still counts as that multiple.
-  const first = Math.ceil(low / size - 1e-9);
-  const last = Math.floor(high / size + 1e-9);
-  const multiples: number[] = [];
-  for (let k = first; k <= last; k++) multiples.push(k);
-  return { step, multiples, values: multiples.map((k) => tickValue(k, step)) };
+  // A bound within 1e-9 of a step beyond a multiple still counts as that multiple.
+  return ticksBetween(low, high, count, (q) => Math.ceil(q - 1e-9), (q) => Math.floor(q + 1e-9));
 }
 
 /**
@@ -51,16 +45,28 @@ export function linearTicks(low: number, high: number, count: number): Ticks {
  *
  * @param low, high the range to cover, low ≤ high, finite
  * @param count wanted number of intervals (≥ 1)
- * @example coveringTicks(-186, 0, 8).values // [-200, -180, ..., 0]
+ * @example coveringTicks(-186, 0, 10).values // [-200, -180, ..., 0]
  */
 export function coveringTicks(low: number, high: number, count: number): Ticks {
-  const step = niceStep((high - low) / Math.max(1, count) || Math.abs(high) || 1);
-  const size = tickValue(1, step);
-  const first = Math.floor(low / size + 1e-9);
-  const last = Math.max(Math.ceil(high / size - 1e-9), first + 1);
-  const multiples: number[] = [];
-  for (let k = first; k <= last; k++) multiples.push(k);
-  return { step, multiples, values: multiples.map((k) => tickValue(k, step)) };
+  return ticksBetween(low, high, count, (q) => Math.floor(q + 1e-9), (q) => Math.ceil(q - 1e-9), 1);
+}
+
+/** Most ticks one axis gets; a step that would give more (a span tiny beside its values) is coarsened. */
+const MOST_TICKS = 200;
+
+function ticksBetween(low: number, high: number, count: number, firstOf: (q: number) => number, lastOf: (q: number) => number, leastIntervals = 0): Ticks {
+  let step = niceStep((high - low) / Math.max(1, count) || Math.abs(high) || 1);
+  for (;;) {
+    const size = tickValue(1, step);
+    const first = firstOf(low / size);
+    const last = Math.max(lastOf(high / size), first + leastIntervals);
+    // Multiples past 2^53 are not distinct doubles: coarsen the step until they are few and exact.
+    if (Number.isSafeInteger(first) && Number.isSafeInteger(last) && last - first <= MOST_TICKS) {
+      const multiples = Array.from({ length: Math.max(0, last - first + 1) }, (_, i) => first + i);
+      return { step, multiples, values: multiples.map((k) => tickValue(k, step)) };
+    }
+    step = step.mantissa === 1 ? { mantissa: 2, exponent: step.exponent } : step.mantissa === 2 ? { mantissa: 5, exponent: step.exponent } : { mantissa: 1, exponent: step.exponent + 1 };
+  }
 }
 
 /**
