@@ -30,6 +30,22 @@ export function heronBoardScenario(): Scenario {
   });
 }
 
+/** The board with one more clock at 140 MHz, where the wanted band straddles the zone 1/2 edge (70 MHz). */
+export function heronStraddleScenario(): Scenario {
+  const board = heronBoardScenario();
+  return { ...board, name: 'Heron-4 straddling clock', clocks: [...board.clocks, directClock('XO-S 140M', 140e6)] };
+}
+
+/** A low-pass band whose lower guard reaches DC: only zone 1 holds it. */
+export function heronLowPassScenario(): Scenario {
+  return scenarioFixture({
+    name: 'Heron-1 baseband',
+    wanted: { low: hz(1e6), high: hz(10e6), weakestLevel: db(-60), strongestLevel: db(-1) },
+    guard: { low: hz(2e6), high: hz(2e6) },
+    clocks: [directClock('XO-L 30.72M', 30.72e6)],
+  });
+}
+
 /** A narrow band high up (many narrow windows over a long rate range). */
 export function heronHighIfScenario(): Scenario {
   return scenarioFixture({

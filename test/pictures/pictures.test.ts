@@ -9,7 +9,7 @@ import { spectrumSvg } from '../../src/pictures/spectrum.js';
 import { bandPositionSvg } from '../../src/pictures/band-position.js';
 import { planPicturesSvg } from '../../src/pictures/plan-pictures.js';
 import { converterFixture, scenarioFixture } from '../helpers/scenario-fixture.js';
-import { heronBoardScenario, heronHighIfScenario, reportOf } from './picture-plan.js';
+import { heronBoardScenario, heronHighIfScenario, heronLowPassScenario, heronStraddleScenario, reportOf } from './picture-plan.js';
 import { elementsOf, parseSvg, rootOf, textsOf } from './svg-check.js';
 import { inkStatistics, renderPng } from './render-png.js';
 
@@ -147,6 +147,24 @@ describe('band-position chart', () => {
     expect(document.getElementsByTagName('polygon').length).toBe(139);
     const texts = checkPicture('band-position-high-if-one', svg, 900);
     expect(texts.filter((t) => /^Z\d+\.\d+: /.test(t))).toEqual([expect.stringMatching(new RegExp(`^${high.best!.replace('.', '\\.')}: `))]);
+  });
+});
+
+describe('edge cases', () => {
+  it('shows a clock whose rate lands in no window on its own lane, and the wanted band folding onto itself', () => {
+    const report = reportOf(heronStraddleScenario());
+    const clock = report.candidates.find((c) => c.label === 'XO-S 140M')!;
+    expect(clock.zone).toBeNull();
+    expect(checkPicture('rate-map-straddle', rateMapSvg(report), 960)).toContain('outside windows');
+    expect(checkPicture('spectrum-straddle', spectrumSvg(report, clock.label), 960)).toContain('wanted band folds onto itself (straddles a zone edge)');
+  });
+
+  it('draws a low-pass band (guard down to DC) with fH/B = 1 on the band-position chart', () => {
+    const report = reportOf(heronLowPassScenario());
+    expect(report.windows.map((w) => w.zone)).toEqual([1]);
+    // Guarded band 0–12 MHz: fH/B = 1.
+    expect(checkPicture('band-position-low-pass', bandPositionSvg(report), 900)).toContain('this design: fH/B = 1');
+    expect(checkPicture('rate-map-low-pass', rateMapSvg(report), 960)).toContain('zone 1');
   });
 });
 
