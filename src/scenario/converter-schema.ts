@@ -3,7 +3,7 @@ import type { Db } from '../units/quantities.js';
 import type { Converter } from './scenario.js';
 import { refuseAt } from './band-forms.js';
 import { formatFrequency } from '../units/format-frequency.js';
-import { label, level, positiveFrequency, time, wholeNumber } from './scenario-fields.js';
+import { countFromOne, label, level, positiveFrequency, time, wholeNumber } from './scenario-fields.js';
 
 const HARMONIC_ORDER_KEY = /^(?:[2-9]|[1-9]\d+)$/;
 
@@ -29,8 +29,10 @@ const interleave = z
 
 /**
  * The converter as written in a scenario file: rate limits, input bandwidth,
- * resolution, harmonic levels by order and its rate-tied spurs. Checks that
- * the slowest rate is not above the fastest.
+ * resolution, harmonic levels by order, its rate-tied spurs and the integer
+ * dividers it can apply to its clock input (sorted ascending in the model).
+ * Checks that the slowest rate is not above the fastest and that no divider
+ * is listed twice.
  */
 export const converterSchema = z
   .strictObject({
@@ -46,12 +48,18 @@ export const converterSchema = z
     rateSpurs: rateSpurs.nullable().prefault(null),
     interleave: interleave.nullable().prefault(null),
     apertureJitter: time.meta({ description: 'Aperture jitter, rms: seconds as a number, or text such as "80 fs", "0.2 ps" (default 0)' }).prefault(0),
+    clockDividers: z
+      .array(countFromOne('A divider D: the converter samples at its clock input / D'), { error: 'a list of whole-number clock dividers, e.g. [1, 2, 4]' })
+      .min(1, { error: 'a list of at least one clock divider (1: undivided)' })
+      .meta({ description: 'Integer dividers the converter can apply to its clock input, each listed once, e.g. [1, 2, 4] (default [1]: undivided only)', uniqueItems: true })
+      .prefault([1]),
   })
   .meta({ description: 'The analog-to-digital converter' })
   .transform((written, ctx): Converter => {
     if (written.minRate > written.maxRate) {
       refuseAt(ctx, ['maxRate'], `a rate at or above minRate (${formatFrequency(written.minRate)})`, formatFrequency(written.maxRate), [['minRate']]);
     }
+    refuseRepeatedDividers(ctx, written.clockDividers);
     const harmonics = new Map<number, Db>(
       Object.entries(written.harmonics)
         .map(([order, value]) => [Number(order), value] as const)
@@ -68,5 +76,15 @@ export const converterSchema = z
       rateSpurs: written.rateSpurs ?? { dc: null, halfRate: null, quarterRate: null },
       interleave: written.interleave,
       apertureJitter: written.apertureJitter,
+      clockDividers: [...written.clockDividers].sort((a, b) => a - b),
     };
   });
+
+function refuseRepeatedDividers(ctx: z.RefinementCtx, dividers: readonly number[]): void {
+  const firstAt = new Map<number, number>();
+  dividers.forEach((divider, i) => {
+    const first = firstAt.get(divider);
+    if (first === undefined) firstAt.set(divider, i);
+    else refuseAt(ctx, ['clockDividers', i], `a divider not listed already (clockDividers[${first}] is ${divider})`, String(divider), [['clockDividers', first]]);
+  });
+}

@@ -44,6 +44,44 @@ export const frequency = (description: string) => frequencyText.meta({ descripti
 /** A frequency field above zero (rates, bandwidths). */
 export const positiveFrequency = (description: string) => positiveFrequencyText.meta({ description: `${description}: ${FREQUENCY_HINT}` });
 
+const SIGNED_WORDS = 'a frequency, signed: hertz as a number, or text such as "-5M", "+2.5 MHz", "455k"';
+const SIGN = /^[-−+]/;
+
+/** A signed frequency: parseFrequency reads the magnitude after one leading sign. */
+function signedHz(value: string | number): Hz {
+  if (typeof value === 'number') {
+    const magnitude = parseFrequency(Math.abs(value), '');
+    return value < 0 ? hz(-magnitude) : magnitude;
+  }
+  const text = value.trim();
+  const sign = SIGN.exec(text)?.[0];
+  if (sign === undefined) return parseFrequency(text, '');
+  const rest = text.slice(sign.length);
+  if (SIGN.test(rest.trim())) throw new InputError('', 'a frequency with at most one sign, such as -5M', value);
+  const magnitude = parseFrequency(rest, '');
+  // A minus on zero gives 0, not -0, so the value reads back equal to itself.
+  return sign === '+' || magnitude === 0 ? magnitude : hz(-magnitude);
+}
+
+const signedFrequencyText = z.union([z.string(), z.number()], { error: SIGNED_WORDS }).transform((value, ctx): Hz => {
+  try {
+    return signedHz(value);
+  } catch (error) {
+    return refuse(ctx, error, value);
+  }
+});
+
+/**
+ * A frequency field that may be negative (a shift, an offset): a leading
+ * `-` (or `−`, or `+`) then what parseFrequency reads, or a plain number of
+ * hertz of either sign.
+ *
+ * @param description what the field means, for the JSON Schema
+ * @example signedFrequency('Lowest shift').parse('-5M') // -5000000
+ */
+export const signedFrequency = (description: string) =>
+  signedFrequencyText.meta({ description: `${description}: hertz as a number of either sign, or text such as "-5M", "+2.5 MHz"` });
+
 /** A time ≥ 0 in seconds, or text with a unit (`150 fs`, `0.2 ps`). */
 export const time = z
   .union([z.string(), z.number()], { error: 'a time: seconds as a number, or text such as "150 fs", "0.2 ps"' })
@@ -83,6 +121,19 @@ export const wholeNumber = (least: number, most: number, description: string) =>
     .int({ error: `a whole number from ${least} to ${most}` })
     .min(least, { error: `a whole number from ${least} to ${most}` })
     .max(most, { error: `a whole number from ${least} to ${most}` })
+    .meta({ description });
+
+/**
+ * A whole number 1 or more, with no upper limit beyond exact doubles (a
+ * divider or a synthesiser setting).
+ *
+ * @param description what the field means, for the JSON Schema
+ */
+export const countFromOne = (description: string) =>
+  z
+    .number({ error: 'a whole number 1 or more' })
+    .int({ error: 'a whole number 1 or more' })
+    .min(1, { error: 'a whole number 1 or more' })
     .meta({ description });
 
 /** A guard width before the band is known: Hz, or a percentage of the band's width. */

@@ -1,20 +1,24 @@
 import { z } from 'zod';
 import { formatFrequency } from '../units/format-frequency.js';
-import { hz } from '../units/quantities.js';
+import { hz, type Hz } from '../units/quantities.js';
+import type { Band } from '../math/band.js';
 import type { Scenario } from './scenario.js';
 import { refuseAt } from './band-forms.js';
 import { converterSchema } from './converter-schema.js';
 import { filterSchema } from './filter-schema.js';
 import { goalSchema, guardSchema, requirementsSchema, wantedSchema } from './plan-schema.js';
 import { guardHz, wholeNumber } from './scenario-fields.js';
-import { boardSpurSchema, clockSchema, neighbourSchema } from './signals-schema.js';
+import { boardSpurSchema, neighbourSchema } from './signals-schema.js';
+import { clockPartSchema } from './clock-part-schema.js';
+import { ifShiftSchema } from './if-shift-schema.js';
 
 /**
  * The scenario file format, defined once: zod validates a parsed JSON
  * document with it, `z.input` gives the file's TypeScript type, and
  * `z.toJSONSchema` the schema printed by `ifzone schema`. Its output is the
  * validated `Scenario` (all Hz, defaults filled). Checks that span sections
- * (the wanted band against the converter, unique labels) run last.
+ * (the wanted band, shifted as far as ifShift allows, against the converter;
+ * unique labels) run last.
  *
  * `extends` is read by resolve-scenario.ts before validation; it is listed
  * here so editors accept it.
@@ -33,8 +37,9 @@ export const scenarioFileSchema = z
     neighbours: z.array(neighbourSchema).meta({ description: 'Neighbour channels and blockers' }).prefault([]),
     filter: filterSchema.nullable().prefault(null),
     requirements: requirementsSchema,
-    clocks: z.array(clockSchema).meta({ description: 'Candidate sample clocks' }).prefault([]),
+    clocks: z.array(clockPartSchema).meta({ description: 'Candidate clock parts: crystals, oscillators, synthesiser references' }).prefault([]),
     goal: goalSchema.prefault('widest-margin'),
+    ifShift: ifShiftSchema.nullable().prefault(null),
   })
   .meta({
     $id: 'https://ifzone.invalid/ifzone-scenario.schema.json',
@@ -52,6 +57,7 @@ export const scenarioFileSchema = z
         [['converter', 'inputBandwidth']],
       );
     }
+    if (file.ifShift) refuseShiftOutside(ctx, wanted, file.ifShift, converter.inputBandwidth);
     refuseRepeatedLabels(ctx, [
       ['boardSpurs', file.boardSpurs],
       ['neighbours', file.neighbours],
@@ -71,6 +77,7 @@ export const scenarioFileSchema = z
       requirements: file.requirements,
       clocks: file.clocks,
       goal: file.goal,
+      ifShift: file.ifShift,
     };
   });
 
@@ -94,5 +101,27 @@ function refuseRepeatedLabels(ctx: z.RefinementCtx, lists: ReadonlyArray<readonl
         refuseAt(ctx, [list, i, 'label'], words, JSON.stringify(item.label), [earlier.path]);
       }
     });
+  }
+}
+
+/** The wanted band moved by either end of the shift must stay above 0 Hz and within the converter's input bandwidth. */
+function refuseShiftOutside(ctx: z.RefinementCtx, wanted: Band, shift: { readonly low: Hz; readonly high: Hz }, inputBandwidth: Hz): void {
+  if (wanted.low + shift.low < 0) {
+    refuseAt(
+      ctx,
+      ['ifShift', 'low'],
+      `a shift that keeps the wanted band at or above 0 Hz (at least ${formatFrequency(-wanted.low)})`,
+      formatFrequency(shift.low),
+      [['wanted']],
+    );
+  }
+  if (wanted.high + shift.high > inputBandwidth) {
+    refuseAt(
+      ctx,
+      ['ifShift', 'high'],
+      `a shift that keeps the wanted band within the converter's input bandwidth (converter.inputBandwidth ${formatFrequency(inputBandwidth)}; at most ${formatFrequency(inputBandwidth - wanted.high)})`,
+      formatFrequency(shift.high),
+      [['wanted'], ['converter', 'inputBandwidth']],
+    );
   }
 }

@@ -23,8 +23,15 @@ export interface Scenario {
   /** The analog anti-alias filter, or null when none is stated (no attenuation). */
   readonly filter: AntiAliasFilter | null;
   readonly requirements: Requirements;
-  readonly clocks: readonly ClockCandidate[];
+  /** The clock parts the board may use, each giving one or more sample rates. */
+  readonly clocks: readonly ClockPart[];
   readonly goal: Goal;
+  /**
+   * How far the IF may move when the first LO is retuned, Hz (the wanted band
+   * and the neighbours shift by δ in [low, high]; fixed board spurs do not);
+   * null when the LO is fixed.
+   */
+  readonly ifShift: { readonly low: Hz; readonly high: Hz } | null;
 }
 
 export interface WantedBand extends Band {
@@ -52,6 +59,8 @@ export interface Converter {
   readonly interleave: Interleave | null;
   /** Aperture jitter, s rms (0 when not stated). */
   readonly apertureJitter: Seconds;
+  /** Integer dividers the converter can apply to its clock input (1 = undivided), ascending. */
+  readonly clockDividers: readonly number[];
 }
 
 export interface Interleave {
@@ -97,6 +106,46 @@ export interface Requirements {
   readonly tolerancePpm: Ppm;
 }
 
+/** A clock part: a crystal, an oscillator, or a reference feeding a synthesiser. */
+export interface ClockPart {
+  readonly label: string;
+  /** Nominal output frequency of the part, Hz. */
+  readonly frequency: Hz;
+  /** Total frequency tolerance, ±ppm (the sum of the breakdown when one is listed). */
+  readonly tolerancePpm: Ppm;
+  /** The contributions as listed, ±ppm; null when one figure was given. */
+  readonly toleranceBreakdown: { readonly initial: Ppm; readonly temperature: Ppm; readonly ageing: Ppm } | null;
+  /** rms jitter of the part, s; null when not stated. */
+  readonly jitter: Seconds | null;
+  /** Free text: cost, stock, preference. */
+  readonly note: string;
+  readonly derivation: RateDerivation;
+}
+
+/** An inclusive range of integers. */
+export interface IntegerRange {
+  readonly min: number;
+  readonly max: number;
+}
+
+/**
+ * How a part's frequency becomes a sample rate: directly; through the
+ * converter's clock dividers (rate = f / D, D from converter.clockDividers);
+ * or through a synthesiser, rate = f × N / (M × D), with the VCO at
+ * f × N / M kept inside its range when one is given.
+ */
+export type RateDerivation =
+  | { readonly kind: 'direct' }
+  | { readonly kind: 'divider' }
+  | {
+      readonly kind: 'synthesiser';
+      readonly n: IntegerRange;
+      readonly m: IntegerRange;
+      readonly d: IntegerRange;
+      readonly vco: { readonly low: Hz; readonly high: Hz } | null;
+    };
+
+/** A concrete sample rate put forward for judging, with the drift it may take. */
 export interface ClockCandidate {
   readonly label: string;
   readonly rate: Hz;

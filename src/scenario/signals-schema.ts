@@ -1,7 +1,7 @@
 import { z } from 'zod';
-import type { BoardSpur, ClockCandidate, Neighbour } from './scenario.js';
+import type { BoardSpur, Neighbour } from './scenario.js';
 import { bandFromForm, EDGES_OR_CENTRE, TONE_OR_EDGES } from './band-forms.js';
-import { frequency, label, level, oneFormOf, positiveFrequency, tolerance, wholeNumber } from './scenario-fields.js';
+import { frequency, label, level, oneFormOf, wholeNumber } from './scenario-fields.js';
 
 /** A fixed tone or band on the board: reference clock, LO leakage, regulator. */
 export const boardSpurSchema = z
@@ -40,13 +40,3 @@ export const neighbourSchema = z
     if (!band) return z.NEVER;
     return { label: written.label, ...band, level: written.level };
   });
-
-/** A labelled sample clock the board can offer. */
-export const clockSchema = z
-  .strictObject({
-    label,
-    rate: positiveFrequency('Clock frequency, e.g. "122.88M"'),
-    tolerancePpm: tolerance,
-  })
-  .meta({ description: 'A candidate sample clock' })
-  .transform((written): ClockCandidate => ({ label: written.label, rate: written.rate, tolerancePpm: written.tolerancePpm }));

@@ -20,6 +20,7 @@ export function converterFixture(overrides: Partial<Converter> = {}): Converter 
     rateSpurs: { dc: null, halfRate: null, quarterRate: null },
     interleave: null,
     apertureJitter: seconds(0),
+    clockDividers: [1],
     ...overrides,
   };
 }
@@ -44,8 +45,19 @@ export function scenarioFixture(overrides: Partial<Scenario> = {}): Scenario {
     neighbours: [],
     filter: null,
     requirements: { margin: hz(1e6), rejection: db(40), tolerancePpm: ppm(20) },
-    clocks: [{ label: 'XO-A 122.88M', rate: hz(122.88e6), tolerancePpm: ppm(20) }],
+    clocks: [
+      {
+        label: 'XO-A 122.88M',
+        frequency: hz(122.88e6),
+        tolerancePpm: ppm(20),
+        toleranceBreakdown: null,
+        jitter: null,
+        note: '',
+        derivation: { kind: 'direct' },
+      },
+    ],
     goal: { kind: 'widest-margin' },
+    ifShift: null,
     ...overrides,
   };
 }

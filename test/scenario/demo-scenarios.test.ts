@@ -44,18 +44,67 @@ describe('demo scenarios', () => {
     expect(base.converter.interleave).toBeNull();
     expect(base.boardSpurs.find((s) => s.label === 'LO-1 leakage')).toMatchObject({ low: 760e6, high: 760e6, coupling: 'before-filter', harmonics: 1 });
     expect(base.neighbours.find((n) => n.label === 'Paging blocker 175M')).toMatchObject({ low: 174.5e6, high: 175.5e6 });
-    expect(base.clocks.map((c) => c.rate)).toEqual([122.88e6, 153.6e6, 184.32e6, 245.76e6]);
+    expect(base.converter.clockDividers).toEqual([1, 2, 4]);
+    expect(base.clocks.map((c) => c.frequency)).toEqual([122.88e6, 153.6e6, 184.32e6, 245.76e6, 61.44e6, 491.52e6, 10e6]);
     expect(base.goal).toEqual({ kind: 'widest-margin' });
+    expect(base.ifShift).toBeNull();
   });
 
-  it('gives every base clock a window of its guarded band (Vaughan et al. 1991)', () => {
-    // Guarded band 128–152 MHz: n = 2 allows 152–256 MHz, n = 3 allows 101.33–128 MHz.
+  it('gives the base a catalogue of direct, divided and synthesised parts', () => {
+    const base = readScenarioFile(path('heron-base.json'));
+    const byLabel = new Map(base.clocks.map((part) => [part.label, part]));
+    expect(base.clocks.map((part) => part.derivation.kind)).toEqual(['direct', 'direct', 'direct', 'direct', 'direct', 'divider', 'synthesiser']);
+    expect(byLabel.get('XO-A 122.88M')).toMatchObject({ tolerancePpm: 20, toleranceBreakdown: null, jitter: 120e-15 });
+    // 3 + 5 + 2 ppm, listed separately.
+    expect(byLabel.get('VCXO-C 184.32M')).toMatchObject({ tolerancePpm: 10, toleranceBreakdown: { initial: 3, temperature: 5, ageing: 2 }, jitter: 70e-15 });
+    expect(byLabel.get('SYN-1 from TCXO-R 10M')?.derivation).toEqual({
+      kind: 'synthesiser',
+      n: { min: 1, max: 512 },
+      m: { min: 1, max: 16 },
+      d: { min: 1, max: 8 },
+      vco: { low: 800e6, high: 1.6e9 },
+    });
+    for (const part of base.clocks) expect(part.note, part.label).not.toBe('');
+  });
+
+  it('lets every variant choose from the base catalogue, so one part can be sought for the whole family', () => {
+    const base = readScenarioFile(path('heron-base.json'));
+    for (const name of demoFiles) expect(readScenarioFile(path(name)).clocks, name).toEqual(base.clocks);
+  });
+
+  it('gives every fixed rate of the base catalogue a window of its guarded band (Vaughan et al. 1991)', () => {
+    // Guarded band 128–152 MHz: n = 2 allows 152–256 MHz, n = 3 allows 101.33–128 MHz, n = 5 allows 60.8–64 MHz.
     const base = readScenarioFile(path('heron-base.json'));
     const fL = base.wanted.low - base.guard.low;
     const fH = base.wanted.high + base.guard.high;
     const inSomeZone = (fs: number) =>
       Array.from({ length: Math.floor(fH / (fH - fL)) }, (_, i) => i + 1).some((n) => 2 * fH / n <= fs && (n === 1 || fs <= (2 * fL) / (n - 1)));
-    for (const clock of base.clocks) expect(inSomeZone(clock.rate), clock.label).toBe(true);
+    const { minRate, maxRate, clockDividers } = base.converter;
+    for (const part of base.clocks) {
+      if (part.derivation.kind === 'direct') expect(inSomeZone(part.frequency), part.label).toBe(true);
+      if (part.derivation.kind !== 'divider') continue;
+      // XO-G 491.52M is above the converter's 250 MS/s undivided; /2 (245.76 MHz, n = 2) and /4 (122.88 MHz, n = 3) remain.
+      const usable = clockDividers.filter((D) => part.frequency / D >= minRate && part.frequency / D <= maxRate);
+      expect(usable, part.label).toEqual([2, 4]);
+      for (const D of usable) expect(inSomeZone(part.frequency / D), `${part.label} / ${D}`).toBe(true);
+    }
+  });
+
+  it('lets the synthesiser lock inside its VCO range at rates the converter takes', () => {
+    const base = readScenarioFile(path('heron-base.json'));
+    const part = base.clocks.find((p) => p.derivation.kind === 'synthesiser')!;
+    const d = part.derivation as Extract<typeof part.derivation, { kind: 'synthesiser' }>;
+    const rates: number[] = [];
+    for (let N = d.n.min; N <= d.n.max; N += 1) {
+      for (let M = d.m.min; M <= d.m.max; M += 1) {
+        const vco = (part.frequency * N) / M;
+        if (d.vco && (vco < d.vco.low || vco > d.vco.high)) continue;
+        for (let D = d.d.min; D <= d.d.max; D += 1) if (vco / D >= base.converter.minRate && vco / D <= base.converter.maxRate) rates.push(vco / D);
+      }
+    }
+    // VCO 0.8–1.6 GHz: D = 4..8 give 100–400 MHz, of which 100–250 MHz is inside the SR-QC14's limits (D ≤ 3 gives ≥ 266.7 MHz).
+    expect(Math.min(...rates)).toBe(100e6);
+    expect(Math.max(...rates)).toBe(250e6);
   });
 
   it('narrows the channel and takes the guard as 20 % of its width', () => {

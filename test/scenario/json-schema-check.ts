@@ -2,7 +2,7 @@
  * A small JSON Schema (draft 2020-12) checker, written here independently of
  * zod, for the keywords the scenario schema uses: type, enum, const,
  * properties, required, additionalProperties, propertyNames, items,
- * prefixItems, minItems, maxItems, minimum, maximum, exclusiveMinimum,
+ * prefixItems, minItems, maxItems, uniqueItems, minimum, maximum, exclusiveMinimum,
  * exclusiveMaximum, pattern, anyOf, oneOf, not, if/then/else. Semantics as in JSON Schema
  * Validation 2020-12, sections 6.1–6.5, and Core 2020-12, section 10
  * (applicators). An unknown keyword makes it throw, so it cannot pass by
@@ -13,7 +13,9 @@ type Schema = Readonly<Record<string, unknown>>;
 
 const ANNOTATIONS = new Set(['description', 'default', 'examples', 'title', '$id', '$schema']);
 
-export function jsonSchemaAccepts(schema: Schema, value: unknown): boolean {
+export function jsonSchemaAccepts(schema: Schema | boolean, value: unknown): boolean {
+  // Boolean schemas (Core 2020-12, section 4.3.2): true accepts anything, false nothing (`items: false` closes a tuple).
+  if (typeof schema === 'boolean') return schema;
   for (const [keyword, argument] of Object.entries(schema)) {
     if (ANNOTATIONS.has(keyword)) continue;
     if (!keywordHolds(keyword, argument, schema, value)) return false;
@@ -55,6 +57,10 @@ function keywordHolds(keyword: string, argument: unknown, schema: Schema, value:
       return !list || list.length >= Number(argument);
     case 'maxItems':
       return !list || list.length <= Number(argument);
+    case 'uniqueItems':
+      // Validation 2020-12, section 6.4.3. Items compared as JSON text: exact for the lists of numbers the
+      // scenario schema asks it of (objects differing only in key order would count as different).
+      return argument !== true || !list || new Set(list.map((item) => JSON.stringify(item))).size === list.length;
     case 'minimum':
       return typeof value !== 'number' || value >= Number(argument);
     case 'maximum':

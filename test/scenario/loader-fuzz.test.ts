@@ -18,6 +18,9 @@ import { memoryFiles } from './memory-files.js';
 const BASE_TEXT = readFileSync(new URL('../../scenarios/heron-base.json', import.meta.url), 'utf8');
 const BASE = JSON.parse(BASE_TEXT) as Record<string, unknown>;
 
+/** Thousands of loads take 3–4 s alone and more while other suites share the two cores; vitest's 5 s default is too tight. */
+const FUZZ_TIMEOUT_MS = 30_000;
+
 type Outcome = { readonly accepted: true } | { readonly accepted: false; readonly error: ScenarioError };
 
 function outcome(load: () => unknown): Outcome {
@@ -81,13 +84,17 @@ const typo = (key: string) =>
     fc.nat().map((n) => (key.length < 2 ? key + 'x' : key.slice(0, n % key.length) + key.slice((n % key.length) + 1))),
   );
 
-const basePaths = allPaths(BASE);
+/** The demo base plus an IF shift (the demo files have none), so edits reach every kind of field. */
+const EDIT_BASE: Record<string, unknown> = { ...BASE, ifShift: { low: '-5M', high: '+2.5M' } };
+const basePaths = allPaths(EDIT_BASE);
 const baseEdit = fc.constantFrom(...basePaths).chain((path) =>
   fc.record({
     path: fc.constant(path),
     edit: fc.oneof(
       fc.jsonValue({ maxDepth: 2 }).map((value): Edit => ({ kind: 'set', value })),
-      fc.constantFrom<unknown>(0, -1, '', 'x', '10 mhz', '10%', null, true, [], {}, 1e308, '1e400', '-5M', '2.5G', '80 fs').map((value): Edit => ({ kind: 'set', value })),
+      fc
+        .constantFrom<unknown>(0, -1, '', 'x', '10 mhz', '10%', null, true, [], {}, 1e308, '1e400', '-5M', '2.5G', '80 fs', 1.5, [2, 1], [1, 2, 3], [1, 1], 'divider', 'synthesiser')
+        .map((value): Edit => ({ kind: 'set', value })),
       fc.constant<Edit>({ kind: 'drop' }),
       typo(String(path.at(-1) ?? 'name')).map((to): Edit => ({ kind: 'rename', to })),
       fc.tuple(fc.string({ maxLength: 12 }), fc.jsonValue({ maxDepth: 1 })).map(([key, value]): Edit => ({ kind: 'add', key, value })),
@@ -104,14 +111,14 @@ describe('loader fuzz', () => {
       }),
       { numRuns: 4000 },
     );
-  });
+  }, FUZZ_TIMEOUT_MS);
 
   it('random edits of the demo base: accepted only what the JSON Schema accepts, each issue at a real place', () => {
     let refused = 0;
     let accepted = 0;
     fc.assert(
       fc.property(fc.array(baseEdit, { minLength: 1, maxLength: 3 }), (edits) => {
-        const document = edits.reduce<unknown>((doc, { path, edit }) => edited(doc, path, edit), BASE);
+        const document = edits.reduce<unknown>((doc, { path, edit }) => edited(doc, path, edit), EDIT_BASE);
         const result = outcome(() => scenarioFromDocument(document, 'heron-base.json'));
         if (result.accepted) {
           accepted += 1;
@@ -129,7 +136,7 @@ describe('loader fuzz', () => {
     // Both sides exercised: many refusals, and enough acceptances for the schema comparison to mean something.
     expect(refused).toBeGreaterThan(1000);
     expect(accepted).toBeGreaterThan(100);
-  });
+  }, FUZZ_TIMEOUT_MS);
 
   it('random damage to the text of a variant and its base: syntax errors carry a line and column', () => {
     const damage = fc.tuple(fc.nat(), fc.nat({ max: 3 }), fc.constantFrom('', ',', '}', '"', ':', '{', '[', 'x', '\n', '\\'));

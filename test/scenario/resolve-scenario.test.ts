@@ -55,7 +55,7 @@ describe('extends', () => {
     );
     expect(scenario.name).toBe('X');
     expect(scenario.requirements).toEqual({ margin: 3e6, rejection: 10, tolerancePpm: 50 });
-    expect(scenario.clocks).toHaveLength(4);
+    expect(scenario.clocks).toHaveLength(7);
   });
 
   it('replaces an object whose kind differs (a table filter over a Butterworth one)', () => {
@@ -162,8 +162,8 @@ const CASES: Record<string, Case> = {
     words: "'m' is milli",
   },
   'negative frequency': { variant: { requirements: { margin: -1 } }, path: 'requirements.margin', words: 'not negative' },
-  'zero rate': { variant: { clocks: [{ label: 'z', rate: 0, tolerancePpm: 1 }] }, path: 'clocks[0].rate', words: 'a frequency above zero (got 0)' },
-  'negative tolerance': { variant: { clocks: [{ label: 'z', rate: '1M', tolerancePpm: -1 }] }, path: 'clocks[0].tolerancePpm', words: 'not negative' },
+  'zero clock frequency': { variant: { clocks: [{ label: 'z', frequency: 0, tolerance: 1 }] }, path: 'clocks[0].frequency', words: 'a frequency above zero (got 0)' },
+  'negative tolerance': { variant: { clocks: [{ label: 'z', frequency: '1M', tolerance: -1 }] }, path: 'clocks[0].tolerance', words: 'not negative' },
   'bad time': { variant: { converter: { apertureJitter: '80 f' } }, path: 'converter.apertureJitter', words: 'e.g. 80 fs' },
   'bad guard': { variant: { guard: 'wide' } , path: 'guard', words: 'a percentage of the wanted width' },
   'bad guard type': { variant: { guard: true }, path: 'guard', words: 'a guard: a frequency or percentage for both sides' },
@@ -172,7 +172,7 @@ const CASES: Record<string, Case> = {
   'harmonicOrder out of range': { variant: { harmonicOrder: 16 }, path: 'harmonicOrder', words: 'a whole number from 2 to 15 (got 16)' },
   'spur harmonics out of range': { variant: { boardSpurs: [{ label: 'a', frequency: '1M', level: -90, harmonics: 0 }] }, path: 'boardSpurs[0].harmonics', words: 'from 1 to 20' },
   'bad coupling': { variant: { boardSpurs: [{ label: 'a', frequency: '1M', level: -90, coupling: 'inside' }] }, path: 'boardSpurs[0].coupling', words: '"before-filter", "after-filter"' },
-  'blank label': { variant: { clocks: [{ label: ' ', rate: '1M', tolerancePpm: 1 }] }, path: 'clocks[0].label', words: 'not blank' },
+  'blank label': { variant: { clocks: [{ label: ' ', frequency: '1M', tolerance: 1 }] }, path: 'clocks[0].label', words: 'not blank' },
   'missing key': { variant: { requirements: { rejection: null } }, path: 'requirements.rejection', words: 'a number (got null)' },
   'wanted level above full scale': { variant: { wanted: { weakestLevel: 3 } }, path: 'wanted.weakestLevel', words: 'at most 0' },
   'bad goal word': { variant: { goal: 'fastest' }, path: 'goal', words: 'one of "widest-margin", "lowest-rate", "quarter-rate" (got "fastest")' },
@@ -203,7 +203,7 @@ const CASES: Record<string, Case> = {
   'passLow not below passHigh': { variant: { filter: { passLow: '160M' } }, path: 'filter.passHigh', words: 'above passLow (160 MHz) (got 152 MHz)' },
   'strongest below weakest': { variant: { wanted: { strongestLevel: -80 } }, path: 'wanted.strongestLevel', words: 'at or above weakestLevel (-70 dBFS) (got -80 dBFS)' },
   'label used twice across lists': {
-    variant: { clocks: [{ label: 'LO-1 leakage', rate: '100M', tolerancePpm: 20 }] },
+    variant: { clocks: [{ label: 'LO-1 leakage', frequency: '100M', tolerance: 20 }] },
     path: 'clocks[0].label',
     words: 'boardSpurs[3].label is already "LO-1 leakage"',
   },
@@ -212,7 +212,83 @@ const CASES: Record<string, Case> = {
     path: 'neighbours[1].label',
     words: 'neighbours[0].label is already "n"',
   },
+  ...CLOCK_CASES(),
 };
+
+/** Refusals of the clock-planning fields: parts, synthesiser settings, converter dividers, IF shift. */
+function CLOCK_CASES(): Record<string, Case> {
+  const part = (fields: Record<string, unknown>) => ({ clocks: [{ label: 'P', frequency: '10M', tolerance: 2, ...fields }] });
+  const synth = (fields: Record<string, unknown>) => part({ derive: { kind: 'synthesiser', n: [1, 128], m: [1, 16], ...fields } });
+  return {
+    'old clock field name, with the new one suggested': {
+      variant: { clocks: [{ label: 'P', frequency: '10M', tolerancePpm: 2 }] },
+      path: 'clocks[0].tolerancePpm',
+      kind: 'unknown-key',
+      words: 'did you mean "tolerance"?',
+    },
+    'tolerance breakdown missing a contribution': {
+      variant: part({ tolerance: { initial: 1, temperature: 2 } }),
+      path: 'clocks[0].tolerance.ageing',
+      words: 'expected a number (got nothing)',
+    },
+    'negative tolerance contribution': { variant: part({ tolerance: { initial: 1, temperature: -2, ageing: 0 } }), path: 'clocks[0].tolerance.temperature', words: 'not negative (got -2)' },
+    'unknown key in a tolerance breakdown': {
+      variant: part({ tolerance: { initial: 1, temperature: 2, aging: 0 } }),
+      path: 'clocks[0].tolerance.aging',
+      kind: 'unknown-key',
+      words: 'did you mean "ageing"?',
+    },
+    'tolerance as text': { variant: part({ tolerance: '20 ppm' }), path: 'clocks[0].tolerance', words: 'a tolerance in ppm, or { "initial": ..., "temperature": ..., "ageing": ... }' },
+    'bad jitter': { variant: part({ jitter: '90 f' }), path: 'clocks[0].jitter', words: 'a time with its unit, e.g. 90 fs (got "90 f")' },
+    'note not text': { variant: part({ note: 3 }), path: 'clocks[0].note', words: 'expected text (got 3)' },
+    'bad derivation word': { variant: part({ derive: 'divided' }), path: 'clocks[0].derive', words: 'one of "direct", "divider" (got "divided")' },
+    'bad derivation kind': { variant: part({ derive: { kind: 'pll' } }), path: 'clocks[0].derive.kind', words: 'one of "direct", "divider", "synthesiser" (got "pll")' },
+    'derivation of the wrong type': { variant: part({ derive: 4 }), path: 'clocks[0].derive', words: 'a derivation: "direct", "divider" or { "kind": "synthesiser"' },
+    'unknown key in a synthesiser, with a suggestion': {
+      variant: synth({ vcoo: { low: '1G', high: '2G' } }),
+      path: 'clocks[0].derive.vcoo',
+      kind: 'unknown-key',
+      words: 'did you mean "vco"?',
+    },
+    'unknown key in a VCO range': { variant: synth({ vco: { low: '1G', hihg: '2G' } }), path: 'clocks[0].derive.vco.hihg', kind: 'unknown-key', words: 'did you mean "high"?' },
+    'synthesiser without N': { variant: part({ derive: { kind: 'synthesiser', m: 1 } }), path: 'clocks[0].derive.n', words: 'got nothing' },
+    'setting of zero': { variant: synth({ n: 0 }), path: 'clocks[0].derive.n', words: 'a whole number 1 or more (got 0)' },
+    'range end of zero': { variant: synth({ m: [0, 16] }), path: 'clocks[0].derive.m[0]', words: 'a whole number 1 or more (got 0)' },
+    'range not whole': { variant: synth({ d: 1.5 }), path: 'clocks[0].derive.d', words: 'a whole number 1 or more, or a [min, max] pair of them (got 1.5)' },
+    'range of three numbers': { variant: synth({ n: [1, 2, 3] }), path: 'clocks[0].derive.n', words: 'a list of at most 2 entries' },
+    'range as text': { variant: synth({ n: '1-128' }), path: 'clocks[0].derive.n', words: 'a [min, max] pair of them (got "1-128")' },
+    'range min above max': { variant: synth({ n: [128, 1] }), path: 'clocks[0].derive.n[1]', words: 'a whole number at or above min (128) (got 1)' },
+    'VCO low equal to high': { variant: synth({ vco: { low: '2G', high: '2G' } }), path: 'clocks[0].derive.vco.high', words: 'a frequency above low (2 GHz) (got 2 GHz)' },
+    'VCO low above high': { variant: synth({ vco: { low: '2.4G', high: '1.2G' } }), path: 'clocks[0].derive.vco.high', words: 'a frequency above low (2.4 GHz) (got 1.2 GHz)' },
+    'VCO edge missing': { variant: synth({ vco: { low: '1G' } }), path: 'clocks[0].derive.vco.high', words: 'got nothing' },
+    'repeated clock divider': {
+      variant: { converter: { clockDividers: [1, 2, 4, 2] } },
+      path: 'converter.clockDividers[3]',
+      words: 'a divider not listed already (clockDividers[1] is 2) (got 2)',
+    },
+    'clock divider of zero': { variant: { converter: { clockDividers: [0, 1] } }, path: 'converter.clockDividers[0]', words: 'a whole number 1 or more (got 0)' },
+    'fractional clock divider': { variant: { converter: { clockDividers: [1, 2.5] } }, path: 'converter.clockDividers[1]', words: 'a whole number 1 or more (got 2.5)' },
+    'no clock dividers': { variant: { converter: { clockDividers: [] } }, path: 'converter.clockDividers', words: 'at least one clock divider' },
+    'clock dividers not a list': { variant: { converter: { clockDividers: 2 } }, path: 'converter.clockDividers', words: 'a list of whole-number clock dividers' },
+    'IF shift low above high': { variant: { ifShift: { low: '2M', high: '-2M' } }, path: 'ifShift.high', words: 'a shift at or above low (2 MHz) (got -2 MHz)' },
+    'IF shift with two signs': { variant: { ifShift: { low: '--5M', high: '5M' } }, path: 'ifShift.low', words: 'at most one sign' },
+    'IF shift sign alone': { variant: { ifShift: { low: '-', high: '5M' } }, path: 'ifShift.low', words: 'a frequency such as 70M' },
+    'IF shift in milli': { variant: { ifShift: { low: '-5m', high: '5M' } }, path: 'ifShift.low', words: "'m' is milli" },
+    'IF shift of the wrong type': { variant: { ifShift: { low: true, high: '5M' } }, path: 'ifShift.low', words: 'a frequency, signed' },
+    'IF shift edge missing': { variant: { ifShift: { low: '-5M' } }, path: 'ifShift.high', words: 'got nothing' },
+    'IF shift below 0 Hz': {
+      variant: { ifShift: { low: '-131M', high: 0 } },
+      path: 'ifShift.low',
+      words: 'a shift that keeps the wanted band at or above 0 Hz (at least -130 MHz) (got -131 MHz)',
+    },
+    'IF shift above the input bandwidth': {
+      variant: { ifShift: { low: 0, high: '501M' } },
+      path: 'ifShift.high',
+      words: "within the converter's input bandwidth (converter.inputBandwidth 650 MHz; at most 500 MHz) (got 501 MHz)",
+    },
+    'unknown key in an IF shift': { variant: { ifShift: { low: 0, high: 0, center: 0 } }, path: 'ifShift.center', kind: 'unknown-key', words: 'expected one of the keys low, high' },
+  };
+}
 
 describe('validation errors', () => {
   it.each(Object.entries(CASES))('%s', (_name, { variant, path, kind, words }) => {
@@ -242,6 +318,96 @@ describe('validation errors', () => {
     expect(error.where).toBe('s/v.json: converter.bits');
     expect(error.expected).toBe('a whole number from 1 to 32');
     expect(error.received).toBe('0');
+  });
+});
+
+describe('clock parts, converter dividers and IF shift', () => {
+  const onePart = (fields: Record<string, unknown>) => loadVariant(over({ clocks: [{ label: 'P', frequency: '10M', tolerance: 2, ...fields }] })).clocks[0]!;
+
+  it('fills a part written with the least: direct, no jitter, no note, one tolerance figure', () => {
+    expect(onePart({})).toEqual({
+      label: 'P',
+      frequency: 10e6,
+      tolerancePpm: 2,
+      toleranceBreakdown: null,
+      jitter: null,
+      note: '',
+      derivation: { kind: 'direct' },
+    });
+  });
+
+  it('plans for the sum of a tolerance breakdown and keeps the contributions', () => {
+    // ±10 initial, ±15 over temperature, ±5 ageing: the part may be off by up to ±30 ppm (worst case adds).
+    const part = onePart({ tolerance: { initial: 10, temperature: 15, ageing: 5 } });
+    expect(part.tolerancePpm).toBe(30);
+    expect(part.toleranceBreakdown).toEqual({ initial: 10, temperature: 15, ageing: 5 });
+  });
+
+  it('reads jitter in fs or ps and keeps the note', () => {
+    expect(onePart({ jitter: '90 fs', note: 'in stock' })).toMatchObject({ jitter: 90e-15, note: 'in stock' });
+    expect(onePart({ jitter: '0.3 ps' }).jitter).toBeCloseTo(0.3e-12, 27);
+    expect(onePart({ jitter: null }).jitter).toBeNull();
+  });
+
+  it('takes a derivation as a word or as an object of the same kind', () => {
+    expect(onePart({ derive: 'divider' }).derivation).toEqual({ kind: 'divider' });
+    expect(onePart({ derive: { kind: 'divider' } }).derivation).toEqual({ kind: 'divider' });
+    expect(onePart({ derive: { kind: 'direct' } }).derivation).toEqual({ kind: 'direct' });
+  });
+
+  it('reads synthesiser ranges, a single integer as a range of one, D defaulting to 1 and no VCO range', () => {
+    expect(onePart({ derive: { kind: 'synthesiser', n: 40, m: [1, 16] } }).derivation).toEqual({
+      kind: 'synthesiser',
+      n: { min: 40, max: 40 },
+      m: { min: 1, max: 16 },
+      d: { min: 1, max: 1 },
+      vco: null,
+    });
+    expect(onePart({ derive: { kind: 'synthesiser', n: [1, 128], m: 2, d: [2, 2], vco: { low: '2.4G', high: '3.2G' } } }).derivation).toEqual({
+      kind: 'synthesiser',
+      n: { min: 1, max: 128 },
+      m: { min: 2, max: 2 },
+      d: { min: 2, max: 2 },
+      vco: { low: 2.4e9, high: 3.2e9 },
+    });
+  });
+
+  it('sorts the converter clock dividers and defaults them to [1]', () => {
+    expect(loadVariant(over({ converter: { clockDividers: [4, 1, 2] } })).converter.clockDividers).toEqual([1, 2, 4]);
+    const { clockDividers: _given, ...converter } = BASE.converter as Record<string, unknown>;
+    expect(scenarioFromDocument({ ...BASE, converter }, 'b.json').converter.clockDividers).toEqual([1]);
+  });
+
+  it('has no IF shift unless one is written', () => {
+    expect(loadVariant(over({})).ifShift).toBeNull();
+  });
+
+  it.each([
+    [{ low: '-5M', high: '5M' }, -5e6, 5e6],
+    [{ low: '−2.5 MHz', high: '+2.5 MHz' }, -2.5e6, 2.5e6],
+    [{ low: -1e6, high: 250e3 }, -1e6, 250e3],
+    [{ low: '- 300k', high: '-100k' }, -300e3, -100e3],
+    [{ low: '3M', high: '3M' }, 3e6, 3e6],
+  ])('accepts the IF shift %j', (ifShift, low, high) => {
+    expect(loadVariant(over({ ifShift })).ifShift).toEqual({ low, high });
+  });
+
+  it('reads a shift of minus zero as zero, so it writes back the same', () => {
+    const shift = loadVariant(over({ ifShift: { low: '-0', high: -0 } })).ifShift!;
+    expect(Object.is(shift.low, 0)).toBe(true);
+    expect(Object.is(shift.high, 0)).toBe(true);
+  });
+
+  it('merges an IF shift key by key over the base, and null removes it', () => {
+    const files = { 's/mid.json': over({ ifShift: { low: '-5M', high: '5M' } }) };
+    expect(loadVariant({ extends: 'mid.json', ifShift: { high: '1M' } }, files).ifShift).toEqual({ low: -5e6, high: 1e6 });
+    expect(loadVariant({ extends: 'mid.json', ifShift: null }, files).ifShift).toBeNull();
+  });
+
+  it('charges a shift that takes the band past the input bandwidth to the variant that moved the band', () => {
+    const files = { 's/mid.json': over({ ifShift: { low: 0, high: '400M' } }) };
+    const error = refusal(() => loadVariant({ extends: 'mid.json', wanted: { center: '300M' } }, files));
+    expect(error.issues[0]).toMatchObject({ file: 's/v.json', path: 'ifShift.high' });
   });
 });
 

@@ -1,4 +1,4 @@
-import type { Scenario } from '../../src/scenario/scenario.js';
+import type { ClockPart, IntegerRange, Scenario } from '../../src/scenario/scenario.js';
 
 /**
  * Writes a validated Scenario back in the file format, every frequency as a
@@ -17,13 +17,33 @@ export function scenarioDocument(scenario: Scenario): Record<string, unknown> {
       harmonics: Object.fromEntries([...converter.harmonics].map(([order, level]) => [String(order), level])),
       rateSpurs: { ...converter.rateSpurs },
       interleave: converter.interleave && { ...converter.interleave },
+      clockDividers: [...converter.clockDividers],
     },
     harmonicOrder: scenario.harmonicOrder,
     boardSpurs: scenario.boardSpurs.map((spur) => ({ ...spur })),
     neighbours: scenario.neighbours.map((neighbour) => ({ ...neighbour })),
     filter: filter === null ? null : filter.kind === 'butterworth' ? { ...filter } : { kind: 'table', points: filter.points.map((p) => [p.frequency, p.attenuation]) },
     requirements: { ...scenario.requirements },
-    clocks: scenario.clocks.map((clock) => ({ ...clock })),
+    clocks: scenario.clocks.map(clockDocument),
     goal: { ...scenario.goal },
+    ifShift: scenario.ifShift && { ...scenario.ifShift },
   };
 }
+
+/** One clock part in the file format: the breakdown when one was listed, else the total; the derivation as an object. */
+export function clockDocument(part: ClockPart): Record<string, unknown> {
+  const { derivation } = part;
+  return {
+    label: part.label,
+    frequency: part.frequency,
+    tolerance: part.toleranceBreakdown ? { ...part.toleranceBreakdown } : part.tolerancePpm,
+    jitter: part.jitter,
+    note: part.note,
+    derive:
+      derivation.kind === 'synthesiser'
+        ? { kind: 'synthesiser', n: pair(derivation.n), m: pair(derivation.m), d: pair(derivation.d), vco: derivation.vco && { ...derivation.vco } }
+        : { kind: derivation.kind },
+  };
+}
+
+const pair = (range: IntegerRange): [number, number] => [range.min, range.max];

@@ -62,6 +62,33 @@ describe('ifzone schema', () => {
     expect(jsonSchemaAccepts(scenarioJsonSchema(), { extends: 'b.json', clocks: [{ label: 'x' }] })).toBe(false);
   });
 
+  it('holds the clock fields to their shapes, and a variant to none of the IF shift', () => {
+    const complete = (fields: object) =>
+      jsonSchemaAccepts(scenarioJsonSchema(), {
+        name: 'n',
+        wanted: { low: 1, high: 2, weakestLevel: -60 },
+        converter: { label: 'c', minRate: 1, maxRate: 2, inputBandwidth: 3, bits: 8, harmonics: {}, clockDividers: [1, 2] },
+        requirements: { margin: 0, rejection: 0 },
+        ...fields,
+      });
+    const part = (fields: object) => complete({ clocks: [{ label: 'P', frequency: '10M', tolerance: 2, ...fields }] });
+    expect(complete({})).toBe(true);
+    expect(complete({ ifShift: { low: '-1M', high: '1M' } })).toBe(true);
+    expect(complete({ ifShift: { low: '-1M' } })).toBe(false);
+    expect(jsonSchemaAccepts(scenarioJsonSchema(), { extends: 'b.json', ifShift: { high: '1M' } })).toBe(true);
+    expect(jsonSchemaAccepts(scenarioJsonSchema(), { extends: 'b.json', converter: { clockDividers: [1, 1] } })).toBe(false);
+    expect(jsonSchemaAccepts(scenarioJsonSchema(), { extends: 'b.json', converter: { clockDividers: [0] } })).toBe(false);
+    expect(part({ tolerance: { initial: 1, temperature: 2, ageing: 3 } })).toBe(true);
+    expect(part({ tolerance: { initial: 1, temperature: 2 } })).toBe(false);
+    expect(part({ derive: 'divider', jitter: '90 fs', note: 'x' })).toBe(true);
+    expect(part({ derive: { kind: 'synthesiser', n: [1, 128], m: 4, d: [1, 8], vco: { low: '1G', high: '2G' } } })).toBe(true);
+    expect(part({ derive: { kind: 'synthesiser', n: [1, 2, 3], m: 4 } })).toBe(false);
+    expect(part({ derive: { kind: 'synthesiser', n: [0, 2], m: 4 } })).toBe(false);
+    expect(part({ derive: { kind: 'synthesiser', n: 2 } })).toBe(false);
+    expect(part({ derive: { kind: 'divider', n: 2 } })).toBe(false);
+    expect(part({ rate: '10M' })).toBe(false);
+  });
+
   it('holds a variant to one wanted-band form, with null clearing the base form', () => {
     const variant = (wanted: object) => jsonSchemaAccepts(scenarioJsonSchema(), { extends: 'b.json', wanted });
     expect(variant({ low: '1M', high: '2M', center: null, width: null })).toBe(true);
@@ -79,6 +106,59 @@ describe('ifzone schema', () => {
     expect(complete({ low: 1 })).toBe(false);
   });
 });
+
+/** A shift of k kHz as a person may write it: signed text with a prefix (ASCII or Unicode minus), or a number of hertz. */
+const signedKilohertz = (k: number) =>
+  k < 0 ? fc.constantFrom<string | number>(k * 1e3, `-${-k}k`, `−${-k} kHz`, `- ${-k}k`) : fc.constantFrom<string | number>(k * 1e3, `${k}k`, `+${k}k`, `${k / 1000}M`);
+
+/** An integer range written as one number or as a pair, with the range it must read as. */
+const rangeArb = (most: number) =>
+  fc.tuple(fc.integer({ min: 1, max: most }), fc.integer({ min: 0, max: most })).chain(([min, extra]) =>
+    fc.constantFrom<{ written: number | [number, number]; range: { min: number; max: number } }>(
+      { written: [min, min + extra], range: { min, max: min + extra } },
+      ...(extra === 0 ? [{ written: min, range: { min, max: min } }] : []),
+    ),
+  );
+
+/** A clock part's fields as written (all but label and frequency), with what the loader must make of them. */
+const partArb = fc
+  .record({
+    mhz: fc.integer({ min: 1, max: 4000 }).map((n) => n / 4),
+    tolerance: fc.oneof(fc.integer({ min: 0, max: 100 }), fc.record({ initial: fc.integer({ min: 0, max: 50 }), temperature: fc.integer({ min: 0, max: 50 }), ageing: fc.integer({ min: 0, max: 20 }) })),
+    jitterFs: fc.option(fc.integer({ min: 0, max: 2000 }), { nil: null }),
+    note: fc.option(fc.string({ maxLength: 20 }), { nil: undefined }),
+    derive: fc.oneof(
+      fc.constantFrom('direct', 'divider', undefined).map((word) => ({ written: word, derivation: { kind: word ?? 'direct' } })),
+      fc.constantFrom('direct', 'divider').map((kind) => ({ written: { kind }, derivation: { kind } })),
+      fc
+        .record({ n: rangeArb(512), m: rangeArb(16), d: fc.option(rangeArb(8), { nil: undefined }), vco: fc.option(fc.tuple(fc.integer({ min: 1, max: 3000 }), fc.integer({ min: 1, max: 1000 })), { nil: undefined }) })
+        .map(({ n, m, d, vco }) => ({
+          written: {
+            kind: 'synthesiser',
+            n: n.written,
+            m: m.written,
+            ...(d ? { d: d.written } : {}),
+            ...(vco ? { vco: { low: `${vco[0]}M`, high: `${vco[0] + vco[1]}M` } } : {}),
+          },
+          derivation: { kind: 'synthesiser', n: n.range, m: m.range, d: d?.range ?? { min: 1, max: 1 }, vco: vco ? { low: vco[0] * 1e6, high: (vco[0] + vco[1]) * 1e6 } : null },
+        })),
+    ),
+  })
+  .map(({ mhz, tolerance, jitterFs, note, derive }) => ({
+    mhz,
+    written: {
+      tolerance,
+      ...(jitterFs === null ? {} : { jitter: `${jitterFs} fs` }),
+      ...(note === undefined ? {} : { note }),
+      ...(derive.written === undefined ? {} : { derive: derive.written }),
+    },
+    expected: {
+      tolerancePpm: typeof tolerance === 'number' ? tolerance : tolerance.initial + tolerance.temperature + tolerance.ageing,
+      toleranceBreakdown: typeof tolerance === 'number' ? null : tolerance,
+      jitterFs,
+      derivation: derive.derivation,
+    },
+  }));
 
 describe('round trip', () => {
   it.each(['heron-base.json', 'heron-narrow.json', 'heron-wide.json', 'heron-lowif.json'])('%s → document in Hz → the same scenario', (name) => {
@@ -105,6 +185,9 @@ describe('round trip', () => {
         spurs: fc.array(fc.record({ f: mhz, level, harmonics: fc.integer({ min: 1, max: 20 }), before: fc.boolean() }), { maxLength: 4 }),
         order: fc.integer({ min: 1, max: 20 }),
         goal: fc.constantFrom<unknown>('widest-margin', 'lowest-rate', 'quarter-rate', { kind: 'decimation', outputRate: '30.72M' }),
+        dividers: fc.option(fc.uniqueArray(fc.integer({ min: 1, max: 64 }), { minLength: 1, maxLength: 5 }), { nil: undefined }),
+        parts: fc.array(partArb, { maxLength: 4 }),
+        shift: fc.option(fc.tuple(fc.integer({ min: -250, max: 250 }), fc.integer({ min: -250, max: 250 })), { nil: undefined }),
       })
       .chain((r) =>
         fc.record({
@@ -112,10 +195,12 @@ describe('round trip', () => {
           lowText: written(r.low),
           highText: written(r.low + r.width),
           spurTexts: fc.tuple(...r.spurs.map((s) => written(s.f))),
+          partTexts: fc.tuple(...r.parts.map((part) => written(part.mhz))),
+          shiftTexts: r.shift ? fc.tuple(...[Math.min(...r.shift), Math.max(...r.shift)].map(signedKilohertz)) : fc.constant(undefined),
         }),
       );
     fc.assert(
-      fc.property(scenarioArb, ({ r, lowText, highText, spurTexts }) => {
+      fc.property(scenarioArb, ({ r, lowText, highText, spurTexts, partTexts, shiftTexts }) => {
         const document = {
           name: 'Heron fuzz',
           wanted: { low: lowText, high: highText, weakestLevel: -80 },
@@ -133,8 +218,24 @@ describe('round trip', () => {
           filter: { kind: 'butterworth', order: r.order, passLow: lowText, passHigh: `${r.low + r.width + 1}M` },
           requirements: { margin: '100k', rejection: 6 },
           goal: r.goal,
+          clocks: r.parts.map((part, i) => ({ label: `part ${i}`, frequency: partTexts[i], ...part.written })),
+          ...(shiftTexts ? { ifShift: { low: shiftTexts[0], high: shiftTexts[1] } } : {}),
         };
+        if (r.dividers) (document.converter as Record<string, unknown>).clockDividers = r.dividers;
         const scenario = scenarioFromDocument(document, 'fuzz.json');
+        expect(scenario.converter.clockDividers).toEqual(r.dividers ? [...r.dividers].sort((a, b) => a - b) : [1]);
+        expect(scenario.clocks).toHaveLength(r.parts.length);
+        scenario.clocks.forEach((part, i) => {
+          const { expected, mhz } = r.parts[i]!;
+          expect(part.frequency).toBeCloseTo(mhz * 1e6, 3);
+          expect(part.tolerancePpm).toBe(expected.tolerancePpm);
+          expect(part.toleranceBreakdown).toEqual(expected.toleranceBreakdown);
+          expect(part.derivation).toEqual(expected.derivation);
+          if (expected.jitterFs === null) expect(part.jitter).toBeNull();
+          else expect(part.jitter).toBeCloseTo(expected.jitterFs * 1e-15, 27);
+        });
+        if (r.shift) expect(scenario.ifShift).toEqual({ low: Math.min(...r.shift) * 1e3, high: Math.max(...r.shift) * 1e3 });
+        else expect(scenario.ifShift).toBeNull();
         expect(scenario.wanted.low).toBeCloseTo(r.low * 1e6, 3);
         expect(scenario.guard.low).toBeCloseTo((r.guardPercent / 100) * r.width * 1e6, 3);
         expect(scenario.converter.apertureJitter).toBeCloseTo(r.jitterFs * 1e-15, 27);
