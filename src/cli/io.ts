@@ -2,6 +2,8 @@
 export interface Io {
   readonly out: (text: string) => void;
   readonly err: (text: string) => void;
+  /** Progress notes for long runs; present only when stderr is a terminal. */
+  readonly progress?: (text: string) => void;
 }
 
 /** Exit statuses: answered, a valid question with no answer, bad input or usage. */

@@ -5,6 +5,7 @@ import { addWindowsCommand } from './commands/windows-command.js';
 import { addAliasCommand } from './commands/alias-command.js';
 import { addSolveCommand } from './commands/solve-command.js';
 import { addSchemaCommand } from './commands/schema-command.js';
+import { addCompareCommand } from './commands/compare-command.js';
 
 const VERSION = '0.1.0';
 
@@ -40,6 +41,7 @@ export async function runCli(args: readonly string[], io: Io): Promise<ExitCode>
   addWindowsCommand(program, io, settle);
   addAliasCommand(program, io, settle);
   addSolveCommand(program, io, settle);
+  addCompareCommand(program, io, settle);
   addSchemaCommand(program, io, settle);
   try {
     await program.parseAsync(args.filter((a) => a !== '--debug'), { from: 'user' });

@@ -16,6 +16,20 @@ export function readScenarioFile(path: string): Scenario {
   return resolveScenario(path, readTextFile);
 }
 
+/**
+ * Reads a scenario file like readScenarioFile, and also names every file read
+ * on the way (the file and its extends chain), so that a command can refuse
+ * to write over its own inputs.
+ */
+export function readScenarioWithInputs(path: string): { scenario: Scenario; inputs: string[] } {
+  const inputs: string[] = [];
+  const scenario = resolveScenario(path, (file) => {
+    inputs.push(file);
+    return readTextFile(file);
+  });
+  return { scenario, inputs };
+}
+
 const REASONS: Readonly<Record<string, string>> = {
   ENOENT: 'no such file',
   EISDIR: 'a directory, not a file',

@@ -6,16 +6,19 @@ import { solvePlan } from '../../solve/solve-plan.js';
 import { planReport } from '../../report/plan-report.js';
 import { planTable } from '../../output/plan-table.js';
 import { toJson } from '../../output/json.js';
-import { readScenarioFile } from '../read-scenario.js';
+import { readScenarioWithInputs } from '../read-scenario.js';
+import { writeFileSafely } from '../safe-write.js';
+import { planPicturesSvg } from '../../pictures/plan-pictures.js';
 import { EXIT, type ExitCode, type Io } from '../io.js';
 import type { SolveOptions } from './solve-command.js';
 
-/** Reads, solves and prints one scenario; exit 0 when a candidate passes, 1 when none does. */
+/** Reads, solves and prints one scenario (and draws it with --svg); exit 0 when a candidate passes, 1 when none does. */
 export function runSolve(file: string, options: SolveOptions, io: Io): ExitCode {
-  const scenario = readScenarioFile(file);
+  const { scenario, inputs } = readScenarioWithInputs(file);
   const goal = goalFromOptions(options, scenario);
   const context = contextFromScenario({ ...scenario, goal });
   const report = planReport(scenario.name, context, solvePlan(context));
+  if (options.svg !== undefined) writeFileSafely(options.svg, planPicturesSvg(report), { force: options.force === true, inputs });
   io.out(options.json ? toJson(report) : planTable(report));
   return report.best === null ? EXIT.noAnswer : EXIT.answered;
 }

@@ -1,0 +1,131 @@
+import { hz, type Db, type Hz, type Ppm, type Seconds } from '../units/quantities.js';
+import type { ClockPart } from '../scenario/scenario.js';
+import type { PartPlan, RateSettings } from '../clocks/part-plan.js';
+import { PAPER_DESIGN_CAUTION } from './caution.js';
+
+/** Why a part has no verdict on a variant. */
+export const NOT_PLANNED = 'no rate of this part inside the converter\'s rate range';
+
+/** One part judged on one variant; rate, settings and zone are null when the part gives no rate the converter accepts. */
+export interface VariantVerdict {
+  readonly variant: string;
+  readonly rate: Hz | null;
+  readonly settings: RateSettings | null;
+  readonly zone: number | null;
+  readonly inverted: boolean | null;
+  readonly worstMargin: Hz;
+  /** Margin minus requirement of the limiting check, Hz: what parts are ranked by. */
+  readonly worstSlack: Hz;
+  readonly limitedBy: string;
+  /** Null when the nominal rate fails. */
+  readonly headroomPpm: { readonly down: Ppm; readonly up: Ppm } | null;
+  readonly jitterSnrDb: Db | null;
+  readonly channelSnrDb: Db | null;
+  readonly pass: boolean;
+}
+
+export interface ComparedPart {
+  readonly label: string;
+  readonly frequency: Hz;
+  readonly tolerancePpm: Ppm;
+  readonly jitter: Seconds | null;
+  readonly note: string;
+  readonly perVariant: readonly VariantVerdict[];
+  readonly passesAll: boolean;
+  /** The least worst margin over the variants, Hz, and the variant where it occurs. */
+  readonly familyWorstMargin: Hz;
+  readonly familyLimitedBy: string;
+}
+
+/** The answer to "which part, with which settings, for these variants?": the `compare` JSON contract. */
+export interface CompareReport {
+  readonly variants: readonly string[];
+  /** Ranked: passing every variant first, then by the worst slack over the variants. */
+  readonly parts: readonly ComparedPart[];
+  /** Labels of the parts that pass every variant, best first. */
+  readonly family: readonly string[];
+  readonly caution: string;
+}
+
+/** One variant's plans, one per part, in any order, and the parts it could not plan. */
+export interface VariantPlans {
+  readonly name: string;
+  readonly plans: readonly PartPlan[];
+  readonly unplanned: readonly ClockPart[];
+}
+
+/**
+ * Compares clock parts across variants. The caller plans the union of the
+ * catalogues on each variant; a part that a variant cannot plan (no rate the
+ * converter accepts) fails that variant, and so the family.
+ *
+ * @param variants each variant's name and its part plans
+ */
+export function compareReport(variants: readonly VariantPlans[]): CompareReport {
+  const parts = new Map<string, ClockPart>();
+  for (const v of variants) for (const part of [...v.plans.map((p) => p.part), ...v.unplanned]) if (!parts.has(part.label)) parts.set(part.label, part);
+  const compared = [...parts.values()].map((part) => comparedPart(part, variants));
+  const worstSlack = (c: ComparedPart) => Math.min(...c.perVariant.map((v) => v.worstSlack));
+  compared.sort((a, b) => Number(b.passesAll) - Number(a.passesAll) || worstSlack(b) - worstSlack(a));
+  return {
+    variants: variants.map((v) => v.name),
+    parts: compared,
+    family: compared.filter((c) => c.passesAll).map((c) => c.label),
+    caution: PAPER_DESIGN_CAUTION,
+  };
+}
+
+function comparedPart(part: ClockPart, variants: readonly VariantPlans[]): ComparedPart {
+  const perVariant = variants.flatMap((v) => {
+    const plan = v.plans.find((p) => p.part.label === part.label);
+    if (plan) return [verdict(v.name, plan)];
+    return v.unplanned.some((u) => u.label === part.label) ? [unplanned(v.name)] : [];
+  });
+  const worst = perVariant.reduce<VariantVerdict | null>((w, v) => (w === null || v.worstSlack < w.worstSlack ? v : w), null);
+  return {
+    label: part.label,
+    frequency: part.frequency,
+    tolerancePpm: part.tolerancePpm,
+    jitter: part.jitter,
+    note: part.note,
+    perVariant,
+    passesAll: perVariant.length === variants.length && perVariant.every((v) => v.pass),
+    familyWorstMargin: worst ? worst.worstMargin : hz(-Infinity),
+    familyLimitedBy: worst ? `${worst.limitedBy} (${worst.variant})` : 'not planned',
+  };
+}
+
+function unplanned(variant: string): VariantVerdict {
+  return {
+    variant,
+    rate: null,
+    settings: null,
+    zone: null,
+    inverted: null,
+    worstMargin: hz(-Infinity),
+    worstSlack: hz(-Infinity),
+    limitedBy: NOT_PLANNED,
+    headroomPpm: null,
+    jitterSnrDb: null,
+    channelSnrDb: null,
+    pass: false,
+  };
+}
+
+function verdict(variant: string, plan: PartPlan): VariantVerdict {
+  const e = plan.evaluation;
+  return {
+    variant,
+    rate: plan.rate,
+    settings: plan.settings,
+    zone: e.zone,
+    inverted: e.inverted,
+    worstMargin: e.worstMargin,
+    worstSlack: e.worstSlack,
+    limitedBy: e.limitedBy,
+    headroomPpm: plan.headroom ? { down: plan.headroom.downPpm, up: plan.headroom.upPpm } : null,
+    jitterSnrDb: plan.snr.jitterSnrDb,
+    channelSnrDb: plan.snr.channelSnrDb,
+    pass: plan.pass,
+  };
+}
