@@ -6,6 +6,7 @@ import { addAliasCommand } from './commands/alias-command.js';
 import { addSolveCommand } from './commands/solve-command.js';
 import { addSchemaCommand } from './commands/schema-command.js';
 import { addCompareCommand } from './commands/compare-command.js';
+import { addInitCommand } from './commands/init-command.js';
 
 const VERSION = '0.1.0';
 
@@ -43,6 +44,7 @@ export async function runCli(args: readonly string[], io: Io): Promise<ExitCode>
   addSolveCommand(program, io, settle);
   addCompareCommand(program, io, settle);
   addSchemaCommand(program, io, settle);
+  addInitCommand(program, io, settle);
   try {
     await program.parseAsync(args.filter((a) => a !== '--debug'), { from: 'user' });
     return exitCode;
