@@ -1,13 +1,15 @@
 import type { ClockPart } from '../scenario/scenario.js';
 import { evaluateRate, type RateEvaluation } from '../solve/evaluate-rate.js';
-import type { FeasibleInterval, FeasibleSet } from '../solve/feasible-set.js';
+import { hz } from '../units/quantities.js';
+import { guardedBand, rateWindows } from '../windows/enumerate-windows.js';
+import { feasibleSet, type FeasibleInterval, type FeasibleSet } from '../solve/feasible-set.js';
 import type { PlanContext } from '../solve/plan-context.js';
 import { driftSafeRange } from '../solve/best-rate.js';
 import { linearSlacks, maximiseWorstSlack, type LinearSlack } from '../solve/widest-margin-lp.js';
 import type { Interval } from '../math/interval-set.js';
 import { clockSnr } from './clock-snr.js';
 import { driftHeadroom } from './drift-headroom.js';
-import { bestIntegerN, ENUMERATE_UP_TO, MILP_ALLOWANCE, modelSlack } from './integer-widest-margin.js';
+import { bestIntegerN, ENUMERATE_UP_TO, modelSlack } from './integer-widest-margin.js';
 import type { PartPlan, PartSearch, RateSettings } from './part-plan.js';
 import { nRangeFor, partRates, rateFamilies, rateOf, type RateFamily } from './part-rates.js';
 import { worstSlackAt } from './worst-slack.js';
@@ -24,6 +26,14 @@ export interface PlanPartOptions {
 
 const EVERY_RATE_UP_TO = 64;
 const SCREEN_UP_TO = 20_000;
+
+/**
+ * How far short of the best passing rate the interval search may stop, as a
+ * fraction of the wanted bandwidth: a feasible interval is passed over, and
+ * the search ends, once the best found is within this of the interval's
+ * continuous LP bound (the LP itself rounds to 1e-8 of the bandwidth).
+ */
+export const SEARCH_ALLOWANCE = 1e-6;
 
 /**
  * Relative agreement, in units of the slacks' magnitudes |slope·r| + |offset|,
@@ -73,7 +83,7 @@ export function planPart(context: PlanContext, set: FeasibleSet, part: ClockPart
     chosen = bestOfEvery(context, part);
     search = 'every rate';
   } else {
-    const passing = bestPassing(context, set, part, families, options.enumerateUpTo ?? ENUMERATE_UP_TO);
+    const passing = bestPassing(context, part, families, options.enumerateUpTo ?? ENUMERATE_UP_TO);
     if (passing) {
       chosen = passing;
       search = 'intervals';
@@ -126,16 +136,17 @@ interface Piece {
   readonly bound: number;
 }
 
-function bestPassing(context: PlanContext, set: FeasibleSet, part: ClockPart, families: readonly RateFamily[], enumerateUpTo: number): Judged | null {
+function bestPassing(context: PlanContext, part: ClockPart, families: readonly RateFamily[], enumerateUpTo: number): Judged | null {
   const unit = context.band.high - context.band.low;
-  const pieces = feasiblePieces(context, set, part).sort((a, b) => b.bound - a.bound);
-  const allowance = MILP_ALLOWANCE * unit;
+  const { minRate, maxRate } = context.limits;
+  const pieces = feasiblePieces(context, driftFeasibleSet(context, part.tolerancePpm), part).sort((a, b) => b.bound - a.bound);
+  const allowance = SEARCH_ALLOWANCE * unit;
   let best: Judged | undefined;
   for (const piece of pieces) {
     if (best && piece.bound + allowance <= best.evaluation.worstSlack) break;
     const lines = new Set<string>();
     for (const family of families) {
-      const span = nRangeFor(part.frequency, family, piece.range.low, piece.range.high);
+      const span = nRangeFor(part.frequency, family, Math.max(piece.range.low, minRate), Math.min(piece.range.high, maxRate));
       if (!span) continue;
       const key = `${family.M * family.D}:${span.min}:${span.max}`; // the same rates as an earlier family
       if (lines.has(key)) continue;
@@ -151,6 +162,19 @@ function bestPassing(context: PlanContext, set: FeasibleSet, part: ClockPart, fa
     }
   }
   return best ?? null;
+}
+
+/**
+ * The feasible set for a part's nominal rates: the converter's range bounds
+ * the nominal rate, and evaluateRate judges the drift around it against the
+ * checks only, so here the windows are clipped to that range widened by the
+ * drift, [min·(1 − ε), max·(1 + ε)] (the expressions driftRange uses), and a
+ * rate passes exactly when its drift lies inside one of these intervals.
+ */
+function driftFeasibleSet(context: PlanContext, tolerancePpm: number): FeasibleSet {
+  const limits = { minRate: hz(context.limits.minRate * (1 - tolerancePpm * 1e-6)), maxRate: hz(context.limits.maxRate * (1 + tolerancePpm * 1e-6)) };
+  const windows = rateWindows(guardedBand(context.band, context.guard.low, context.guard.high), limits);
+  return feasibleSet(windows, context.interferers, context.band);
 }
 
 /** The feasible intervals wide enough for the part's drift, their linear slacks and LP bounds. */
