@@ -7,6 +7,7 @@ import { addSolveCommand } from './commands/solve-command.js';
 import { addSchemaCommand } from './commands/schema-command.js';
 import { addCompareCommand } from './commands/compare-command.js';
 import { addInitCommand } from './commands/init-command.js';
+import { addReportCommand } from './commands/report-command.js';
 
 const VERSION = '0.1.0';
 
@@ -45,6 +46,7 @@ export async function runCli(args: readonly string[], io: Io): Promise<ExitCode>
   addCompareCommand(program, io, settle);
   addSchemaCommand(program, io, settle);
   addInitCommand(program, io, settle);
+  addReportCommand(program, io, settle, VERSION);
   try {
     await program.parseAsync(args.filter((a) => a !== '--debug'), { from: 'user' });
     return exitCode;

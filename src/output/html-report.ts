@@ -1,0 +1,162 @@
+import { formatFrequency, trimmed } from '../units/format-frequency.js';
+import { escapeXml } from '../pictures/escape-xml.js';
+import { rateMapSvg } from '../pictures/rate-map.js';
+import { spectrumSvg } from '../pictures/spectrum.js';
+import { bandPositionSvg } from '../pictures/band-position.js';
+import type { PlanReport, ReportedCandidate } from '../report/plan-report.js';
+import type { CompareReport } from '../report/compare-report.js';
+import { htmlTable } from './html-table.js';
+
+const JOB = 'Sample-clock plan for an IF-sampling receiver: the rates at which the wanted channel sits whole in one Nyquist zone with its guard bands and nothing strong enough folds onto it.';
+
+const STYLE = `
+body { font-family: sans-serif; font-size: 10.5pt; color: #000; margin: 2em; max-width: 1000px; }
+h1 { font-size: 16pt; margin-bottom: 0.2em; } h2 { font-size: 13pt; border-bottom: 1px solid #000; margin-top: 2em; } h3 { font-size: 11pt; }
+table { border-collapse: collapse; margin: 0.6em 0 1.2em; font-size: 9pt; } caption { text-align: left; font-weight: bold; padding: 0.2em 0; }
+th, td { border: 1px solid #888; padding: 2px 6px; text-align: left; vertical-align: top; } th { background: #eee; }
+td.fail { font-weight: bold; text-decoration: underline; } td.pass { font-style: italic; }
+.caution { border: 2px solid #000; padding: 0.6em 1em; margin: 1em 0; }
+figure { margin: 1em 0; page-break-inside: avoid; } svg { max-width: 100%; height: auto; }
+@media print { body { margin: 0; } h2 { page-break-before: always; } h2:first-of-type { page-break-before: avoid; } }
+`;
+
+/** What the review page shows: each variant's plan, and the part comparison when there are several. */
+export interface ReviewContents {
+  readonly plans: readonly PlanReport[];
+  /** The comparison of clock parts across the variants; null for a single scenario. */
+  readonly comparison: CompareReport | null;
+  /** When the page was made, as text (the shell supplies it). */
+  readonly generated: string;
+  readonly version: string;
+}
+
+/**
+ * One self-contained HTML page for a design review: tables and inline SVG, no
+ * scripts, no external fonts or links, printable.
+ *
+ * @param contents the plans, the comparison, and the page's provenance
+ */
+export function reviewPage(contents: ReviewContents): string {
+  const names = contents.plans.map((p) => p.scenario).join(', ');
+  const caution = contents.plans[0]?.caution ?? '';
+  const sections = [
+    `<h1>Frequency plan review: ${escapeXml(names)}</h1>`,
+    `<p>${escapeXml(JOB)}</p>`,
+    `<p class="caution"><strong>Caution.</strong> ${escapeXml(caution)} Converter spur levels vary with the part, the input level, temperature and the clock.</p>`,
+    contents.comparison ? comparisonSection(contents.comparison) : '',
+    ...contents.plans.map(planSection),
+    `<p>Made by ifzone ${escapeXml(contents.version)} on ${escapeXml(contents.generated)}. Every margin names the two extents it was measured between; the JSON output of <code>ifzone solve</code> carries every figure.</p>`,
+  ];
+  return `<!DOCTYPE html>\n<html lang="en"><head><meta charset="utf-8"><title>${escapeXml(`Frequency plan review: ${names}`)}</title><style>${STYLE}</style></head><body>${sections.join('\n')}</body></html>\n`;
+}
+
+function comparisonSection(report: CompareReport): string {
+  const rows = report.parts.flatMap((p) =>
+    p.perVariant.map((v) => [
+      p.label,
+      v.variant,
+      v.rate === null ? '–' : formatFrequency(v.rate),
+      v.settings === null ? '–' : `N ${v.settings.N}, M ${v.settings.M}, D ${v.settings.D}`,
+      v.zone === null ? '–' : String(v.zone),
+      v.rate === null ? '–' : formatFrequency(v.worstMargin, 7),
+      v.limitedBy,
+      v.headroomPpm === null ? '–' : `−${trimmed(v.headroomPpm.down, 4)} / +${trimmed(v.headroomPpm.up, 4)} (±${trimmed(p.tolerancePpm, 4)})`,
+      v.channelSnrDb === null ? '–' : trimmed(v.channelSnrDb, 4),
+      verdictCell(v.pass),
+    ]),
+  );
+  const family = report.family.length > 0 ? `One part for the whole family, best first: ${report.family.join(', ')}.` : 'No part passes every variant.';
+  return (
+    '<h2>Clock parts across the variants</h2>' +
+    htmlTable(['part', 'variant', 'rate', 'settings', 'zone', 'worst margin', 'limited by', 'drift room ppm (tolerance)', 'channel SNR dB', 'verdict'], rows) +
+    `<p>${escapeXml(family)}</p>`
+  );
+}
+
+function planSection(report: PlanReport): string {
+  const focus = report.candidates.find((c) => c.label === report.best) ?? report.candidates[0];
+  const pictures = [rateMapSvg(report), focus ? spectrumSvg(report, focus.label) : '', bandPositionSvg(report, focus?.label)].filter((svg) => svg !== '');
+  return [
+    `<h2>${escapeXml(report.scenario)}</h2>`,
+    inputsTables(report),
+    windowsTable(report),
+    feasibleTable(report),
+    candidatesTable(report),
+    focus ? checksTable(focus) : '',
+    `<p><strong>${escapeXml(verdictLine(report, focus))}</strong></p>`,
+    ...pictures.map((svg) => `<figure>${svg}</figure>`),
+  ].join('\n');
+}
+
+function inputsTables(report: PlanReport): string {
+  const { band, guard, search, goal } = report;
+  const inputs = htmlTable(
+    ['wanted band', 'guards', 'rates searched', 'goal'],
+    [[`${formatFrequency(band.low)} – ${formatFrequency(band.high)}`, `${formatFrequency(guard.low)} below, ${formatFrequency(guard.high)} above`, `${formatFrequency(search.minRate)} – ${formatFrequency(search.maxRate)}`, goal.kind]],
+    'Inputs',
+  );
+  const interferers = htmlTable(
+    ['interferer', 'kind', 'source', 'extent', 'level dBFS', 'required margin', 'blocks'],
+    report.interferers.map((i) => [i.label, i.kind, i.source, extentText(i.rateMultiple, i.low, i.high), trimmed(i.level, 4), formatFrequency(i.requiredMargin), i.blocking ? 'yes' : 'no']),
+    'Interferers (extent = multiple of the rate r plus a band; levels at the converter)',
+  );
+  return inputs + interferers;
+}
+
+function extentText(multiple: number, low: number, high: number): string {
+  const band = low === high ? formatFrequency(low) : `[${formatFrequency(low)}, ${formatFrequency(high)}]`;
+  return multiple === 0 ? band : `${trimmed(multiple, 6)}·r + ${band}`;
+}
+
+function windowsTable(report: PlanReport): string {
+  if (report.windows.length === 0) return '<p>No legal window inside the rate range.</p>';
+  const rows = report.windows.map((w) => [String(w.zone), w.inverted ? 'yes' : 'no', formatFrequency(w.minRate), formatFrequency(w.maxRate), formatFrequency(w.maxRate - w.minRate)]);
+  return htmlTable(['zone', 'inverted', 'min rate', 'max rate', 'width'], rows, 'Legal windows (band with guards whole in one zone)');
+}
+
+function feasibleTable(report: PlanReport): string {
+  if (report.feasible.length === 0) return '<p>No feasible interval: every legal rate is blocked.</p>';
+  const rows = report.feasible.map((f) => [String(f.zone), f.inverted ? 'yes' : 'no', formatFrequency(f.minRate), formatFrequency(f.maxRate), formatFrequency(f.width), `±${trimmed(f.widthPpm, 4)}`]);
+  return htmlTable(['zone', 'inverted', 'min rate', 'max rate', 'width', 'ppm at centre'], rows, 'Feasible intervals');
+}
+
+function candidatesTable(report: PlanReport): string {
+  const rows = report.candidates.map((c, i) => [
+    String(i + 1),
+    c.label,
+    formatFrequency(c.rate),
+    `±${trimmed(c.tolerancePpm, 4)}`,
+    c.zone === null ? 'straddles' : String(c.zone),
+    c.inverted === null ? '–' : c.inverted ? 'yes' : 'no',
+    c.center === null ? '–' : formatFrequency(c.center),
+    formatFrequency(c.worstMargin, 7),
+    c.limitedBy,
+    verdictCell(c.pass),
+  ]);
+  return htmlTable(['#', 'candidate', 'rate', 'tolerance', 'zone', 'inverted', 'centre / NCO', 'worst margin', 'limited by', 'verdict'], rows, 'Candidates, best first (over each rate\'s whole tolerance)');
+}
+
+function checksTable(candidate: ReportedCandidate): string {
+  const rows = candidate.checks.map((c) => [
+    c.label,
+    c.kind,
+    `${formatFrequency(c.input[0])} – ${formatFrequency(c.input[1])}`,
+    c.alias.map(([a, b]) => (a === b ? formatFrequency(a) : `${formatFrequency(a)} – ${formatFrequency(b)}`)).join(', '),
+    formatFrequency(c.margin, 7),
+    trimmed(c.level, 4),
+    trimmed(c.levelMargin, 4),
+    c.blocking ? 'yes' : 'no',
+    verdictCell(c.pass),
+  ]);
+  return htmlTable(['check', 'kind', 'input at this rate', 'aliased to', 'margin', 'level dBFS', 'level margin dB', 'blocks', 'verdict'], rows, `Checks at ${candidate.label} (${formatFrequency(candidate.rate)})`);
+}
+
+function verdictLine(report: PlanReport, focus: ReportedCandidate | undefined): string {
+  if (!focus) return 'No candidate: no legal window inside the rate range.';
+  if (report.best === null) return `No candidate passes; the nearest is ${focus.label} at ${formatFrequency(focus.rate)}, limited by ${focus.limitedBy}.`;
+  return `Best: ${focus.label} at ${formatFrequency(focus.rate)}, zone ${focus.zone}${focus.inverted ? ' (inverted)' : ''}, worst margin ${formatFrequency(focus.worstMargin, 7)} (${focus.limitedBy}).`;
+}
+
+function verdictCell(pass: boolean): readonly [string, string] {
+  return pass ? ['pass', 'pass'] : ['FAIL', 'fail'];
+}
