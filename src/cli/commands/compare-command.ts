@@ -5,6 +5,7 @@ export interface CompareOptions {
   json?: boolean;
   csv?: boolean;
   output?: string;
+  svg?: string;
   force?: boolean;
 }
 
@@ -21,7 +22,8 @@ export function addCompareCommand(program: Command, io: Io, settle: (code: ExitC
     .option('--json', 'print JSON for programs')
     .option('--csv', 'print CSV for spreadsheets')
     .option('-o, --output <file>', 'write the table, JSON or CSV to a file instead of standard output')
-    .option('--force', 'let --output replace an existing file')
+    .option('--svg <file>', "also draw each variant's rate map with the parts marked")
+    .option('--force', 'let --output and --svg replace existing files')
     .action(async (files: string[], options: CompareOptions) => {
       const { runCompare } = await import('./compare-action.js');
       settle(runCompare(files, options, io));
