@@ -49,7 +49,8 @@ export interface PartPlan {
  * - "every rate": every rate of the part inside the converter's range was judged; the answer is the best of them all.
  * - "intervals": a passing rate, the best of every feasible interval's integer optimum (enumerated or MILP), within the
  *   MILP allowance of the best passing rate.
- * - "near anchors": nothing passes and the part has too many rates to screen them all; the failing rate reported is the
- *   best of those next to the feasible-interval, blocked-range and zone-centre rates, not proven the nearest.
+ * - "sampled": nothing passes and the part has too many rates to screen them all; the failing rate reported is the
+ *   best of a sample (every k-th N, the N next to interval, blocked-range and zone-centre rates, refined by climbing
+ *   to better neighbours), not proven the nearest.
  */
-export type PartSearch = 'every rate' | 'intervals' | 'near anchors';
+export type PartSearch = 'every rate' | 'intervals' | 'sampled';

@@ -20,7 +20,7 @@ export interface PlanPartOptions {
   readonly everyRateUpTo?: number;
   /** Inside one feasible interval, N ranges of at most this many values are enumerated, longer ones solved as a MILP. */
   readonly enumerateUpTo?: number;
-  /** When nothing passes, every rate is screened when there are at most this many; otherwise only rates near anchors. */
+  /** When nothing passes, every rate is screened when there are at most this many; otherwise a sample of about this many. */
   readonly screenUpTo?: number;
 }
 
@@ -88,9 +88,10 @@ export function planPart(context: PlanContext, set: FeasibleSet, part: ClockPart
       chosen = passing;
       search = 'intervals';
     } else {
-      const every = count <= (options.screenUpTo ?? SCREEN_UP_TO);
-      chosen = nearestFailing(context, set, part, families, every);
-      search = every ? 'every rate' : 'near anchors';
+      const budget = options.screenUpTo ?? SCREEN_UP_TO;
+      const every = count <= budget;
+      chosen = nearestFailing(context, set, part, families, every, budget);
+      search = every ? 'every rate' : 'sampled';
     }
   }
   const rate = chosen.evaluation.rate;
@@ -211,39 +212,70 @@ function recheck(part: ClockPart, piece: Piece, evaluation: RateEvaluation, mode
   }
 }
 
+/** How many of the best sampled rates are refined by climbing to better neighbours. */
+const CLIMBED = 8;
+
 /**
  * When nothing passes: the rate with the largest worst slack, screened with
- * worstSlackAt (every rate, or only rates next to anchors: the edges of the
- * feasible intervals and blocked ranges, the converter's limits and the
- * rates that centre the band in each zone), then judged by evaluateRate.
+ * worstSlackAt, then judged by evaluateRate. Either every rate is screened;
+ * or, when there are more than the budget, a sample: every k-th N of each
+ * family (half the budget), the N next to anchor rates (the edges of the
+ * feasible intervals and blocked ranges, the converter's limits, the rates
+ * that centre the band in each zone), and the best few of those climbed to
+ * better neighbours. A sample is not proven best.
  */
-function nearestFailing(context: PlanContext, set: FeasibleSet, part: ClockPart, families: readonly RateFamily[], every: boolean): Judged {
+function nearestFailing(context: PlanContext, set: FeasibleSet, part: ClockPart, families: readonly RateFamily[], every: boolean, budget: number): Judged {
   const blocking = context.interferers.filter((i) => i.blocking);
   const { minRate, maxRate } = context.limits;
+  const tie = TIE * (context.band.high - context.band.low);
+  const slackOf = (settings: RateSettings) => worstSlackAt(context, blocking, rateOf(part.frequency, settings), part.tolerancePpm);
   let best: { settings: RateSettings; slack: number } | undefined;
-  const consider = (settings: RateSettings) => {
-    const slack = worstSlackAt(context, blocking, rateOf(part.frequency, settings), part.tolerancePpm);
-    if (!best || slack > best.slack + TIE * (context.band.high - context.band.low)) best = { settings, slack };
+  const consider = (settings: RateSettings, slack = slackOf(settings)) => {
+    if (!best || slack > best.slack + tie) best = { settings, slack };
+    return slack;
   };
   if (every) {
     for (const { settings } of partRates(part, context.clocking.clockDividers, minRate, maxRate)) consider(settings);
   } else {
+    const spans = families.flatMap((family) => {
+      const span = nRangeFor(part.frequency, family, minRate, maxRate);
+      return span ? [{ family, span }] : [];
+    });
+    const total = spans.reduce((sum, { span }) => sum + span.max - span.min + 1, 0);
+    const stride = Math.max(1, Math.ceil(total / Math.max(1, budget / 2)));
     const anchors = anchorRates(context, set);
-    for (const family of families) {
+    const sampled: { family: RateFamily; min: number; max: number; N: number; slack: number }[] = [];
+    for (const { family, span } of spans) {
       const K = family.M * family.D;
       const tried = new Set<number>();
+      const at = (N: number) => {
+        if (N < span.min || N > span.max || tried.has(N)) return;
+        tried.add(N);
+        const slack = consider({ N, M: family.M, D: family.D });
+        sampled.push({ family, min: span.min, max: span.max, N, slack });
+      };
+      for (let N = span.min; N <= span.max; N += stride) at(N);
       for (const anchor of anchors) {
         const near = (anchor * K) / part.frequency;
-        for (const N of [Math.floor(near), Math.ceil(near)]) {
-          if (N < family.nMin || N > family.nMax || tried.has(N)) continue;
-          tried.add(N);
-          const rate = rateOf(part.frequency, { N, M: family.M, D: family.D });
-          if (rate >= minRate && rate <= maxRate) consider({ N, M: family.M, D: family.D });
-        }
+        at(Math.floor(near));
+        at(Math.ceil(near));
       }
     }
+    sampled.sort((a, b) => b.slack - a.slack);
+    for (const start of sampled.slice(0, CLIMBED)) {
+      const { family } = start;
+      const settingsAt = (N: number) => ({ N, M: family.M, D: family.D });
+      let { N, slack } = start;
+      for (;;) {
+        const up = N < start.max ? slackOf(settingsAt(N + 1)) : -Infinity;
+        const down = N > start.min ? slackOf(settingsAt(N - 1)) : -Infinity;
+        if (Math.max(up, down) <= slack) break;
+        [N, slack] = up >= down ? [N + 1, up] : [N - 1, down];
+      }
+      consider(settingsAt(N), slack);
+    }
   }
-  if (!best) throw new Error(`${part.label}: no rate near the anchors inside the converter's range`);
+  if (!best) throw new Error(`${part.label}: no rate inside the converter's range`);
   const evaluation = evaluateRate(context, rateOf(part.frequency, best.settings), part.tolerancePpm);
   if (evaluation.worstSlack !== best.slack) {
     throw new Error(`${part.label} at ${evaluation.rate} Hz: the screen found a worst slack of ${best.slack} Hz, the exact evaluator ${evaluation.worstSlack} Hz`);
