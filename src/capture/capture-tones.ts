@@ -1,0 +1,163 @@
+import { db, hz, type Db, type Hz } from '../units/quantities.js';
+import type { Scenario } from '../scenario/scenario.js';
+import { leastAttenuation } from '../filter/filter-attenuation.js';
+import { cyclesFrequency, nearestCycles } from './coherent-bins.js';
+import { seededUniform } from './seeded-random.js';
+
+/** What a synthesised tone stands for. */
+export type ToneSource =
+  | { readonly kind: 'wanted'; readonly index: number }
+  | { readonly kind: 'neighbour'; readonly index: number }
+  | { readonly kind: 'board spur'; readonly index: number; readonly harmonic: number }
+  | { readonly kind: 'rate spur'; readonly which: 'dc' | 'half' | 'quarter' }
+  | { readonly kind: 'interleave offset'; readonly k: number }
+  | { readonly kind: 'interleave image'; readonly k: number; readonly wanted: number };
+
+/** One tone of the simulated capture. */
+export interface CaptureTone {
+  readonly label: string;
+  readonly source: ToneSource;
+  /** True for a signal at the converter's input (it passes through the polynomial); false for a spur added after quantisation. */
+  readonly input: boolean;
+  /** The frequency the scenario gives (a band's tone: where it was first put), Hz. */
+  readonly nominal: Hz;
+  /** Whole cycles in the record (may exceed N: the tone is undersampled). */
+  readonly cycles: number;
+  /** cycles·R/N, Hz. */
+  readonly frequency: Hz;
+  /** frequency − nominal, Hz. */
+  readonly move: Hz;
+  /** dBFS at the converter. */
+  readonly level: Db;
+  readonly amplitude: number;
+  readonly phase: number;
+}
+
+/** Where the movable tones (inside bands) sit: whole-cycle offsets from their first place. */
+export interface ToneLayout {
+  readonly wanted: readonly number[];
+  readonly neighbours: readonly number[];
+}
+
+/** The record the capture is taken over. */
+export interface CaptureRecord {
+  readonly rate: Hz;
+  readonly samples: number;
+  /** Tones across the wanted band. */
+  readonly wantedTones: number;
+}
+
+const PHASE_SEED = 0x1f2e3d;
+
+/**
+ * The nominal places of the wanted tones: n tones at the centres of n equal
+ * slices of the band (one tone: the band centre).
+ *
+ * @example wantedNominals({ low: 60e6, high: 90e6 }, 3) // 65, 75, 85 MHz
+ */
+export function wantedNominals(band: { readonly low: Hz; readonly high: Hz }, count: number): Hz[] {
+  return Array.from({ length: count }, (_, i) => hz(band.low + ((band.high - band.low) * (2 * i + 1)) / (2 * count)));
+}
+
+/**
+ * Each wanted tone's level: the strongest wanted level less 20·log10(n), so
+ * that n tones in phase peak at the strongest level and the converter is not
+ * overdriven (one tone: the strongest level itself). The per-tone back-off
+ * is the usual one of multi-tone tests (common practice, no source).
+ */
+export function wantedToneLevel(scenario: Scenario, count: number): Db {
+  return db(scenario.wanted.strongestLevel - 20 * Math.log10(count));
+}
+
+/**
+ * The scenario with every tone source (a board spur or neighbour of zero
+ * width) moved to the nearest whole number of cycles in the record, so that
+ * the plan can be re-derived at the frequencies actually synthesised. Bands
+ * are left as they are; their tones are placed inside them.
+ *
+ * @param scenario the validated scenario
+ * @param record rate R (Hz) and length N
+ * @returns a copy with moved tone sources
+ * @example movedScenario(s, { rate: hz(122.88e6), samples: 65536, wantedTones: 1 }).boardSpurs[0].low // 9 999 375 for a 10 MHz spur
+ */
+export function movedScenario(scenario: Scenario, record: CaptureRecord): Scenario {
+  const moved = <T extends { readonly low: Hz; readonly high: Hz }>(item: T): T => {
+    if (item.low !== item.high) return item;
+    const f = cyclesFrequency(nearestCycles(item.low, record.rate, record.samples), record.rate, record.samples);
+    return { ...item, low: f, high: f };
+  };
+  return { ...scenario, boardSpurs: scenario.boardSpurs.map(moved), neighbours: scenario.neighbours.map(moved) };
+}
+
+/**
+ * Every tone of the capture, from the scenario as written (the moves are
+ * made here, and reported as each tone's move):
+ * - the wanted tones (wantedToneLevel), placed at whole cycles nearest their
+ *   nominal places plus the layout's offsets;
+ * - each neighbour as a tone at its centre (plus its offset), at its level
+ *   after the filter's least attenuation over the band (its strongest part,
+ *   the level the plan uses);
+ * - each board spur and its harmonics h = 2..harmonics as tones of h times
+ *   the spur's cycles, at level − 20·log10(h) (the plan's roll-off), less the
+ *   filter's attenuation when coupled before the filter;
+ * - after the converter: DC, rate/2, rate/4 where stated, the interleaving
+ *   offset spurs at k·R/M (k ≤ M/2: k and M − k fold to one place, one real
+ *   tone), and the interleaving images at k·R/M + f of each wanted tone
+ *   (k = 1..M−1; k·R/M − f folds onto (M−k)·R/M + f), at the tone's level
+ *   plus the stated image level.
+ * Phases are drawn from a fixed seed; DC and rate/2 are in phase (a real
+ * component there has no quadrature part).
+ *
+ * @param scenario the validated scenario (not moved)
+ * @param record rate, length and wanted tone count
+ * @param layout offsets of the wanted and neighbour tones, whole cycles
+ */
+export function captureTones(scenario: Scenario, record: CaptureRecord, layout: ToneLayout): CaptureTone[] {
+  const { rate, samples } = record;
+  const phase = seededUniform(PHASE_SEED);
+  const tones: CaptureTone[] = [];
+  const add = (label: string, source: ToneSource, input: boolean, nominal: number, cycles: number, level: number, inPhase = false) => {
+    const frequency = cyclesFrequency(cycles, rate, samples);
+    const drawn = 2 * Math.PI * phase();
+    tones.push({ label, source, input, nominal: hz(nominal), cycles, frequency, move: hz(frequency - nominal), level: db(level), amplitude: 10 ** (level / 20), phase: inPhase ? 0 : drawn });
+  };
+  const wantedLevel = wantedToneLevel(scenario, record.wantedTones);
+  wantedNominals(scenario.wanted, record.wantedTones).forEach((f, i) => {
+    add(`W${i + 1}`, { kind: 'wanted', index: i }, true, f, nearestCycles(f, rate, samples) + (layout.wanted[i] ?? 0), wantedLevel);
+  });
+  // A tone source is attenuated at the frequency it is synthesised at (where the re-derived plan puts it); a band over its extent.
+  const at = (low: number, high: number, cycles: number) => (low === high ? [cyclesFrequency(cycles, rate, samples), cyclesFrequency(cycles, rate, samples)] as const : [hz(low), hz(high)] as const);
+  scenario.neighbours.forEach((n, i) => {
+    const centre = (n.low + n.high) / 2;
+    const cycles = nearestCycles(centre, rate, samples) + (layout.neighbours[i] ?? 0);
+    const level = n.level - leastAttenuation(scenario.filter, ...at(n.low, n.high, cycles));
+    add(n.label, { kind: 'neighbour', index: i }, true, centre, cycles, level);
+  });
+  scenario.boardSpurs.forEach((spur, i) => {
+    const centre = (spur.low + spur.high) / 2;
+    const cycles = nearestCycles(centre, rate, samples);
+    for (let h = 1; h <= Math.max(1, spur.harmonics); h++) {
+      const loss = spur.coupling === 'before-filter' ? leastAttenuation(scenario.filter, ...at(h * spur.low, h * spur.high, h * cycles)) : 0;
+      add(h === 1 ? spur.label : `${spur.label} H${h}`, { kind: 'board spur', index: i, harmonic: h }, true, h * centre, h * cycles, spur.level - 20 * Math.log10(h) - loss);
+    }
+  });
+  const { dc, halfRate, quarterRate } = scenario.converter.rateSpurs;
+  if (dc !== null) add('DC', { kind: 'rate spur', which: 'dc' }, false, 0, 0, dc, true);
+  if (halfRate !== null) add('rate/2', { kind: 'rate spur', which: 'half' }, false, rate / 2, samples / 2, halfRate, true);
+  if (quarterRate !== null) add('rate/4', { kind: 'rate spur', which: 'quarter' }, false, rate / 4, samples / 4, quarterRate);
+  const interleave = scenario.converter.interleave;
+  if (interleave !== null) {
+    const m = interleave.ways;
+    for (let k = 1; 2 * k <= m; k++) {
+      add(`IL offset ${k}/${m}`, { kind: 'interleave offset', k }, false, (k * rate) / m, Math.round((k * samples) / m), interleave.offsetSpur, 2 * k === m);
+    }
+    const wanted = tones.filter((t) => t.source.kind === 'wanted');
+    for (let k = 1; k < m; k++) {
+      for (const w of wanted) {
+        const index = (w.source as { index: number }).index;
+        add(`IL image ${k}/${m} + ${w.label}`, { kind: 'interleave image', k, wanted: index }, false, (k * rate) / m + w.frequency, Math.round((k * samples) / m) + w.cycles, w.level + interleave.imageLevel);
+      }
+    }
+  }
+  return tones;
+}

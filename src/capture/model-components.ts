@@ -1,0 +1,49 @@
+import { foldCycles } from './coherent-bins.js';
+import type { CaptureTone } from './capture-tones.js';
+import type { Coefficients } from './converter-polynomial.js';
+import { productName, type InputIndex } from './family-lines.js';
+import { enumerateProducts } from './mixing-products.js';
+
+/** One spectral component the capture's model expects, wherever it comes from. */
+export interface ModelComponent {
+  /** Same key as a LineDraft's component. */
+  readonly key: string;
+  /** In words: a product (`2·W1 − ADJ`) or a tone's label. */
+  readonly name: string;
+  /** Product order; 1 for a tone itself (input or added after the converter). */
+  readonly order: number;
+  /** Where it shows, 0..N/2. */
+  readonly bin: number;
+  readonly amplitude: number;
+  /** A wanted tone itself: the signal, not a spur. */
+  readonly wanted: boolean;
+}
+
+/**
+ * Every component the model expects down to `cutoff`: the products of the
+ * input tones through the polynomial (the tones themselves included, with
+ * their compression) and the tones added after the converter.
+ *
+ * @param tones the capture's tones
+ * @param index their input index
+ * @param coefficients the polynomial
+ * @param samples record length N
+ * @param cutoff least amplitude kept
+ */
+export function modelComponents(tones: readonly CaptureTone[], index: InputIndex, coefficients: Coefficients, samples: number, cutoff: number): ModelComponent[] {
+  const amplitudes = index.inputs.map((i) => tones[i]!.amplitude);
+  const products = enumerateProducts(coefficients, amplitudes, cutoff).map((p) => {
+    const cycles = p.net.reduce((sum, n, i) => sum + n * tones[index.inputs[i]!]!.cycles, 0);
+    const single = p.order === 1 ? index.inputs[p.net.findIndex((n) => n !== 0)]! : -1;
+    return {
+      key: `n:${p.net.join(',')}`,
+      name: productName(p.net, index, tones),
+      order: p.order,
+      bin: foldCycles(cycles, samples),
+      amplitude: p.amplitude,
+      wanted: single >= 0 && tones[single]!.source.kind === 'wanted',
+    };
+  });
+  const added = tones.flatMap((t, i) => (t.input ? [] : [{ key: `t:${i}`, name: t.label, order: 1, bin: foldCycles(t.cycles, samples), amplitude: t.amplitude, wanted: false }]));
+  return [...products, ...added];
+}

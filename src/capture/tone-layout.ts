@@ -1,0 +1,100 @@
+import type { Scenario } from '../scenario/scenario.js';
+import { binDistance, foldCycles, nearestCycles } from './coherent-bins.js';
+import { captureTones, wantedNominals, type CaptureRecord, type CaptureTone } from './capture-tones.js';
+import type { ToneLayout } from './capture-tones.js';
+
+/** How far a band's tone may be moved to find a clear place, whole cycles each way. */
+export const LAYOUT_SEARCH = 64;
+
+/**
+ * Bins within which two lines' window spectra touch: a whole-cycle tone
+ * under the 4-term Blackman–Harris window fills its own bin and 3 either
+ * side, so lines 7 or more bins apart are measured with no trace of each
+ * other.
+ */
+export const CLEAR_BINS = 7;
+
+/** A spectral component by what it is made of, independent of where the tones sit. */
+export interface ComponentTemplate {
+  readonly key: string;
+  /** Net multiples per input tone, or null for a tone added after the converter. */
+  readonly net: readonly number[] | null;
+  /** Index of that after-converter tone, or null. */
+  readonly tone: number | null;
+  /** A line of the plan or a wanted tone (true), or another product of the model (false). */
+  readonly watched: boolean;
+}
+
+/**
+ * Places the tones that stand for bands (the wanted tones, and the tones of
+ * neighbours wider than zero) so that the lines of the plan are clear of
+ * each other and of the model's other products: each tone in turn is tried
+ * at 0, +1, −1, +2, … cycles from its first place (staying inside its band),
+ * keeping the first place with the fewest close pairs (see crowding). Tone
+ * sources are not moved: their place is the plan's. Pairs no move can part
+ * stay, and are reported as crowded when measured.
+ *
+ * @param scenario the validated scenario
+ * @param record rate, length, wanted tone count
+ * @param components the plan's lines and wanted tones (watched) and the model's strong products
+ * @returns the offsets, whole cycles
+ */
+export function chooseLayout(scenario: Scenario, record: CaptureRecord, components: readonly ComponentTemplate[]): ToneLayout {
+  const { rate, samples } = record;
+  const range = (low: number, high: number, first: number) => ({ least: Math.ceil((low * samples) / rate) - first, most: Math.floor((high * samples) / rate) - first });
+  const wantedRanges = wantedNominals(scenario.wanted, record.wantedTones).map((f) => range(scenario.wanted.low, scenario.wanted.high, nearestCycles(f, rate, samples)));
+  const neighbourRanges = scenario.neighbours.map((n) => (n.low === n.high ? { least: 0, most: 0 } : range(n.low, n.high, nearestCycles((n.low + n.high) / 2, rate, samples))));
+  const layout = { wanted: wantedRanges.map(() => 0), neighbours: neighbourRanges.map(() => 0) };
+  const movable: Array<readonly [number[], number, { least: number; most: number }]> = [
+    ...wantedRanges.map((r, i) => [layout.wanted, i, r] as const),
+    ...neighbourRanges.map((r, i) => [layout.neighbours, i, r] as const),
+  ];
+  for (const [offsets, i, allowed] of movable) {
+    if (allowed.least >= 0 && allowed.most <= 0) continue;
+    let best = { offset: 0, cost: Infinity };
+    for (let step = 0; step <= 2 * LAYOUT_SEARCH && best.cost > 0; step++) {
+      const offset = step % 2 === 1 ? (step + 1) / 2 : -step / 2;
+      if (offset < allowed.least || offset > allowed.most) continue;
+      offsets[i] = offset;
+      const cost = crowding(components, captureTones(scenario, record, layout), samples);
+      if (cost < best.cost) best = { offset, cost };
+    }
+    offsets[i] = best.offset;
+  }
+  return layout;
+}
+
+/**
+ * The number of close pairs (fewer than CLEAR_BINS apart, mirror images
+ * about DC and rate/2 counted) of distinct components, at least one of them
+ * watched; a watched component near DC or rate/2 also pairs with its own
+ * mirror, except the DC and rate/2 spurs, which sit there by nature.
+ *
+ * @param components templates
+ * @param tones the tones at one layout
+ * @param samples record length N
+ */
+export function crowding(components: readonly ComponentTemplate[], tones: readonly CaptureTone[], samples: number): number {
+  const inputs = tones.filter((t) => t.input);
+  const placed = components.map((c) => {
+    const cycles = c.net === null ? tones[c.tone!]!.cycles : c.net.reduce((sum, n, i) => (n === 0 ? sum : sum + n * inputs[i]!.cycles), 0);
+    const bin = foldCycles(cycles, samples);
+    return { bin, watched: c.watched, atEdge: c.net === null && (bin === 0 || bin === samples / 2) };
+  });
+  placed.sort((a, b) => a.bin - b.bin);
+  let close = 0;
+  for (let i = 0; i < placed.length; i++) {
+    const a = placed[i]!;
+    for (let j = i + 1; j < placed.length && placed[j]!.bin - a.bin < CLEAR_BINS; j++) if (a.watched || placed[j]!.watched) close++;
+  }
+  const nearEdges = placed.filter((c) => c.bin < CLEAR_BINS || c.bin > samples / 2 - CLEAR_BINS);
+  for (let i = 0; i < nearEdges.length; i++) {
+    const a = nearEdges[i]!;
+    if (a.watched && !a.atEdge && Math.min(2 * a.bin, samples - 2 * a.bin) < CLEAR_BINS) close++;
+    for (let j = i + 1; j < nearEdges.length; j++) {
+      const b = nearEdges[j]!;
+      if ((a.watched || b.watched) && Math.abs(a.bin - b.bin) >= CLEAR_BINS && binDistance(a.bin, b.bin, samples) < CLEAR_BINS) close++;
+    }
+  }
+  return close;
+}

@@ -1,0 +1,230 @@
+import { db, hz, ppm, type Db, type Hz } from '../units/quantities.js';
+import { formatFrequency } from '../units/format-frequency.js';
+import type { Scenario } from '../scenario/scenario.js';
+import { contextFromScenario } from '../solve/context-from-scenario.js';
+import { evaluateRate } from '../solve/evaluate-rate.js';
+import { levelThreshold } from '../interferers/level-threshold.js';
+import { foldExtent } from '../math/fold-extent.js';
+import { PAPER_DESIGN_CAUTION } from '../report/caution.js';
+import { binDistance, foldCycles } from './coherent-bins.js';
+import { captureTones, movedScenario, type CaptureRecord, type CaptureTone } from './capture-tones.js';
+import { checkFamily, type LineFamily } from './check-families.js';
+import { applyPolynomial } from './converter-polynomial.js';
+import { converterCoefficients } from './converter-model.js';
+import { familyLines, inputIndex } from './family-lines.js';
+import { judgeLine, SEARCH_BINS, type Measurement } from './judge-line.js';
+import { enumerateProducts, productAmplitude } from './mixing-products.js';
+import { expectedNoiseLevel } from './noise-level.js';
+import { modelComponents, type ModelComponent } from './model-components.js';
+import { quantise } from './quantiser.js';
+import { seededUniform } from './seeded-random.js';
+import { findPeaks, levelSpectrum } from './capture-spectrum.js';
+import { addTones } from './tone-synthesis.js';
+import { chooseLayout, type ComponentTemplate } from './tone-layout.js';
+import { blackmanHarris } from './window.js';
+import { CONTRADICTING, type PeakRow, type PredictionRow, type ToneRow, type VerifyResult } from './verify-result.js';
+
+/** How one capture is taken. */
+export interface CaptureSettings {
+  /** Sample rate R, Hz, inside the converter's range. */
+  readonly rate: Hz;
+  /** Record length N, a power of two (default 65536). */
+  readonly samples?: number;
+  /** Tones across the wanted band, ≥ 1 (default 3). */
+  readonly wantedTones?: number;
+  /** Level tolerance, dB (default 1). */
+  readonly tolerance?: Db;
+}
+
+/** Peaks count this far above the median bin, dB: noise bins (exponentially distributed power) pass it about once in 3·10⁹. */
+export const FLOOR_ABOVE_MEDIAN = 15;
+/** Products weaker than the median bin by this much are left out of the model's list, dB. */
+const CUTOFF_BELOW_MEDIAN = 30;
+const DITHER_SEED = 0x5eed;
+
+/**
+ * A simulated capture of a scenario at one rate, set beside the plan there.
+ *
+ * The capture: the tones of captureTones (moved to whole cycles of the
+ * record; the plan re-derived at the moved tone sources), through the fitted
+ * converter polynomial, quantised to the converter's bits with one step of
+ * uniform dither, the rate-tied spurs added, windowed (4-term
+ * Blackman–Harris) and transformed with this module's own FFT. The plan:
+ * evaluateRate at R with no drift. Each interferer of the plan is matched to
+ * the tones or products that stand for it (checkFamily), each line judged
+ * (judgeLine); measured peaks that no line explains are listed, and those
+ * above the threshold contradict the plan; so does any peak above the
+ * threshold within the margin of the wanted image.
+ *
+ * @param scenario the validated scenario
+ * @param settings rate, record length, wanted tones, tolerance
+ * @returns the result; consistent is false when the capture contradicts the plan
+ * @throws RangeError for a record that is not a power of two ≥ 1024, or no wanted tone
+ * @example verifyCapture(heronBase, { rate: hz(184.32e6), wantedTones: 1 }).consistent // true at a rate the solver passes
+ */
+export function verifyCapture(scenario: Scenario, settings: CaptureSettings): VerifyResult {
+  const samples = settings.samples ?? 65536;
+  const wantedTones = settings.wantedTones ?? 3;
+  const tolerance = settings.tolerance ?? db(1);
+  if (!(samples >= 1024 && (samples & (samples - 1)) === 0)) throw new RangeError(`the record must be a power of two of at least 1024 samples, got ${samples}`);
+  if (!(Number.isInteger(wantedTones) && wantedTones >= 1)) throw new RangeError(`at least one wanted tone, got ${wantedTones}`);
+  const { rate } = settings;
+  const record: CaptureRecord = { rate, samples, wantedTones };
+  const binWidth = rate / samples;
+  const ways = scenario.converter.interleave?.ways ?? null;
+
+  // The plan as written, and re-derived at the frequencies the record can hold.
+  const plan = evaluateRate(contextFromScenario(scenario), rate, ppm(0));
+  const moved = movedScenario(scenario, record);
+  const movedContext = contextFromScenario(moved);
+  const checks = evaluateRate(movedContext, rate, ppm(0)).checks;
+  const claimed = new Set<number>();
+  const firstTones = captureTones(scenario, record, { wanted: [], neighbours: [] });
+  const families = movedContext.interferers.map((i) => checkFamily(i, moved, firstTones, samples, claimed));
+  const coefficients = converterCoefficients(scenario);
+  const window = blackmanHarris(samples);
+  const expectedNoise = expectedNoiseLevel(scenario.converter.bits, samples, window.noiseBandwidthBins, true);
+  const tones = captureTones(scenario, record, chooseLayout(scenario, record, layoutComponents(firstTones, families, coefficients, ways, expectedNoise)));
+
+  // The capture.
+  const capture = new Float64Array(samples);
+  addTones(capture, tones.filter((t) => t.input));
+  applyPolynomial(capture, coefficients);
+  const clippedSamples = quantise(capture, scenario.converter.bits, seededUniform(DITHER_SEED));
+  addTones(capture, tones.filter((t) => !t.input));
+  const spectrum = levelSpectrum(capture, window);
+  const floor = spectrum.medianLevel + FLOOR_ABOVE_MEDIAN;
+  const peaks = findPeaks(spectrum.levels, floor);
+
+  // The model's components, and each line of the plan judged.
+  const index = inputIndex(tones);
+  const amplitudes = index.inputs.map((i) => tones[i]!.amplitude);
+  const components = modelComponents(tones, index, coefficients, samples, 10 ** (Math.max(spectrum.medianLevel - CUTOFF_BELOW_MEDIAN, -240) / 20));
+  const threshold = levelThreshold(scenario);
+  const edgeKeys = new Set(tones.flatMap((t, i) => (!t.input && (t.cycles === 0 || foldCycles(t.cycles, samples) === samples / 2) ? [`t:${i}`] : [])));
+  const measurement: Measurement = { levels: spectrum.levels, peaks, floor, threshold, tolerance, components, edgeKeys };
+  const predictions: PredictionRow[] = [];
+  const notSimulated: string[] = [];
+  const lineKeys = new Set<string>();
+  checks.forEach((check, i) => {
+    const interferer = movedContext.interferers[i]!;
+    const family = families[i]!;
+    const lines = familyLines(family, tones, index, ways);
+    if (lines.length === 0) notSimulated.push(check.label);
+    for (const line of lines) {
+      lineKeys.add(line.component);
+      const amplitude = line.net === null ? tones[line.tone!]!.amplitude : Math.abs(productAmplitude(coefficients, amplitudes, line.net));
+      predictions.push(
+        judgeLine(
+          { check, line, width: interferer.low === interferer.high ? 'tone' : 'band', basis: levelBasis(family, wantedTones), amplitude, samples, binWidth, bin: foldCycles(line.cycles, samples) },
+          measurement,
+        ),
+      );
+    }
+  });
+
+  // Peaks no line accounts for, and peaks that crowd the wanted image.
+  const image = plan.image ? [[plan.image.low, plan.image.high] as const] : foldExtent(scenario.wanted.low, scenario.wanted.high, rate).map((s) => [hz(s.low), hz(s.high)] as const);
+  const distance = (f: number) => Math.min(...image.map(([low, high]) => (f < low ? low - f : f > high ? f - high : 0)));
+  const matched = new Set(predictions.flatMap((p) => (p.measured ? [p.measured.bin] : [])));
+  const unlisted: PeakRow[] = [];
+  const intrusions: PeakRow[] = [];
+  for (const bin of peaks) {
+    const level = db(spectrum.levels[bin]!);
+    const owner = strongestWithin(components, bin, 1, samples);
+    if (owner?.wanted) continue;
+    const row = { frequency: hz(bin * binWidth), bin, level, explainedBy: null as string | null, distance: hz(distance(bin * binWidth)) };
+    if (!matched.has(bin) && !(owner && lineKeys.has(owner.key))) {
+      const beside = strongestWithin(components, bin, SEARCH_BINS, samples);
+      row.explainedBy = owner
+        ? `${owner.name} (order ${owner.order}), a product the plan does not list`
+        : beside && beside.amplitude >= 10 ** (level / 20)
+          ? `window overlap with ${beside.name}`
+          : null;
+      unlisted.push(row);
+    }
+    if (level > threshold && row.distance < scenario.requirements.margin) intrusions.push(row);
+  }
+
+  const contradictions = [
+    ...predictions.filter((p) => CONTRADICTING.has(p.status)).map((p) => `${p.check} (${p.line}): ${p.status}: ${p.note}`),
+    ...unlisted
+      .filter((u) => u.level > threshold && !(u.explainedBy ?? '').startsWith('window overlap'))
+      .map((u) => `${formatFrequency(u.frequency, 7)} at ${u.level.toFixed(1)} dBFS, above the threshold ${threshold.toFixed(1)} dBFS: ${u.explainedBy ?? 'unexplained'}; missed by the plan`),
+    ...intrusions.map((u) => `${formatFrequency(u.frequency, 7)} at ${u.level.toFixed(1)} dBFS lies ${formatFrequency(u.distance, 4)} from the wanted image, inside the ${formatFrequency(scenario.requirements.margin)} margin: the rate is not clean`),
+  ];
+  return {
+    scenario: scenario.name,
+    rate,
+    samples,
+    binWidth: hz(binWidth),
+    window: { name: window.name, coherentGain: window.coherentGain, noiseBandwidthBins: window.noiseBandwidthBins },
+    wantedTones,
+    converter: { bits: scenario.converter.bits, coefficients, dither: 'uniform, one step peak to peak, fixed seed', clippedSamples },
+    levels: { threshold, noiseMedian: db(spectrum.medianLevel), floor: db(floor), tolerance },
+    margin: scenario.requirements.margin,
+    wantedImage: image,
+    tones: tones.map((t) => toneRow(t, samples)),
+    predictions,
+    unlisted,
+    intrusions,
+    plan: { pass: plan.pass, limitedBy: plan.limitedBy, worstMargin: plan.worstMargin },
+    notSimulated,
+    contradictions,
+    consistent: contradictions.length === 0,
+    compared: comparedText(wantedTones, tolerance, floor, threshold),
+    caution: `${PAPER_DESIGN_CAUTION} A simulated capture is still a paper check: it is built from the same stated figures as the plan, so confirm the plan by measurement on hardware.`,
+  };
+}
+
+/**
+ * What the layout keeps apart: the plan's lines and the wanted tones
+ * (watched), and the model's products strong enough to show (above the
+ * expected mean noise), which must not land on a watched line.
+ */
+function layoutComponents(tones: readonly CaptureTone[], families: readonly LineFamily[], coefficients: readonly number[], ways: number | null, noiseLevel: number): ComponentTemplate[] {
+  const index = inputIndex(tones);
+  const watched = new Map<string, ComponentTemplate>();
+  for (const family of families) for (const line of familyLines(family, tones, index, ways)) watched.set(line.component, { key: line.component, net: line.net, tone: line.tone, watched: true });
+  index.inputs.forEach((tone, p) => {
+    if (tones[tone]!.source.kind !== 'wanted') return;
+    const net = index.inputs.map((_, q) => (q === p ? 1 : 0));
+    watched.set(`n:${net.join(',')}`, { key: `n:${net.join(',')}`, net, tone: null, watched: true });
+  });
+  const amplitudes = index.inputs.map((i) => tones[i]!.amplitude);
+  const others = enumerateProducts(coefficients, amplitudes, 10 ** (noiseLevel / 20))
+    .map((p) => ({ key: `n:${p.net.join(',')}`, net: p.net, tone: null, watched: false }))
+    .filter((c) => !watched.has(c.key));
+  return [...watched.values(), ...others];
+}
+
+/** `plan` where the plan's level is the level the capture puts there; `bound` where it is a band's worst case or an extrapolation. */
+function levelBasis(family: LineFamily, wantedTones: number): 'plan' | 'bound' {
+  if (family.kind === 'tone') return 'plan';
+  if ((family.kind === 'wanted harmonic' || family.kind === 'interleave image') && wantedTones === 1) return 'plan';
+  return 'bound';
+}
+
+function strongestWithin(components: readonly ModelComponent[], bin: number, reach: number, samples: number): ModelComponent | null {
+  let best: ModelComponent | null = null;
+  for (const c of components) if (binDistance(c.bin, bin, samples) <= reach && (best === null || c.amplitude > best.amplitude)) best = c;
+  return best;
+}
+
+function toneRow(tone: CaptureTone, samples: number): ToneRow {
+  const role = tone.source.kind === 'wanted' ? 'wanted' : tone.source.kind === 'neighbour' ? 'neighbour' : tone.source.kind === 'board spur' ? 'board spur' : 'converter';
+  return { label: tone.label, role, nominal: tone.nominal, frequency: tone.frequency, move: tone.move, bin: foldCycles(tone.cycles, samples), level: tone.level };
+}
+
+function comparedText(wantedTones: number, tolerance: number, floor: number, threshold: number): string {
+  const wanted = wantedTones === 1 ? 'one tone at the strongest wanted level' : `${wantedTones} tones, each 20·log10(${wantedTones}) dB below the strongest wanted level`;
+  const lines = [
+    `The plan at this rate (no drift) against a simulated capture. The wanted band is represented by ${wanted}, each band neighbour by one tone at its centre at its level after the filter.`,
+    'Tone sources (board spurs and their harmonics, tone neighbours, rate-tied converter spurs) were moved to the nearest whole number of cycles in the record (moves listed) and the plan was re-derived there; for each, the plan\'s aliased position is compared with the measured peak.',
+    'Band sources are represented by their tones: their products (sums of wanted tones for the harmonics, 2·a − b for intermodulation, k·R/M + f for interleaving images) were placed by whole-cycle arithmetic, checked against the plan\'s aliased segments, and measured.',
+    `Positions must agree within one bin. Levels are judged ${tolerance} dB either way where the plan's level is the level the capture put there (stated spurs, neighbours, and with one wanted tone its harmonics and images); where the plan's level is a band's worst case or an extrapolation (neighbour harmonics, intermodulation, several wanted tones), the measurement must not exceed it by more than ${tolerance} dB when above the threshold.`,
+    `Peaks above ${floor.toFixed(1)} dBFS count; any above the threshold ${threshold.toFixed(1)} dBFS that no line of the plan explains, or that lands within the margin of the wanted image, contradicts the plan.`,
+  ];
+  if (floor > threshold) lines.push(`The floor is above the threshold: spurs between ${threshold.toFixed(1)} and ${floor.toFixed(1)} dBFS are not seen.`);
+  return lines.join(' ');
+}

@@ -1,0 +1,152 @@
+import { describe, expect, it } from 'vitest';
+import { hz, ppm, type Hz } from '../../src/units/quantities.js';
+import type { Scenario } from '../../src/scenario/scenario.js';
+import { contextFromScenario } from '../../src/solve/context-from-scenario.js';
+import { solvePlan } from '../../src/solve/solve-plan.js';
+import { evaluateRate } from '../../src/solve/evaluate-rate.js';
+import { verifyCapture } from '../../src/capture/verify-capture.js';
+import type { VerifyResult } from '../../src/capture/verify-result.js';
+import { readScenarioFile } from '../../src/cli/read-scenario.js';
+import { scenarioFixture } from '../helpers/scenario-fixture.js';
+
+/**
+ * verifyCapture on the test fixture (invented Heron data: 65–75 MHz band,
+ * one wanted tone, a pure polynomial converter fitted to −75/−80 dBc with
+ * orders 4 and 5 assumed at −80 dBc, no spurs, no filter). The capture is
+ * built from tones, the polynomial, a quantiser and an FFT — nothing of the
+ * plan's folding arithmetic — so agreement is evidence independent of it.
+ * Positions are also checked against the definition of aliasing,
+ * alias = |f − R·round(f/R)| (common practice, no source).
+ */
+const MHZ = 1e6;
+const alias = (f: number, rate: number) => Math.abs(f - rate * Math.round(f / rate));
+
+function passingRates(scenario: Scenario): Hz[] {
+  return solvePlan(contextFromScenario(scenario))
+    .candidates.filter((c) => c.evaluation.pass)
+    .map((c) => c.evaluation.rate);
+}
+
+function harmonicRows(result: VerifyResult) {
+  return result.predictions.filter((p) => /^H\d wanted$/.test(p.check));
+}
+
+describe('verify: the fixture at the rates the solver passes (one wanted tone, pure polynomial, no spurs)', () => {
+  const scenario = scenarioFixture();
+  const rates = passingRates(scenario);
+
+  it('the solver passes several rates to try', () => {
+    expect(rates.length).toBeGreaterThanOrEqual(2);
+  });
+
+  for (const rate of rates) {
+    it(`at ${(rate / MHZ).toFixed(6)} MHz every predicted harmonic is found within one bin and 1 dB of its level`, () => {
+      const started = performance.now();
+      const result = verifyCapture(scenario, { rate, wantedTones: 1 });
+      const elapsed = performance.now() - started;
+      const rows = harmonicRows(result);
+      expect(rows.map((r) => r.check)).toEqual(['H2 wanted', 'H3 wanted', 'H4 wanted', 'H5 wanted']);
+      const tone = result.tones.find((t) => t.role === 'wanted')!;
+      for (const row of rows) {
+        const k = Number(row.check[1]);
+        expect(row.status, `${row.check}: ${row.note}`).toBe('agrees');
+        expect(Math.abs(row.binError!)).toBeLessThanOrEqual(1);
+        expect(Math.abs(row.levelError!)).toBeLessThanOrEqual(1);
+        // The plan's level: strongest wanted level + the figure (−1 − 75, −1 − 80, and −80 assumed for 4 and 5).
+        expect(row.planLevel).toBeCloseTo(k === 2 ? -76 : -81, 9);
+        // Where the k-th harmonic of the synthesised tone must show, by the definition of aliasing.
+        expect(Math.abs(row.measured!.frequency - alias(k * tone.frequency, rate))).toBeLessThanOrEqual(result.binWidth);
+        expect(row.insidePlan).toBe(true);
+      }
+      expect(result.consistent, result.contradictions.join('\n')).toBe(true);
+      expect(result.plan.pass).toBe(true);
+      const worst = Math.max(...rows.map((r) => Math.abs(r.levelError!)));
+      console.info(`fixture at ${(rate / MHZ).toFixed(6)} MHz: bins off ${rows.map((r) => r.binError).join(', ')}; worst level error ${worst.toFixed(3)} dB; floor ${result.levels.floor.toFixed(1)} dBFS; ${elapsed.toFixed(0)} ms`);
+    });
+  }
+});
+
+/**
+ * A rate inside a legal window where the plan itself fails a harmonic (its
+ * extent meets the band) and the single tone's harmonic lands well inside the
+ * wanted image: searched on a grid, judged by evaluateRate.
+ */
+function badRate(scenario: Scenario): { rate: Hz; order: number } {
+  const context = contextFromScenario(scenario);
+  const centre = (scenario.wanted.low + scenario.wanted.high) / 2;
+  for (const window of solvePlan(context).windows) {
+    const top = Number.isFinite(window.maxRate) ? window.maxRate : context.limits.maxRate;
+    for (let i = 1; i < 400; i++) {
+      const rate = hz(window.minRate + ((top - window.minRate) * i) / 400);
+      const evaluation = evaluateRate(context, rate, ppm(0));
+      if (!evaluation.image) continue;
+      for (const order of [2, 3]) {
+        const check = evaluation.checks.find((c) => c.label === `H${order} wanted`)!;
+        const where = alias(order * centre, rate);
+        const inside = where > evaluation.image.low + 2 * MHZ && where < evaluation.image.high - 2 * MHZ;
+        if (!check.pass && inside && Math.abs(where - alias(centre, rate)) > 1 * MHZ) return { rate, order };
+      }
+    }
+  }
+  throw new Error('no bad rate found');
+}
+
+describe('verify: a deliberately bad rate (a harmonic on the band, per evaluateRate)', () => {
+  const scenario = scenarioFixture();
+  const { rate, order } = badRate(scenario);
+
+  it(`at ${(rate / MHZ).toFixed(6)} MHz the capture shows the ${order}${order === 2 ? 'nd' : 'rd'} harmonic inside the band and contradicts the plan`, () => {
+    const result = verifyCapture(scenario, { rate, wantedTones: 1 });
+    expect(result.plan.pass).toBe(false);
+    expect(result.consistent).toBe(false);
+    const row = result.predictions.find((p) => p.check === `H${order} wanted`)!;
+    // The prediction itself holds: the harmonic is where the plan says...
+    expect(row.status).toBe('agrees');
+    // ...and it is inside the wanted image, above the threshold: the rate is not clean.
+    const intrusion = result.intrusions.find((p) => p.bin === row.measured!.bin);
+    expect(intrusion).toBeDefined();
+    expect(intrusion!.distance).toBeLessThan(result.margin);
+    expect(result.contradictions.some((c) => c.includes('not clean'))).toBe(true);
+    console.info(`bad rate ${(rate / MHZ).toFixed(6)} MHz: H${order} at ${(row.measured!.frequency / MHZ).toFixed(6)} MHz, ${row.measured!.level.toFixed(2)} dBFS, inside the image`);
+  });
+});
+
+describe('verify: the demo scenarios (invented data) — every interferer stands for something, tone sources land where the plan says', () => {
+  for (const file of ['heron-base', 'heron-lowif', 'heron-narrow', 'heron-wide']) {
+    const scenario = readScenarioFile(`scenarios/${file}.json`);
+    const rate = passingRates(scenario)[0]!;
+    for (const wantedTones of [1, 3]) {
+      it(`${file} at ${(rate / MHZ).toFixed(6)} MHz with ${wantedTones} wanted tone(s)`, () => {
+        const started = performance.now();
+        const result = verifyCapture(scenario, { rate, wantedTones });
+        const elapsed = performance.now() - started;
+        expect(result.notSimulated).toEqual([]);
+        expect(result.predictions.length).toBeGreaterThanOrEqual(contextFromScenario(scenario).interferers.length);
+        for (const row of result.predictions.filter((p) => p.width === 'tone' && p.measured && p.status !== 'crowded')) {
+          // A tone source is moved to a whole cycle and the plan re-derived there: the peak sits on the plan's alias.
+          expect(Math.abs(row.binError!), `${row.check}`).toBeLessThan(0.5 + 1e-9);
+        }
+        for (const row of result.predictions.filter((p) => p.width === 'band' && p.measured)) expect(row.insidePlan, row.check).toBe(true);
+        expect(result.consistent, result.contradictions.join('\n')).toBe(true);
+        const judged = result.predictions.filter((p) => p.status === 'agrees' && p.basis === 'plan');
+        const worst = Math.max(...judged.map((p) => Math.abs(p.levelError!)));
+        console.info(`${file} ${wantedTones} tone(s): ${result.predictions.length} lines, ${judged.length} judged on level (worst ${worst.toFixed(3)} dB), ${result.unlisted.length} unlisted peaks, ${elapsed.toFixed(0)} ms`);
+      });
+    }
+  }
+});
+
+describe('verify: a product the plan does not list', () => {
+  it('with three wanted tones the fixture shows second-order differences W1 − W2 above its −100 dBFS threshold: missed by the plan', () => {
+    // The plan models harmonics and third-order intermodulation but not second-order products of two signals (f1 − f2).
+    // Three tones at −1 − 9.54 dBFS through a2 (|a2|·A1·A2, the x² cross term) land near −90 dBFS, above −60 − 40 dBFS.
+    const scenario = scenarioFixture();
+    const rate = passingRates(scenario)[0]!;
+    const result = verifyCapture(scenario, { rate, wantedTones: 3 });
+    const differences = result.unlisted.filter((u) => /^W\d − W\d \(order 2\)/.test(u.explainedBy ?? ''));
+    expect(differences.length).toBe(3);
+    for (const d of differences) expect(d.level).toBeGreaterThan(result.levels.threshold);
+    expect(result.consistent).toBe(false);
+    expect(result.contradictions.some((c) => c.includes('a product the plan does not list; missed by the plan'))).toBe(true);
+  });
+});
