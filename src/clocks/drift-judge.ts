@@ -5,8 +5,10 @@ import type { FeasibleInterval } from '../solve/feasible-set.js';
  * holds a rate's whole drift range [r(1 − ε), r(1 + ε)], found by binary
  * search, or −1 when no single interval holds it. The drift ends are computed
  * as driftRange computes them, so the verdict matches the exact evaluator's
- * except where a drift end lies within rounding of an interval edge; sweeps
- * use this, and the winners are judged again by evaluateRate.
+ * except where a drift end lies within rounding of an interval edge, and at
+ * the converter's range, which the feasible set ends at and evaluateRate
+ * ignores (a rate on the fastest rate fails here once it may drift above it).
+ * Sweeps use this; the winners are judged again by evaluateRate.
  *
  * @param feasible the exact feasible set: sorted, disjoint, closed intervals, Hz
  * @param rate nominal rate, Hz

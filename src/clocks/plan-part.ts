@@ -58,10 +58,13 @@ interface Judged {
  * interval is searched for the best integer N of each (M, D) (enumerated, or
  * a MILP with javascript-lp-solver), intervals taken in order of their
  * continuous LP bound and dropped once that bound cannot beat the best found;
- * every answer is re-checked by evaluateRate.
+ * every answer is re-checked by evaluateRate. The converter's range bounds
+ * the nominal rate only (evaluateRate judges the drift against the checks),
+ * so the intervals searched are those of windows widened by the drift.
  *
  * @param context the plan (its clocking gives the dividers, bits and aperture jitter)
- * @param set the plan's exact feasible set, with blocked ranges
+ * @param set the plan's exact feasible set, with blocked ranges (for the
+ *   headroom, which runs to the converter's range, and the failing search)
  * @param part the clock part
  * @param options search tuning
  * @returns the part's plan, or null when none of its rates lies inside the converter's rate range
