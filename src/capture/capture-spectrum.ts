@@ -29,7 +29,7 @@ export function levelSpectrum(samples: Float64Array, window: SpectralWindow): Le
   const levels = new Float64Array(n / 2 + 1);
   for (let k = 0; k <= n / 2; k++) {
     const scale = k === 0 || k === n / 2 ? n * window.coherentGain : (n * window.coherentGain) / 2;
-    levels[k] = 20 * Math.log10(Math.hypot(re[k]!, im[k]!) / scale);
+    levels[k] = 10 * Math.log10((re[k]! * re[k]! + im[k]! * im[k]!) / (scale * scale));
   }
   const sorted = Float64Array.from(levels).sort();
   return { levels, medianLevel: sorted[Math.floor(sorted.length / 2)]! };

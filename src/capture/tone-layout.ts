@@ -1,7 +1,6 @@
 import type { Scenario } from '../scenario/scenario.js';
-import { binDistance, foldCycles, nearestCycles } from './coherent-bins.js';
-import { captureTones, wantedNominals, type CaptureRecord, type CaptureTone } from './capture-tones.js';
-import type { ToneLayout } from './capture-tones.js';
+import { binDistance, foldCycles } from './coherent-bins.js';
+import { captureTones, wantedNominals, type CaptureRecord, type ToneLayout } from './capture-tones.js';
 
 /** How far a band's tone may be moved to find a clear place, whole cycles each way. */
 export const LAYOUT_SEARCH = 64;
@@ -41,25 +40,35 @@ export interface ComponentTemplate {
  */
 export function chooseLayout(scenario: Scenario, record: CaptureRecord, components: readonly ComponentTemplate[]): ToneLayout {
   const { rate, samples } = record;
+  const base = captureTones(scenario, record, { wanted: [], neighbours: [] });
+  const inputs = base.flatMap((t, i) => (t.input ? [i] : []));
+  const cycles = base.map((t) => t.cycles);
   const range = (low: number, high: number, first: number) => ({ least: Math.ceil((low * samples) / rate) - first, most: Math.floor((high * samples) / rate) - first });
-  const wantedRanges = wantedNominals(scenario.wanted, record.wantedTones).map((f) => range(scenario.wanted.low, scenario.wanted.high, nearestCycles(f, rate, samples)));
-  const neighbourRanges = scenario.neighbours.map((n) => (n.low === n.high ? { least: 0, most: 0 } : range(n.low, n.high, nearestCycles((n.low + n.high) / 2, rate, samples))));
-  const layout = { wanted: wantedRanges.map(() => 0), neighbours: neighbourRanges.map(() => 0) };
-  const movable: Array<readonly [number[], number, { least: number; most: number }]> = [
-    ...wantedRanges.map((r, i) => [layout.wanted, i, r] as const),
-    ...neighbourRanges.map((r, i) => [layout.neighbours, i, r] as const),
-  ];
-  for (const [offsets, i, allowed] of movable) {
-    if (allowed.least >= 0 && allowed.most <= 0) continue;
+  const layout = { wanted: wantedNominals(scenario.wanted, record.wantedTones).map(() => 0), neighbours: scenario.neighbours.map(() => 0) };
+  // Each movable tone, the tones that move with it (its interleaving images), and how far it may go.
+  const movable = base.flatMap((t, i) => {
+    const source = t.source;
+    if (source.kind === 'wanted') {
+      const followers = base.flatMap((u, j) => (u.source.kind === 'interleave image' && u.source.wanted === source.index ? [j] : []));
+      return [{ offsets: layout.wanted, slot: source.index, tones: [i, ...followers], allowed: range(scenario.wanted.low, scenario.wanted.high, t.cycles) }];
+    }
+    if (source.kind === 'neighbour') {
+      const n = scenario.neighbours[source.index]!;
+      return n.low === n.high ? [] : [{ offsets: layout.neighbours, slot: source.index, tones: [i], allowed: range(n.low, n.high, t.cycles) }];
+    }
+    return [];
+  });
+  for (const { offsets, slot, tones, allowed } of movable) {
     let best = { offset: 0, cost: Infinity };
     for (let step = 0; step <= 2 * LAYOUT_SEARCH && best.cost > 0; step++) {
       const offset = step % 2 === 1 ? (step + 1) / 2 : -step / 2;
       if (offset < allowed.least || offset > allowed.most) continue;
-      offsets[i] = offset;
-      const cost = crowding(components, captureTones(scenario, record, layout), samples);
+      for (const j of tones) cycles[j] = base[j]!.cycles + offset;
+      const cost = crowding(components, cycles, inputs, samples);
       if (cost < best.cost) best = { offset, cost };
     }
-    offsets[i] = best.offset;
+    offsets[slot] = best.offset;
+    for (const j of tones) cycles[j] = base[j]!.cycles + best.offset;
   }
   return layout;
 }
@@ -71,14 +80,14 @@ export function chooseLayout(scenario: Scenario, record: CaptureRecord, componen
  * mirror, except the DC and rate/2 spurs, which sit there by nature.
  *
  * @param components templates
- * @param tones the tones at one layout
+ * @param cycles each tone's whole cycles at one layout
+ * @param inputs the indices of the input tones, in order
  * @param samples record length N
  */
-export function crowding(components: readonly ComponentTemplate[], tones: readonly CaptureTone[], samples: number): number {
-  const inputs = tones.filter((t) => t.input);
+export function crowding(components: readonly ComponentTemplate[], cycles: readonly number[], inputs: readonly number[], samples: number): number {
   const placed = components.map((c) => {
-    const cycles = c.net === null ? tones[c.tone!]!.cycles : c.net.reduce((sum, n, i) => (n === 0 ? sum : sum + n * inputs[i]!.cycles), 0);
-    const bin = foldCycles(cycles, samples);
+    const total = c.net === null ? cycles[c.tone!]! : c.net.reduce((sum, n, i) => (n === 0 ? sum : sum + n * cycles[inputs[i]!]!), 0);
+    const bin = foldCycles(total, samples);
     return { bin, watched: c.watched, atEdge: c.net === null && (bin === 0 || bin === samples / 2) };
   });
   placed.sort((a, b) => a.bin - b.bin);

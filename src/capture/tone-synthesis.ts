@@ -6,6 +6,28 @@ export interface SampledTone {
   readonly phase: number;
 }
 
+/** cos and sin of 2π·m/N for m = 0..N−1. */
+export interface PhaseTable {
+  readonly cos: Float64Array;
+  readonly sin: Float64Array;
+}
+
+/**
+ * The table addTones reads phases from, computed once per record length.
+ *
+ * @param samples record length N
+ * @example phaseTable(4).cos // [1, 0, −1, 0] (to rounding)
+ */
+export function phaseTable(samples: number): PhaseTable {
+  const cos = new Float64Array(samples);
+  const sin = new Float64Array(samples);
+  for (let m = 0; m < samples; m++) {
+    cos[m] = Math.cos((2 * Math.PI * m) / samples);
+    sin[m] = Math.sin((2 * Math.PI * m) / samples);
+  }
+  return { cos, sin };
+}
+
 /**
  * Adds whole-cycle tones to a record of N samples, in place. The phase of
  * sample n is read from a table of cos/sin(2π·m/N) at m = c·n mod N, kept as
@@ -15,16 +37,13 @@ export interface SampledTone {
  *
  * @param samples the record (length N), added to
  * @param tones the tones; cycles may be any integer (they fold as sampling folds them)
+ * @param table phaseTable(N), when one is at hand
  * @example addTones(new Float64Array(4), [{ cycles: 1, amplitude: 1, phase: 0 }]) // [1, 0, −1, 0]
  */
-export function addTones(samples: Float64Array, tones: readonly SampledTone[]): void {
+export function addTones(samples: Float64Array, tones: readonly SampledTone[], table: PhaseTable = phaseTable(samples.length)): void {
   const n = samples.length;
-  const cos = new Float64Array(n);
-  const sin = new Float64Array(n);
-  for (let m = 0; m < n; m++) {
-    cos[m] = Math.cos((2 * Math.PI * m) / n);
-    sin[m] = Math.sin((2 * Math.PI * m) / n);
-  }
+  const { cos, sin } = table;
+  if (cos.length !== n) throw new RangeError(`phase table of ${cos.length} entries for a record of ${n}`);
   for (const tone of tones) {
     const step = ((tone.cycles % n) + n) % n;
     const inPhase = tone.amplitude * Math.cos(tone.phase);

@@ -19,7 +19,7 @@ import { modelComponents, type ModelComponent } from './model-components.js';
 import { quantise } from './quantiser.js';
 import { seededUniform } from './seeded-random.js';
 import { findPeaks, levelSpectrum } from './capture-spectrum.js';
-import { addTones } from './tone-synthesis.js';
+import { addTones, phaseTable } from './tone-synthesis.js';
 import { chooseLayout, type ComponentTemplate } from './tone-layout.js';
 import { blackmanHarris } from './window.js';
 import { CONTRADICTING, type PeakRow, type PredictionRow, type ToneRow, type VerifyResult } from './verify-result.js';
@@ -88,10 +88,11 @@ export function verifyCapture(scenario: Scenario, settings: CaptureSettings): Ve
 
   // The capture.
   const capture = new Float64Array(samples);
-  addTones(capture, tones.filter((t) => t.input));
+  const table = phaseTable(samples);
+  addTones(capture, tones.filter((t) => t.input), table);
   applyPolynomial(capture, coefficients);
   const clippedSamples = quantise(capture, scenario.converter.bits, seededUniform(DITHER_SEED));
-  addTones(capture, tones.filter((t) => !t.input));
+  addTones(capture, tones.filter((t) => !t.input), table);
   const spectrum = levelSpectrum(capture, window);
   const floor = spectrum.medianLevel + FLOOR_ABOVE_MEDIAN;
   const peaks = findPeaks(spectrum.levels, floor);

@@ -1,13 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { hz, ppm, type Hz } from '../../src/units/quantities.js';
-import type { Scenario } from '../../src/scenario/scenario.js';
 import { contextFromScenario } from '../../src/solve/context-from-scenario.js';
-import { solvePlan } from '../../src/solve/solve-plan.js';
-import { evaluateRate } from '../../src/solve/evaluate-rate.js';
 import { verifyCapture } from '../../src/capture/verify-capture.js';
 import type { VerifyResult } from '../../src/capture/verify-result.js';
 import { readScenarioFile } from '../../src/cli/read-scenario.js';
 import { scenarioFixture } from '../helpers/scenario-fixture.js';
+import { alias, badRate, passingRates } from './plan-rates.js';
 
 /**
  * verifyCapture on the test fixture (invented Heron data: 65–75 MHz band,
@@ -19,13 +16,6 @@ import { scenarioFixture } from '../helpers/scenario-fixture.js';
  * alias = |f − R·round(f/R)| (common practice, no source).
  */
 const MHZ = 1e6;
-const alias = (f: number, rate: number) => Math.abs(f - rate * Math.round(f / rate));
-
-function passingRates(scenario: Scenario): Hz[] {
-  return solvePlan(contextFromScenario(scenario))
-    .candidates.filter((c) => c.evaluation.pass)
-    .map((c) => c.evaluation.rate);
-}
 
 function harmonicRows(result: VerifyResult) {
   return result.predictions.filter((p) => /^H\d wanted$/.test(p.check));
@@ -65,31 +55,6 @@ describe('verify: the fixture at the rates the solver passes (one wanted tone, p
     });
   }
 });
-
-/**
- * A rate inside a legal window where the plan itself fails a harmonic (its
- * extent meets the band) and the single tone's harmonic lands well inside the
- * wanted image: searched on a grid, judged by evaluateRate.
- */
-function badRate(scenario: Scenario): { rate: Hz; order: number } {
-  const context = contextFromScenario(scenario);
-  const centre = (scenario.wanted.low + scenario.wanted.high) / 2;
-  for (const window of solvePlan(context).windows) {
-    const top = Number.isFinite(window.maxRate) ? window.maxRate : context.limits.maxRate;
-    for (let i = 1; i < 400; i++) {
-      const rate = hz(window.minRate + ((top - window.minRate) * i) / 400);
-      const evaluation = evaluateRate(context, rate, ppm(0));
-      if (!evaluation.image) continue;
-      for (const order of [2, 3]) {
-        const check = evaluation.checks.find((c) => c.label === `H${order} wanted`)!;
-        const where = alias(order * centre, rate);
-        const inside = where > evaluation.image.low + 2 * MHZ && where < evaluation.image.high - 2 * MHZ;
-        if (!check.pass && inside && Math.abs(where - alias(centre, rate)) > 1 * MHZ) return { rate, order };
-      }
-    }
-  }
-  throw new Error('no bad rate found');
-}
 
 describe('verify: a deliberately bad rate (a harmonic on the band, per evaluateRate)', () => {
   const scenario = scenarioFixture();

@@ -1,0 +1,37 @@
+import { InputError } from '../../units/input-error.js';
+import { formatFrequency } from '../../units/format-frequency.js';
+import { verifyCapture } from '../../capture/verify-capture.js';
+import { verifyTable } from '../../output/verify-table.js';
+import { toJson } from '../../output/json.js';
+import { readScenarioFile } from '../read-scenario.js';
+import { positiveFrequency, wholeNumber } from '../option-values.js';
+import { EXIT, type ExitCode, type Io } from '../io.js';
+import type { VerifyOptions } from './verify-command.js';
+
+/** Bins of the wanted band each wanted tone needs, so that tones and their products can be placed apart. */
+const BINS_PER_TONE = 8;
+
+/**
+ * Reads a scenario, takes the simulated capture at --rate and prints it.
+ *
+ * @returns 0 when the capture agrees with the plan, 1 when it contradicts it
+ * @throws InputError (exit 2) for a rate outside the converter's range, a bad --tones or --samples, or a band too narrow for the record
+ */
+export function runVerify(file: string, options: VerifyOptions, io: Io): ExitCode {
+  const scenario = readScenarioFile(file);
+  const rate = positiveFrequency(options.rate, '--rate');
+  const { minRate, maxRate } = scenario.converter;
+  if (rate < minRate || rate > maxRate) {
+    throw new InputError('--rate', `a rate within the converter's range, ${formatFrequency(minRate)} to ${formatFrequency(maxRate)}`, options.rate);
+  }
+  const wantedTones = wholeNumber(options.tones, '--tones', 1, 8);
+  const samples = wholeNumber(options.samples, '--samples', 1024, 1048576);
+  if ((samples & (samples - 1)) !== 0) throw new InputError('--samples', 'a power of two, e.g. 65536', options.samples);
+  const bandBins = ((scenario.wanted.high - scenario.wanted.low) * samples) / rate;
+  if (bandBins < BINS_PER_TONE * wantedTones) {
+    throw new InputError('--samples', `a record long enough for ${wantedTones} tone(s) in the wanted band (${BINS_PER_TONE} bins each; the band spans ${bandBins.toFixed(1)})`, options.samples);
+  }
+  const result = verifyCapture(scenario, { rate, samples, wantedTones });
+  io.out(options.json ? toJson(result) : verifyTable(result));
+  return result.consistent ? EXIT.answered : EXIT.noAnswer;
+}
