@@ -86,21 +86,30 @@ export function maximiseWorstSlack(slacks: readonly LinearSlack[], range: Interv
   return { rate: second ? second.rate : first.rate, worstSlack: first.worstSlack };
 }
 
-/** max t: t ≤ bound(r) for each bound, 0 ≤ held(r) for each held, r in range. */
+/**
+ * max t: t ≤ bound(r) for each bound, 0 ≤ held(r) for each held, r in range.
+ * t is solved as t + shift ≥ 0 with every right-hand side made positive:
+ * javascript-lp-solver 1.0.3 calls a model with an unrestricted variable and
+ * a negative right-hand side infeasible (seen: t + 0.1n ≤ −1, t ≤ 0, n ≤ 1).
+ */
 function solveStage(bounds: readonly LinearSlack[], held: readonly LinearSlack[], range: Interval, unit: number): LpAnswer | null {
   const width = range.high - range.low;
+  const atLow = (s: LinearSlack) => (s.slope * range.low + s.offset) / unit;
+  const shift = 1 + Math.max(0, ...bounds.map((s) => -atLow(s)));
   const constraints: Record<string, { max: number }> = { span: { max: 1 } };
   const t: Record<string, number> = {};
   const x: Record<string, number> = { span: 1 };
-  const add = (name: string, s: LinearSlack, withT: boolean) => {
-    constraints[name] = { max: (s.slope * range.low + s.offset) / unit };
-    if (withT) t[name] = 1;
-    x[name] = (-s.slope * width) / unit;
-  };
-  bounds.forEach((s, i) => add(`b${i}`, s, true));
-  held.forEach((s, i) => add(`h${i}`, s, false));
-  const solution = lpSolver.Solve({ optimize: 't', opType: 'max', constraints, variables: { t, x }, unrestricted: { t: 1 } }) as Record<string, unknown>;
+  bounds.forEach((s, i) => {
+    constraints[`b${i}`] = { max: atLow(s) + shift };
+    t[`b${i}`] = 1;
+    x[`b${i}`] = (-s.slope * width) / unit;
+  });
+  held.forEach((s, i) => {
+    constraints[`h${i}`] = { max: atLow(s) };
+    x[`h${i}`] = (-s.slope * width) / unit;
+  });
+  const solution = lpSolver.Solve({ optimize: 't', opType: 'max', constraints, variables: { t, x } }) as Record<string, unknown>;
   if (solution['feasible'] !== true) return null;
   const fraction = Math.min(Math.max(Number(solution['x'] ?? 0), 0), 1);
-  return { rate: range.low + fraction * width, worstSlack: Number(solution['t'] ?? 0) * unit };
+  return { rate: range.low + fraction * width, worstSlack: (Number(solution['t'] ?? 0) - shift) * unit };
 }

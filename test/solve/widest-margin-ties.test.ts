@@ -30,3 +30,24 @@ describe('widest-margin LP with a constant slack (lexicographic second stage)', 
     expect(answer!.worstSlack / MHz).toBeCloseTo(47 / 3, 4);
   });
 });
+
+// javascript-lp-solver 1.0.3 reports an unrestricted variable with a negative
+// right-hand side as infeasible (found while testing the part planner); the
+// LP must still answer when every slack is negative. By hand: on [0, 1] MHz
+// with slacks −5 MHz and r − 10 MHz, the best is r = 1 MHz with −9 MHz.
+describe('widest-margin LP when every slack is negative', () => {
+  it('answers instead of calling the model infeasible', () => {
+    const MHz = 1e6;
+    const answer = maximiseWorstSlack(
+      [
+        { slope: 0, offset: -5 * MHz },
+        { slope: 1, offset: -10 * MHz },
+      ],
+      { low: 0, high: 1 * MHz },
+      1 * MHz,
+    );
+    expect(answer).not.toBeNull();
+    expect(answer!.rate / MHz).toBeCloseTo(1, 6);
+    expect(answer!.worstSlack / MHz).toBeCloseTo(-9, 6);
+  });
+});
