@@ -3,22 +3,27 @@ import { parseFrequency } from '../../units/parse-frequency.js';
 import type { Goal, Scenario } from '../../scenario/scenario.js';
 import { contextFromScenario } from '../../solve/context-from-scenario.js';
 import { solvePlan } from '../../solve/solve-plan.js';
+import { bestShiftAndRate } from '../../solve/if-shift/best-shift-and-rate.js';
 import { planReport } from '../../report/plan-report.js';
 import { planTable } from '../../output/plan-table.js';
 import { toJson } from '../../output/json.js';
 import { readScenarioWithInputs } from '../read-scenario.js';
 import { writeFileSafely } from '../safe-write.js';
-import { planPicturesSvg } from '../../pictures/plan-pictures.js';
 import { EXIT, type ExitCode, type Io } from '../io.js';
 import type { SolveOptions } from './solve-command.js';
 
-/** Reads, solves and prints one scenario (and draws it with --svg); exit 0 when a candidate passes, 1 when none does. */
-export function runSolve(file: string, options: SolveOptions, io: Io): ExitCode {
+/** Reads, solves and prints one scenario (with ifShift, also its best IF shift and rate; draws it with --svg); exit 0 when a candidate passes, 1 when none does. */
+export async function runSolve(file: string, options: SolveOptions, io: Io): Promise<ExitCode> {
   const { scenario, inputs } = readScenarioWithInputs(file);
   const goal = goalFromOptions(options, scenario);
   const context = contextFromScenario({ ...scenario, goal });
-  const report = planReport(scenario.name, context, solvePlan(context));
-  if (options.svg !== undefined) writeFileSafely(options.svg, planPicturesSvg(report), { force: options.force === true, inputs });
+  const shift = scenario.ifShift ? bestShiftAndRate({ ...scenario, goal }) : null;
+  const report = planReport(scenario.name, context, solvePlan(context), shift);
+  if (options.svg !== undefined) {
+    // The picture writers cost ~40 ms to load: only when a picture is asked for.
+    const { planPicturesSvg } = await import('../../pictures/plan-pictures.js');
+    writeFileSafely(options.svg, planPicturesSvg(report), { force: options.force === true, inputs });
+  }
   io.out(options.json ? toJson(report) : planTable(report));
   return report.best === null ? EXIT.noAnswer : EXIT.answered;
 }

@@ -26,6 +26,6 @@ export function addSolveCommand(program: Command, io: Io, settle: (code: ExitCod
     .option('--force', 'let --svg replace an existing file')
     .action(async (file: string, options: SolveOptions) => {
       const { runSolve } = await import('./solve-action.js');
-      settle(runSolve(file, options, io));
+      settle(await runSolve(file, options, io));
     });
 }
