@@ -43,8 +43,12 @@ export function spectrumFigure(report: PlanReport, candidateLabel: string): Figu
   const checks = candidate.checks;
   const threshold = checks.length > 0 ? checks[0]!.level + checks[0]!.levelMargin : null;
   const levels = [...checks.map((c) => c.level).filter(Number.isFinite), ...(threshold === null ? [] : [threshold])];
-  // The level axis runs from 0 dBFS (or the strongest level) down past the weakest, at least to −100 dBFS.
-  const levelTicks = coveringTicks(Math.min(-100, ...levels) - 5, Math.max(0, ...levels), 8);
+  // The level axis runs from 0 dBFS (or the strongest level) down past the weakest, at least to −100 dBFS,
+  // but no further than 60 dB below the blocking threshold: products far below it (a third-order product of
+  // two filtered blockers can compute to −250 dBFS) only squash the levels that matter; they are drawn as
+  // stubs on the floor and keep their figures in the table below.
+  const floor = threshold === null ? -Infinity : threshold - 60;
+  const levelTicks = coveringTicks(Math.max(Math.min(-100, ...levels) - 5, floor), Math.max(0, ...levels), 8);
   const bottom = levelTicks.values[0]!;
   const top = levelTicks.values[levelTicks.values.length - 1]!;
   const plotX: readonly [number, number] = [LEFT, WIDTH - RIGHT];
