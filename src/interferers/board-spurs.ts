@@ -44,6 +44,7 @@ export function boardSpurDrafts(spur: BoardSpur, scenario: Scenario): Interferer
       order: h === 1 ? null : h,
       source: `${what}, coupled ${path}`,
       rateMultiple: 0,
+      shiftMultiple: 0, // on the board, not converted by the LO
       ...extent,
       level: level(before - loss),
     });

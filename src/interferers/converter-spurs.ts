@@ -25,6 +25,7 @@ export function converterSpurDrafts(scenario: Scenario): InterfererDraft[] {
     order: null,
     source: `${source}, ${dbText(spurLevel, 'dBFS')}`,
     rateMultiple,
+    shiftMultiple: 0, // tied to the clock, not to the LO
     low: ZERO,
     high: ZERO,
     level: spurLevel,
@@ -48,6 +49,7 @@ export function converterSpurDrafts(scenario: Scenario): InterfererDraft[] {
         order: null,
         source: `interleaving image of the wanted band at ${k}/${m} of the sample rate ${side} f (${dbText(interleave.imageLevel, 'dBc')})`,
         rateMultiple: k / m,
+        shiftMultiple: side === '−' ? -1 : 1, // k/M·r ∓ (band + δ)
         low: side === '−' ? ((-wanted.high) as Hz) : wanted.low,
         high: side === '−' ? ((-wanted.low) as Hz) : wanted.high,
         level: imageLevel,

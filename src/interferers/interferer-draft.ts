@@ -12,7 +12,7 @@ export type InterfererDraft = Omit<Interferer, 'requiredMargin' | 'blocking'>;
  * @param draft label, kind, order, source, extent (Hz) and level (dBFS)
  * @param scenario the validated scenario
  * @returns the interferer
- * @example complete({ label: 'DC', kind: 'converter', order: null, source: '…', rateMultiple: 0, low: hz(0), high: hz(0), level: db(-80) }, s)
+ * @example complete({ label: 'DC', kind: 'converter', order: null, source: '…', rateMultiple: 0, shiftMultiple: 0, low: hz(0), high: hz(0), level: db(-80) }, s)
  */
 export function complete(draft: InterfererDraft, scenario: Scenario): Interferer {
   return { ...draft, requiredMargin: scenario.requirements.margin, blocking: isBlocking(draft.level, scenario) };

@@ -54,6 +54,8 @@ interface Tone {
   readonly low: Hz;
   readonly high: Hz;
   readonly level: Db;
+  /** How far it moves per hertz of IF shift (1: it moves with the IF). */
+  readonly shiftMultiple: number;
 }
 
 /**
@@ -61,15 +63,16 @@ interface Tone {
  * of each pair of neighbours, and of each neighbour with the wanted band (at
  * the strongest wanted level). Extents by interval arithmetic,
  * 2·[a, b] − [c, d] = [2a − d, 2b − c]; a negative extent is kept (it folds as
- * its magnitude). Levels from im3Level with the post-filter neighbour levels.
+ * its magnitude). Every signal here moves with the IF, so every product
+ * moves by (2·1 − 1)·δ = δ. Levels from im3Level with the post-filter neighbour levels.
  *
  * @param scenario the validated scenario
  * @returns drafts labelled `IM3 2·A−B`
  * @example intermodDrafts(s).map((d) => d.label) // ['IM3 2·ADJ-UP−ADJ-LO', 'IM3 2·ADJ-LO−ADJ-UP', 'IM3 2·wanted−ADJ-UP', ...]
  */
 export function intermodDrafts(scenario: Scenario): InterfererDraft[] {
-  const neighbours: Tone[] = scenario.neighbours.map((n) => ({ label: n.label, low: n.low, high: n.high, level: neighbourLevel(n, scenario) }));
-  const wanted: Tone = { label: 'wanted', low: scenario.wanted.low, high: scenario.wanted.high, level: scenario.wanted.strongestLevel };
+  const neighbours: Tone[] = scenario.neighbours.map((n) => ({ label: n.label, low: n.low, high: n.high, level: neighbourLevel(n, scenario), shiftMultiple: 1 }));
+  const wanted: Tone = { label: 'wanted', low: scenario.wanted.low, high: scenario.wanted.high, level: scenario.wanted.strongestLevel, shiftMultiple: 1 };
   const pairs: Array<[Tone, Tone]> = [];
   for (let i = 0; i < neighbours.length; i++) {
     for (let j = i + 1; j < neighbours.length; j++) pairs.push([neighbours[i]!, neighbours[j]!], [neighbours[j]!, neighbours[i]!]);
@@ -85,6 +88,7 @@ export function intermodDrafts(scenario: Scenario): InterfererDraft[] {
       order: 3,
       source: `third-order intermodulation 2·${a.label} − ${b.label}, made in the converter (${found.note})`,
       rateMultiple: 0,
+      shiftMultiple: 2 * a.shiftMultiple - b.shiftMultiple,
       low: (2 * a.low - b.high) as Hz,
       high: (2 * a.high - b.low) as Hz,
       level: found.level,

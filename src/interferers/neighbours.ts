@@ -60,6 +60,7 @@ export function neighbourDrafts(neighbour: Neighbour, scenario: Scenario): Inter
       order: null,
       source: `neighbour band ${neighbour.label} at ${dbText(neighbour.level, 'dBFS')} before the filter, ${dbText(loss, 'dB')} least filter attenuation`,
       rateMultiple: 0,
+      shiftMultiple: 1, // converted by the same LO as the wanted band
       low: neighbour.low,
       high: neighbour.high,
       level: atConverter,
@@ -74,6 +75,7 @@ export function neighbourDrafts(neighbour: Neighbour, scenario: Scenario): Inter
       order: k,
       source: `${ordinal(k)} harmonic of neighbour ${neighbour.label}, made in the converter (${figure.note} at ${dbText(scenario.wanted.strongestLevel, 'dBFS')}, scaled to the neighbour's level)`,
       rateMultiple: 0,
+      shiftMultiple: k,
       ...scaled(k, neighbour),
       level: converterHarmonicLevel(atConverter, figure.dbc, scenario.wanted.strongestLevel, k),
     });

@@ -5,7 +5,7 @@ import { ordinal } from './words.js';
 
 /**
  * Harmonics k = 2..harmonicOrder of the wanted band, made in the converter:
- * extent k·[low, high], level strongestLevel + the k-th harmonic figure (dBc
+ * extent k·[low, high] (moving k·δ with the IF), level strongestLevel + the k-th harmonic figure (dBc
  * at the strongest wanted level). Made past the filter, so not attenuated.
  * None when the converter states no harmonic figure.
  *
@@ -24,6 +24,7 @@ export function wantedHarmonics(scenario: Scenario): InterfererDraft[] {
       order: k,
       source: `${ordinal(k)} harmonic of the wanted band, made in the converter (${figure.note})`,
       rateMultiple: 0,
+      shiftMultiple: k, // k·(band + δ)
       ...scaled(k, scenario.wanted),
       level: level(scenario.wanted.strongestLevel + figure.dbc),
     });

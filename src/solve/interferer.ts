@@ -7,6 +7,12 @@ export type InterfererKind = 'harmonic' | 'spur' | 'neighbour' | 'intermod' | 'c
  * the sampling rate r: extent(r) = rateMultiple·r + [low, high]. Fixed
  * sources have rateMultiple 0; converter spurs tied to the rate have
  * rateMultiple k/M; a negative extent folds as its magnitude.
+ *
+ * When the first LO is retuned and the IF moves by δ, the extent moves to
+ * rateMultiple·r + shiftMultiple·δ + [low, high]: the wanted band and each
+ * neighbour move by δ (shiftMultiple 1), their k-th harmonics by k·δ, a
+ * third-order product 2·f1 − f2 of two moving signals by δ, an interleaving
+ * image k/M·r ∓ f by ∓δ; board spurs and rate-tied tones stay (0).
  */
 export interface Interferer {
   /** Unique within one plan, e.g. "H3 wanted", "IM3 2·A1−A2". */
@@ -17,6 +23,8 @@ export interface Interferer {
   /** Where it comes from, in words, e.g. "3rd harmonic of the wanted band". */
   readonly source: string;
   readonly rateMultiple: number;
+  /** How many times the IF shift δ the extent moves by (0 for fixed sources). */
+  readonly shiftMultiple: number;
   readonly low: Hz;
   readonly high: Hz;
   /** Level at the converter, dBFS (after the anti-alias filter). */

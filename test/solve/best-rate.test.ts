@@ -26,7 +26,7 @@ describe('a candidate at the end of its drift-safe range', () => {
     guard: { low: hz(0), high: hz(0) },
     limits: { minRate: hz(10 * MHZ), maxRate: hz(60 * MHZ) },
     interferers: [
-      { label: 'tone', kind: 'spur', order: null, source: 'board tone', rateMultiple: 0, low: hz(tone), high: hz(tone), level: db(-50), requiredMargin: hz(0.5 * MHZ), blocking: true },
+      { label: 'tone', kind: 'spur', order: null, source: 'board tone', rateMultiple: 0, shiftMultiple: 0, low: hz(tone), high: hz(tone), level: db(-50), requiredMargin: hz(0.5 * MHZ), blocking: true },
     ],
     levelThreshold: db(-90),
     clocks: [],

@@ -38,7 +38,7 @@ const A3 = 0.02;
 const MARGIN = 0.5 * MHZ;
 
 function extent(label: string, kind: Interferer['kind'], order: number | null, low: number, high: number, isBlocking: boolean): Interferer {
-  return { label, kind, order, source: label, rateMultiple: 0, low: hz(low), high: hz(high), level: db(isBlocking ? -60 : -120), requiredMargin: hz(MARGIN), blocking: isBlocking };
+  return { label, kind, order, source: label, rateMultiple: 0, shiftMultiple: 0, low: hz(low), high: hz(high), level: db(isBlocking ? -60 : -120), requiredMargin: hz(MARGIN), blocking: isBlocking };
 }
 
 const context: PlanContext = {

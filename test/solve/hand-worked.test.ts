@@ -69,6 +69,7 @@ function blocking(label: string, rateMultiple: number, f: number): Interferer {
     order: null,
     source: label,
     rateMultiple,
+    shiftMultiple: 0,
     low: hz(f * MHZ),
     high: hz(f * MHZ),
     level: db(-50),

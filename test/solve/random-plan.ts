@@ -36,6 +36,7 @@ function interfererArbitrary(shape: Shape, index: number): fc.Arbitrary<Interfer
     order,
     source: `random ${kind}`,
     rateMultiple,
+    shiftMultiple: 0,
     low: hz(lo),
     high: hz(hi),
     level: db(-50),
