@@ -1,15 +1,17 @@
 import { formatFrequency, trimmed } from '../units/format-frequency.js';
 import type { PlanReport, ReportedCandidate, ReportedCheck } from '../report/plan-report.js';
 import { plainTable } from './table.js';
+import { shiftSection } from './shift-table.js';
 
 const MOST_CANDIDATES_SHOWN = 12;
 const MOST_CHECKS_SHOWN = 30;
 
-/** The solved plan as text for people: windows, feasible set, candidates and the best one's checks. */
+/** The solved plan as text for people: windows, feasible set, candidates, the best one's checks and, with ifShift, the best (IF shift, rate) pair. */
 export function planTable(report: PlanReport): string {
   const sections = [heading(report), windowsSection(report), feasibleSection(report), candidatesSection(report)];
   const focus = report.candidates[0];
   if (focus) sections.push(checksSection(focus));
+  if (report.ifShift) sections.push(shiftSection(report.ifShift));
   sections.push(verdict(report), report.caution);
   return sections.join('\n\n') + '\n';
 }

@@ -6,7 +6,9 @@ import type { InterfererKind } from '../solve/interferer.js';
 import type { PlanContext } from '../solve/plan-context.js';
 import type { Candidate, PlanResult } from '../solve/solve-plan.js';
 import type { RateEvaluation } from '../solve/evaluate-rate.js';
+import type { ShiftSearch } from '../solve/if-shift/best-shift-and-rate.js';
 import { PAPER_DESIGN_CAUTION } from './caution.js';
+import { shiftReport, type ShiftReport } from './shift-report.js';
 
 /** An interferer as reported: its extent rateMultiple·r + [low, high] and whether it blocks. */
 export interface ReportedInterferer {
@@ -15,6 +17,8 @@ export interface ReportedInterferer {
   readonly order: number | null;
   readonly source: string;
   readonly rateMultiple: number;
+  /** How many times the IF shift δ it moves by when the LO is retuned (0: fixed). */
+  readonly shiftMultiple: number;
   readonly low: Hz;
   readonly high: Hz;
   readonly requiredMargin: Hz;
@@ -94,6 +98,8 @@ export interface PlanReport {
   readonly best: string | null;
   /** Clock parts left out: none of their rates lies inside the converter's rate range. */
   readonly unplannedParts: readonly string[];
+  /** The best (IF shift, rate) pair when the scenario lets the first LO move (ifShift); null when the LO is fixed. */
+  readonly ifShift: ShiftReport | null;
   readonly caution: string;
 }
 
@@ -103,8 +109,9 @@ export interface PlanReport {
  * @param name the scenario's name
  * @param context the plan that was solved
  * @param result what the solver found
+ * @param shift what bestShiftAndRate found, when the scenario has ifShift
  */
-export function planReport(name: string, context: PlanContext, result: PlanResult): PlanReport {
+export function planReport(name: string, context: PlanContext, result: PlanResult, shift: ShiftSearch | null = null): PlanReport {
   const passing = result.candidates.find((c) => c.evaluation.pass);
   return {
     scenario: name,
@@ -118,6 +125,7 @@ export function planReport(name: string, context: PlanContext, result: PlanResul
       order: i.order,
       source: i.source,
       rateMultiple: i.rateMultiple,
+      shiftMultiple: i.shiftMultiple,
       low: i.low,
       high: i.high,
       requiredMargin: i.requiredMargin,
@@ -133,6 +141,7 @@ export function planReport(name: string, context: PlanContext, result: PlanResul
     candidates: result.candidates.map((c) => reportedCandidate(context, c)),
     best: passing ? passing.label : null,
     unplannedParts: result.unplannedParts,
+    ifShift: shift ? shiftReport(context.band, shift) : null,
     caution: PAPER_DESIGN_CAUTION,
   };
 }

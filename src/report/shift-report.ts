@@ -1,0 +1,84 @@
+import { hz, type Hz, type Ppm } from '../units/quantities.js';
+import type { Band } from '../math/band.js';
+import type { RateEvaluation } from '../solve/evaluate-rate.js';
+import type { ShiftedRate, ShiftSearch } from '../solve/if-shift/best-shift-and-rate.js';
+
+/** One (IF shift, rate) pair as reported. */
+export interface ReportedShift {
+  /** δ, Hz. */
+  readonly shift: Hz;
+  readonly rate: Hz;
+  readonly tolerancePpm: Ppm;
+  /** The new IF centre: the nominal centre plus δ, Hz. */
+  readonly center: Hz;
+  readonly zone: number | null;
+  readonly inverted: boolean | null;
+  /** Aliased centre of the moved band, where the NCO is tuned, Hz. */
+  readonly nco: Hz | null;
+  readonly worstMargin: Hz;
+  readonly limitedBy: string;
+  readonly worstSlack: Hz;
+  /** The tightest check with more slack than the worst (what decides between pairs that tie on the worst); null when none. */
+  readonly next: { readonly limitedBy: string; readonly margin: Hz; readonly slack: Hz } | null;
+  /** "piece": a two-variable LP optimum; "sample": the fixed-shift solver's best at a seed shift. */
+  readonly origin: ShiftedRate['origin'];
+  readonly pass: boolean;
+}
+
+/** The `ifShift` section of the solve report. */
+export interface ShiftReport {
+  readonly low: Hz;
+  readonly high: Hz;
+  readonly best: ReportedShift | null;
+  /** The best pair at the nominal IF, for comparison; null when 0 is outside the range or nothing is feasible there. */
+  readonly atNoShift: ReportedShift | null;
+  readonly seedShifts: readonly Hz[];
+  readonly piecesSolved: number;
+}
+
+/**
+ * The report of the IF-shift search.
+ *
+ * @param band the nominal wanted band, Hz
+ * @param search what bestShiftAndRate found
+ * @returns the JSON section `ifShift`
+ * @example shiftReport(band, search).best?.center // 142 MHz for a 140 MHz IF moved +2 MHz
+ */
+export function shiftReport(band: Band, search: ShiftSearch): ShiftReport {
+  const reported = (pair: ShiftedRate | null) => (pair ? reportedShift(band, pair) : null);
+  return {
+    low: search.range.low,
+    high: search.range.high,
+    best: reported(search.best),
+    atNoShift: reported(search.atNoShift),
+    seedShifts: search.seedShifts,
+    piecesSolved: search.piecesSolved,
+  };
+}
+
+function reportedShift(band: Band, pair: ShiftedRate): ReportedShift {
+  const e = pair.evaluation;
+  return {
+    shift: pair.shift,
+    rate: pair.rate,
+    tolerancePpm: e.tolerancePpm,
+    center: hz((band.low + band.high) / 2 + pair.shift),
+    zone: e.zone,
+    inverted: e.inverted,
+    nco: e.center,
+    worstMargin: e.worstMargin,
+    limitedBy: e.limitedBy,
+    worstSlack: e.worstSlack,
+    next: nextLimit(e, band.high - band.low),
+    origin: pair.origin,
+    pass: e.pass,
+  };
+}
+
+/** The tightest check (zone edge or blocking) whose slack exceeds the worst by more than 1e-9 of the bandwidth. */
+function nextLimit(e: RateEvaluation, width: number): ReportedShift['next'] {
+  const rows = [{ limitedBy: 'zone edge', margin: e.zoneEdgeMargin, slack: e.zoneEdgeMargin as number }];
+  for (const c of e.checks) if (c.blocking) rows.push({ limitedBy: c.label, margin: c.margin, slack: c.margin - c.requiredMargin });
+  const next = rows.filter((r) => r.slack > e.worstSlack + 1e-9 * width).sort((a, b) => a.slack - b.slack)[0];
+  return next ? { limitedBy: next.limitedBy, margin: next.margin, slack: hz(next.slack) } : null;
+}
