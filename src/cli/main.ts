@@ -8,6 +8,7 @@ import { addSchemaCommand } from './commands/schema-command.js';
 import { addCompareCommand } from './commands/compare-command.js';
 import { addInitCommand } from './commands/init-command.js';
 import { addReportCommand } from './commands/report-command.js';
+import { addVerifyCommand } from './commands/verify-command.js';
 
 const VERSION = '0.1.0';
 
@@ -47,6 +48,7 @@ export async function runCli(args: readonly string[], io: Io): Promise<ExitCode>
   addSchemaCommand(program, io, settle);
   addInitCommand(program, io, settle);
   addReportCommand(program, io, settle, VERSION);
+  addVerifyCommand(program, io, settle);
   try {
     await program.parseAsync(args.filter((a) => a !== '--debug'), { from: 'user' });
     return exitCode;
