@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import FFT from 'fft.js';
 import { applyPolynomial, binomial, fitPolynomial, singleToneHarmonic } from '../../src/capture/converter-polynomial.js';
-import { enumerateProducts, productAmplitude } from '../../src/capture/mixing-products.js';
+import { enumerateProducts, orderSupremums, productAmplitude, productBound } from '../../src/capture/mixing-products.js';
 import { seededUniform } from '../../src/capture/seeded-random.js';
 
 /**
@@ -80,8 +80,22 @@ describe('fitPolynomial', () => {
 });
 
 describe('productAmplitude and enumerateProducts (multinomial expansion)', () => {
-  it('gives the textbook two-tone 2f1 − f2 amplitude (3/4)·a3·A1²·A2', () => {
+  it('gives the textbook two-tone 2f1 − f2 amplitude (3/4)·a3·A1²·A2, which the derivative bound meets exactly for a single power', () => {
     expect(productAmplitude([0, 1, 0, 0.04], [0.5, 0.5], [2, -1])).toBeCloseTo(0.75 * 0.04 * 0.125, 15);
+    expect(productBound(orderSupremums([0, 1, 0, 0.04], 1), [0.5, 0.5], [2, -1])).toBeCloseTo(0.75 * 0.04 * 0.125, 15);
+  });
+
+  it('bounds the harmonics of one tone through a 15th-order fit by the stated figures\' sizes, though its coefficients are large', () => {
+    // Fifteen orders at −90 dBc: the exact fit's monomial coefficients reach O(1) and alternate, yet on |x| ≤ A the curve stays tame.
+    const reference = 10 ** (-1 / 20);
+    const a = fitPolynomial(new Map(Array.from({ length: 14 }, (_, i) => [i + 2, 10 ** (-91 / 20)] as const)), reference, 15);
+    expect(Math.max(...a.slice(2).map(Math.abs))).toBeGreaterThan(0.1);
+    const bounds = orderSupremums(a, reference);
+    for (let m = 2; m <= 15; m++) {
+      const exact = Math.abs(singleToneHarmonic(a, reference, m));
+      expect(exact).toBeCloseTo(10 ** (-91 / 20), 12);
+      expect(exact).toBeLessThanOrEqual(productBound(bounds, [reference], [m]) * (1 + 1e-9));
+    }
   });
 
   it('matches every bin of a three-tone spectrum through a random 6th-order polynomial (fft.js)', () => {
@@ -95,7 +109,9 @@ describe('productAmplitude and enumerateProducts (multinomial expansion)', () =>
     const record = tones(list);
     applyPolynomial(record, a);
     const spectrum = toneAmplitudes(record);
-    const products = enumerateProducts(a, list.map((t) => t.amplitude), 1e-12);
+    const found = enumerateProducts(a, list.map((t) => t.amplitude), 1e-12);
+    expect(found.complete).toBe(true);
+    const products = found.products;
     // These cycle counts are chosen so that no two products of order ≤ 6 share a bin: each bin is one product.
     const byBin = new Map<number, number>();
     for (const p of products) {
@@ -106,6 +122,9 @@ describe('productAmplitude and enumerateProducts (multinomial expansion)', () =>
       byBin.set(bin, p.amplitude);
     }
     for (const [bin, amplitude] of byBin) expect(spectrum[bin]).toBeCloseTo(amplitude, 12);
+    // Every product stays under its derivative bound (orderSupremums), which the search prunes with.
+    const bounds = orderSupremums(a, 0.75);
+    for (const p of products) expect(p.amplitude).toBeLessThanOrEqual(productBound(bounds, list.map((t) => t.amplitude), p.net) * (1 + 1e-12));
     // ...and nothing the enumeration left out shows above its cutoff.
     spectrum.forEach((value, bin) => {
       if (!byBin.has(bin) && bin !== 0) expect(value, `bin ${bin}`).toBeLessThan(1e-11);

@@ -1,40 +1,20 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { db, hz, ppm, seconds } from '../../src/units/quantities.js';
-import type { Interferer } from '../../src/solve/interferer.js';
+import { hz, ppm, seconds } from '../../src/units/quantities.js';
 import type { PlanContext } from '../../src/solve/plan-context.js';
-import { guardedBand, rateWindows } from '../../src/windows/enumerate-windows.js';
-import { feasibleSet, type FeasibleSet } from '../../src/solve/feasible-set.js';
 import { evaluateRate } from '../../src/solve/evaluate-rate.js';
 import { driftHeadroom, RATE_LIMIT } from '../../src/clocks/drift-headroom.js';
+import { feasibleSetOf, handWorkedContext, MHZ } from '../helpers/hand-worked-plan.js';
 import { bruteGuarded, bruteLeastDistance, brutePasses, verdictSpacing, wantedAlias, wholeInOneZone } from '../helpers/brute-force-plan.js';
 import { planArbitrary } from '../solve/random-plan.js';
 
-const MHZ = 1e6;
-
-function setOf(context: PlanContext): FeasibleSet {
-  return feasibleSet(rateWindows(guardedBand(context.band, context.guard.low, context.guard.high), context.limits), context.interferers, context.band);
-}
-
-function blocking(label: string, rateMultiple: number, f: number): Interferer {
-  return { label, kind: rateMultiple === 0 ? 'spur' : 'converter', order: null, source: label, rateMultiple, low: hz(f * MHZ), high: hz(f * MHZ), level: db(-50), requiredMargin: hz(0.5 * MHZ), blocking: true };
-}
+const setOf = feasibleSetOf;
 
 describe('drift headroom on the plan worked on paper (test/solve/hand-worked.test.ts)', () => {
   // Feasible there: [25, 82/3] MHz (zone 2 from its window edge 2·25/2 = 25 up to the rate/4 spur's blocked
   // range from 82/3) and [35.5, 42] (from the tone's blocked range ending at 35.5 up to the window edge
   // 2·21/1 = 42), [50, 60] (window edge 50, rate limit 60).
-  const context: PlanContext = {
-    band: { low: hz(21 * MHZ), high: hz(25 * MHZ) },
-    guard: { low: hz(0), high: hz(0) },
-    limits: { minRate: hz(10 * MHZ), maxRate: hz(60 * MHZ) },
-    interferers: [blocking('board tone 10M', 0, 10), blocking('rate/4 spur', 1 / 4, 0)],
-    levelThreshold: db(-90),
-    clocks: [],
-    clocking: { clockDividers: [1], bits: 12, apertureJitter: seconds(0) },
-    goal: { kind: 'widest-margin' },
-    tolerancePpm: ppm(0),
-  };
+  const context = handWorkedContext();
   const set = setOf(context);
 
   it('at 26 MHz: (1 − 25/26)·1e6 = 38 461.5 ppm down to the zone edge, (82/78 − 1)·1e6 = 51 282.1 ppm up to the spur', () => {

@@ -1,12 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { db, hz, ppm, seconds } from '../../src/units/quantities.js';
-import type { Interferer } from '../../src/solve/interferer.js';
+import { hz, ppm, seconds } from '../../src/units/quantities.js';
 import type { PlanContext } from '../../src/solve/plan-context.js';
-import { guardedBand, rateWindows } from '../../src/windows/enumerate-windows.js';
-import { feasibleSet } from '../../src/solve/feasible-set.js';
 import { evaluateRate } from '../../src/solve/evaluate-rate.js';
 import { planPart, SEARCH_ALLOWANCE, type PlanPartOptions } from '../../src/clocks/plan-part.js';
+import { feasibleSetOf, handWorkedContext } from '../helpers/hand-worked-plan.js';
 import { brutePasses } from '../helpers/brute-force-plan.js';
 import { planArbitrary } from '../solve/random-plan.js';
 import { everySetting, part, synthesiser } from './part-fixtures.js';
@@ -21,13 +19,7 @@ const PATHS: Record<string, PlanPartOptions> = {
   'intervals, enumeration': { everyRateUpTo: 0, enumerateUpTo: Infinity, screenUpTo: Infinity },
 };
 
-function setOf(context: PlanContext) {
-  return feasibleSet(rateWindows(guardedBand(context.band, context.guard.low, context.guard.high), context.limits), context.interferers, context.band);
-}
-
-function blocking(label: string, rateMultiple: number, f: number): Interferer {
-  return { label, kind: rateMultiple === 0 ? 'spur' : 'converter', order: null, source: label, rateMultiple, low: hz(f * MHZ), high: hz(f * MHZ), level: db(-50), requiredMargin: hz(0.5 * MHZ), blocking: true };
-}
+const setOf = feasibleSetOf;
 
 describe('the best rate of a synthesiser on a plan worked on paper', () => {
   // The plan of test/solve/hand-worked.test.ts: band 21–25 MHz, tone at 10 MHz and a rate/4 spur each kept
@@ -43,17 +35,7 @@ describe('the best rate of a synthesiser on a plan worked on paper', () => {
   // Best: N = 16, M = 3, D = 1, 160/3 MHz, worst slack 5/3 MHz at the zone edge. Its feasible interval
   // [50, 60] ends at the zone-1 window edge 2·25 = 50 MHz and at the 60 MHz rate limit: headroom
   // (1 − 50/(160/3))·1e6 = 62 500 ppm down and (60/(160/3) − 1)·1e6 = 125 000 ppm up.
-  const context: PlanContext = {
-    band: { low: hz(21 * MHZ), high: hz(25 * MHZ) },
-    guard: { low: hz(0), high: hz(0) },
-    limits: { minRate: hz(10 * MHZ), maxRate: hz(60 * MHZ) },
-    interferers: [blocking('board tone 10M', 0, 10), blocking('rate/4 spur', 1 / 4, 0)],
-    levelThreshold: db(-90),
-    clocks: [],
-    clocking: CLOCKING,
-    goal: { kind: 'widest-margin' },
-    tolerancePpm: ppm(0),
-  };
+  const context = handWorkedContext({ clocking: CLOCKING });
   const syn = part('SYN-H 10M', 10 * MHZ, synthesiser([1, 20], [3, 3], [1, 2], [1 * MHZ, 55 * MHZ]), 0);
 
   for (const [name, options] of Object.entries(PATHS)) {

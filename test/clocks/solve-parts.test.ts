@@ -1,7 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { db, hz, ppm, seconds } from '../../src/units/quantities.js';
-import type { Interferer } from '../../src/solve/interferer.js';
-import type { PlanContext } from '../../src/solve/plan-context.js';
+import { seconds } from '../../src/units/quantities.js';
 import { solvePlan } from '../../src/solve/solve-plan.js';
 import { guardedBand, rateWindows } from '../../src/windows/enumerate-windows.js';
 import { feasibleSet } from '../../src/solve/feasible-set.js';
@@ -10,12 +8,8 @@ import { driftHeadroom } from '../../src/clocks/drift-headroom.js';
 import { planReport } from '../../src/report/plan-report.js';
 import { planTable } from '../../src/output/plan-table.js';
 import { part, synthesiser } from './part-fixtures.js';
+import { handWorkedContext, MHZ } from '../helpers/hand-worked-plan.js';
 
-const MHZ = 1e6;
-
-function blocking(label: string, rateMultiple: number, f: number): Interferer {
-  return { label, kind: rateMultiple === 0 ? 'spur' : 'converter', order: null, source: label, rateMultiple, low: hz(f * MHZ), high: hz(f * MHZ), level: db(-50), requiredMargin: hz(0.5 * MHZ), blocking: true };
-}
 
 describe('solvePlan puts every clock part forward at its best rate', () => {
   // The plan worked on paper in test/solve/hand-worked.test.ts, with four invented Heron parts.
@@ -23,17 +17,10 @@ describe('solvePlan puts every clock part forward at its best rate', () => {
   const divided = part('XO-D 120M', 120 * MHZ, { kind: 'divider' }, 0, 0.5e-12);
   const syn = part('SYN-H 10M', 10 * MHZ, synthesiser([1, 20], [3, 3], [1, 2], [1 * MHZ, 55 * MHZ]), 0);
   const outside = part('XO-Z 75M', 75 * MHZ, { kind: 'direct' });
-  const context: PlanContext = {
-    band: { low: hz(21 * MHZ), high: hz(25 * MHZ) },
-    guard: { low: hz(0), high: hz(0) },
-    limits: { minRate: hz(10 * MHZ), maxRate: hz(60 * MHZ) },
-    interferers: [blocking('board tone 10M', 0, 10), blocking('rate/4 spur', 1 / 4, 0)],
-    levelThreshold: db(-90),
+  const context = handWorkedContext({
     clocks: [xo, divided, syn, outside],
     clocking: { clockDividers: [1, 2, 3], bits: 12, apertureJitter: seconds(0.2e-12) },
-    goal: { kind: 'widest-margin' },
-    tolerancePpm: ppm(0),
-  };
+  });
   const set = feasibleSet(rateWindows(guardedBand(context.band, context.guard.low, context.guard.high), context.limits), context.interferers, context.band);
   const result = solvePlan(context);
 

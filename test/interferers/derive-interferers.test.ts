@@ -54,6 +54,7 @@ const handWorked: Scenario = {
     label: 'Saltmarsh SR-12D',
     minRate: hz(20 * MHz),
     maxRate: hz(300 * MHz),
+    clockDividers: [1],
     inputBandwidth: hz(500 * MHz),
     bits: 12,
     harmonics: new Map([
@@ -78,6 +79,7 @@ const handWorked: Scenario = {
   requirements: { margin: hz(0.5 * MHz), rejection: db(40), tolerancePpm: ppm(20) },
   clocks: [],
   goal: { kind: 'widest-margin' },
+  ifShift: null,
 };
 
 // [label, kind, order, rateMultiple, low MHz, high MHz, level dBFS, blocking], from the comment above.

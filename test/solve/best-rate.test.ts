@@ -7,6 +7,7 @@ import type { PlanContext } from '../../src/solve/plan-context.js';
 import { brutePasses } from '../helpers/brute-force-plan.js';
 import type { Goal } from '../../src/scenario/scenario.js';
 import { exactEdges, nearAnEdge, planArbitrary } from './random-plan.js';
+import { PLAIN_CLOCKING } from '../helpers/hand-worked-plan.js';
 
 const MHZ = 1e6;
 
@@ -30,6 +31,7 @@ describe('a candidate at the end of its drift-safe range', () => {
     ],
     levelThreshold: db(-90),
     clocks: [],
+    clocking: PLAIN_CLOCKING,
     goal: { kind: 'lowest-rate' },
     tolerancePpm: ppm(1000),
   };

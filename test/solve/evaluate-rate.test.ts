@@ -5,6 +5,7 @@ import { feasibleSet } from '../../src/solve/feasible-set.js';
 import { evaluateRate } from '../../src/solve/evaluate-rate.js';
 import type { PlanContext } from '../../src/solve/plan-context.js';
 import { brutePasses } from '../helpers/brute-force-plan.js';
+import { PLAIN_CLOCKING } from '../helpers/hand-worked-plan.js';
 
 const MHZ = 1e6;
 
@@ -21,6 +22,7 @@ describe('evaluateRate: a lower guard reaching below DC', () => {
     interferers: [],
     levelThreshold: db(-90),
     clocks: [],
+    clocking: PLAIN_CLOCKING,
     goal: { kind: 'widest-margin' },
     tolerancePpm: ppm(0),
   };

@@ -5,6 +5,7 @@ import type { Interferer } from '../../src/solve/interferer.js';
 import type { PlanContext } from '../../src/solve/plan-context.js';
 import { solvePlan } from '../../src/solve/solve-plan.js';
 import { evaluateRate, type RateEvaluation } from '../../src/solve/evaluate-rate.js';
+import { PLAIN_CLOCKING } from '../helpers/hand-worked-plan.js';
 
 /**
  * A simulated capture, with fft.js (a general-purpose FFT from the npm
@@ -53,6 +54,7 @@ const context: PlanContext = {
   ],
   levelThreshold: db(-90),
   clocks: [],
+  clocking: PLAIN_CLOCKING,
   goal: { kind: 'widest-margin' },
   tolerancePpm: ppm(20),
 };

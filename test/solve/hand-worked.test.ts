@@ -1,7 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { db, hz, ppm } from '../../src/units/quantities.js';
-import type { Interferer } from '../../src/solve/interferer.js';
-import type { PlanContext } from '../../src/solve/plan-context.js';
+import { hz, ppm } from '../../src/units/quantities.js';
+import { handWorkedContext, MHZ } from '../helpers/hand-worked-plan.js';
 import { solvePlan } from '../../src/solve/solve-plan.js';
 import { evaluateRate } from '../../src/solve/evaluate-rate.js';
 
@@ -60,34 +59,7 @@ import { evaluateRate } from '../../src/solve/evaluate-rate.js';
  *      so the best is the top, r = 60, worst slack 5.
  */
 
-const MHZ = 1e6;
-
-function blocking(label: string, rateMultiple: number, f: number): Interferer {
-  return {
-    label,
-    kind: rateMultiple === 0 ? 'spur' : 'converter',
-    order: null,
-    source: label,
-    rateMultiple,
-    shiftMultiple: 0,
-    low: hz(f * MHZ),
-    high: hz(f * MHZ),
-    level: db(-50),
-    requiredMargin: hz(0.5 * MHZ),
-    blocking: true,
-  };
-}
-
-const context: PlanContext = {
-  band: { low: hz(21 * MHZ), high: hz(25 * MHZ) },
-  guard: { low: hz(0), high: hz(0) },
-  limits: { minRate: hz(10 * MHZ), maxRate: hz(60 * MHZ) },
-  interferers: [blocking('board tone 10M', 0, 10), blocking('rate/4 spur', 1 / 4, 0)],
-  levelThreshold: db(-90),
-  clocks: [],
-  goal: { kind: 'widest-margin' },
-  tolerancePpm: ppm(0),
-};
+const context = handWorkedContext();
 
 /** Rates compared to within 1e-6 Hz (the hand fractions are exact; the solver divides once). */
 const closeTo = (mhz: number) => expect.closeTo(mhz * MHZ, 6);

@@ -4,6 +4,7 @@ import type { Interferer, InterfererKind } from '../../src/solve/interferer.js';
 import type { PlanContext } from '../../src/solve/plan-context.js';
 import type { FeasibleSet } from '../../src/solve/feasible-set.js';
 import type { RateWindow } from '../../src/windows/rate-window.js';
+import { PLAIN_CLOCKING } from '../helpers/hand-worked-plan.js';
 
 /**
  * Random plan contexts for the property tests (fast-check): a band, guards
@@ -89,6 +90,7 @@ export function planArbitrary(tolerancePpm = 0): fc.Arbitrary<PlanContext> {
           interferers: list,
           levelThreshold: db(-90),
           clocks: [],
+          clocking: PLAIN_CLOCKING,
           goal: { kind: 'widest-margin' },
           tolerancePpm: ppm(tolerancePpm),
         }),
