@@ -19,6 +19,12 @@ export interface ModelComponent {
   readonly wanted: boolean;
 }
 
+/** The model's components and whether the list is complete (see enumerateProducts). */
+export interface ModelComponents {
+  readonly components: readonly ModelComponent[];
+  readonly complete: boolean;
+}
+
 /**
  * Every component the model expects down to `cutoff`: the products of the
  * input tones through the polynomial (the tones themselves included, with
@@ -29,10 +35,12 @@ export interface ModelComponent {
  * @param coefficients the polynomial
  * @param samples record length N
  * @param cutoff least amplitude kept
+ * @returns the components, and whether the product search ran to its end
  */
-export function modelComponents(tones: readonly CaptureTone[], index: InputIndex, coefficients: Coefficients, samples: number, cutoff: number): ModelComponent[] {
+export function modelComponents(tones: readonly CaptureTone[], index: InputIndex, coefficients: Coefficients, samples: number, cutoff: number): ModelComponents {
   const amplitudes = index.inputs.map((i) => tones[i]!.amplitude);
-  const products = enumerateProducts(coefficients, amplitudes, cutoff).map((p) => {
+  const list = enumerateProducts(coefficients, amplitudes, cutoff);
+  const products = list.products.map((p) => {
     const cycles = p.net.reduce((sum, n, i) => sum + n * tones[index.inputs[i]!]!.cycles, 0);
     const single = p.order === 1 ? index.inputs[p.net.findIndex((n) => n !== 0)]! : -1;
     return {
@@ -45,5 +53,5 @@ export function modelComponents(tones: readonly CaptureTone[], index: InputIndex
     };
   });
   const added = tones.flatMap((t, i) => (t.input ? [] : [{ key: `t:${i}`, name: t.label, order: 1, bin: foldCycles(t.cycles, samples), amplitude: t.amplitude, wanted: false }]));
-  return [...products, ...added];
+  return { components: [...products, ...added], complete: list.complete };
 }

@@ -4,6 +4,8 @@ import { captureTones, wantedNominals, type CaptureRecord, type ToneLayout } fro
 
 /** How far a band's tone may be moved to find a clear place, whole cycles each way. */
 export const LAYOUT_SEARCH = 64;
+/** Layouts tried in all, so that a dense set of products (many tones, high orders) cannot stall the search. */
+export const LAYOUT_BUDGET = 400;
 
 /**
  * Bins within which two lines' window spectra touch: a whole-cycle tone
@@ -29,7 +31,8 @@ export interface ComponentTemplate {
  * neighbours wider than zero) so that the lines of the plan are clear of
  * each other and of the model's other products: each tone in turn is tried
  * at 0, +1, −1, +2, … cycles from its first place (staying inside its band),
- * keeping the first place with the fewest close pairs (see crowding). Tone
+ * keeping the first place with the fewest close pairs (see crowding), within
+ * LAYOUT_BUDGET layouts in all. Tone
  * sources are not moved: their place is the plan's. Pairs no move can part
  * stay, and are reported as crowded when measured.
  *
@@ -58,13 +61,17 @@ export function chooseLayout(scenario: Scenario, record: CaptureRecord, componen
     }
     return [];
   });
+  let tried = 0;
   for (const { offsets, slot, tones, allowed } of movable) {
     let best = { offset: 0, cost: Infinity };
-    for (let step = 0; step <= 2 * LAYOUT_SEARCH && best.cost > 0; step++) {
+    const share = Math.max(8, Math.floor((LAYOUT_BUDGET - tried) / Math.max(1, movable.length))); // each tone gets a fair part of what is left
+    for (let step = 0, mine = 0; step <= 2 * LAYOUT_SEARCH && best.cost > 0 && mine < share; step++) {
       const offset = step % 2 === 1 ? (step + 1) / 2 : -step / 2;
       if (offset < allowed.least || offset > allowed.most) continue;
       for (const j of tones) cycles[j] = base[j]!.cycles + offset;
       const cost = crowding(components, cycles, inputs, samples);
+      tried++;
+      mine++;
       if (cost < best.cost) best = { offset, cost };
     }
     offsets[slot] = best.offset;

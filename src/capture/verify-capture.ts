@@ -12,8 +12,8 @@ import { checkFamily, type LineFamily } from './check-families.js';
 import { applyPolynomial } from './converter-polynomial.js';
 import { converterCoefficients } from './converter-model.js';
 import { familyLines, inputIndex } from './family-lines.js';
-import { judgeLine, SEARCH_BINS, type Measurement } from './judge-line.js';
-import { enumerateProducts, productAmplitude } from './mixing-products.js';
+import { FIND_ABOVE_FLOOR, judgeLine, SEARCH_BINS, type Measurement } from './judge-line.js';
+import { enumerateProducts, orderSupremums, productAmplitude, productBound } from './mixing-products.js';
 import { expectedNoiseLevel } from './noise-level.js';
 import { modelComponents, type ModelComponent } from './model-components.js';
 import { quantise } from './quantiser.js';
@@ -22,7 +22,7 @@ import { findPeaks, levelSpectrum } from './capture-spectrum.js';
 import { addTones, phaseTable } from './tone-synthesis.js';
 import { chooseLayout, type ComponentTemplate } from './tone-layout.js';
 import { blackmanHarris } from './window.js';
-import { CONTRADICTING, type PeakRow, type PredictionRow, type ToneRow, type VerifyResult } from './verify-result.js';
+import { CONTRADICTING, type PeakRow, type PredictionRow, type ToneRow, type UnderFloor, type VerifyResult } from './verify-result.js';
 
 /** How one capture is taken. */
 export interface CaptureSettings {
@@ -41,6 +41,8 @@ export const FLOOR_ABOVE_MEDIAN = 15;
 /** Products weaker than the median bin by this much are left out of the model's list, dB. */
 const CUTOFF_BELOW_MEDIAN = 30;
 const DITHER_SEED = 0x5eed;
+/** Up to this many lines in one check, the strongest of those under the floor is computed exactly for the summary; beyond, only counted. */
+const UNDER_FLOOR_EXACT = 64;
 
 /**
  * A simulated capture of a scenario at one rate, set beside the plan there.
@@ -100,21 +102,33 @@ export function verifyCapture(scenario: Scenario, settings: CaptureSettings): Ve
   // The model's components, and each line of the plan judged.
   const index = inputIndex(tones);
   const amplitudes = index.inputs.map((i) => tones[i]!.amplitude);
-  const components = modelComponents(tones, index, coefficients, samples, 10 ** (Math.max(spectrum.medianLevel - CUTOFF_BELOW_MEDIAN, -240) / 20));
+  const model = modelComponents(tones, index, coefficients, samples, 10 ** (Math.max(spectrum.medianLevel - CUTOFF_BELOW_MEDIAN, -240) / 20));
+  const components = model.components;
   const threshold = levelThreshold(scenario);
   const edgeKeys = new Set(tones.flatMap((t, i) => (!t.input && (t.cycles === 0 || foldCycles(t.cycles, samples) === samples / 2) ? [`t:${i}`] : [])));
   const measurement: Measurement = { levels: spectrum.levels, peaks, floor, threshold, tolerance, components, edgeKeys };
   const predictions: PredictionRow[] = [];
+  const underFloor: UnderFloor[] = [];
   const notSimulated: string[] = [];
   const lineKeys = new Set<string>();
+  const bounds = orderSupremums(coefficients, amplitudes.reduce((sum, a) => sum + a, 0));
+  const lookedFor = 10 ** ((floor + FIND_ABOVE_FLOOR) / 20);
   checks.forEach((check, i) => {
     const interferer = movedContext.interferers[i]!;
     const family = families[i]!;
     const lines = familyLines(family, tones, index, ways);
     if (lines.length === 0) notSimulated.push(check.label);
+    let under = { lines: 0, strongest: -Infinity };
+    const exact = (net: readonly number[]) => Math.abs(productAmplitude(coefficients, amplitudes, net));
     for (const line of lines) {
       lineKeys.add(line.component);
-      const amplitude = line.net === null ? tones[line.tone!]!.amplitude : Math.abs(productAmplitude(coefficients, amplitudes, line.net));
+      // The cheap bound first: most products of many tones at high orders are far under the floor.
+      const amplitude = line.net === null ? tones[line.tone!]!.amplitude : productBound(bounds, amplitudes, line.net) < lookedFor ? null : exact(line.net);
+      if (amplitude === null || amplitude < lookedFor) {
+        const strongest = lines.length <= UNDER_FLOOR_EXACT ? 20 * Math.log10(amplitude ?? exact(line.net!)) : -Infinity;
+        under = { lines: under.lines + 1, strongest: Math.max(under.strongest, strongest) };
+        continue;
+      }
       predictions.push(
         judgeLine(
           { check, line, width: interferer.low === interferer.high ? 'tone' : 'band', basis: levelBasis(family, wantedTones), amplitude, samples, binWidth, bin: foldCycles(line.cycles, samples) },
@@ -122,6 +136,7 @@ export function verifyCapture(scenario: Scenario, settings: CaptureSettings): Ve
         ),
       );
     }
+    if (under.lines > 0) underFloor.push({ check: check.label, lines: under.lines, strongest: Number.isFinite(under.strongest) ? db(under.strongest) : null });
   });
 
   // Peaks no line accounts for, and peaks that crowd the wanted image.
@@ -167,13 +182,15 @@ export function verifyCapture(scenario: Scenario, settings: CaptureSettings): Ve
     wantedImage: image,
     tones: tones.map((t) => toneRow(t, samples)),
     predictions,
+    underFloor,
     unlisted,
     intrusions,
     plan: { pass: plan.pass, limitedBy: plan.limitedBy, worstMargin: plan.worstMargin },
     notSimulated,
     contradictions,
     consistent: contradictions.length === 0,
-    compared: comparedText(wantedTones, tolerance, floor, threshold),
+    modelComplete: model.complete,
+    compared: comparedText(wantedTones, tolerance, floor, threshold, model.complete),
     caution: `${PAPER_DESIGN_CAUTION} A simulated capture is still a paper check: it is built from the same stated figures as the plan, so confirm the plan by measurement on hardware.`,
   };
 }
@@ -186,15 +203,22 @@ export function verifyCapture(scenario: Scenario, settings: CaptureSettings): Ve
 function layoutComponents(tones: readonly CaptureTone[], families: readonly LineFamily[], coefficients: readonly number[], ways: number | null, noiseLevel: number): ComponentTemplate[] {
   const index = inputIndex(tones);
   const watched = new Map<string, ComponentTemplate>();
-  for (const family of families) for (const line of familyLines(family, tones, index, ways)) watched.set(line.component, { key: line.component, net: line.net, tone: line.tone, watched: true });
+  const amplitudes = index.inputs.map((i) => tones[i]!.amplitude);
+  const bounds = orderSupremums(coefficients, amplitudes.reduce((sum, a) => sum + a, 0));
+  const visible = 10 ** (noiseLevel / 20);
+  for (const family of families) {
+    for (const line of familyLines(family, tones, index, ways)) {
+      if (line.net !== null && productBound(bounds, amplitudes, line.net) < visible) continue; // under the noise: its place does not matter
+      watched.set(line.component, { key: line.component, net: line.net, tone: line.tone, watched: true });
+    }
+  }
   index.inputs.forEach((tone, p) => {
     if (tones[tone]!.source.kind !== 'wanted') return;
     const net = index.inputs.map((_, q) => (q === p ? 1 : 0));
     watched.set(`n:${net.join(',')}`, { key: `n:${net.join(',')}`, net, tone: null, watched: true });
   });
-  const amplitudes = index.inputs.map((i) => tones[i]!.amplitude);
-  const others = enumerateProducts(coefficients, amplitudes, 10 ** (noiseLevel / 20))
-    .map((p) => ({ key: `n:${p.net.join(',')}`, net: p.net, tone: null, watched: false }))
+  const others = enumerateProducts(coefficients, amplitudes, visible)
+    .products.map((p) => ({ key: `n:${p.net.join(',')}`, net: p.net, tone: null, watched: false }))
     .filter((c) => !watched.has(c.key));
   return [...watched.values(), ...others];
 }
@@ -217,7 +241,7 @@ function toneRow(tone: CaptureTone, samples: number): ToneRow {
   return { label: tone.label, role, nominal: tone.nominal, frequency: tone.frequency, move: tone.move, bin: foldCycles(tone.cycles, samples), level: tone.level };
 }
 
-function comparedText(wantedTones: number, tolerance: number, floor: number, threshold: number): string {
+function comparedText(wantedTones: number, tolerance: number, floor: number, threshold: number, complete: boolean): string {
   const wanted = wantedTones === 1 ? 'one tone at the strongest wanted level' : `${wantedTones} tones, each 20·log10(${wantedTones}) dB below the strongest wanted level`;
   const lines = [
     `The plan at this rate (no drift) against a simulated capture. The wanted band is represented by ${wanted}, each band neighbour by one tone at its centre at its level after the filter.`,
@@ -226,6 +250,7 @@ function comparedText(wantedTones: number, tolerance: number, floor: number, thr
     `Positions must agree within one bin. Levels are judged ${tolerance} dB either way where the plan's level is the level the capture put there (stated spurs, neighbours, and with one wanted tone its harmonics and images); where the plan's level is a band's worst case or an extrapolation (neighbour harmonics, intermodulation, several wanted tones), the measurement must not exceed it by more than ${tolerance} dB when above the threshold.`,
     `Peaks above ${floor.toFixed(1)} dBFS count; any above the threshold ${threshold.toFixed(1)} dBFS that no line of the plan explains, or that lands within the margin of the wanted image, contradicts the plan.`,
   ];
+  if (!complete) lines.push('The list of the model\'s products was cut short at its budget: an unexplained peak may be a product of high order the list does not name.');
   if (floor > threshold) lines.push(`The floor is above the threshold: spurs between ${threshold.toFixed(1)} and ${floor.toFixed(1)} dBFS are not seen.`);
   return lines.join(' ');
 }

@@ -35,7 +35,10 @@ export interface VerifyResult {
   /** The wanted band after sampling, [low, high] segments, Hz. */
   readonly wantedImage: ReadonlyArray<readonly [Hz, Hz]>;
   readonly tones: readonly ToneRow[];
+  /** Lines looked for: the model puts them at least 3 dB above the floor. */
   readonly predictions: readonly PredictionRow[];
+  /** Per check, the lines the model puts under that: not looked for. */
+  readonly underFloor: readonly UnderFloor[];
   /** Measured peaks that no line of the plan accounts for. */
   readonly unlisted: readonly PeakRow[];
   /** Peaks above the threshold inside the margin of the wanted image. */
@@ -44,12 +47,22 @@ export interface VerifyResult {
   readonly plan: { readonly pass: boolean; readonly limitedBy: string; readonly worstMargin: Hz };
   /** Interferers of the plan that nothing in the capture stands for. */
   readonly notSimulated: readonly string[];
+  /** Whether the model's list of products ran to its end (see enumerateProducts); false: unexplained peaks may be unnamed products. */
+  readonly modelComplete: boolean;
   /** Each reason the capture contradicts the plan, in words; empty when it does not. */
   readonly contradictions: readonly string[];
   readonly consistent: boolean;
   /** What was compared with what, in words. */
   readonly compared: string;
   readonly caution: string;
+}
+
+/** Lines of one check that the model puts under the floor. */
+export interface UnderFloor {
+  readonly check: string;
+  readonly lines: number;
+  /** The strongest of them by the model, dBFS; null when only counted (a check with very many lines). */
+  readonly strongest: Db | null;
 }
 
 /** One synthesised tone. */

@@ -40,23 +40,24 @@ function tonesSection(r: VerifyResult): string {
 }
 
 function linesSection(r: VerifyResult): string {
-  const shown = r.predictions.filter((p) => p.status !== 'below floor');
-  const under = r.predictions.length - shown.length;
-  const rows = shown.map((p) => [
+  const rows = r.predictions.map((p) => [
     p.check,
     p.line,
     `${formatFrequency(p.predicted.frequency, 7)} (${trimmed(p.predicted.bin, 7)})`,
     p.measured ? `${formatFrequency(p.measured.frequency, 7)} (${p.measured.bin})` : '–',
     p.binError === null ? '–' : trimmed(p.binError, 3),
-    `${level(p.planLevel)} ${p.basis === 'bound' ? '≥' : '='}`,
+    level(p.planLevel),
+    p.basis === 'plan' ? `±${trimmed(r.levels.tolerance, 3)} dB` : `≤ +${trimmed(r.levels.tolerance, 3)} dB`,
     level(p.modelLevel),
     p.measured ? level(p.measured.level) : '–',
-    p.levelError === null ? '–' : trimmed(p.levelError, 3),
+    p.levelError === null ? '–' : p.levelError.toFixed(2),
     statusText(p),
   ]);
-  const table = plainTable(['check', 'line', 'predicted (bin)', 'measured (bin)', 'Δ bins', 'plan dBFS', 'model dBFS', 'measured dBFS', 'Δ dB', 'result'], rows);
-  const note = under > 0 ? `\n${under} further line${under === 1 ? '' : 's'} under the floor (not looked for); the JSON lists them.` : '';
-  return 'Predicted lines beside the capture (plan dBFS "=": judged within the tolerance; "≥": a bound not to be exceeded):\n' + table + note;
+  const table = plainTable(['check', 'line', 'predicted (bin)', 'measured (bin)', 'Δ bins', 'plan dBFS', 'level rule', 'model dBFS', 'measured dBFS', 'Δ dB', 'result'], rows);
+  const under = r.underFloor.reduce((sum, u) => sum + u.lines, 0);
+  const note = under > 0 ? `\n${under} further line${under === 1 ? '' : 's'} of ${r.underFloor.length} check${r.underFloor.length === 1 ? '' : 's'} under the floor by the model (not looked for): ${r.underFloor.map((u) => u.check).join(', ')}.` : '';
+  const rule = `Level rule: ±${trimmed(r.levels.tolerance, 3)} dB where the plan's level is the level the capture put there; ≤ +${trimmed(r.levels.tolerance, 3)} dB above it (when above the threshold) where it is a bound.`;
+  return `Predicted lines beside the capture (looked for: the model puts them at least 3 dB above the floor). ${rule}\n` + table + note;
 }
 
 function statusText(p: PredictionRow): string {

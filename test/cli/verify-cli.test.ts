@@ -71,7 +71,8 @@ describe('ifzone verify: exit statuses', () => {
     expect(outside.stdout).toBe('');
     expect((await verify(BASE, '--rate', '184.32M', '--samples', '5000')).stderr).toMatch(/--samples: a power of two/);
     expect((await verify(BASE, '--rate', '184.32M', '--tones', '0')).status).toBe(2);
-    expect((await verify('scenarios/heron-narrow.json', '--rate', '122.88M', '--samples', '1024', '--tones', '8')).stderr).toMatch(/--samples: a record long enough/);
+    expect((await verify(BASE, '--rate', '184.32M', '--tones', '6')).stderr).toMatch(/--tones: a whole number from 1 to 5/);
+    expect((await verify('scenarios/heron-narrow.json', '--rate', '245.76M', '--samples', '1024', '--tones', '5')).stderr).toMatch(/--samples: a record long enough/);
     expect((await verify(BASE)).status).toBe(2);
     expect((await verify('no-such.json', '--rate', '184.32M')).status).toBe(2);
   });

@@ -10,6 +10,8 @@ import type { VerifyOptions } from './verify-command.js';
 
 /** Bins of the wanted band each wanted tone needs, so that tones and their products can be placed apart. */
 const BINS_PER_TONE = 8;
+/** Most wanted tones: their products grow as (order + tones − 1 choose tones − 1), and five already give thousands at the 15th order. */
+const MOST_TONES = 5;
 
 /**
  * Reads a scenario, takes the simulated capture at --rate and prints it.
@@ -24,7 +26,7 @@ export function runVerify(file: string, options: VerifyOptions, io: Io): ExitCod
   if (rate < minRate || rate > maxRate) {
     throw new InputError('--rate', `a rate within the converter's range, ${formatFrequency(minRate)} to ${formatFrequency(maxRate)}`, options.rate);
   }
-  const wantedTones = wholeNumber(options.tones, '--tones', 1, 8);
+  const wantedTones = wholeNumber(options.tones, '--tones', 1, MOST_TONES);
   const samples = wholeNumber(options.samples, '--samples', 1024, 1048576);
   if ((samples & (samples - 1)) !== 0) throw new InputError('--samples', 'a power of two, e.g. 65536', options.samples);
   const bandBins = ((scenario.wanted.high - scenario.wanted.low) * samples) / rate;

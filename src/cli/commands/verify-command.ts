@@ -20,7 +20,7 @@ export function addVerifyCommand(program: Command, io: Io, settle: (code: ExitCo
     .description('simulate a capture at one rate and set it beside the plan: each predicted spur against the measured peaks')
     .argument('<file>', 'scenario file (JSON)')
     .requiredOption('--rate <freq>', 'sample rate of the capture, e.g. 184.32M')
-    .option('--tones <count>', 'tones across the wanted band (1: a single tone at the strongest wanted level)', '3')
+    .option('--tones <count>', 'tones across the wanted band, 1 to 5 (1: a single tone at the strongest wanted level)', '3')
     .option('--samples <count>', 'record length, a power of two from 1024 to 1048576', '65536')
     .option('--json', 'print JSON for programs')
     .action(async (file: string, options: VerifyOptions) => {
