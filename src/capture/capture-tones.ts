@@ -64,6 +64,11 @@ export function wantedNominals(band: { readonly low: Hz; readonly high: Hz }, co
  * that n tones in phase peak at the strongest level and the converter is not
  * overdriven (one tone: the strongest level itself). The per-tone back-off
  * is the usual one of multi-tone tests (common practice, no source).
+ *
+ * @param scenario the validated scenario (strongest wanted level, dBFS)
+ * @param count number of wanted tones ≥ 1
+ * @returns dBFS per tone
+ * @example wantedToneLevel(s, 3) // −1 − 9.54 = −10.54 for a strongest level of −1 dBFS
  */
 export function wantedToneLevel(scenario: Scenario, count: number): Db {
   return db(scenario.wanted.strongestLevel - 20 * Math.log10(count));
@@ -111,6 +116,8 @@ export function movedScenario(scenario: Scenario, record: CaptureRecord): Scenar
  * @param scenario the validated scenario (not moved)
  * @param record rate, length and wanted tone count
  * @param layout offsets of the wanted and neighbour tones, whole cycles
+ * @returns the tones: inputs first (wanted, neighbours, board spurs), then the spurs added after the converter
+ * @example captureTones(s, { rate: hz(184.32e6), samples: 65536, wantedTones: 1 }, { wanted: [], neighbours: [] })[0].label // 'W1'
  */
 export function captureTones(scenario: Scenario, record: CaptureRecord, layout: ToneLayout): CaptureTone[] {
   const { rate, samples } = record;

@@ -32,7 +32,11 @@
 /** Coefficients a[0..K]: a[0] = 0, a[1] = 1, a[k] for x^k. */
 export type Coefficients = readonly number[];
 
-/** C(n, k), exact for the small n used here. */
+/**
+ * C(n, k), exact for the small n used here.
+ *
+ * @example binomial(5, 2) // 10
+ */
 export function binomial(n: number, k: number): number {
   if (k < 0 || k > n) return 0;
   let result = 1;

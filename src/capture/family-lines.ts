@@ -24,7 +24,13 @@ export interface InputIndex {
   readonly position: ReadonlyMap<number, number>;
 }
 
-/** The input tones (those through the polynomial) and their positions. */
+/**
+ * The input tones (those through the polynomial) and their positions.
+ *
+ * @param tones the capture's tones
+ * @returns their indices in order, and each index's position among the inputs
+ * @example inputIndex(tones).inputs // [0, 1, 2, …] for tones whose inputs come first
+ */
 export function inputIndex(tones: readonly CaptureTone[]): InputIndex {
   const inputs = tones.flatMap((t, i) => (t.input ? [i] : []));
   return { inputs, position: new Map(inputs.map((tone, p) => [tone, p])) };
@@ -39,6 +45,7 @@ export function inputIndex(tones: readonly CaptureTone[]): InputIndex {
  * @param index the input index of those tones
  * @param ways M of an interleaved converter (for images), or null
  * @returns the lines, possibly several for one component
+ * @example familyLines({ kind: 'tone harmonic', tone: 1, order: 2 }, tones, index, null)[0].what // '2·ADJ'
  */
 export function familyLines(family: LineFamily, tones: readonly CaptureTone[], index: InputIndex, ways: number | null): LineDraft[] {
   const wanted = tones.flatMap((t, i) => (t.source.kind === 'wanted' ? [i] : []));
@@ -74,7 +81,11 @@ export function familyLines(family: LineFamily, tones: readonly CaptureTone[], i
   }
 }
 
-/** The net multiples with the first nonzero one made positive (a product and its negative are one real tone). */
+/**
+ * The net multiples with the first nonzero one made positive (a product and its negative are one real tone).
+ *
+ * @example normalisedNet([0, -2, 1]) // [0, 2, −1]
+ */
 export function normalisedNet(net: readonly number[]): number[] {
   const first = net.find((n) => n !== 0) ?? 0;
   return first < 0 ? net.map((n) => -n || 0) : [...net];
@@ -86,6 +97,8 @@ export function normalisedNet(net: readonly number[]): number[] {
  * @param net multiples per input tone
  * @param index the input index
  * @param tones the capture's tones (for labels)
+ * @returns the product in words
+ * @example productName([2, -1], index, tones) // '2·W1 − ADJ'
  */
 export function productName(net: readonly number[], index: InputIndex, tones: readonly CaptureTone[]): string {
   const terms = net.flatMap((n, p) => (n === 0 ? [] : [[n, tones[index.inputs[p]!]!.label] as const]));

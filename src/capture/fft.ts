@@ -6,7 +6,11 @@
  * Math.cos allows.
  */
 
-/** Whether n is a power of two ≥ 1. */
+/**
+ * Whether n is a power of two ≥ 1.
+ *
+ * @example isPowerOfTwo(65536) // true
+ */
 export function isPowerOfTwo(n: number): boolean {
   return Number.isInteger(n) && n >= 1 && (n & (n - 1)) === 0;
 }

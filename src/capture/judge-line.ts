@@ -61,6 +61,7 @@ export interface Measurement {
  * @param setting the line, its check and how it is judged
  * @param measurement the spectrum and levels
  * @returns the row for the result
+ * @example judgeLine(setting, measurement).status // 'agrees' for a peak on the plan's alias within 1 dB of its level
  */
 export function judgeLine(setting: LineSetting, measurement: Measurement): PredictionRow {
   const { check, line, samples, binWidth } = setting;
@@ -119,7 +120,9 @@ function crowdedBy(setting: LineSetting, measurement: Measurement): string | nul
   const other = measurement.components.find(
     (c) => c.key !== line.component && binDistance(c.bin, bin, samples) <= CROWD_BINS && c.amplitude >= setting.amplitude * CROWD_RATIO,
   );
-  return other ? `${other.name} lies ${binDistance(other.bin, bin, samples)} bins away: not told apart` : null;
+  if (!other) return null;
+  const apart = binDistance(other.bin, bin, samples);
+  return `${other.name} lies ${apart} bin${apart === 1 ? '' : 's'} away: not told apart`;
 }
 
 function inSegments(frequency: number, segments: ReadonlyArray<readonly [number, number]>, slack: number): boolean {

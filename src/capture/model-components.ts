@@ -36,6 +36,7 @@ export interface ModelComponents {
  * @param samples record length N
  * @param cutoff least amplitude kept
  * @returns the components, and whether the product search ran to its end
+ * @example modelComponents(tones, index, a, 65536, 1e-8).components.find((c) => c.name === '2·W1') // the 2nd harmonic of W1
  */
 export function modelComponents(tones: readonly CaptureTone[], index: InputIndex, coefficients: Coefficients, samples: number, cutoff: number): ModelComponents {
   const amplitudes = index.inputs.map((i) => tones[i]!.amplitude);

@@ -40,6 +40,7 @@ export interface ComponentTemplate {
  * @param record rate, length, wanted tone count
  * @param components the plan's lines and wanted tones (watched) and the model's strong products
  * @returns the offsets, whole cycles
+ * @example chooseLayout(s, record, components).wanted // [32]: W1 moved 32 cycles to clear a product
  */
 export function chooseLayout(scenario: Scenario, record: CaptureRecord, components: readonly ComponentTemplate[]): ToneLayout {
   const { rate, samples } = record;
@@ -90,6 +91,8 @@ export function chooseLayout(scenario: Scenario, record: CaptureRecord, componen
  * @param cycles each tone's whole cycles at one layout
  * @param inputs the indices of the input tones, in order
  * @param samples record length N
+ * @returns the number of close pairs
+ * @example crowding(components, cycles, inputs, 65536) // 0 when every watched line is 7 bins clear
  */
 export function crowding(components: readonly ComponentTemplate[], cycles: readonly number[], inputs: readonly number[], samples: number): number {
   const placed = components.map((c) => {

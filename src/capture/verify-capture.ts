@@ -167,7 +167,10 @@ export function verifyCapture(scenario: Scenario, settings: CaptureSettings): Ve
     ...unlisted
       .filter((u) => u.level > threshold && !(u.explainedBy ?? '').startsWith('window overlap'))
       .map((u) => `${formatFrequency(u.frequency, 7)} at ${u.level.toFixed(1)} dBFS, above the threshold ${threshold.toFixed(1)} dBFS: ${u.explainedBy ?? 'unexplained'}; missed by the plan`),
-    ...intrusions.map((u) => `${formatFrequency(u.frequency, 7)} at ${u.level.toFixed(1)} dBFS lies ${formatFrequency(u.distance, 4)} from the wanted image, inside the ${formatFrequency(scenario.requirements.margin)} margin: the rate is not clean`),
+    ...intrusions.map((u) => {
+      const where = u.distance === 0 ? 'lies inside the wanted image' : `lies ${formatFrequency(u.distance, 4)} from the wanted image, inside the ${formatFrequency(scenario.requirements.margin)} margin`;
+      return `${formatFrequency(u.frequency, 7)} at ${u.level.toFixed(1)} dBFS (${u.explainedBy ?? lineName(predictions, u.bin)}) ${where}: the rate is not clean`;
+    }),
   ];
   return {
     scenario: scenario.name,
@@ -228,6 +231,12 @@ function levelBasis(family: LineFamily, wantedTones: number): 'plan' | 'bound' {
   if (family.kind === 'tone') return 'plan';
   if ((family.kind === 'wanted harmonic' || family.kind === 'interleave image') && wantedTones === 1) return 'plan';
   return 'bound';
+}
+
+/** The plan's line measured on a bin, in words, or 'not named'. */
+function lineName(predictions: readonly PredictionRow[], bin: number): string {
+  const row = predictions.find((p) => p.measured?.bin === bin);
+  return row ? `${row.check}, ${row.line}` : 'not named';
 }
 
 function strongestWithin(components: readonly ModelComponent[], bin: number, reach: number, samples: number): ModelComponent | null {

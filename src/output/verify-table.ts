@@ -13,6 +13,7 @@ const MOST_PEAKS_SHOWN = 25;
  *
  * @param result from verifyCapture
  * @returns the text, ending in a newline
+ * @example verifyTable(verifyCapture(s, { rate: hz(184.32e6) })).startsWith('Simulated capture: ') // true
  */
 export function verifyTable(result: VerifyResult): string {
   const sections = [heading(result), tonesSection(result), linesSection(result)];

@@ -16,8 +16,12 @@ const MOST_TONES = 5;
 /**
  * Reads a scenario, takes the simulated capture at --rate and prints it.
  *
+ * @param file the scenario file
+ * @param options --rate, --tones, --samples, --json as written
+ * @param io where the table or JSON goes
  * @returns 0 when the capture agrees with the plan, 1 when it contradicts it
  * @throws InputError (exit 2) for a rate outside the converter's range, a bad --tones or --samples, or a band too narrow for the record
+ * @example runVerify('scenarios/heron-base.json', { rate: '184.32M', tones: '1', samples: '65536' }, io) // 0
  */
 export function runVerify(file: string, options: VerifyOptions, io: Io): ExitCode {
   const scenario = readScenarioFile(file);

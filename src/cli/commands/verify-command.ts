@@ -13,6 +13,11 @@ export interface VerifyOptions {
  * the plan. Exit 0 when the capture agrees with the plan, 1 when it
  * contradicts it, 2 for bad input. The work is imported when the command
  * runs, so that it does not slow the start-up of the light commands.
+ *
+ * @param program the ifzone program
+ * @param io where the command writes
+ * @param settle receives the exit status
+ * @example addVerifyCommand(program, io, settle) // then: ifzone verify scenarios/heron-base.json --rate 184.32M
  */
 export function addVerifyCommand(program: Command, io: Io, settle: (code: ExitCode) => void): void {
   program
