@@ -5,6 +5,7 @@ import { EXIT, type ExitCode, type Io } from '../../src/cli/io.js';
 import { addVerifyCommand } from '../../src/cli/commands/verify-command.js';
 import { runVerify } from '../../src/cli/commands/verify-action.js';
 import { readScenarioFile } from '../../src/cli/read-scenario.js';
+import { runCli } from '../../src/cli/main.js';
 import { badRate, passingRates } from '../capture/plan-rates.js';
 
 /**
@@ -102,5 +103,29 @@ describe('ifzone verify --json', () => {
     const code = runVerify(BASE, { rate: String(bad), tones: '1', samples: '65536', json: true }, { out: (t) => (out += t), err: () => {} });
     expect(code).toBe(1);
     expect(JSON.parse(out).consistent).toBe(false);
+  });
+});
+
+describe('ifzone verify through runCli (registered in src/cli/main.ts)', () => {
+  const run = async (...args: string[]) => {
+    let stdout = '';
+    let stderr = '';
+    const status = await runCli(args, { out: (t) => (stdout += t), err: (t) => (stderr += t) });
+    return { status, stdout, stderr };
+  };
+
+  it('exits 0 at the solver\'s rate and 1 at the bad rate, with one wanted tone', async () => {
+    expect((await run('verify', BASE, '--rate', String(good), '--tones', '1')).status).toBe(0);
+    const failing = await run('verify', BASE, '--rate', String(bad), '--tones', '1', '--json');
+    expect(failing.status).toBe(1);
+    expect(JSON.parse(failing.stdout).intrusions.length).toBeGreaterThan(0);
+  });
+
+  it('refuses bad input with exit 2 and one `ifzone: ` line naming the option', async () => {
+    const refused = await run('verify', BASE, '--rate', '10M');
+    expect(refused.status).toBe(2);
+    expect(refused.stdout).toBe('');
+    expect(refused.stderr.trim().split('\n')).toHaveLength(1);
+    expect(refused.stderr).toMatch(/^ifzone: --rate: a rate within the converter's range/);
   });
 });
