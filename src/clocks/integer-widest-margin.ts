@@ -5,12 +5,15 @@ export const ENUMERATE_UP_TO = 64;
 
 /**
  * How far the MILP's answer may fall short of the best N, as a fraction of
- * the largest change of a binding slack over the N range (the model's scale):
- * the solver rounds its answers to 1e-8 and the lexicographic second stage
- * holds the slacks at the first stage's optimum less 0.5e-6 of the scale;
- * 1e-6 covers both. Beyond it an answer is a bug and is thrown.
+ * the largest change of a binding slack over the N range (the model's scale).
+ * The solver rounds its answers to 1e-8, and its branch and bound resolves a
+ * slack only to about 1e-5 of the scale: seen, a shortfall of 6.7e-6 of the
+ * scale on a slack whose whole change was 1.3e-5 of it (a fast-check case).
+ * 1e-4 covers that; beyond it an answer is a bug and is thrown. The N returned
+ * does not rest on this figure: the climb from the solver's N stops only where
+ * no neighbour does better, which for a concave worst slack is the best N.
  */
-export const MILP_ALLOWANCE = 1e-6;
+export const MILP_ALLOWANCE = 1e-4;
 
 /** Relative size below which a slack's change over the N range counts as none (the slack is constant). */
 const FLAT = 1e-9;
