@@ -65,6 +65,26 @@ const UNDER_FLOOR_EXACT = 64;
  * @example verifyCapture(heronBase, { rate: hz(184.32e6), wantedTones: 1 }).consistent // true at a rate the solver passes
  */
 export function verifyCapture(scenario: Scenario, settings: CaptureSettings): VerifyResult {
+  return verifyCaptureWithSpectrum(scenario, settings).result;
+}
+
+/** The result of verifyCapture beside the measured spectrum it was judged on. */
+export interface VerifiedCapture {
+  readonly result: VerifyResult;
+  /** Level of bins 0..N/2 (bin k at k·R/N), dBFS, as levelSpectrum reads them; kept out of the result so its JSON stays small. */
+  readonly levels: Float64Array;
+}
+
+/**
+ * verifyCapture, also handing back the measured spectrum (for a picture).
+ *
+ * @param scenario the validated scenario
+ * @param settings rate, record length, wanted tones, tolerance
+ * @returns the result and the N/2 + 1 bin levels in dBFS
+ * @throws RangeError as verifyCapture
+ * @example verifyCaptureWithSpectrum(heronBase, { rate: hz(184.32e6), samples: 1024 }).levels.length // 513
+ */
+export function verifyCaptureWithSpectrum(scenario: Scenario, settings: CaptureSettings): VerifiedCapture {
   const samples = settings.samples ?? 65536;
   const wantedTones = settings.wantedTones ?? 3;
   const tolerance = settings.tolerance ?? db(1);
@@ -172,7 +192,7 @@ export function verifyCapture(scenario: Scenario, settings: CaptureSettings): Ve
       return `${formatFrequency(u.frequency, 7)} at ${u.level.toFixed(1)} dBFS (${u.explainedBy ?? lineName(predictions, u.bin)}) ${where}: the rate is not clean`;
     }),
   ];
-  return {
+  const result: VerifyResult = {
     scenario: scenario.name,
     rate,
     samples,
@@ -196,6 +216,7 @@ export function verifyCapture(scenario: Scenario, settings: CaptureSettings): Ve
     compared: comparedText(wantedTones, tolerance, floor, threshold, model.complete),
     caution: `${PAPER_DESIGN_CAUTION} A simulated capture is still a paper check: it is built from the same stated figures as the plan, so confirm the plan by measurement on hardware.`,
   };
+  return { result, levels: spectrum.levels };
 }
 
 /**

@@ -1,9 +1,12 @@
 import { InputError } from '../../units/input-error.js';
 import { formatFrequency } from '../../units/format-frequency.js';
-import { verifyCapture } from '../../capture/verify-capture.js';
+import { verifyCaptureWithSpectrum } from '../../capture/verify-capture.js';
+// Loaded with the action, which the command imports only when it runs; the capture itself costs far more than the picture writers.
+import { captureSvg } from '../../pictures/capture-picture.js';
 import { verifyTable } from '../../output/verify-table.js';
 import { toJson } from '../../output/json.js';
-import { readScenarioFile } from '../read-scenario.js';
+import { readScenarioWithInputs } from '../read-scenario.js';
+import { writeFileSafely } from '../safe-write.js';
 import { positiveFrequency, wholeNumber } from '../option-values.js';
 import { EXIT, type ExitCode, type Io } from '../io.js';
 import type { VerifyOptions } from './verify-command.js';
@@ -14,17 +17,19 @@ const BINS_PER_TONE = 8;
 const MOST_TONES = 5;
 
 /**
- * Reads a scenario, takes the simulated capture at --rate and prints it.
+ * Reads a scenario, takes the simulated capture at --rate and prints it;
+ * with --svg, also draws it (never over an existing file without --force,
+ * never over the scenario).
  *
  * @param file the scenario file
- * @param options --rate, --tones, --samples, --json as written
+ * @param options --rate, --tones, --samples, --json, --svg, --force as written
  * @param io where the table or JSON goes
  * @returns 0 when the capture agrees with the plan, 1 when it contradicts it
- * @throws InputError (exit 2) for a rate outside the converter's range, a bad --tones or --samples, or a band too narrow for the record
+ * @throws InputError (exit 2) for a rate outside the converter's range, a bad --tones or --samples, a band too narrow for the record, or an --svg path that exists (without --force) or is the scenario
  * @example runVerify('scenarios/heron-base.json', { rate: '184.32M', tones: '1', samples: '65536' }, io) // 0
  */
 export function runVerify(file: string, options: VerifyOptions, io: Io): ExitCode {
-  const scenario = readScenarioFile(file);
+  const { scenario, inputs } = readScenarioWithInputs(file);
   const rate = positiveFrequency(options.rate, '--rate');
   const { minRate, maxRate } = scenario.converter;
   if (rate < minRate || rate > maxRate) {
@@ -37,7 +42,8 @@ export function runVerify(file: string, options: VerifyOptions, io: Io): ExitCod
   if (bandBins < BINS_PER_TONE * wantedTones) {
     throw new InputError('--samples', `a record long enough for ${wantedTones} tone(s) in the wanted band (${BINS_PER_TONE} bins each; the band spans ${bandBins.toFixed(1)})`, options.samples);
   }
-  const result = verifyCapture(scenario, { rate, samples, wantedTones });
+  const { result, levels } = verifyCaptureWithSpectrum(scenario, { rate, samples, wantedTones });
+  if (options.svg !== undefined) writeFileSafely(options.svg, captureSvg(result, levels), { force: options.force === true, inputs });
   io.out(options.json ? toJson(result) : verifyTable(result));
   return result.consistent ? EXIT.answered : EXIT.noAnswer;
 }

@@ -6,10 +6,12 @@ export interface VerifyOptions {
   tones: string;
   samples: string;
   json?: boolean;
+  svg?: string;
+  force?: boolean;
 }
 
 /**
- * `ifzone verify FILE --rate R`: a simulated capture at one rate set beside
+ * `ifzone verify FILE --rate R [--svg OUT [--force]]`: a simulated capture at one rate set beside
  * the plan. Exit 0 when the capture agrees with the plan, 1 when it
  * contradicts it, 2 for bad input. The work is imported when the command
  * runs, so that it does not slow the start-up of the light commands.
@@ -28,6 +30,8 @@ export function addVerifyCommand(program: Command, io: Io, settle: (code: ExitCo
     .option('--tones <count>', 'tones across the wanted band, 1 to 5 (1: a single tone at the strongest wanted level)', '3')
     .option('--samples <count>', 'record length, a power of two from 1024 to 1048576', '65536')
     .option('--json', 'print JSON for programs')
+    .option('--svg <file>', 'also draw the measured spectrum with the predicted lines, the threshold, the peak floor and the wanted image')
+    .option('--force', 'let --svg replace an existing file')
     .action(async (file: string, options: VerifyOptions) => {
       const { runVerify } = await import('./verify-action.js');
       settle(runVerify(file, options, io));

@@ -1,0 +1,224 @@
+import type { PeakRow, PredictionRow, VerifyResult } from '../capture/verify-result.js';
+import { CONTRADICTING } from '../capture/verify-result.js';
+import { formatFrequency, trimmed } from '../units/format-frequency.js';
+import { horizontalAxis, verticalAxis } from './axis.js';
+import { frequencyUnit, inUnit } from './frequency-unit.js';
+import { packLabels, textWidth } from './label-packing.js';
+import { boxSwatch, legendRows, type LegendEntry } from './legend.js';
+import { failMarker } from './markers.js';
+import { maxHoldColumns } from './max-hold-columns.js';
+import { coveringTicks, linearTicks } from './nice-ticks.js';
+import { FILL } from './patterns.js';
+import { linearScale, type Scale } from './scale.js';
+import { element, pointList, textElement } from './svg-element.js';
+import { withMinus } from './typography.js';
+import { svgDocument, type Figure } from './svg-document.js';
+
+const WIDTH = 960;
+const LEFT = 84;
+const RIGHT = 28;
+const LABEL_ROWS = 4;
+const LABEL_ROW = 12;
+const PLOT_HEIGHT = 300;
+const SMALL = 9.5;
+/** The level axis reaches this far below the noise median, dB, so the noise band shows as a band. */
+const BELOW_NOISE = 10;
+/** Peaks listed in words under the legend; the rest are counted. */
+const LISTED_PEAKS = 8;
+
+/**
+ * The simulated capture of `ifzone verify` as a figure: the measured
+ * spectrum over [0, R/2] as one polyline (max-hold to one column per pixel,
+ * so no peak is lost), the wanted image shaded and its margin hatched, the
+ * threshold and the peak floor as labelled dashed lines, each predicted line
+ * marked where the plan puts it (an open triangle at its plan level; filled
+ * when its judgement contradicts the plan) with its check's label above the
+ * plot (thinned when crowded: contradicting lines, then the strongest, first),
+ * measured peaks no line accounts for (open diamonds) and intrusions into
+ * the wanted image's margin (crossed squares), which are also listed in
+ * words under the legend.
+ *
+ * @param result the result of verifyCapture
+ * @param levels the measured spectrum, bins 0..N/2, dBFS (verifyCaptureWithSpectrum)
+ * @returns the figure, 960 px wide
+ * @throws RangeError when levels does not hold N/2 + 1 bins
+ * @example captureFigure(verified.result, verified.levels).width // 960
+ */
+export function captureFigure(result: VerifyResult, levels: ArrayLike<number>): Figure {
+  if (levels.length !== result.samples / 2 + 1) throw new RangeError(`the spectrum must hold N/2 + 1 = ${result.samples / 2 + 1} bins, got ${levels.length}`);
+  const half = result.rate / 2;
+  const plotX: readonly [number, number] = [LEFT, WIDTH - RIGHT];
+  const x = linearScale([0, half], plotX);
+  const { threshold, floor, noiseMedian } = result.levels;
+  const columns = maxHoldColumns(levels, Math.round(plotX[1] - plotX[0]));
+  const strongest = Math.max(0, ...columns.map((c) => c.level).filter(Number.isFinite));
+  const levelTicks = coveringTicks(Math.min(noiseMedian - BELOW_NOISE, threshold - 5), strongest, 8);
+  const bottom = levelTicks.values[0]!;
+  const top = levelTicks.values[levelTicks.values.length - 1]!;
+  const clamp = (v: number) => Math.min(Math.max(Number.isFinite(v) ? v : bottom, bottom), top);
+
+  // Labels above the plot: contradicting lines first, then by plan level.
+  const order = [...result.predictions].sort((a, b) => Number(contradicts(b)) - Number(contradicts(a)) || b.planLevel - a.planLevel);
+  const placed = packLabels(
+    order.map((p) => ({ x: x.at(p.predicted.frequency), text: p.check, item: p })),
+    LABEL_ROWS,
+    plotX,
+    SMALL,
+  );
+  const rows = placed.reduce((n, p) => Math.max(n, p.row + 1), 0);
+  const plotTop = 64 + rows * LABEL_ROW + 8;
+  const plotBottom = plotTop + PLOT_HEIGHT;
+  const y = linearScale([bottom, top], [plotBottom, plotTop]);
+
+  const parts: string[] = [heading(result)];
+  parts.push(wantedImage(result, x, plotTop, plotBottom));
+  parts.push(verticalAxis(y, levelTicks.values.map((v) => ({ value: v, label: trimmed(v, 6) })), LEFT, 'level (dBFS)', WIDTH - RIGHT));
+  const binWidth = result.binWidth;
+  const points = columns.map((c) => [x.at(((c.first + c.last) / 2) * binWidth), y.at(clamp(c.level))] as const);
+  parts.push(element('polyline', { class: 'spectrum', points: pointList(points), fill: 'none', stroke: '#000', 'stroke-width': 0.8, 'stroke-linejoin': 'round' }));
+  parts.push(levelLine(y.at(threshold), `threshold ${trimmed(threshold, 4)} dBFS`, '8 3 2 3', 'end'));
+  parts.push(levelLine(y.at(floor), `peak floor ${trimmed(floor, 4)} dBFS (noise median + ${trimmed(floor - noiseMedian, 3)} dB)`, '4 3', 'start'));
+
+  for (const p of placed) {
+    const baseline = 64 + (p.row + 1) * LABEL_ROW - 2;
+    const at = x.at(p.item.predicted.frequency);
+    parts.push(element('line', { x1: at, y1: baseline + 2, x2: at, y2: y.at(clamp(p.item.planLevel)) - 6, stroke: '#555', 'stroke-width': 0.5, 'stroke-dasharray': '1 2' }));
+    parts.push(textElement(p.x, baseline, p.text, { 'text-anchor': 'middle', 'font-size': SMALL, 'font-weight': contradicts(p.item) ? 'bold' : undefined }));
+  }
+  for (const p of result.predictions) parts.push(predictionMarker(contradicts(p), x.at(p.predicted.frequency), y.at(clamp(p.planLevel))));
+  const intrusionBins = new Set(result.intrusions.map((r) => r.bin));
+  for (const u of result.unlisted) if (!intrusionBins.has(u.bin)) parts.push(unlistedMarker(x.at(u.frequency), y.at(clamp(u.level))));
+  for (const u of result.intrusions) parts.push(failMarker(x.at(u.frequency), y.at(clamp(u.level))));
+
+  const unit = frequencyUnit(half);
+  const freqTicks = linearTicks(0, half, 8).values.map((v) => ({ value: v, label: inUnit(v, unit) }));
+  parts.push(horizontalAxis(x, freqTicks, plotBottom, `frequency after sampling (${unit.unit})`));
+
+  let cursor = plotBottom + 56;
+  const legend = legendRows(legendEntries(result, intrusionBins), 24, cursor, WIDTH - RIGHT);
+  parts.push(legend.markup);
+  cursor += legend.height + 8;
+  const list = peakList(result, intrusionBins, 24, cursor);
+  parts.push(list.markup);
+  cursor += list.height;
+  return { width: WIDTH, height: Math.ceil(cursor + 12), title: `Simulated capture at ${formatFrequency(result.rate)}: ${result.scenario}`, body: parts.join('') };
+}
+
+/**
+ * The simulated capture as a standalone SVG document (see captureFigure).
+ *
+ * @param result the result of verifyCapture
+ * @param levels the measured spectrum, bins 0..N/2, dBFS
+ * @returns SVG text, 960 px wide
+ * @throws RangeError when levels does not hold N/2 + 1 bins
+ * @example captureSvg(verified.result, verified.levels).startsWith('<svg') // true
+ */
+export function captureSvg(result: VerifyResult, levels: ArrayLike<number>): string {
+  return svgDocument(captureFigure(result, levels));
+}
+
+function contradicts(p: PredictionRow): boolean {
+  return CONTRADICTING.has(p.status);
+}
+
+function heading(r: VerifyResult): string {
+  const reasons = r.contradictions.length;
+  const verdict = r.consistent ? 'the capture agrees with the plan' : `the capture CONTRADICTS the plan (${reasons} reason${reasons === 1 ? '' : 's'})`;
+  const tones = `${r.wantedTones} wanted tone${r.wantedTones === 1 ? '' : 's'}`;
+  return (
+    textElement(24, 22, `Simulated capture at ${formatFrequency(r.rate)}: ${r.scenario}`, { 'font-size': 14, 'font-weight': 'bold' }) +
+    textElement(24, 40, `rate ${formatFrequency(r.rate)}; ${r.samples} samples, bin width ${formatFrequency(r.binWidth, 6)}; ${r.window.name} window; ${tones}; ${verdict}`, { 'font-size': 11, 'font-weight': r.consistent ? undefined : 'bold' }) +
+    textElement(24, 56, 'Labels: the check of the plan each predicted line belongs to, over its marker at the plan level.', { 'font-size': SMALL, 'font-style': 'italic' })
+  );
+}
+
+/** The wanted image (shaded, outlined, named) and its margin either side (hatched), under the spectrum. */
+function wantedImage(r: VerifyResult, x: Scale, top: number, bottom: number): string {
+  const half = r.rate / 2;
+  const parts: string[] = [];
+  const box = (a: number, b: number, fill: string, outline: boolean) => {
+    const lo = Math.max(0, a);
+    const hi = Math.min(half, b);
+    if (!(hi > lo)) return;
+    parts.push(element('rect', { x: x.at(lo), y: top, width: Math.max(x.at(hi) - x.at(lo), 1.5), height: bottom - top, fill, stroke: outline ? '#1f4e79' : undefined, 'stroke-width': outline ? 1.2 : undefined }));
+  };
+  for (const [low, high] of r.wantedImage) {
+    box(low - r.margin, low, FILL.guard, false);
+    box(high, high + r.margin, FILL.guard, false);
+  }
+  for (const [low, high] of r.wantedImage) box(low, high, FILL.wanted, true);
+  const first = r.wantedImage[0];
+  if (first) {
+    const text = 'wanted image';
+    const w = textWidth(text, SMALL) + 8;
+    const centre = Math.min(Math.max(x.at((first[0] + first[1]) / 2), x.range[0] + w / 2), x.range[1] - w / 2);
+    parts.push(element('rect', { x: centre - w / 2, y: bottom - 20, width: w, height: 14, fill: '#fff', stroke: '#1f4e79', 'stroke-width': 0.8 }));
+    parts.push(textElement(centre, bottom - 9, text, { 'text-anchor': 'middle', 'font-size': SMALL, 'font-weight': 'bold' }));
+  }
+  return element('g', { class: 'wanted' }, parts.join(''));
+}
+
+/** A dashed horizontal line across the plot with its words on a white box at one end, just under it. */
+function levelLine(at: number, text: string, dash: string, end: 'start' | 'end'): string {
+  const label = withMinus(text);
+  const w = textWidth(label, SMALL) + 6;
+  const left = end === 'end' ? WIDTH - RIGHT - 2 - w : LEFT + 2;
+  return (
+    element('line', { x1: LEFT, y1: at, x2: WIDTH - RIGHT, y2: at, stroke: '#000', 'stroke-width': 1, 'stroke-dasharray': dash }) +
+    element('rect', { x: left, y: at + 2, width: w, height: 12, fill: '#fff', opacity: 0.9 }) +
+    textElement(left + w / 2, at + 11, label, { 'text-anchor': 'middle', 'font-size': SMALL })
+  );
+}
+
+/** A predicted line: a triangle pointing down at the plan level, open when its judgement agrees, filled when it contradicts. */
+function predictionMarker(filled: boolean, cx: number, cy: number): string {
+  const s = 4.5;
+  return element('path', { d: `M${cx - s} ${cy - s}L${cx + s} ${cy - s}L${cx} ${cy + s * 0.6}Z`, fill: filled ? '#000' : '#fff', stroke: '#000', 'stroke-width': 1.1 });
+}
+
+/** A measured peak no line of the plan accounts for: an open diamond. */
+function unlistedMarker(cx: number, cy: number): string {
+  const s = 4.5;
+  return element('path', { d: `M${cx} ${cy - s}L${cx + s} ${cy}L${cx} ${cy + s}L${cx - s} ${cy}Z`, fill: '#fff', stroke: '#000', 'stroke-width': 1.2 });
+}
+
+function legendEntries(r: VerifyResult, intrusionBins: ReadonlySet<number>): LegendEntry[] {
+  const line = (dash: string | undefined, width: number) => (cx: number, cy: number) => element('line', { x1: cx - 11, y1: cy, x2: cx + 11, y2: cy, stroke: '#000', 'stroke-width': width, 'stroke-dasharray': dash });
+  const unlisted = r.unlisted.filter((u) => !intrusionBins.has(u.bin)).length;
+  return [
+    { swatch: line(undefined, 0.8), text: 'measured (max-hold, one column per pixel)' },
+    { swatch: boxSwatch(FILL.wanted), text: 'wanted image' },
+    { swatch: boxSwatch(FILL.guard), text: `margin ${formatFrequency(r.margin)}` },
+    { swatch: line('8 3 2 3', 1), text: 'threshold' },
+    { swatch: line('4 3', 1), text: 'peak floor' },
+    { swatch: (cx, cy) => predictionMarker(false, cx, cy), text: `predicted line (${r.predictions.length})` },
+    { swatch: (cx, cy) => predictionMarker(true, cx, cy), text: `predicted, contradicts the plan (${r.predictions.filter(contradicts).length})` },
+    { swatch: unlistedMarker, text: `unlisted peak (${unlisted})` },
+    { swatch: failMarker, text: `intrusion into the margin (${r.intrusions.length})` },
+  ];
+}
+
+/** Intrusions, then the strongest unlisted peaks, one line each with their marker. */
+function peakList(r: VerifyResult, intrusionBins: ReadonlySet<number>, left: number, top: number): { markup: string; height: number } {
+  const rows: Array<{ row: PeakRow; intrusion: boolean }> = [
+    ...r.intrusions.map((row) => ({ row, intrusion: true })),
+    ...r.unlisted.filter((u) => !intrusionBins.has(u.bin)).sort((a, b) => b.level - a.level).map((row) => ({ row, intrusion: false })),
+  ];
+  if (rows.length === 0) return { markup: '', height: 0 };
+  const step = 14;
+  const parts: string[] = [];
+  const shown = rows.slice(0, LISTED_PEAKS);
+  shown.forEach(({ row, intrusion }, i) => {
+    const cy = top + i * step + 6;
+    parts.push(intrusion ? failMarker(left + 6, cy) : unlistedMarker(left + 6, cy));
+    const where = row.distance === 0 ? 'inside the wanted image' : `${formatFrequency(row.distance, 4)} from the wanted image`;
+    const text = `${formatFrequency(row.frequency, 7)}, ${trimmed(row.level, 4)} dBFS, ${where}: ${row.explainedBy ?? 'unexplained'}`;
+    parts.push(textElement(left + 18, cy + 3.5, withMinus(text), { 'font-size': SMALL }));
+  });
+  let height = shown.length * step;
+  if (rows.length > shown.length) {
+    parts.push(textElement(left + 18, top + height + 9.5, `and ${rows.length - shown.length} more (see the table or --json)`, { 'font-size': SMALL, 'font-style': 'italic' }));
+    height += step;
+  }
+  return { markup: element('g', { class: 'peaks' }, parts.join('')), height };
+}
