@@ -21,6 +21,8 @@ const LABEL_ROWS = 4;
 const LABEL_ROW = 12;
 const PLOT_HEIGHT = 300;
 const SMALL = 9.5;
+/** Bottom of the heading, px: the label rows start here. */
+const HEAD = 80;
 /** The level axis reaches this far below the noise median, dB, so the noise band shows as a band. */
 const BELOW_NOISE = 10;
 /** Peaks listed in words under the legend; the rest are counted. */
@@ -66,7 +68,7 @@ export function captureFigure(result: VerifyResult, levels: ArrayLike<number>): 
     SMALL,
   );
   const rows = placed.reduce((n, p) => Math.max(n, p.row + 1), 0);
-  const plotTop = 64 + rows * LABEL_ROW + 8;
+  const plotTop = HEAD + rows * LABEL_ROW + 8;
   const plotBottom = plotTop + PLOT_HEIGHT;
   const y = linearScale([bottom, top], [plotBottom, plotTop]);
 
@@ -80,7 +82,7 @@ export function captureFigure(result: VerifyResult, levels: ArrayLike<number>): 
   parts.push(levelLine(y.at(floor), `peak floor ${trimmed(floor, 4)} dBFS (noise median + ${trimmed(floor - noiseMedian, 3)} dB)`, '4 3', 'start'));
 
   for (const p of placed) {
-    const baseline = 64 + (p.row + 1) * LABEL_ROW - 2;
+    const baseline = HEAD + (p.row + 1) * LABEL_ROW - 2;
     const at = x.at(p.item.predicted.frequency);
     parts.push(element('line', { x1: at, y1: baseline + 2, x2: at, y2: y.at(clamp(p.item.planLevel)) - 6, stroke: '#555', 'stroke-width': 0.5, 'stroke-dasharray': '1 2' }));
     parts.push(textElement(p.x, baseline, p.text, { 'text-anchor': 'middle', 'font-size': SMALL, 'font-weight': contradicts(p.item) ? 'bold' : undefined }));
@@ -127,8 +129,9 @@ function heading(r: VerifyResult): string {
   const tones = `${r.wantedTones} wanted tone${r.wantedTones === 1 ? '' : 's'}`;
   return (
     textElement(24, 22, `Simulated capture at ${formatFrequency(r.rate)}: ${r.scenario}`, { 'font-size': 14, 'font-weight': 'bold' }) +
-    textElement(24, 40, `rate ${formatFrequency(r.rate)}; ${r.samples} samples, bin width ${formatFrequency(r.binWidth, 6)}; ${r.window.name} window; ${tones}; ${verdict}`, { 'font-size': 11, 'font-weight': r.consistent ? undefined : 'bold' }) +
-    textElement(24, 56, 'Labels: the check of the plan each predicted line belongs to, over its marker at the plan level.', { 'font-size': SMALL, 'font-style': 'italic' })
+    textElement(24, 40, `rate ${formatFrequency(r.rate)}; ${r.samples} samples, bin width ${formatFrequency(r.binWidth, 6)}; ${r.window.name} window; ${tones}`, { 'font-size': 11 }) +
+    textElement(24, 56, `Verdict: ${verdict}.`, { 'font-size': 11, 'font-weight': r.consistent ? undefined : 'bold' }) +
+    textElement(24, 72, 'Labels: the check of the plan each predicted line belongs to, over its marker at the plan level.', { 'font-size': SMALL, 'font-style': 'italic' })
   );
 }
 
@@ -212,7 +215,10 @@ function peakList(r: VerifyResult, intrusionBins: ReadonlySet<number>, left: num
     const cy = top + i * step + 6;
     parts.push(intrusion ? failMarker(left + 6, cy) : unlistedMarker(left + 6, cy));
     const where = row.distance === 0 ? 'inside the wanted image' : `${formatFrequency(row.distance, 4)} from the wanted image`;
-    const text = `${formatFrequency(row.frequency, 7)}, ${trimmed(row.level, 4)} dBFS, ${where}: ${row.explainedBy ?? 'unexplained'}`;
+    // A peak a predicted line was measured on carries no explanation of its own: name that line, as the verdict does.
+    const line = r.predictions.find((p) => p.measured?.bin === row.bin);
+    const what = row.explainedBy ?? (line ? `${line.check}, ${line.line}` : 'unexplained');
+    const text = `${formatFrequency(row.frequency, 7)}, ${trimmed(row.level, 4)} dBFS, ${intrusion ? 'intrusion, ' : ''}${where}: ${what}`;
     parts.push(textElement(left + 18, cy + 3.5, withMinus(text), { 'font-size': SMALL }));
   });
   let height = shown.length * step;

@@ -1,4 +1,7 @@
 import { describe, expect, it } from 'vitest';
+import { copyFileSync, mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import { Command, CommanderError } from 'commander';
 import { InputError } from '../../src/units/input-error.js';
 import { EXIT, type ExitCode, type Io } from '../../src/cli/io.js';
@@ -7,6 +10,7 @@ import { runVerify } from '../../src/cli/commands/verify-action.js';
 import { readScenarioFile } from '../../src/cli/read-scenario.js';
 import { runCli } from '../../src/cli/main.js';
 import { badRate, passingRates } from '../capture/plan-rates.js';
+import { parseSvg, rootOf, textsOf } from '../pictures/svg-check.js';
 
 /**
  * `ifzone verify` in process: the command as commander parses it (until it
@@ -127,5 +131,35 @@ describe('ifzone verify through runCli (registered in src/cli/main.ts)', () => {
     expect(refused.stdout).toBe('');
     expect(refused.stderr.trim().split('\n')).toHaveLength(1);
     expect(refused.stderr).toMatch(/^ifzone: --rate: a rate within the converter's range/);
+  });
+});
+
+describe('ifzone verify --svg', () => {
+  it('draws the capture, refuses to overwrite without --force, replaces with it, and never writes over the scenario', async () => {
+    const dir = mkdtempSync(join(tmpdir(), 'ifzone-verify-svg-'));
+    const scenario = join(dir, 'heron.json');
+    copyFileSync(BASE, scenario);
+    const out = join(dir, 'capture.svg');
+    const args = ['--rate', String(bad), '--tones', '1', '--samples', '16384'];
+    const first = await verify(scenario, ...args, '--svg', out);
+    expect(first.status).toBe(1);
+    const document = parseSvg(readFileSync(out, 'utf8'));
+    expect(rootOf(document).getAttribute('width')).toBe('960');
+    expect(textsOf(document)[0]).toMatch(/^Simulated capture at .*: Heron-4 base$/);
+    expect(first.stdout).toMatch(/Verdict: the capture contradicts the plan/);
+
+    writeFileSync(out, 'mine');
+    const again = await verify(scenario, ...args, '--svg', out);
+    expect(again.status).toBe(2);
+    expect(again.stderr).toMatch(/add --force to overwrite/);
+    expect(readFileSync(out, 'utf8')).toBe('mine');
+    expect((await verify(scenario, ...args, '--svg', out, '--force')).status).toBe(1);
+    expect(readFileSync(out, 'utf8')).toMatch(/^<svg /);
+
+    const before = readFileSync(scenario, 'utf8');
+    const over = await verify(scenario, ...args, '--svg', scenario, '--force');
+    expect(over.status).toBe(2);
+    expect(over.stderr).toMatch(/a path other than an input file/);
+    expect(readFileSync(scenario, 'utf8')).toBe(before);
   });
 });
