@@ -3,9 +3,7 @@ import { parseFrequency } from '../../units/parse-frequency.js';
 import type { Goal, Scenario } from '../../scenario/scenario.js';
 import { contextFromScenario } from '../../solve/context-from-scenario.js';
 import { solvePlan } from '../../solve/solve-plan.js';
-import { bestShiftAndRate } from '../../solve/if-shift/best-shift-and-rate.js';
 import { planReport } from '../../report/plan-report.js';
-import { planTable } from '../../output/plan-table.js';
 import { toJson } from '../../output/json.js';
 import { readScenarioWithInputs } from '../read-scenario.js';
 import { writeFileSafely } from '../safe-write.js';
@@ -17,14 +15,14 @@ export async function runSolve(file: string, options: SolveOptions, io: Io): Pro
   const { scenario, inputs } = readScenarioWithInputs(file);
   const goal = goalFromOptions(options, scenario);
   const context = contextFromScenario({ ...scenario, goal });
-  const shift = scenario.ifShift ? bestShiftAndRate({ ...scenario, goal }) : null;
+  // The IF-shift search, the tables and the pictures load only when asked for: start-up time matters.
+  const shift = scenario.ifShift ? (await import('../../solve/if-shift/best-shift-and-rate.js')).bestShiftAndRate({ ...scenario, goal }) : null;
   const report = planReport(scenario.name, context, solvePlan(context), shift);
   if (options.svg !== undefined) {
-    // The picture writers cost ~40 ms to load: only when a picture is asked for.
     const { planPicturesSvg } = await import('../../pictures/plan-pictures.js');
     writeFileSafely(options.svg, planPicturesSvg(report), { force: options.force === true, inputs });
   }
-  io.out(options.json ? toJson(report) : planTable(report));
+  io.out(options.json ? toJson(report) : (await import('../../output/plan-table.js')).planTable(report));
   return report.best === null ? EXIT.noAnswer : EXIT.answered;
 }
 
