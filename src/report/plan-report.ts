@@ -2,29 +2,16 @@ import { hz, ppm, type Db, type Hz, type Ppm } from '../units/quantities.js';
 import type { Band, Guard } from '../math/band.js';
 import { extentMagnitude } from '../math/fold-extent.js';
 import type { Goal } from '../scenario/scenario.js';
-import type { InterfererKind } from '../solve/interferer.js';
+import type { Interferer } from '../solve/interferer.js';
 import type { PlanContext } from '../solve/plan-context.js';
 import type { Candidate, PlanResult } from '../solve/solve-plan.js';
-import type { RateEvaluation } from '../solve/evaluate-rate.js';
+import type { CheckResult, RateEvaluation } from '../solve/evaluate-rate.js';
 import type { ShiftSearch } from '../solve/if-shift/best-shift-and-rate.js';
 import { PAPER_DESIGN_CAUTION } from './caution.js';
 import { shiftReport, type ShiftReport } from './shift-report.js';
 
-/** An interferer as reported: its extent rateMultiple·r + [low, high] and whether it blocks. */
-export interface ReportedInterferer {
-  readonly label: string;
-  readonly kind: InterfererKind;
-  readonly order: number | null;
-  readonly source: string;
-  readonly rateMultiple: number;
-  /** How many times the IF shift δ it moves by when the LO is retuned (0: fixed). */
-  readonly shiftMultiple: number;
-  readonly low: Hz;
-  readonly high: Hz;
-  readonly requiredMargin: Hz;
-  readonly blocking: boolean;
-  readonly level: Db;
-}
+/** An interferer as reported: the solver's own record (extent rateMultiple·r + shiftMultiple·δ + [low, high], level, blocking). */
+export type ReportedInterferer = Interferer;
 
 export interface ReportedFeasible {
   readonly zone: number;
@@ -36,18 +23,10 @@ export interface ReportedFeasible {
   readonly widthPpm: Ppm;
 }
 
-export interface ReportedCheck {
-  readonly label: string;
-  readonly kind: InterfererKind;
+/** One check as reported: the evaluator's result with the interferer's input frequencies at the candidate's rate. */
+export interface ReportedCheck extends CheckResult {
   /** Input frequencies at the candidate's nominal rate, Hz (magnitudes). */
   readonly input: readonly [Hz, Hz];
-  readonly alias: ReadonlyArray<readonly [Hz, Hz]>;
-  readonly margin: Hz;
-  readonly requiredMargin: Hz;
-  readonly level: Db;
-  readonly levelMargin: Db;
-  readonly blocking: boolean;
-  readonly pass: boolean;
 }
 
 export interface ReportedCandidate {
@@ -119,19 +98,7 @@ export function planReport(name: string, context: PlanContext, result: PlanResul
     guard: context.guard,
     search: { minRate: context.limits.minRate, maxRate: context.limits.maxRate },
     goal: context.goal,
-    interferers: context.interferers.map((i) => ({
-      label: i.label,
-      kind: i.kind,
-      order: i.order,
-      source: i.source,
-      rateMultiple: i.rateMultiple,
-      shiftMultiple: i.shiftMultiple,
-      low: i.low,
-      high: i.high,
-      requiredMargin: i.requiredMargin,
-      blocking: i.blocking,
-      level: i.level,
-    })),
+    interferers: context.interferers,
     windows: result.windows,
     feasible: result.feasible.map((f) => {
       const width = hz(f.maxRate - f.minRate);
@@ -174,18 +141,7 @@ function reportedCandidate(context: PlanContext, candidate: Candidate): Reported
       const offset = interferer.rateMultiple * e.rate;
       const magnitude = extentMagnitude(offset + interferer.low, offset + interferer.high);
       const input = [hz(magnitude.low), hz(magnitude.high)] as const;
-      return {
-        label: check.label,
-        kind: check.kind,
-        input,
-        alias: check.alias,
-        margin: check.margin,
-        requiredMargin: check.requiredMargin,
-        level: check.level,
-        levelMargin: check.levelMargin,
-        blocking: check.blocking,
-        pass: check.pass,
-      };
+      return { ...check, input };
     }),
   };
 }
