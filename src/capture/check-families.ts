@@ -19,6 +19,8 @@ export type LineFamily =
   | { readonly kind: 'tone harmonic'; readonly tone: number; readonly order: number }
   /** 2·a − b for every tone a of one group and b of the other (a group: the wanted tones, or one neighbour). */
   | { readonly kind: 'intermod'; readonly doubled: Group; readonly other: Group }
+  /** a + sign·b for every tone a of one group and b of the other; with both groups the wanted tones, each difference of two of them once. */
+  | { readonly kind: 'second order'; readonly first: Group; readonly second: Group; readonly sign: 1 | -1 }
   /** k·R/M + side·f of each wanted tone. */
   | { readonly kind: 'interleave image'; readonly k: number; readonly side: 1 | -1 }
   /** Nothing in the capture stands for it. */
@@ -75,8 +77,17 @@ export function checkFamily(interferer: Interferer, scenario: Scenario, tones: r
         { group: 'wanted', low: wanted.low, high: wanted.high },
         ...scenario.neighbours.map((n, j) => ({ group: { neighbour: j }, low: n.low, high: n.high })),
       ];
-      for (const a of groups) for (const b of groups) {
-        if (a !== b && sameExtent(interferer, 2 * a.low - b.high, 2 * a.high - b.low)) return { kind: 'intermod', doubled: a.group, other: b.group };
+      if (interferer.order === 2) {
+        if (sameExtent(interferer, 0, wanted.high - wanted.low)) return { kind: 'second order', first: 'wanted', second: 'wanted', sign: -1 };
+        for (const a of groups) for (const b of groups) {
+          if (a === b) continue;
+          if (sameExtent(interferer, a.low - b.high, a.high - b.low)) return { kind: 'second order', first: a.group, second: b.group, sign: -1 };
+          if (sameExtent(interferer, a.low + b.low, a.high + b.high)) return { kind: 'second order', first: a.group, second: b.group, sign: 1 };
+        }
+      } else {
+        for (const a of groups) for (const b of groups) {
+          if (a !== b && sameExtent(interferer, 2 * a.low - b.high, 2 * a.high - b.low)) return { kind: 'intermod', doubled: a.group, other: b.group };
+        }
       }
     }
     return { kind: 'not simulated' };

@@ -38,7 +38,8 @@ export function inputIndex(tones: readonly CaptureTone[]): InputIndex {
 
 /**
  * The lines of one family (see LineFamily), e.g. for the 3rd harmonic of the
- * wanted band with tones W1, W2: 3·W1, 2·W1 + W2, W1 + 2·W2, 3·W2.
+ * wanted band with tones W1, W2: 3·W1, 2·W1 + W2, W1 + 2·W2, 3·W2; for the
+ * differences inside the wanted band with W1..W3: W1 − W2, W1 − W3, W2 − W3.
  *
  * @param family the family
  * @param tones the capture's tones
@@ -60,6 +61,7 @@ export function familyLines(family: LineFamily, tones: readonly CaptureTone[], i
     const t = tones[tone]!;
     return t.input ? product([[tone, 1]]) : { what: t.label, component: `t:${tone}`, cycles: t.cycles, net: null, tone };
   };
+  const members = (group: Group) => (group === 'wanted' ? wanted : tones.flatMap((t, i) => (t.source.kind === 'neighbour' && t.source.index === group.neighbour ? [i] : [])));
   switch (family.kind) {
     case 'wanted harmonic':
       return multisets(wanted, family.order).map((pick) => product(pick.map((tone) => [tone, 1] as const)));
@@ -67,9 +69,12 @@ export function familyLines(family: LineFamily, tones: readonly CaptureTone[], i
       return [direct(family.tone)];
     case 'tone harmonic':
       return [product([[family.tone, family.order]])];
-    case 'intermod': {
-      const members = (group: Group) => (group === 'wanted' ? wanted : tones.flatMap((t, i) => (t.source.kind === 'neighbour' && t.source.index === group.neighbour ? [i] : [])));
+    case 'intermod':
       return members(family.doubled).flatMap((a) => members(family.other).map((b) => product([[a, 2], [b, -1]])));
+    case 'second order': {
+      const same = family.first === family.second;
+      // Within one group (the wanted tones) each pair once: Wi − Wj and Wj − Wi are one real tone, Wi − Wi is DC.
+      return members(family.first).flatMap((a, i) => members(family.second).flatMap((b, j) => (same && j <= i ? [] : [product([[a, 1], [b, family.sign]])])));
     }
     case 'interleave image': {
       if (ways === null) return [];

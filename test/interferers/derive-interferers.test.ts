@@ -41,6 +41,14 @@ const MHz = 1e6;
  *   2·ADJ-UP−wanted: [240 − 50, 260 − 40] = [190, 220], −63.4576 − 40.2145 − 1 = −104.6721;
  *   2·wanted−ADJ-LO: [80 − 20, 100 − 15] = [60, 85], −63.4576 − 2 − 50.1072 = −115.5648;
  *   2·ADJ-LO−wanted: [30 − 50, 40 − 40] = [−20, 0], −63.4576 − 100.2145 − 1 = −164.6721.
+ * IM2 (second order) from HD2: 20·log10(2) + HD2 − Lref = 6.0206 − 70 + 1 = −62.9794, plus L1 + L2:
+ *   wanted difference [0, 50 − 40] = [0, 10], both at −1: −64.9794 (blocking);
+ *   ADJ-UP−wanted: [120 − 50, 130 − 40] = [70, 90], −62.9794 − 20.1072 − 1 = −84.0866 (blocking);
+ *   wanted+ADJ-UP: [40 + 120, 50 + 130] = [160, 180], −84.0866 (blocking);
+ *   ADJ-LO−wanted: [15 − 50, 20 − 40] = [−35, −20], −62.9794 − 50.1072 − 1 = −114.0866;
+ *   wanted+ADJ-LO: [40 + 15, 50 + 20] = [55, 70], −114.0866;
+ *   ADJ-UP−ADJ-LO: [120 − 20, 130 − 15] = [100, 115], −62.9794 − 20.1072 − 50.1072 = −133.1939;
+ *   ADJ-UP+ADJ-LO: [120 + 15, 130 + 20] = [135, 150], −133.1939.
  * Converter: DC −80 (r·0); rate/4 −95 (r·0.25); no rate/2 figure, so none;
  *   2-way interleave: IL offset 1/2 at r/2, −85; images r/2 − [40, 50] = r/2 + [−50, −40]
  *   and r/2 + [40, 50], at −1 − 70 = −71. All blocking.
@@ -102,6 +110,13 @@ const expected: Array<[string, string, number | null, number, number, number, nu
   ['IM3 2·ADJ-UP−wanted', 'intermod', 3, 0, 190, 220, -104.6721, false],
   ['IM3 2·wanted−ADJ-LO', 'intermod', 3, 0, 60, 85, -115.5648, false],
   ['IM3 2·ADJ-LO−wanted', 'intermod', 3, 0, -20, 0, -164.6721, false],
+  ['IM2 wanted difference', 'intermod', 2, 0, 0, 10, -64.9794, true],
+  ['IM2 ADJ-UP−wanted', 'intermod', 2, 0, 70, 90, -84.0866, true],
+  ['IM2 wanted+ADJ-UP', 'intermod', 2, 0, 160, 180, -84.0866, true],
+  ['IM2 ADJ-LO−wanted', 'intermod', 2, 0, -35, -20, -114.0866, false],
+  ['IM2 wanted+ADJ-LO', 'intermod', 2, 0, 55, 70, -114.0866, false],
+  ['IM2 ADJ-UP−ADJ-LO', 'intermod', 2, 0, 100, 115, -133.1939, false],
+  ['IM2 ADJ-UP+ADJ-LO', 'intermod', 2, 0, 135, 150, -133.1939, false],
   ['DC', 'converter', null, 0, 0, 0, -80, true],
   ['rate/4', 'converter', null, 0.25, 0, 0, -95, true],
   ['IL offset 1/2', 'converter', null, 0.5, 0, 0, -85, true],
@@ -205,14 +220,16 @@ describe('labels are unique, even when the scenario repeats them', () => {
     });
     const derived = deriveInterferers(s);
     const n = neighbours.length;
-    // 6 wanted harmonics, spurs 5 + 3 + 1 + 2, neighbours 3 each, IM3 n(n−1) + 2n, DC/rate2/rate4, 3 offsets, 6 images.
-    expect(derived).toHaveLength(6 + 11 + 3 * n + (n * (n - 1) + 2 * n) + 3 + 3 + 6);
+    // 6 wanted harmonics, spurs 5 + 3 + 1 + 2, neighbours 3 each, IM3 n(n−1) + 2n, IM2 1 + 2n + n(n−1), DC/rate2/rate4, 3 offsets, 6 images.
+    expect(derived).toHaveLength(6 + 11 + 3 * n + (n * (n - 1) + 2 * n) + (1 + 2 * n + n * (n - 1)) + 3 + 3 + 6);
     expect(new Set(derived.map((i) => i.label)).size).toBe(derived.length);
     const labels = derived.map((i) => i.label);
     // The first of a repeated label keeps it; later ones are numbered.
     expect(labels).toContain('REF 10M #2');
     expect(labels).toContain('DC #2');
     expect(labels).toContain('H2 wanted #2');
+    expect(labels).toContain('IM2 ADJ-UP−wanted #2');
+    expect(labels).toContain('IM2 ADJ-UP−ADJ-UP');
     expect(labels.indexOf('H2 wanted')).toBe(0);
     for (const label of ['IL offset 1/4', 'IL offset 2/4', 'IL offset 3/4', 'IL image 3/4−', 'IL image 3/4+', 'rate/2', 'rate/4']) expect(labels).toContain(label);
   });

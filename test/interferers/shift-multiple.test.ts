@@ -11,7 +11,10 @@ const MHz = 1e6;
  * δ, worked from the algebra of the products (common practice, no source):
  * the wanted band f and each neighbour g are converted by the same LO, so
  * they become f + δ and g + δ; a k-th harmonic k·(f + δ) = k·f + k·δ; a
- * third-order product 2·(f1 + δ) − (f2 + δ) = 2·f1 − f2 + δ; an interleaving
+ * third-order product 2·(f1 + δ) − (f2 + δ) = 2·f1 − f2 + δ; a second-order
+ * difference (f1 + δ) − (f2 + δ) = f1 − f2 does not move, a sum
+ * (f1 + δ) + (f2 + δ) = f1 + f2 + 2·δ moves twice, whether f1 and f2 are two
+ * tones of the wanted band, the band and a neighbour, or two neighbours; an interleaving
  * image k/M·r ∓ (f + δ) moves by ∓δ; board spurs (on the board, not through
  * the LO) and the converter's rate-tied tones (DC, k/M·r) do not move.
  * No filter, so that no level changes with δ.
@@ -69,6 +72,13 @@ const expected: Array<[string, number]> = [
   ['IM3 2·ADJ-UP−wanted', 1],
   ['IM3 2·wanted−ADJ-LO', 1],
   ['IM3 2·ADJ-LO−wanted', 1],
+  ['IM2 wanted difference', 0],
+  ['IM2 ADJ-UP−wanted', 0],
+  ['IM2 wanted+ADJ-UP', 2],
+  ['IM2 ADJ-LO−wanted', 0],
+  ['IM2 wanted+ADJ-LO', 2],
+  ['IM2 ADJ-UP−ADJ-LO', 0],
+  ['IM2 ADJ-UP+ADJ-LO', 2],
   ['DC', 0],
   ['rate/2', 0],
   ['rate/4', 0],
