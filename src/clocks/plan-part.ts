@@ -67,11 +67,14 @@ interface Judged {
  *   headroom, which runs to the converter's range, and the failing search)
  * @param part the clock part
  * @param options search tuning
- * @returns the part's plan, or null when none of its rates lies inside the converter's rate range
+ * @returns the part's plan, or null when none of its rates keeps its whole drift inside the converter's rate range
  * @throws Error when an integer answer fails its exact re-check (a bug, not an input error)
  * @example planPart(context, set, xo122M88).settings // { N: 1, M: 1, D: 1 }
  */
-export function planPart(context: PlanContext, set: FeasibleSet, part: ClockPart, options: PlanPartOptions = {}): PartPlan | null {
+export function planPart(plan: PlanContext, set: FeasibleSet, part: ClockPart, options: PlanPartOptions = {}): PartPlan | null {
+  // The part's drift must stay inside the converter's rate range too: its nominal rates are searched in that range
+  // shrunk by the drift, [min/(1 − ε), max/(1 + ε)], so that the drift ends r·(1 ± ε) land inside it.
+  const context: PlanContext = { ...plan, limits: driftInsideLimits(plan.limits, part.tolerancePpm) };
   const families = rateFamilies(part, context.clocking.clockDividers);
   const { minRate, maxRate } = context.limits;
   const spans = families.flatMap((family) => {
@@ -103,7 +106,7 @@ export function planPart(context: PlanContext, set: FeasibleSet, part: ClockPart
     rate,
     settings: chosen.settings,
     evaluation: chosen.evaluation,
-    headroom: driftHeadroom(set, context.limits, rate),
+    headroom: driftHeadroom(set, plan.limits, rate),
     snr: clockSnr(context.band, rate, part.jitter, context.clocking.apertureJitter, context.clocking.bits),
     pass: chosen.evaluation.pass,
     search,
@@ -284,6 +287,12 @@ function nearestFailing(context: PlanContext, set: FeasibleSet, part: ClockPart,
     throw new Error(`${part.label} at ${evaluation.rate} Hz: the screen found a worst slack of ${best.slack} Hz, the exact evaluator ${evaluation.worstSlack} Hz`);
   }
   return { settings: best.settings, evaluation };
+}
+
+/** The nominal rates whose drift r·(1 ± ε) stays inside the limits (the expressions driftRange uses, inverted). */
+function driftInsideLimits(limits: PlanContext['limits'], tolerancePpm: number): PlanContext['limits'] {
+  const epsilon = tolerancePpm * 1e-6;
+  return { minRate: hz(limits.minRate / (1 - epsilon)), maxRate: hz(limits.maxRate / (1 + epsilon)) };
 }
 
 function anchorRates(context: PlanContext, set: FeasibleSet): number[] {

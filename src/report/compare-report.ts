@@ -4,7 +4,7 @@ import type { PartPlan, RateSettings } from '../clocks/part-plan.js';
 import { PAPER_DESIGN_CAUTION } from './caution.js';
 
 /** Why a part has no verdict on a variant. */
-export const NOT_PLANNED = 'no rate of this part inside the converter\'s rate range';
+export const NOT_PLANNED = 'no rate of this part keeps its drift inside the converter\'s rate range';
 
 /** One part judged on one variant; rate, settings and zone are null when the part gives no rate the converter accepts. */
 export interface VariantVerdict {

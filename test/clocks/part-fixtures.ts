@@ -29,7 +29,7 @@ export function synthesiser(n: [number, number], m: [number, number], d: [number
 }
 
 /**
- * Every (N, M, D) of a part inside [low, high], written straight from the
+ * Every (N, M, D) of a part whose drift stays inside [low, high], written straight from the
  * definition rate = f·N/(M·D) with the VCO f·N/M inside its range (the
  * synthesiser relation; common practice, no source), by plain loops over
  * every integer: the reference the planner's narrowed ranges are checked
@@ -38,9 +38,11 @@ export function synthesiser(n: [number, number], m: [number, number], d: [number
 export function everySetting(p: ClockPart, dividers: readonly number[], low: number, high: number): { N: number; M: number; D: number; rate: number }[] {
   const out: { N: number; M: number; D: number; rate: number }[] = [];
   const d = p.derivation;
+  // A rate counts when the part's whole drift r·(1 ± ε) stays inside [low, high] (the converter's range).
+  const epsilon = p.tolerancePpm * 1e-6;
   const push = (N: number, M: number, D: number) => {
     const rate = (p.frequency * N) / (M * D);
-    if (rate >= low && rate <= high) out.push({ N, M, D, rate });
+    if (rate * (1 - epsilon) >= low && rate * (1 + epsilon) <= high) out.push({ N, M, D, rate });
   };
   if (d.kind === 'direct') push(1, 1, 1);
   else if (d.kind === 'divider') for (const D of dividers) push(1, 1, D);
