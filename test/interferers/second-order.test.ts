@@ -1,38 +1,20 @@
 import { describe, expect, it } from 'vitest';
-import FFT from 'fft.js';
 import { db, hz } from '../../src/units/quantities.js';
 import { deriveInterferers } from '../../src/interferers/derive-interferers.js';
 import { im2Level } from '../../src/interferers/second-order.js';
 import { converterFixture, scenarioFixture } from '../helpers/scenario-fixture.js';
+import { A2 as a2, dbfs, polynomialSpectrum as spectrumLevels } from '../helpers/polynomial-converter.js';
 
 /**
  * A direct numeric evaluation of the memoryless polynomial converter
- * y = x + a2·x² + a3·x³ (fft.js, a general-purpose FFT from the npm registry),
- * as in intermodulation.test.ts. Tones sit on exact FFT bins (coherent
+ * y = x + a2·x² + a3·x³ (fft.js, a general-purpose FFT from the npm registry;
+ * test/helpers/polynomial-converter.ts). Tones sit on exact FFT bins (coherent
  * sampling), so a rectangular window leaks nothing and a cosine of amplitude
  * A reads 2·|X[k]|/N at its bin; bin k stands for k·0.1 MHz. x³ makes only
  * odd-order products, so every second-order product here is exactly a2·A1·A2;
  * the one inexactness is the reference: x³ lifts the measured fundamental by
  * (3/4)·a3·A² (3.3e-4 dB), which the dBc figure carries, hence 1e-3 dB tolerances.
  */
-const N = 1 << 14;
-const a2 = 3e-4;
-const a3 = 2e-4;
-
-function spectrumLevels(tones: ReadonlyArray<{ bin: number; amplitude: number }>, bins: readonly number[]): number[] {
-  const x = new Array<number>(N);
-  for (let n = 0; n < N; n++) {
-    let v = 0;
-    for (const t of tones) v += t.amplitude * Math.cos((2 * Math.PI * t.bin * n) / N);
-    x[n] = v + a2 * v * v + a3 * v * v * v;
-  }
-  const fft = new FFT(N);
-  const out = fft.createComplexArray() as number[];
-  fft.realTransform(out, x);
-  return bins.map((k) => 20 * Math.log10((2 * Math.hypot(out[2 * k]!, out[2 * k + 1]!)) / N));
-}
-
-const dbfs = (amplitude: number) => 20 * Math.log10(amplitude);
 
 describe('second-order products against a simulated polynomial converter (fft.js)', () => {
   // Reference: one tone at the strongest wanted level gives the converter's HD2/HD3 figures.
