@@ -1,8 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { db, hz, ppm, seconds } from '../../src/units/quantities.js';
+import { db, hz, ppm } from '../../src/units/quantities.js';
 import type { Scenario } from '../../src/scenario/scenario.js';
 import { deriveInterferers } from '../../src/interferers/derive-interferers.js';
+import { converterFixture, scenarioFixture } from '../helpers/scenario-fixture.js';
 
 const MHz = 1e6;
 
@@ -19,39 +20,31 @@ const MHz = 1e6;
  * the LO) and the converter's rate-tied tones (DC, k/M·r) do not move.
  * No filter, so that no level changes with δ.
  */
-const scenario: Scenario = {
+const scenario: Scenario = scenarioFixture({
   name: 'Heron-SM',
-  description: 'shift-multiple test scenario (invented)',
   wanted: { low: hz(40 * MHz), high: hz(50 * MHz), weakestLevel: db(-60), strongestLevel: db(-1) },
   guard: { low: hz(1 * MHz), high: hz(1 * MHz) },
-  converter: {
+  converter: converterFixture({
     label: 'Saltmarsh SR-12D',
-    minRate: hz(20 * MHz),
     maxRate: hz(300 * MHz),
-    inputBandwidth: hz(500 * MHz),
     bits: 12,
     harmonics: new Map([
       [2, db(-70)],
       [3, db(-75)],
     ]),
-    intercept3: null,
     rateSpurs: { dc: db(-80), halfRate: db(-90), quarterRate: db(-95) },
     interleave: { ways: 2, offsetSpur: db(-85), imageLevel: db(-70) },
-    apertureJitter: seconds(0),
-    clockDividers: [1],
-  },
+  }),
   harmonicOrder: 4,
   boardSpurs: [{ label: 'REF 10M', low: hz(10 * MHz), high: hz(10 * MHz), level: db(-30), coupling: 'after-filter', harmonics: 2 }],
   neighbours: [
     { label: 'ADJ-UP', low: hz(120 * MHz), high: hz(130 * MHz), level: db(10) },
     { label: 'ADJ-LO', low: hz(15 * MHz), high: hz(20 * MHz), level: db(-20) },
   ],
-  filter: null,
   requirements: { margin: hz(0.5 * MHz), rejection: db(40), tolerancePpm: ppm(20) },
   clocks: [],
-  goal: { kind: 'widest-margin' },
   ifShift: { low: hz(-5 * MHz), high: hz(5 * MHz) },
-};
+});
 
 // [label, shiftMultiple], from the algebra above.
 const expected: Array<[string, number]> = [
