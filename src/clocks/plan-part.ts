@@ -289,10 +289,10 @@ function nearestFailing(context: PlanContext, set: FeasibleSet, part: ClockPart,
   return { settings: best.settings, evaluation };
 }
 
-/** The nominal rates whose drift r·(1 ± ε) stays inside the limits (the expressions driftRange uses, inverted). */
+/** The nominal rates whose whole drift stays inside the limits; an empty range (min > max) when the drift is wider. */
 function driftInsideLimits(limits: PlanContext['limits'], tolerancePpm: number): PlanContext['limits'] {
-  const epsilon = tolerancePpm * 1e-6;
-  return { minRate: hz(limits.minRate / (1 - epsilon)), maxRate: hz(limits.maxRate / (1 + epsilon)) };
+  const range = driftSafeRange(limits, tolerancePpm);
+  return range ? { minRate: hz(range.low), maxRate: hz(range.high) } : { minRate: limits.maxRate, maxRate: limits.minRate };
 }
 
 function anchorRates(context: PlanContext, set: FeasibleSet): number[] {

@@ -9,11 +9,12 @@ import { linearSlacks, maximiseWorstSlack } from './widest-margin-lp.js';
 const MOST_RATIOS_TRIED = 200;
 
 /**
- * The nominal rates of a feasible interval whose whole drift range stays
- * inside it: [low/(1 − ε), high/(1 + ε)]; null when the drift is wider than
- * the interval.
+ * The nominal rates of a range (a feasible interval, the converter's rate
+ * limits) whose whole drift range r·(1 ± ε) stays inside it:
+ * [low/(1 − ε), high/(1 + ε)], stepped in where rounding left a drift end
+ * outside; null when the drift is wider than the range.
  */
-export function driftSafeRange(interval: FeasibleInterval, tolerancePpm: number): Interval | null {
+export function driftSafeRange(interval: { readonly minRate: number; readonly maxRate: number }, tolerancePpm: number): Interval | null {
   const epsilon = tolerancePpm * 1e-6;
   let low = interval.minRate / (1 - epsilon);
   let high = interval.maxRate / (1 + epsilon);

@@ -29,17 +29,18 @@ export function synthesiser(n: [number, number], m: [number, number], d: [number
 }
 
 /**
- * Every (N, M, D) of a part whose drift stays inside [low, high], written straight from the
+ * Every (N, M, D) of a part inside [low, high] (its rate, or its whole drift), written straight from the
  * definition rate = f·N/(M·D) with the VCO f·N/M inside its range (the
  * synthesiser relation; common practice, no source), by plain loops over
  * every integer: the reference the planner's narrowed ranges are checked
  * against.
  */
-export function everySetting(p: ClockPart, dividers: readonly number[], low: number, high: number): { N: number; M: number; D: number; rate: number }[] {
+export function everySetting(p: ClockPart, dividers: readonly number[], low: number, high: number, drift: 'nominal' | 'whole drift' = 'nominal'): { N: number; M: number; D: number; rate: number }[] {
   const out: { N: number; M: number; D: number; rate: number }[] = [];
   const d = p.derivation;
-  // A rate counts when the part's whole drift r·(1 ± ε) stays inside [low, high] (the converter's range).
-  const epsilon = p.tolerancePpm * 1e-6;
+  // 'nominal': the rate itself inside [low, high] (what partRates lists); 'whole drift': the part's drift
+  // r·(1 ± ε) inside it too (the rates the planner may choose within the converter's range).
+  const epsilon = drift === 'whole drift' ? p.tolerancePpm * 1e-6 : 0;
   const push = (N: number, M: number, D: number) => {
     const rate = (p.frequency * N) / (M * D);
     if (rate * (1 - epsilon) >= low && rate * (1 + epsilon) <= high) out.push({ N, M, D, rate });

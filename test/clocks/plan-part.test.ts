@@ -93,7 +93,7 @@ describe('every search path against exhaustive enumeration of every (N, M, D), r
           const syn = part('SYN-R', f, synthesiser([nMin, nMax], [1, shape.mMax], [1, shape.dMax], vco), tolerance);
 
           // The reference: every setting from the definition, each judged by the exact evaluator.
-          const settings = everySetting(syn, [1], context.limits.minRate, context.limits.maxRate);
+          const settings = everySetting(syn, [1], context.limits.minRate, context.limits.maxRate, 'whole drift');
           counts.plans++;
           counts.rates += settings.length;
           if (settings.length === 0) {
@@ -151,7 +151,7 @@ describe('the sampled search when nothing passes and there are too many rates to
         const set = setOf(context);
         const f = context.limits.minRate * 0.01 * 10 ** u;
         const syn = part('SYN-A', f, synthesiser([1, 400], [1, 3], [1, 2]), 50);
-        const settings = everySetting(syn, [1], context.limits.minRate, context.limits.maxRate);
+        const settings = everySetting(syn, [1], context.limits.minRate, context.limits.maxRate, 'whole drift');
         const judged = settings.map((s) => evaluateRate(context, hz(s.rate), ppm(50)));
         fc.pre(settings.length > 100 && judged.every((e) => !e.pass));
         const plan = planPart(context, set, syn, { everyRateUpTo: 0, screenUpTo: 100 })!;
