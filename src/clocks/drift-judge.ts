@@ -34,16 +34,3 @@ export function containingInterval(feasible: readonly FeasibleInterval[], rate: 
   }
   return found >= 0 && high <= feasible[found]!.maxRate ? found : -1;
 }
-
-/**
- * Whether the rate's whole drift range lies inside one feasible interval
- * (the fast judge's verdict; see containingInterval).
- *
- * @param feasible sorted disjoint closed intervals, Hz
- * @param rate nominal rate, Hz
- * @param tolerancePpm ± drift, ppm
- * @example passesFast(feasible, 182.5e6, 20) // true inside 171–194.5 MHz
- */
-export function passesFast(feasible: readonly FeasibleInterval[], rate: number, tolerancePpm: number): boolean {
-  return containingInterval(feasible, rate, tolerancePpm) >= 0;
-}

@@ -308,8 +308,3 @@ function anchorRates(context: PlanContext, set: FeasibleSet): number[] {
   }
   return anchors;
 }
-
-/** The best rate of every part of the plan, in the plan's order; null for a part with no rate inside the converter's range. */
-export function planParts(context: PlanContext, set: FeasibleSet, options: PlanPartOptions = {}): Array<PartPlan | null> {
-  return context.clocks.map((part) => planPart(context, set, part, options));
-}

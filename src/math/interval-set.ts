@@ -53,11 +53,6 @@ export function subtractOpen(closed: Interval, open: readonly Interval[]): Inter
   return pieces.filter((p) => point || !sameEdge(p.low, p.high));
 }
 
-/** Whether [low, high] lies inside one of the closed intervals. */
-export function containedIn(range: Interval, intervals: readonly Interval[]): boolean {
-  return intervals.some((i) => range.low >= i.low && range.high <= i.high);
-}
-
 /** Whether a closed range meets one of the open intervals. */
 export function meetsOpen(range: Interval, open: readonly Interval[]): boolean {
   return open.some((o) => range.high > o.low && range.low < o.high);
