@@ -5,6 +5,7 @@ import { EDGE_TOLERANCE } from '../math/edge-tolerance.js';
 import { meetsOpen, type Interval } from '../math/interval-set.js';
 import { imageMargin, marginBreakpoints, nearbyImages, normalisedExtent } from './fold-images.js';
 import { forbiddenRates } from './forbidden-rates.js';
+import { guardedBand } from '../windows/enumerate-windows.js';
 import type { Interferer, InterfererKind } from './interferer.js';
 import { driftRange, type PlanContext } from './plan-context.js';
 
@@ -94,8 +95,9 @@ export function evaluateRate(context: PlanContext, rate: Hz, tolerancePpm: Ppm):
 
 /** Distance from the guarded band to the nearer edge of zone n at rate r, Hz. A lower guard stops at DC, as in guardedBand. */
 export function zoneEdgeMarginAt(band: Band, guard: Guard, zone: number, rate: number): number {
-  const below = Math.max(0, band.low - guard.low) - ((zone - 1) * rate) / 2;
-  const above = (zone * rate) / 2 - (band.high + guard.high);
+  const guarded = guardedBand(band, guard.low, guard.high);
+  const below = guarded.low - ((zone - 1) * rate) / 2;
+  const above = (zone * rate) / 2 - guarded.high;
   return Math.min(below, above);
 }
 

@@ -3,6 +3,7 @@ import type { Band, Guard } from '../math/band.js';
 import type { Interval } from '../math/interval-set.js';
 import { imageOffsets, nearbyImages, normalisedExtent } from './fold-images.js';
 import type { Interferer } from './interferer.js';
+import { guardedBand } from '../windows/enumerate-windows.js';
 
 /**
  * javascript-lp-solver's solver. The package's typings describe its CommonJS
@@ -31,9 +32,10 @@ export function linearSlacks(band: Band, guard: Guard, zone: number, blocking: r
   const scales = [1 - drift, 1 + drift];
   const middle = (range.low + range.high) / 2;
   const slacks: LinearSlack[] = [];
+  const guarded = guardedBand(band, guard.low, guard.high);
   for (const k of scales) {
-    slacks.push({ slope: (-(zone - 1) * k) / 2, offset: Math.max(0, band.low - guard.low) }); // a guard stops at DC
-    slacks.push({ slope: (zone * k) / 2, offset: -(band.high + guard.high) });
+    slacks.push({ slope: (-(zone - 1) * k) / 2, offset: guarded.low });
+    slacks.push({ slope: (zone * k) / 2, offset: -guarded.high });
   }
   const ceiling = range.high / 4;
   for (const interferer of blocking) {
