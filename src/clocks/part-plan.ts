@@ -1,21 +1,13 @@
 import type { Db, Hz, Ppm } from '../units/quantities.js';
 import type { ClockPart } from '../scenario/scenario.js';
 import type { RateEvaluation } from '../solve/evaluate-rate.js';
+import type { DriftHeadroom } from '../solve/drift.js';
 
 /** The integer settings that turn a part's frequency into a rate: rate = f × N / (M × D). */
 export interface RateSettings {
   readonly N: number;
   readonly M: number;
   readonly D: number;
-}
-
-/** How far a rate may drift each way before its first check fails, ±ppm, and which check fails there. */
-export interface DriftHeadroom {
-  readonly downPpm: Ppm;
-  readonly upPpm: Ppm;
-  /** Label of the check that fails first below (an interferer label or "zone edge"). */
-  readonly downLimitedBy: string;
-  readonly upLimitedBy: string;
 }
 
 /** The SNR figures a part allows at the band's highest frequency, dB. */

@@ -1,18 +1,17 @@
 import type { ClockPart } from '../scenario/scenario.js';
 import { evaluateRate, type RateEvaluation } from '../solve/evaluate-rate.js';
-import { hz } from '../units/quantities.js';
+import { hz, type Ppm } from '../units/quantities.js';
 import { guardedBand, rateWindows } from '../windows/enumerate-windows.js';
 import { feasibleSet, type FeasibleInterval, type FeasibleSet } from '../solve/feasible-set.js';
 import type { PlanContext } from '../solve/plan-context.js';
-import { driftSafeRange } from '../solve/best-rate.js';
+import { driftHeadroom, driftReach, driftSafeRange } from '../solve/drift.js';
 import { linearSlacks, maximiseWorstSlack, type LinearSlack } from '../solve/widest-margin-lp.js';
 import type { Interval } from '../math/interval-set.js';
 import { clockSnr } from './clock-snr.js';
-import { driftHeadroom } from './drift-headroom.js';
 import { bestIntegerN, ENUMERATE_UP_TO, modelSlack } from './integer-widest-margin.js';
 import type { PartPlan, PartSearch, RateSettings } from './part-plan.js';
 import { nRangeFor, partRates, rateFamilies, rateOf, type RateFamily } from './part-rates.js';
-import { worstSlackAt } from './worst-slack.js';
+import { worstSlackAt } from '../solve/worst-slack.js';
 
 /** Tuning of planPart's search (the defaults suit the command line; tests force each path). */
 export interface PlanPartOptions {
@@ -175,12 +174,11 @@ function bestPassing(context: PlanContext, part: ClockPart, families: readonly R
  * The feasible set for a part's nominal rates: the converter's range bounds
  * the nominal rate, and evaluateRate judges the drift around it against the
  * checks only, so here the windows are clipped to that range widened by the
- * drift, [min·(1 − ε), max·(1 + ε)] (the expressions driftRange uses), and a
+ * drift (driftReach), and a
  * rate passes exactly when its drift lies inside one of these intervals.
  */
-function driftFeasibleSet(context: PlanContext, tolerancePpm: number): FeasibleSet {
-  const limits = { minRate: hz(context.limits.minRate * (1 - tolerancePpm * 1e-6)), maxRate: hz(context.limits.maxRate * (1 + tolerancePpm * 1e-6)) };
-  const windows = rateWindows(guardedBand(context.band, context.guard.low, context.guard.high), limits);
+function driftFeasibleSet(context: PlanContext, tolerancePpm: Ppm): FeasibleSet {
+  const windows = rateWindows(guardedBand(context.band, context.guard.low, context.guard.high), driftReach(context.limits, tolerancePpm));
   return feasibleSet(windows, context.interferers, context.band);
 }
 
@@ -236,7 +234,7 @@ function nearestFailing(context: PlanContext, set: FeasibleSet, part: ClockPart,
   const tie = TIE * (context.band.high - context.band.low);
   const slackOf = (settings: RateSettings) => worstSlackAt(context, blocking, rateOf(part.frequency, settings), part.tolerancePpm);
   let best: { settings: RateSettings; slack: number } | undefined;
-  const consider = (settings: RateSettings, slack = slackOf(settings)) => {
+  const consider = (settings: RateSettings, slack: number = slackOf(settings)) => {
     if (!best || slack > best.slack + tie) best = { settings, slack };
     return slack;
   };
@@ -290,7 +288,7 @@ function nearestFailing(context: PlanContext, set: FeasibleSet, part: ClockPart,
 }
 
 /** The nominal rates whose whole drift stays inside the limits; an empty range (min > max) when the drift is wider. */
-function driftInsideLimits(limits: PlanContext['limits'], tolerancePpm: number): PlanContext['limits'] {
+function driftInsideLimits(limits: PlanContext['limits'], tolerancePpm: Ppm): PlanContext['limits'] {
   const range = driftSafeRange(limits, tolerancePpm);
   return range ? { minRate: hz(range.low), maxRate: hz(range.high) } : { minRate: limits.maxRate, maxRate: limits.minRate };
 }

@@ -20,6 +20,20 @@ export interface BandImage extends Band {
 }
 
 /**
+ * The Nyquist zone of a band's centre at a rate, ⌈(low + high)/rate⌉, at least 1:
+ * the zone the band occupies when it fits in one, and the zone its checks are
+ * measured in when it straddles.
+ *
+ * @param band the band, Hz
+ * @param rate sampling rate, Hz
+ * @returns the zone, 1-based
+ * @example wantedZone({ low: hz(60e6), high: hz(80e6) }, hz(100e6)) // 2
+ */
+export function wantedZone(band: Band, rate: Hz): number {
+  return Math.max(1, Math.ceil((band.low + band.high) / rate));
+}
+
+/**
  * Where a whole band lands after sampling, or null when it straddles a zone
  * boundary (then its image folds onto itself). Edges on a boundary count as
  * inside. The image keeps low < high; `inverted` says it is mirrored.
@@ -29,7 +43,7 @@ export interface BandImage extends Band {
  * @example bandImage({ low: 60e6, high: 80e6 }, 100e6) // zone 2, inverted, 20–40 MHz
  */
 export function bandImage(band: Band, rate: Hz): BandImage | null {
-  const zone = Math.max(1, Math.ceil((band.low + band.high) / rate));
+  const zone = wantedZone(band, rate);
   const zoneLow = ((zone - 1) * rate) / 2;
   const zoneHigh = (zone * rate) / 2;
   const fits = (band.low >= zoneLow || sameEdge(band.low, zoneLow)) && (band.high <= zoneHigh || sameEdge(band.high, zoneHigh));

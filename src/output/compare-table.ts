@@ -1,5 +1,5 @@
 import { formatFrequency, trimmed } from '../units/format-frequency.js';
-import type { ComparedPart, CompareReport, VariantVerdict } from '../report/compare-report.js';
+import type { ComparedPart, CompareReport, VariantVerdict } from '../plan/compare-report.js';
 import { plainTable } from './table.js';
 import { toCsv } from './csv.js';
 

@@ -3,9 +3,10 @@ import { escapeXml } from '../pictures/escape-xml.js';
 import { rateMapSvg } from '../pictures/rate-map.js';
 import { spectrumSvg } from '../pictures/spectrum.js';
 import { bandPositionSvg } from '../pictures/band-position.js';
-import type { PlanReport, ReportedCandidate } from '../report/plan-report.js';
-import type { CompareReport } from '../report/compare-report.js';
+import type { PlanReport, ReportedCandidate } from '../plan/plan-report.js';
+import type { CompareReport } from '../plan/compare-report.js';
 import { htmlTable } from './html-table.js';
+import { shiftParts } from './shift-table.js';
 
 const JOB = 'Sample-clock plan for an IF-sampling receiver: the rates at which the wanted channel sits whole in one Nyquist zone with its guard bands and nothing strong enough folds onto it.';
 
@@ -83,6 +84,7 @@ function planSection(report: PlanReport): string {
     feasibleTable(report),
     candidatesTable(report),
     focus ? checksTable(focus) : '',
+    report.ifShift ? shiftHtml(report.ifShift) : '',
     `<p><strong>${escapeXml(verdictLine(report, focus))}</strong></p>`,
     ...pictures.map((svg) => `<figure>${svg}</figure>`),
   ].join('\n');
@@ -149,6 +151,13 @@ function checksTable(candidate: ReportedCandidate): string {
     verdictCell(c.pass),
   ]);
   return htmlTable(['check', 'kind', 'input at this rate', 'aliased to', 'margin', 'level dBFS', 'level margin dB', 'blocks', 'verdict'], rows, `Checks at ${candidate.label} (${formatFrequency(candidate.rate)})`);
+}
+
+function shiftHtml(shift: NonNullable<PlanReport['ifShift']>): string {
+  const { title, head, rows, searched } = shiftParts(shift);
+  const heading = '<h3>Best IF shift and rate</h3>';
+  if (rows.length === 0) return `${heading}<p>${escapeXml(title)} No rate is feasible at any seed shift (${escapeXml(searched)})</p>`;
+  return `${heading}${htmlTable(head, rows, title)}<p>${escapeXml(searched)}</p>`;
 }
 
 function verdictLine(report: PlanReport, focus: ReportedCandidate | undefined): string {

@@ -1,5 +1,5 @@
 import { formatFrequency, trimmed } from '../units/format-frequency.js';
-import type { PlanReport, ReportedCandidate, ReportedCheck } from '../report/plan-report.js';
+import type { PlanReport, ReportedCandidate, ReportedCheck } from '../plan/plan-report.js';
 import { plainTable } from './table.js';
 import { shiftSection } from './shift-table.js';
 

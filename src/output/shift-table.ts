@@ -1,5 +1,5 @@
 import { formatFrequency, trimmed } from '../units/format-frequency.js';
-import type { ReportedShift, ShiftReport } from '../report/shift-report.js';
+import type { ReportedShift, ShiftReport } from '../plan/shift-report.js';
 import { plainTable } from './table.js';
 
 /**
@@ -12,6 +12,27 @@ import { plainTable } from './table.js';
  * @example shiftSection(report.ifShift!) // 'Best IF shift and rate (the IF may move −2 MHz … +2 MHz …'
  */
 export function shiftSection(shift: ShiftReport): string {
+  const { title, head, rows, searched } = shiftParts(shift);
+  if (rows.length === 0) return `${title}\nNo rate is feasible at any seed shift (${searched})`;
+  return `${title}\n${plainTable(head, rows)}\n(${searched})`;
+}
+
+/** The IF-shift section's pieces, shared by the table and the HTML page: title, column heads, rows (best pair, nominal IF), what was searched. */
+export interface ShiftParts {
+  readonly title: string;
+  readonly head: readonly string[];
+  readonly rows: readonly string[][];
+  readonly searched: string;
+}
+
+/**
+ * The pieces of the "Best IF shift and rate" section, for any writer.
+ *
+ * @param shift the report's ifShift section
+ * @returns title, heads, rows and the search summary, as text
+ * @example shiftParts(report.ifShift!).head[1] // 'IF shift'
+ */
+export function shiftParts(shift: ShiftReport): ShiftParts {
   const title =
     `Best IF shift and rate (the IF may move ${signed(shift.low)} to ${signed(shift.high)} with the first LO; ` +
     'the wanted band, its harmonics, the neighbours and their products move with it; board spurs, LO leakage among them, stay put):';
@@ -19,9 +40,8 @@ export function shiftSection(shift: ShiftReport): string {
   if (shift.best) rows.push(row('best pair', shift.best));
   if (shift.atNoShift) rows.push(row('nominal IF', shift.atNoShift));
   const searched = `${shift.seedShifts.length} seed shifts, ${shift.piecesSolved} pieces solved; widest worst margin over each rate's ±ppm, ties broken by the next-tightest check's margin beyond its requirement.`;
-  if (rows.length === 0) return `${title}\nNo rate is feasible at any seed shift (${searched})`;
   const head = ['pair', 'IF shift', 'IF centre', 'rate', 'ppm', 'zone', 'inverted', 'centre / NCO', 'worst margin', 'limited by', 'next margin', 'verdict'];
-  return `${title}\n${plainTable(head, rows)}\n(${searched})`;
+  return { title, head, rows, searched };
 }
 
 function row(name: string, pair: ReportedShift): string[] {

@@ -1,5 +1,5 @@
 import { formatFrequency, trimmed } from '../units/format-frequency.js';
-import type { PeakRow, PredictionRow, VerifyResult } from '../capture/verify-result.js';
+import type { PeakRow, PredictionRow, VerifyResult } from '../report/verify-result.js';
 import { plainTable } from './table.js';
 
 /** Unlisted peaks shown in the table; JSON carries them all. */

@@ -1,4 +1,4 @@
-import type { PlanReport, ReportedCandidate } from '../report/plan-report.js';
+import type { PlanReport, ReportedCandidate } from '../plan/plan-report.js';
 import { formatFrequency, trimmed } from '../units/format-frequency.js';
 import { horizontalAxis, verticalAxis } from './axis.js';
 import { spreadApart, textWidth } from './label-packing.js';

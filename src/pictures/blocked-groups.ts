@@ -1,4 +1,4 @@
-import type { PlanReport } from '../report/plan-report.js';
+import type { PlanReport } from '../plan/plan-report.js';
 
 /** The checks that block the same rates inside one window, drawn as one row of brackets. */
 export interface BlockedGroup {

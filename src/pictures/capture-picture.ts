@@ -1,5 +1,5 @@
-import type { PeakRow, PredictionRow, VerifyResult } from '../capture/verify-result.js';
-import { CONTRADICTING } from '../capture/verify-result.js';
+import type { PeakRow, PredictionRow, VerifyResult } from '../report/verify-result.js';
+import { CONTRADICTING } from '../report/verify-result.js';
 import { formatFrequency, trimmed } from '../units/format-frequency.js';
 import { horizontalAxis, verticalAxis } from './axis.js';
 import { frequencyUnit, inUnit } from './frequency-unit.js';

@@ -1,4 +1,4 @@
-import type { ReportedCheck } from '../report/plan-report.js';
+import type { ReportedCheck } from '../plan/plan-report.js';
 import { formatFrequency, trimmed } from '../units/format-frequency.js';
 import { element, textElement } from './svg-element.js';
 import { withMinus } from './typography.js';

@@ -1,4 +1,4 @@
-import type { PlanReport } from '../report/plan-report.js';
+import type { PlanReport } from '../plan/plan-report.js';
 import { bandPositionFigure } from './band-position.js';
 import { rateMapFigure } from './rate-map.js';
 import { spectrumFigure } from './spectrum.js';

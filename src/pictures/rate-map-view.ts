@@ -1,4 +1,4 @@
-import type { PlanReport } from '../report/plan-report.js';
+import type { PlanReport } from '../plan/plan-report.js';
 import type { RateWindow } from '../windows/rate-window.js';
 
 /** Most window lanes drawn; beyond this the map zooms onto a run of zones. */

@@ -1,4 +1,4 @@
-import type { PlanReport, ReportedCandidate } from '../report/plan-report.js';
+import type { PlanReport, ReportedCandidate } from '../plan/plan-report.js';
 import { formatFrequency } from '../units/format-frequency.js';
 import type { RateWindow } from '../windows/rate-window.js';
 import { horizontalAxis } from './axis.js';

@@ -1,4 +1,4 @@
-import type { PlanReport, ReportedCandidate, ReportedCheck } from '../report/plan-report.js';
+import type { PlanReport, ReportedCandidate, ReportedCheck } from '../plan/plan-report.js';
 import { foldExtent } from '../math/fold-extent.js';
 import { formatFrequency, trimmed } from '../units/format-frequency.js';
 import { InputError } from '../units/input-error.js';

@@ -1,6 +1,6 @@
 import type { Hz } from '../units/quantities.js';
 import { foldFrequency, lookalikes, type Fold } from '../math/fold.js';
-import { PAPER_DESIGN_CAUTION } from './caution.js';
+import { PAPER_DESIGN_CAUTION } from '../plan/caution.js';
 
 /** One frequency after sampling. */
 export interface ToneFold extends Fold {

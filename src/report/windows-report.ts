@@ -2,7 +2,7 @@ import { hz, ppm, type Hz, type Ppm } from '../units/quantities.js';
 import { bandImage, type Band, type BandImage, type Guard } from '../math/band.js';
 import { guardedBand, lowestLegalRate, rateWindows } from '../windows/enumerate-windows.js';
 import type { RateLimits, RateWindow } from '../windows/rate-window.js';
-import { PAPER_DESIGN_CAUTION } from './caution.js';
+import { PAPER_DESIGN_CAUTION } from '../plan/caution.js';
 
 /** One legal window with what an engineer reads off it. */
 export interface WindowRow extends RateWindow {

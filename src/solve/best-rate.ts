@@ -3,26 +3,11 @@ import type { Interval } from '../math/interval-set.js';
 import { evaluateRate, type RateEvaluation } from './evaluate-rate.js';
 import type { FeasibleInterval } from './feasible-set.js';
 import type { PlanContext } from './plan-context.js';
+import { driftSafeRange } from './drift.js';
 import { linearSlacks, maximiseWorstSlack } from './widest-margin-lp.js';
 
 /** Decimation ratios tried one by one inside an interval before falling back to the LP optimum's neighbours. */
 const MOST_RATIOS_TRIED = 200;
-
-/**
- * The nominal rates of a range (a feasible interval, the converter's rate
- * limits) whose whole drift range r·(1 ± ε) stays inside it:
- * [low/(1 − ε), high/(1 + ε)], stepped in where rounding left a drift end
- * outside; null when the drift is wider than the range.
- */
-export function driftSafeRange(interval: { readonly minRate: number; readonly maxRate: number }, tolerancePpm: number): Interval | null {
-  const epsilon = tolerancePpm * 1e-6;
-  let low = interval.minRate / (1 - epsilon);
-  let high = interval.maxRate / (1 + epsilon);
-  // (x/(1 − ε))·(1 − ε) may round an ulp below x, putting the drift end inside the open forbidden interval beyond the edge: step in.
-  while (low * (1 - epsilon) < interval.minRate) low += low * Number.EPSILON;
-  while (high * (1 + epsilon) > interval.maxRate) high -= high * Number.EPSILON;
-  return low <= high ? { low, high } : null;
-}
 
 /**
  * The best rate of one feasible interval for the plan's goal, judged exactly.

@@ -1,5 +1,5 @@
 import { db, hz, type Db, type Hz, type Ppm } from '../units/quantities.js';
-import { bandImage, type Band, type Guard } from '../math/band.js';
+import { bandImage, wantedZone, type Band, type Guard } from '../math/band.js';
 import { foldExtent } from '../math/fold-extent.js';
 import { EDGE_TOLERANCE } from '../math/edge-tolerance.js';
 import { meetsOpen, type Interval } from '../math/interval-set.js';
@@ -7,7 +7,9 @@ import { imageMargin, marginBreakpoints, nearbyImages, normalisedExtent } from '
 import { forbiddenRates } from './forbidden-rates.js';
 import { guardedBand } from '../windows/enumerate-windows.js';
 import type { Interferer, InterfererKind } from './interferer.js';
-import { driftRange, type PlanContext } from './plan-context.js';
+import type { PlanContext } from './plan-context.js';
+import { driftRange } from './drift.js';
+import { ZONE_EDGE } from './limited-by.js';
 
 /** One interferer measured at one rate. */
 export interface CheckResult {
@@ -50,8 +52,6 @@ export interface RateEvaluation {
   readonly pass: boolean;
 }
 
-export const ZONE_EDGE = 'zone edge';
-
 /**
  * Judges one sampling rate against every check, exactly, over the clock's
  * whole ±tolerance: pass/fail from the exact forbidden intervals; margins as
@@ -65,7 +65,7 @@ export const ZONE_EDGE = 'zone edge';
 export function evaluateRate(context: PlanContext, rate: Hz, tolerancePpm: Ppm): RateEvaluation {
   const drift = driftRange(rate, tolerancePpm);
   const image = bandImage(context.band, rate);
-  const zone = image?.zone ?? Math.max(1, Math.ceil((context.band.low + context.band.high) / rate));
+  const zone = image?.zone ?? wantedZone(context.band, rate);
   const zoneEdgeMargin = hz(Math.min(zoneEdgeMarginAt(context.band, context.guard, zone, drift.low), zoneEdgeMarginAt(context.band, context.guard, zone, drift.high)));
   const zonePass = image !== null && zoneEdgeMargin >= -EDGE_TOLERANCE * rate;
   const checks = context.interferers.map((i) => checkInterferer(context, i, rate, drift));

@@ -24,8 +24,3 @@ export interface PlanContext {
 
 /** The converter's side of clock planning. */
 export type ConverterClocking = Pick<Converter, 'clockDividers' | 'bits' | 'apertureJitter'>;
-
-/** The rates a clock at `rate` may take over its ±tolerance, Hz. */
-export function driftRange(rate: Hz, tolerancePpm: Ppm): { low: number; high: number } {
-  return { low: rate * (1 - tolerancePpm * 1e-6), high: rate * (1 + tolerancePpm * 1e-6) };
-}

@@ -8,7 +8,7 @@ import { readScenarioFile } from '../../dist/cli/read-scenario.js';
 import { contextFromScenario } from '../../dist/solve/context-from-scenario.js';
 import { guardedBand, rateWindows } from '../../dist/windows/enumerate-windows.js';
 import { feasibleSet } from '../../dist/solve/feasible-set.js';
-import { containingInterval } from '../../dist/clocks/drift-judge.js';
+import { containingInterval } from '../../dist/solve/drift.js';
 
 const ROOT = fileURLToPath(new URL('../../', import.meta.url));
 const DEMO = `${ROOT}scenarios/heron-base.json`;

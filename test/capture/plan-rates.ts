@@ -1,7 +1,7 @@
 import { hz, ppm, type Hz } from '../../src/units/quantities.js';
 import type { Scenario } from '../../src/scenario/scenario.js';
 import { contextFromScenario } from '../../src/solve/context-from-scenario.js';
-import { solvePlan } from '../../src/solve/solve-plan.js';
+import { solvePlan } from '../../src/plan/solve-plan.js';
 import { evaluateRate } from '../../src/solve/evaluate-rate.js';
 
 const MHZ = 1e6;

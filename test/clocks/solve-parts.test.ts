@@ -1,11 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import { seconds } from '../../src/units/quantities.js';
-import { solvePlan } from '../../src/solve/solve-plan.js';
+import { solvePlan } from '../../src/plan/solve-plan.js';
 import { guardedBand, rateWindows } from '../../src/windows/enumerate-windows.js';
 import { feasibleSet } from '../../src/solve/feasible-set.js';
 import { planPart } from '../../src/clocks/plan-part.js';
-import { driftHeadroom } from '../../src/clocks/drift-headroom.js';
-import { planReport } from '../../src/report/plan-report.js';
+import { driftHeadroom } from '../../src/solve/drift.js';
+import { planReport } from '../../src/plan/plan-report.js';
 import { planTable } from '../../src/output/plan-table.js';
 import { part, synthesiser } from './part-fixtures.js';
 import { handWorkedContext, MHZ } from '../helpers/hand-worked-plan.js';

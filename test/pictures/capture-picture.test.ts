@@ -3,7 +3,7 @@ import fc from 'fast-check';
 import { mkdirSync, writeFileSync } from 'node:fs';
 import { hz } from '../../src/units/quantities.js';
 import { readScenarioFile } from '../../src/cli/read-scenario.js';
-import { verifyCapture, verifyCaptureWithSpectrum, type VerifiedCapture } from '../../src/capture/verify-capture.js';
+import { verifyCapture, verifyCaptureWithSpectrum, type VerifiedCapture } from '../../src/report/verify-capture.js';
 import { captureSvg } from '../../src/pictures/capture-picture.js';
 import { maxHoldColumns } from '../../src/pictures/max-hold-columns.js';
 import { badRate, passingRates } from '../capture/plan-rates.js';

@@ -1,7 +1,7 @@
 import { db, hz, ppm } from '../../src/units/quantities.js';
 import { contextFromScenario } from '../../src/solve/context-from-scenario.js';
-import { solvePlan } from '../../src/solve/solve-plan.js';
-import { planReport, type PlanReport } from '../../src/report/plan-report.js';
+import { solvePlan } from '../../src/plan/solve-plan.js';
+import { planReport, type PlanReport } from '../../src/plan/plan-report.js';
 import type { Scenario } from '../../src/scenario/scenario.js';
 import { converterFixture, scenarioFixture } from '../helpers/scenario-fixture.js';
 

@@ -2,7 +2,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { mkdirSync, writeFileSync } from 'node:fs';
 import { hz } from '../../src/units/quantities.js';
 import { InputError } from '../../src/units/input-error.js';
-import type { PlanReport } from '../../src/report/plan-report.js';
+import type { PlanReport } from '../../src/plan/plan-report.js';
 import { rateMapSvg } from '../../src/pictures/rate-map.js';
 import { rateMapView, MOST_LANES } from '../../src/pictures/rate-map-view.js';
 import { spectrumSvg } from '../../src/pictures/spectrum.js';

@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { db, hz, ppm } from '../../src/units/quantities.js';
-import { driftSafeRange } from '../../src/solve/best-rate.js';
-import { solvePlan } from '../../src/solve/solve-plan.js';
+import { driftSafeRange } from '../../src/solve/drift.js';
+import { solvePlan } from '../../src/plan/solve-plan.js';
 import type { PlanContext } from '../../src/solve/plan-context.js';
 import { brutePasses } from '../helpers/brute-force-plan.js';
 import type { Goal } from '../../src/scenario/scenario.js';
@@ -50,7 +50,7 @@ describe('a candidate at the end of its drift-safe range', () => {
 
   it('the drift-safe range keeps both drift ends inside the interval in floating point', () => {
     const interval = { zone: 2, inverted: true, minRate: hz(tone + 25.5 * MHZ), maxRate: hz(42 * MHZ) };
-    const range = driftSafeRange(interval, 1000)!;
+    const range = driftSafeRange(interval, ppm(1000))!;
     expect(range.low * (1 - 1e-3)).toBeGreaterThanOrEqual(interval.minRate);
     expect(range.high * (1 + 1e-3)).toBeLessThanOrEqual(interval.maxRate);
   });
@@ -67,7 +67,7 @@ describe('driftSafeRange in floating point (random edges and tolerances)', () =>
         (minRate, relativeWidth, tolerance) => {
           const interval = { zone: 1, inverted: false, minRate: hz(minRate), maxRate: hz(minRate * (1 + relativeWidth)) };
           const epsilon = tolerance * 1e-6;
-          const range = driftSafeRange(interval, tolerance);
+          const range = driftSafeRange(interval, ppm(tolerance));
           if (!range) {
             // Null only when the drift is wider than the interval, to within a few ulps.
             expect(interval.minRate / (1 - epsilon)).toBeGreaterThan((interval.maxRate / (1 + epsilon)) * (1 - 4 * Number.EPSILON));
@@ -103,7 +103,7 @@ describe('every goal: the best rate of a drift-safe interval passes (random plan
           for (const candidate of result.candidates) {
             const rate = candidate.evaluation.rate;
             const interval = result.feasible.find((f) => rate >= f.minRate && rate <= f.maxRate);
-            if (candidate.origin !== 'interval' || !interval || !driftSafeRange(interval, tolerance)) continue;
+            if (candidate.origin !== 'interval' || !interval || !driftSafeRange(interval, ppm(tolerance))) continue;
             expect(candidate.evaluation.pass, `${candidate.label} at ${rate} Hz ±${tolerance} ppm`).toBe(true);
             for (const r of [rate, rate * (1 - epsilon), rate * (1 + epsilon)]) if (!nearAnEdge(r, edges)) expect(brutePasses(context, r), `brute force at ${r} Hz`).toBe(true);
             judged++;

@@ -4,7 +4,7 @@ import { hz, ppm } from '../../src/units/quantities.js';
 import { guardedBand, rateWindows } from '../../src/windows/enumerate-windows.js';
 import { feasibleSet, type FeasibleSet } from '../../src/solve/feasible-set.js';
 import { evaluateRate } from '../../src/solve/evaluate-rate.js';
-import { solvePlan } from '../../src/solve/solve-plan.js';
+import { solvePlan } from '../../src/plan/solve-plan.js';
 import type { PlanContext } from '../../src/solve/plan-context.js';
 import { brutePasses } from '../helpers/brute-force-plan.js';
 import { exactEdges, nearAnEdge, planArbitrary, sweepRates } from './random-plan.js';

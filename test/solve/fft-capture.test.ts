@@ -3,7 +3,7 @@ import FFT from 'fft.js';
 import { db, hz, ppm } from '../../src/units/quantities.js';
 import type { Interferer } from '../../src/solve/interferer.js';
 import type { PlanContext } from '../../src/solve/plan-context.js';
-import { solvePlan } from '../../src/solve/solve-plan.js';
+import { solvePlan } from '../../src/plan/solve-plan.js';
 import { evaluateRate, type RateEvaluation } from '../../src/solve/evaluate-rate.js';
 import { PLAIN_CLOCKING } from '../helpers/hand-worked-plan.js';
 

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { hz, ppm } from '../../src/units/quantities.js';
 import { handWorkedContext, MHZ } from '../helpers/hand-worked-plan.js';
-import { solvePlan } from '../../src/solve/solve-plan.js';
+import { solvePlan } from '../../src/plan/solve-plan.js';
 import { evaluateRate } from '../../src/solve/evaluate-rate.js';
 
 /**

@@ -1,14 +1,12 @@
 import { InputError } from '../../units/input-error.js';
-import { compareReport } from '../../report/compare-report.js';
 import { compareCsv, compareTable } from '../../output/compare-table.js';
 import { toJson } from '../../output/json.js';
-import { planReport } from '../../report/plan-report.js';
 import { rateMapFigure } from '../../pictures/rate-map.js';
 import { stackFigures, svgDocument } from '../../pictures/svg-document.js';
 import { writeFileSafely } from '../safe-write.js';
 import { EXIT, type ExitCode, type Io } from '../io.js';
 import type { CompareOptions } from './compare-command.js';
-import { planVariants, variantPlans } from './plan-variants.js';
+import { planVariants } from './plan-variants.js';
 
 /**
  * Plans the union of the variants' clock catalogues on every variant and
@@ -17,15 +15,14 @@ import { planVariants, variantPlans } from './plan-variants.js';
  */
 export function runCompare(files: readonly string[], options: CompareOptions, io: Io): ExitCode {
   if (options.json && options.csv) throw new InputError('--csv', 'either --json or --csv, not both', '--json --csv');
-  const { variants, inputs } = planVariants(files, io);
-  const report = compareReport(variantPlans(variants));
+  const { plans, comparison: report, inputs } = planVariants(files, io);
   const text = options.json ? toJson(report) : options.csv ? compareCsv(report) : compareTable(report);
   if (options.svg !== undefined) {
-    const maps = variants.map((v) => rateMapFigure(planReport(v.name, v.context, v.result)));
+    const maps = plans.map((plan) => rateMapFigure(plan));
     writeFileSafely(options.svg, svgDocument(stackFigures(maps, `Clock parts on ${report.variants.join(', ')}`, 24)), { force: options.force === true, inputs });
   }
   if (options.output !== undefined) writeFileSafely(options.output, text, { force: options.force === true, inputs });
   else io.out(text);
-  const answered = variants.length > 1 ? report.family.length > 0 : report.parts.some((p) => p.passesAll);
+  const answered = plans.length > 1 ? report.family.length > 0 : report.parts.some((p) => p.passesAll);
   return answered ? EXIT.answered : EXIT.noAnswer;
 }

@@ -1,9 +1,7 @@
 import { InputError } from '../../units/input-error.js';
 import { parseFrequency } from '../../units/parse-frequency.js';
 import type { Goal, Scenario } from '../../scenario/scenario.js';
-import { contextFromScenario } from '../../solve/context-from-scenario.js';
-import { solvePlan } from '../../solve/solve-plan.js';
-import { planReport } from '../../report/plan-report.js';
+import { planScenario } from '../../plan/plan-scenario.js';
 import { toJson } from '../../output/json.js';
 import { readScenarioWithInputs } from '../read-scenario.js';
 import { writeFileSafely } from '../safe-write.js';
@@ -14,10 +12,8 @@ import type { SolveOptions } from './solve-command.js';
 export async function runSolve(file: string, options: SolveOptions, io: Io): Promise<ExitCode> {
   const { scenario, inputs } = readScenarioWithInputs(file);
   const goal = goalFromOptions(options, scenario);
-  const context = contextFromScenario({ ...scenario, goal });
-  // The IF-shift search, the tables and the pictures load only when asked for: start-up time matters.
-  const shift = scenario.ifShift ? (await import('../../solve/if-shift/best-shift-and-rate.js')).bestShiftAndRate({ ...scenario, goal }) : null;
-  const report = planReport(scenario.name, context, solvePlan(context), shift);
+  const report = planScenario(scenario, { goal });
+  // The tables and the pictures load only when asked for: start-up time matters.
   if (options.svg !== undefined) {
     const { planPicturesSvg } = await import('../../pictures/plan-pictures.js');
     writeFileSafely(options.svg, planPicturesSvg(report), { force: options.force === true, inputs });

@@ -1,6 +1,6 @@
 import { InputError } from '../../units/input-error.js';
 import { formatFrequency } from '../../units/format-frequency.js';
-import { verifyCaptureWithSpectrum } from '../../capture/verify-capture.js';
+import { verifyCaptureWithSpectrum } from '../../report/verify-capture.js';
 // Loaded with the action, which the command imports only when it runs; the capture itself costs far more than the picture writers.
 import { captureSvg } from '../../pictures/capture-picture.js';
 import { verifyTable } from '../../output/verify-table.js';

@@ -1,9 +1,10 @@
-import { hz, type Hz } from '../../units/quantities.js';
+import { hz, type Hz, type Ppm } from '../../units/quantities.js';
 import type { Interval } from '../../math/interval-set.js';
 import type { Scenario } from '../../scenario/scenario.js';
 import { deriveInterferers } from '../../interferers/derive-interferers.js';
 import { guardedBand, rateWindows } from '../../windows/enumerate-windows.js';
-import { bestRateIn, driftSafeRange } from '../best-rate.js';
+import { bestRateIn } from '../best-rate.js';
+import { driftSafeRange } from '../drift.js';
 import { contextFromScenario } from '../context-from-scenario.js';
 import { evaluateRate, type RateEvaluation } from '../evaluate-rate.js';
 import { feasibleSet, type FeasibleInterval } from '../feasible-set.js';
@@ -130,7 +131,7 @@ export function bestShiftAndRate(scenario: Scenario, options: ShiftSearchOptions
 }
 
 /** The nominal rate a feasible interval seeds its piece at: the middle of its drift-safe range (or of the interval). */
-function seedRate(interval: FeasibleInterval, tolerancePpm: number): number {
+function seedRate(interval: FeasibleInterval, tolerancePpm: Ppm): number {
   const safe = driftSafeRange(interval, tolerancePpm);
   return safe ? (safe.low + safe.high) / 2 : (interval.minRate + interval.maxRate) / 2;
 }
@@ -154,7 +155,7 @@ function blockingSomewhere(scenario: Scenario, range: Interval, base: PlanContex
  * δ* (the LP's rounding may leave it a hair outside) and judges it exactly.
  * Null when the zone leaves no room at δ* (a window narrower than the drift).
  */
-function solvePiece(piece: ShiftPiece, contextAt: (shift: number) => PlanContext, tolerancePpm: number, unit: number): ShiftedRate | null {
+function solvePiece(piece: ShiftPiece, contextAt: (shift: number) => PlanContext, tolerancePpm: Ppm, unit: number): ShiftedRate | null {
   const answer = maximisePlaneSlack(piece.bounds, piece.held, piece.box, unit);
   if (!answer) return null;
   const shift = Math.min(Math.max(answer.shift, piece.box.shift.low), piece.box.shift.high);

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { db, hz } from '../../src/units/quantities.js';
 import type { CheckResult } from '../../src/solve/evaluate-rate.js';
-import { judgeLine, type LineSetting, type Measurement } from '../../src/capture/judge-line.js';
+import { judgeLine, type LineSetting, type Measurement } from '../../src/report/judge-line.js';
 import type { LineDraft } from '../../src/capture/family-lines.js';
 
 /**

@@ -4,7 +4,7 @@ import { extentMagnitude } from '../math/fold-extent.js';
 import type { Goal } from '../scenario/scenario.js';
 import type { Interferer } from '../solve/interferer.js';
 import type { PlanContext } from '../solve/plan-context.js';
-import type { Candidate, PlanResult } from '../solve/solve-plan.js';
+import type { Candidate, PlanResult } from './solve-plan.js';
 import type { CheckResult, RateEvaluation } from '../solve/evaluate-rate.js';
 import type { ShiftSearch } from '../solve/if-shift/best-shift-and-rate.js';
 import { PAPER_DESIGN_CAUTION } from './caution.js';

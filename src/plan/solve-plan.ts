@@ -1,13 +1,13 @@
 import { hz } from '../units/quantities.js';
 import { guardedBand, rateWindows } from '../windows/enumerate-windows.js';
 import type { RateWindow } from '../windows/rate-window.js';
-import { bestRateIn, goalScore } from './best-rate.js';
-import { evaluateRate, type RateEvaluation } from './evaluate-rate.js';
-import { feasibleSet, type BlockedRange, type FeasibleInterval } from './feasible-set.js';
-import type { PlanContext } from './plan-context.js';
+import { bestRateIn, goalScore } from '../solve/best-rate.js';
+import { evaluateRate, type RateEvaluation } from '../solve/evaluate-rate.js';
+import { feasibleSet, type BlockedRange, type FeasibleInterval } from '../solve/feasible-set.js';
+import type { PlanContext } from '../solve/plan-context.js';
 import { planPart } from '../clocks/plan-part.js';
-import { driftHeadroom } from '../clocks/drift-headroom.js';
-import type { ClockSnr, DriftHeadroom, PartPlan, RateSettings } from '../clocks/part-plan.js';
+import { driftHeadroom, type DriftHeadroom } from '../solve/drift.js';
+import type { ClockSnr, PartPlan, RateSettings } from '../clocks/part-plan.js';
 
 /** A rate put forward: a listed clock, or the best rate of a feasible interval. */
 export interface Candidate {

@@ -1,7 +1,9 @@
-import { hz, type Ppm } from '../units/quantities.js';
-import { driftRange, type PlanContext } from '../solve/plan-context.js';
-import { leastMargin, zoneEdgeMarginAt } from '../solve/evaluate-rate.js';
-import type { Interferer } from '../solve/interferer.js';
+import { hz, type Hz, type Ppm } from '../units/quantities.js';
+import { wantedZone } from '../math/band.js';
+import type { PlanContext } from './plan-context.js';
+import { driftRange } from './drift.js';
+import { leastMargin, zoneEdgeMarginAt } from './evaluate-rate.js';
+import type { Interferer } from './interferer.js';
 
 /**
  * The worst slack evaluateRate would report at a rate, computed from the same
@@ -15,13 +17,13 @@ import type { Interferer } from '../solve/interferer.js';
  * @param rate nominal rate, Hz
  * @param tolerancePpm ± drift, ppm
  * @returns the least slack, Hz (negative: a check fails)
- * @example worstSlackAt(context, blocking, hz(182.5e6), ppm(20)) // equals evaluateRate(...).worstSlack
+ * @example worstSlackAt(handWorked, blocking, hz(26e6), ppm(0)) // equals evaluateRate(handWorked, hz(26e6), ppm(0)).worstSlack
  */
-export function worstSlackAt(context: PlanContext, blocking: readonly Interferer[], rate: number, tolerancePpm: Ppm): number {
-  const drift = driftRange(hz(rate), tolerancePpm);
+export function worstSlackAt(context: PlanContext, blocking: readonly Interferer[], rate: Hz, tolerancePpm: Ppm): Hz {
+  const drift = driftRange(rate, tolerancePpm);
   const { band, guard } = context;
-  const zone = Math.max(1, Math.ceil((band.low + band.high) / rate)); // bandImage's zone
+  const zone = wantedZone(band, rate);
   let worst = Math.min(zoneEdgeMarginAt(band, guard, zone, drift.low), zoneEdgeMarginAt(band, guard, zone, drift.high));
   for (const interferer of blocking) worst = Math.min(worst, leastMargin(interferer, band, drift) - interferer.requiredMargin);
-  return worst;
+  return hz(worst);
 }

@@ -5,23 +5,24 @@ import { contextFromScenario } from '../solve/context-from-scenario.js';
 import { evaluateRate } from '../solve/evaluate-rate.js';
 import { levelThreshold } from '../interferers/level-threshold.js';
 import { foldExtent } from '../math/fold-extent.js';
-import { PAPER_DESIGN_CAUTION } from '../report/caution.js';
-import { binDistance, foldCycles } from './coherent-bins.js';
-import { captureTones, movedScenario, type CaptureRecord, type CaptureTone } from './capture-tones.js';
-import { checkFamily, type LineFamily } from './check-families.js';
-import { applyPolynomial } from './converter-polynomial.js';
-import { converterCoefficients } from './converter-model.js';
-import { familyLines, inputIndex } from './family-lines.js';
+import { PAPER_DESIGN_CAUTION } from '../plan/caution.js';
+import { planAtRate } from '../plan/plan-scenario.js';
+import { binDistance, foldCycles } from '../capture/coherent-bins.js';
+import { captureTones, movedScenario, type CaptureRecord, type CaptureTone } from '../capture/capture-tones.js';
+import { checkFamily, type LineFamily } from '../capture/check-families.js';
+import { applyPolynomial } from '../capture/converter-polynomial.js';
+import { converterCoefficients } from '../capture/converter-model.js';
+import { familyLines, inputIndex } from '../capture/family-lines.js';
 import { FIND_ABOVE_FLOOR, judgeLine, SEARCH_BINS, type Measurement } from './judge-line.js';
-import { enumerateProducts, orderSupremums, productAmplitude, productBound } from './mixing-products.js';
-import { expectedNoiseLevel } from './noise-level.js';
-import { modelComponents, type ModelComponent } from './model-components.js';
-import { quantise } from './quantiser.js';
-import { seededUniform } from './seeded-random.js';
-import { findPeaks, levelSpectrum } from './capture-spectrum.js';
-import { addTones, phaseTable } from './tone-synthesis.js';
-import { chooseLayout, type ComponentTemplate } from './tone-layout.js';
-import { blackmanHarris } from './window.js';
+import { enumerateProducts, orderSupremums, productAmplitude, productBound } from '../capture/mixing-products.js';
+import { expectedNoiseLevel } from '../capture/noise-level.js';
+import { modelComponents, type ModelComponent } from '../capture/model-components.js';
+import { quantise } from '../capture/quantiser.js';
+import { seededUniform } from '../capture/seeded-random.js';
+import { findPeaks, levelSpectrum } from '../capture/capture-spectrum.js';
+import { addTones, phaseTable } from '../capture/tone-synthesis.js';
+import { chooseLayout, type ComponentTemplate } from '../capture/tone-layout.js';
+import { blackmanHarris } from '../capture/window.js';
 import { CONTRADICTING, type PeakRow, type PredictionRow, type ToneRow, type UnderFloor, type VerifyResult } from './verify-result.js';
 
 /** How one capture is taken. */
@@ -96,7 +97,7 @@ export function verifyCaptureWithSpectrum(scenario: Scenario, settings: CaptureS
   const ways = scenario.converter.interleave?.ways ?? null;
 
   // The plan as written, and re-derived at the frequencies the record can hold.
-  const plan = evaluateRate(contextFromScenario(scenario), rate, ppm(0));
+  const plan = planAtRate(scenario, rate, ppm(0));
   const moved = movedScenario(scenario, record);
   const movedContext = contextFromScenario(moved);
   const checks = evaluateRate(movedContext, rate, ppm(0)).checks;

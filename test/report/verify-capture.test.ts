@@ -1,10 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { contextFromScenario } from '../../src/solve/context-from-scenario.js';
-import { verifyCapture } from '../../src/capture/verify-capture.js';
-import type { VerifyResult } from '../../src/capture/verify-result.js';
+import { verifyCapture } from '../../src/report/verify-capture.js';
+import type { VerifyResult } from '../../src/report/verify-result.js';
 import { readScenarioFile } from '../../src/cli/read-scenario.js';
 import { scenarioFixture } from '../helpers/scenario-fixture.js';
-import { alias, badRate, passingRates } from './plan-rates.js';
+import { alias, badRate, passingRates } from '../capture/plan-rates.js';
 
 /**
  * verifyCapture on the test fixture (invented Heron data: 65–75 MHz band,

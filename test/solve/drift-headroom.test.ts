@@ -3,10 +3,11 @@ import fc from 'fast-check';
 import { hz, ppm, seconds } from '../../src/units/quantities.js';
 import type { PlanContext } from '../../src/solve/plan-context.js';
 import { evaluateRate } from '../../src/solve/evaluate-rate.js';
-import { driftHeadroom, RATE_LIMIT } from '../../src/clocks/drift-headroom.js';
+import { driftHeadroom } from '../../src/solve/drift.js';
+import { RATE_LIMIT } from '../../src/solve/limited-by.js';
 import { feasibleSetOf, handWorkedContext, MHZ } from '../helpers/hand-worked-plan.js';
 import { bruteGuarded, bruteLeastDistance, brutePasses, verdictSpacing, wantedAlias, wholeInOneZone } from '../helpers/brute-force-plan.js';
-import { planArbitrary } from '../solve/random-plan.js';
+import { planArbitrary } from './random-plan.js';
 
 const setOf = feasibleSetOf;
 
@@ -18,7 +19,7 @@ describe('drift headroom on the plan worked on paper (test/solve/hand-worked.tes
   const set = setOf(context);
 
   it('at 26 MHz: (1 − 25/26)·1e6 = 38 461.5 ppm down to the zone edge, (82/78 − 1)·1e6 = 51 282.1 ppm up to the spur', () => {
-    const headroom = driftHeadroom(set, context.limits, 26 * MHZ)!;
+    const headroom = driftHeadroom(set, context.limits, hz(26 * MHZ))!;
     expect(headroom.downPpm).toBeCloseTo((1 - 25 / 26) * 1e6, 6);
     expect(headroom.downLimitedBy).toBe('zone edge');
     expect(headroom.upPpm).toBeCloseTo((82 / 78 - 1) * 1e6, 6);
@@ -26,7 +27,7 @@ describe('drift headroom on the plan worked on paper (test/solve/hand-worked.tes
   });
 
   it('at 113/3 MHz: (1 − 106.5/113)·1e6 ppm down to the tone, (126/113 − 1)·1e6 ppm up to the zone edge', () => {
-    const headroom = driftHeadroom(set, context.limits, (113 / 3) * MHZ)!;
+    const headroom = driftHeadroom(set, context.limits, hz((113 / 3) * MHZ))!;
     expect(headroom.downPpm).toBeCloseTo((1 - 106.5 / 113) * 1e6, 6);
     expect(headroom.downLimitedBy).toBe('board tone 10M');
     expect(headroom.upPpm).toBeCloseTo((126 / 113 - 1) * 1e6, 6);
@@ -34,7 +35,7 @@ describe('drift headroom on the plan worked on paper (test/solve/hand-worked.tes
   });
 
   it('is null at a rate that already fails (30 MHz lies in the tone and spur blocked ranges)', () => {
-    expect(driftHeadroom(set, context.limits, 30 * MHZ)).toBeNull();
+    expect(driftHeadroom(set, context.limits, hz(30 * MHZ))).toBeNull();
   });
 });
 
@@ -49,7 +50,7 @@ describe('drift headroom ± 1 ppm on random plans (fast-check)', () => {
           if (interval.maxRate - interval.minRate < 8e-6 * interval.maxRate) continue; // too narrow for ±1 ppm steps inside
           for (const u of fractions) {
             const rate = interval.minRate + u * (interval.maxRate - interval.minRate);
-            const headroom = driftHeadroom(set, context.limits, rate)!;
+            const headroom = driftHeadroom(set, context.limits, hz(rate))!;
             expect(headroom).not.toBeNull();
             counts.rates++;
             for (const [ppmAway, label, sign] of [

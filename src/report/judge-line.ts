@@ -1,9 +1,9 @@
 import { db, hz } from '../units/quantities.js';
 import { formatFrequency } from '../units/format-frequency.js';
 import type { CheckResult } from '../solve/evaluate-rate.js';
-import { binDistance } from './coherent-bins.js';
-import type { LineDraft } from './family-lines.js';
-import type { ModelComponent } from './model-components.js';
+import { binDistance } from '../capture/coherent-bins.js';
+import type { LineDraft } from '../capture/family-lines.js';
+import type { ModelComponent } from '../capture/model-components.js';
 import type { LevelBasis, LineStatus, PredictionRow } from './verify-result.js';
 
 /** A line must stand this far above the floor to be looked for, dB. */

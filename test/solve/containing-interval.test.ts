@@ -4,9 +4,9 @@ import { hz, ppm } from '../../src/units/quantities.js';
 import { guardedBand, rateWindows } from '../../src/windows/enumerate-windows.js';
 import { feasibleSet } from '../../src/solve/feasible-set.js';
 import { evaluateRate } from '../../src/solve/evaluate-rate.js';
-import { containingInterval } from '../../src/clocks/drift-judge.js';
+import { containingInterval } from '../../src/solve/drift.js';
 import { brutePasses } from '../helpers/brute-force-plan.js';
-import { exactEdges, nearAnEdge, planArbitrary, sweepRates } from '../solve/random-plan.js';
+import { exactEdges, nearAnEdge, planArbitrary, sweepRates } from './random-plan.js';
 
 describe('the fast judge (binary search over the feasible intervals)', () => {
   const intervals = [
@@ -16,14 +16,14 @@ describe('the fast judge (binary search over the feasible intervals)', () => {
   ];
 
   it('finds the interval holding the whole drift range, closed at both ends', () => {
-    expect(containingInterval(intervals, 105, 0)).toBe(0);
-    expect(containingInterval(intervals, 100, 0)).toBe(0);
-    expect(containingInterval(intervals, 200, 0)).toBe(2);
-    expect(containingInterval(intervals, 180, 1e5)).toBe(2); // ±10 %: 162–198
-    expect(containingInterval(intervals, 165, 1e5)).toBe(-1); // 148.5–181.5 leaves the interval
-    expect(containingInterval(intervals, 130, 0)).toBe(-1);
-    expect(containingInterval(intervals, 50, 0)).toBe(-1);
-    expect(containingInterval([], 50, 0)).toBe(-1);
+    expect(containingInterval(intervals, hz(105), ppm(0))).toBe(0);
+    expect(containingInterval(intervals, hz(100), ppm(0))).toBe(0);
+    expect(containingInterval(intervals, hz(200), ppm(0))).toBe(2);
+    expect(containingInterval(intervals, hz(180), ppm(1e5))).toBe(2); // ±10 %: 162–198
+    expect(containingInterval(intervals, hz(165), ppm(1e5))).toBe(-1); // 148.5–181.5 leaves the interval
+    expect(containingInterval(intervals, hz(130), ppm(0))).toBe(-1);
+    expect(containingInterval(intervals, hz(50), ppm(0))).toBe(-1);
+    expect(containingInterval([], hz(50), ppm(0))).toBe(-1);
   });
 
   it('agrees with a plain scan of the intervals, with the exact evaluator and with the brute force on random plans (fast-check)', () => {
@@ -37,7 +37,7 @@ describe('the fast judge (binary search over the feasible intervals)', () => {
         const edges = exactEdges(windows, set);
         const epsilon = tolerance * 1e-6;
         for (const rate of sweepRates(context.limits.minRate, context.limits.maxRate, 40, seed)) {
-          const index = containingInterval(set.feasible, rate, tolerance);
+          const index = containingInterval(set.feasible, hz(rate), ppm(tolerance));
           const low = rate * (1 - epsilon);
           const high = rate * (1 + epsilon);
           const scanned = set.feasible.findIndex((f) => low >= f.minRate && high <= f.maxRate);

@@ -1,0 +1,77 @@
+import type { Hz, Ppm } from '../units/quantities.js';
+import type { ClockPart, Goal, Scenario } from '../scenario/scenario.js';
+import { contextFromScenario } from '../solve/context-from-scenario.js';
+import { evaluateRate, type RateEvaluation } from '../solve/evaluate-rate.js';
+import type { PlanContext } from '../solve/plan-context.js';
+import { bestShiftAndRate, type ShiftSearch } from '../solve/if-shift/best-shift-and-rate.js';
+import { planReport, type PlanReport } from './plan-report.js';
+import { solvePlan, type PlanResult } from './solve-plan.js';
+
+/** What a caller may change about a scenario's plan without editing the scenario. */
+export interface PlanOptions {
+  /** The goal candidates are ranked by (default: the scenario's). */
+  readonly goal?: Goal;
+  /** The clock parts to plan (default: the scenario's); the family comparison plans every variant's parts on each. */
+  readonly clocks?: readonly ClockPart[];
+  /** The name the report carries (default: the scenario's). */
+  readonly name?: string;
+}
+
+/** The whole pipeline of one scenario: the solver's view of it, what the solver found, and the IF-shift search. */
+export interface SolvedScenario {
+  readonly context: PlanContext;
+  readonly result: PlanResult;
+  /** Null when the scenario's first LO is fixed (no ifShift). */
+  readonly shift: ShiftSearch | null;
+  readonly report: PlanReport;
+}
+
+/**
+ * Plans one scenario end to end, the one composition every command uses:
+ * the solver's view of the scenario (interferers, level threshold, rate
+ * range), the legal windows of the guarded band, the exact feasible set,
+ * each clock part at its best rate, the best rate of each feasible interval,
+ * drift headroom and SNR, and, when the first LO may move, the best
+ * (IF shift, rate) pair. Pure.
+ *
+ * @param scenario a validated scenario (readScenarioFile or resolveScenario)
+ * @param options goal, clock parts or name instead of the scenario's
+ * @returns the report the table, JSON, SVG and HTML writers read
+ * @throws Error when an optimum fails its exact re-check (a bug, never a property of the plan)
+ * @example planScenario(heronBase).best // 'Z3.1' (the label of the best passing candidate)
+ */
+export function planScenario(scenario: Scenario, options: PlanOptions = {}): PlanReport {
+  return solveScenario(scenario, options).report;
+}
+
+/**
+ * planScenario, also handing back the solver's own records (the part plans
+ * the family comparison reads).
+ *
+ * @param scenario a validated scenario
+ * @param options as planScenario
+ * @returns the context, the solver's result, the IF-shift search and the report
+ * @throws Error as planScenario
+ * @example solveScenario(heronBase).result.parts.length // the number of clock parts with a rate in range
+ */
+export function solveScenario(scenario: Scenario, options: PlanOptions = {}): SolvedScenario {
+  const planned = { ...scenario, goal: options.goal ?? scenario.goal, clocks: options.clocks ?? scenario.clocks };
+  const context = contextFromScenario(planned);
+  const result = solvePlan(context);
+  const shift = planned.ifShift ? bestShiftAndRate(planned) : null;
+  return { context, result, shift, report: planReport(options.name ?? scenario.name, context, result, shift) };
+}
+
+/**
+ * The plan's exact verdict at one rate: every check judged over the given
+ * drift, as the candidates of planScenario are judged.
+ *
+ * @param scenario a validated scenario
+ * @param rate the sampling rate, Hz
+ * @param tolerancePpm ± drift of that rate, ppm (0: the nominal rate only)
+ * @returns the evaluation: zone, inversion, image, every check, worst margin and pass
+ * @example planAtRate(heronBase, hz(184.32e6), ppm(0)).pass // true
+ */
+export function planAtRate(scenario: Scenario, rate: Hz, tolerancePpm: Ppm): RateEvaluation {
+  return evaluateRate(contextFromScenario(scenario), rate, tolerancePpm);
+}
