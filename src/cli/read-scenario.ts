@@ -44,6 +44,6 @@ export function readTextFile(path: string): string {
     return readFileSync(path, 'utf8');
   } catch (error) {
     const code = (error as NodeJS.ErrnoException).code ?? '';
-    throw new Error(REASONS[code] ?? (error instanceof Error ? error.message : String(error)));
+    throw new Error(REASONS[code] ?? (error instanceof Error ? error.message : String(error)), { cause: error });
   }
 }

@@ -84,11 +84,11 @@ export function bestIntegerN(slacks: readonly LinearSlack[], line: IntegerLine, 
   if (line.last < line.first) throw new Error(`empty N range ${line.first}..${line.last}`);
   const span = line.rateAt(line.last) - line.rateAt(line.first);
   const varying = slacks.filter((s) => Math.abs(s.slope * span) > FLAT * unit);
-  if (line.last - line.first + 1 <= enumerateUpTo) return enumerated(slacks, varying, line, unit);
-  return milp(slacks, varying, line, unit);
+  if (line.last - line.first + 1 <= enumerateUpTo) return enumerated(slacks, varying, line);
+  return milp(slacks, varying, line);
 }
 
-function enumerated(slacks: readonly LinearSlack[], varying: readonly LinearSlack[], line: IntegerLine, unit: number): IntegerAnswer {
+function enumerated(slacks: readonly LinearSlack[], varying: readonly LinearSlack[], line: IntegerLine): IntegerAnswer {
   const values: number[] = [];
   let best = -Infinity;
   for (let N = line.first; N <= line.last; N++) {
@@ -108,7 +108,7 @@ function enumerated(slacks: readonly LinearSlack[], varying: readonly LinearSlac
   return { N: chosen, worstSlack, promised: worstSlack, shortfall: 0, allowance: 0, method: 'enumeration' };
 }
 
-function milp(slacks: readonly LinearSlack[], varying: readonly LinearSlack[], line: IntegerLine, unit: number): IntegerAnswer {
+function milp(slacks: readonly LinearSlack[], varying: readonly LinearSlack[], line: IntegerLine): IntegerAnswer {
   const count = line.last - line.first;
   const r0 = line.rateAt(line.first);
   const rLast = line.rateAt(line.last);

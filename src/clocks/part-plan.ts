@@ -1,4 +1,4 @@
-import type { Db, Hz, Ppm } from '../units/quantities.js';
+import type { Db, Hz } from '../units/quantities.js';
 import type { ClockPart } from '../scenario/scenario.js';
 import type { RateEvaluation } from '../solve/evaluate-rate.js';
 import type { DriftHeadroom } from '../solve/drift.js';

@@ -1,4 +1,5 @@
 /** Characters XML 1.0 does not allow at all (C0 controls but tab, LF, CR; U+FFFE, U+FFFF; lone surrogates). */
+// eslint-disable-next-line no-control-regex -- finding control characters is the point
 const NOT_XML = /[\u0000-\u0008\u000B\u000C\u000E-\u001F\uFFFE\uFFFF]|[\uD800-\uDBFF](?![\uDC00-\uDFFF])|(?<![\uD800-\uDBFF])[\uDC00-\uDFFF]/g;
 
 /**

@@ -58,10 +58,10 @@ export function rateMapFigure(report: PlanReport): Figure {
   const inAxis = (rate: number) => rate >= view.low && rate <= view.high;
   const zonesWithWindow = new Set(report.windows.map((w) => w.zone));
   const lanes: Lane[] = view.windows.map((w) =>
-    lane(`zone ${w.zone}${w.inverted ? ' (inv)' : ''}`, w, report.candidates.filter((c) => c.zone === w.zone && inAxis(c.rate)), blockedGroups(report, w.zone, keys), scale, report),
+    lane(`zone ${w.zone}${w.inverted ? ' (inv)' : ''}`, w, report.candidates.filter((c) => c.zone === w.zone && inAxis(c.rate)), blockedGroups(report, w.zone, keys), scale),
   );
   const others = report.candidates.filter((c) => (c.zone === null || !zonesWithWindow.has(c.zone)) && inAxis(c.rate));
-  if (others.length > 0) lanes.push(lane('outside windows', null, others, [], scale, report));
+  if (others.length > 0) lanes.push(lane('outside windows', null, others, [], scale));
   const drawnCandidates = lanes.reduce((n, l) => n + l.markers.length, 0);
 
   const parts: string[] = [heading(report)];
@@ -123,7 +123,7 @@ function heading(report: PlanReport): string {
   return textElement(LEFT - 100, 22, `Sampling-rate map: ${report.scenario}`, { 'font-size': 14, 'font-weight': 'bold' }) + textElement(LEFT - 100, 40, sub, { 'font-size': 11 });
 }
 
-function lane(title: string, window: RateWindow | null, candidates: readonly ReportedCandidate[], groups: readonly BlockedGroup[], scale: Scale, report: PlanReport): Lane {
+function lane(title: string, window: RateWindow | null, candidates: readonly ReportedCandidate[], groups: readonly BlockedGroup[], scale: Scale): Lane {
   const plot = scale.range;
   const placedCandidates = packLabels(
     candidates.map((c) => ({ x: scale.at(c.rate), text: c.label, item: c })),

@@ -57,6 +57,7 @@ export function formatScenarioIssue(issue: ScenarioIssue): string {
 
 /** Control characters (a file name with a line feed, say) written as JSON escapes, so a message stays one line. */
 function oneLine(text: string): string {
+  // eslint-disable-next-line no-control-regex -- finding control characters is the point
   return text.replace(/[\u0000-\u001f\u007f]/g, (char) => JSON.stringify(char).slice(1, -1));
 }
 

@@ -1,4 +1,4 @@
-import type { Db, Hz, Ppm } from '../units/quantities.js';
+import type { Db, Ppm } from '../units/quantities.js';
 import type { Band, Guard } from '../math/band.js';
 import type { ClockPart, Converter, Goal } from '../scenario/scenario.js';
 import type { RateLimits } from '../windows/rate-window.js';

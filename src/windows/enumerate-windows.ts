@@ -36,7 +36,7 @@ export function rateWindows(band: Band, limits: RateLimits = NO_LIMITS): RateWin
 }
 
 function clipped(zone: number, lowest: number, highest: number, limits: RateLimits): RateWindow | null {
-  let minRate = Math.max(lowest, limits.minRate);
+  const minRate = Math.max(lowest, limits.minRate);
   let maxRate = Math.min(highest, limits.maxRate);
   // Edges within noise of each other are one rate, whichever way the noise fell.
   if (maxRate !== Infinity && sameEdge(maxRate, minRate)) maxRate = minRate;
