@@ -1,4 +1,4 @@
-import type { z } from 'zod';
+import type * as z from 'zod';
 import { formatFrequency } from '../units/format-frequency.js';
 import { hz, type Hz } from '../units/quantities.js';
 import type { Band } from '../math/band.js';

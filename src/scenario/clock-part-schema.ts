@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import { formatFrequency } from '../units/format-frequency.js';
 import { ppm } from '../units/quantities.js';
 import type { ClockPart, IntegerRange, RateDerivation } from './scenario.js';

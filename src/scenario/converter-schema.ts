@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import type { Db } from '../units/quantities.js';
 import type { Converter } from './scenario.js';
 import { refuseAt } from './band-forms.js';

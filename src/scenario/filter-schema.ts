@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import { formatFrequency } from '../units/format-frequency.js';
 import type { AntiAliasFilter } from './scenario.js';
 import { refuseAt } from './band-forms.js';

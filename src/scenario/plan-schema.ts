@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import { db, hz, type Db } from '../units/quantities.js';
 import type { Goal, Requirements, WantedBand } from './scenario.js';
 import { bandFromForm, EDGES_OR_CENTRE, refuseAt } from './band-forms.js';

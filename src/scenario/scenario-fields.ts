@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import { InputError } from '../units/input-error.js';
 import { parseFrequency } from '../units/parse-frequency.js';
 import { parseTime } from '../units/parse-time.js';

@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import { formatFrequency } from '../units/format-frequency.js';
 import { hz, type Hz } from '../units/quantities.js';
 import type { Band } from '../math/band.js';
@@ -11,6 +11,10 @@ import { guardHz, wholeNumber } from './scenario-fields.js';
 import { boardSpurSchema, neighbourSchema } from './signals-schema.js';
 import { clockPartSchema } from './clock-part-schema.js';
 import { ifShiftSchema } from './if-shift-schema.js';
+
+// A command reads one scenario or a few: zod's compiled fast path for objects
+// costs more to build (about 5 ms at start-up) than it saves on a few parses.
+z.config({ jitless: true });
 
 /**
  * The scenario file format, defined once: zod validates a parsed JSON

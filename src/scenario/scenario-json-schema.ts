@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import { scenarioFileSchema } from './scenario-file-schema.js';
 
 type SchemaNode = Readonly<Record<string, unknown>>;

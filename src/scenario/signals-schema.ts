@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import type { BoardSpur, Neighbour } from './scenario.js';
 import { bandFromForm, EDGES_OR_CENTRE, TONE_OR_EDGES } from './band-forms.js';
 import { frequency, label, level, oneFormOf, wholeNumber } from './scenario-fields.js';

@@ -1,4 +1,4 @@
-import type { z } from 'zod';
+import type * as z from 'zod';
 import type { ScenarioIssue } from './scenario-issue.js';
 import { pathText, type DocumentPath } from './document-path.js';
 import { knownKeys } from './known-keys.js';

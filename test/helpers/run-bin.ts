@@ -6,12 +6,14 @@ import { fileURLToPath } from 'node:url';
 export const ROOT = fileURLToPath(new URL('../../', import.meta.url));
 
 /**
- * Compiles src/ into dist/ when dist/cli/main.js is missing, so a test file
- * run on its own still drives the real bin/ifzone. `npm test` builds first.
+ * Builds dist/ (tsc) and the bundle bin/ifzone runs (dist/bundle/) when
+ * either is missing, so a test file run on its own still drives the real
+ * bin/ifzone. `npm test` builds first.
  */
 export function ensureBuilt(): void {
-  if (existsSync(new URL('../../dist/cli/main.js', import.meta.url))) return;
+  if (existsSync(new URL('../../dist/cli/main.js', import.meta.url)) && existsSync(new URL('../../dist/bundle/main.js', import.meta.url))) return;
   execFileSync(process.execPath, ['node_modules/typescript/bin/tsc', '-p', 'tsconfig.json'], { cwd: ROOT, stdio: 'inherit' });
+  execFileSync(process.execPath, ['scripts/bundle-cli.mjs'], { cwd: ROOT, stdio: 'inherit' });
 }
 
 export interface Run {
