@@ -2,7 +2,7 @@ import type { Command } from 'commander';
 import { parseFrequency } from '../../units/parse-frequency.js';
 import { aliasReport } from '../../report/alias-report.js';
 import { aliasTable } from '../../output/alias-table.js';
-import { toJson } from '../../output/json.js';
+import { writeJson } from '../../output/json.js';
 import { EXIT, type ExitCode, type Io } from '../io.js';
 import { positiveFrequency, wholeNumber } from '../option-values.js';
 
@@ -26,7 +26,8 @@ export function addAliasCommand(program: Command, io: Io, settle: (code: ExitCod
       const multiples = wholeNumber(options.multiples, '--multiples', 1, 1000);
       const tones = frequencies.map((f, i) => parseFrequency(f, `frequency ${i + 1}`));
       const report = aliasReport(rate, tones, multiples);
-      io.out(options.json ? toJson(report) : aliasTable(report));
+      if (options.json) writeJson(report, io.out);
+      else io.out(aliasTable(report));
       settle(EXIT.answered);
     });
 }

@@ -1,6 +1,6 @@
 import { InputError } from '../../units/input-error.js';
 import { compareCsv, compareTable } from '../../output/compare-table.js';
-import { toJson } from '../../output/json.js';
+import { toJson, writeJson } from '../../output/json.js';
 import { rateMapFigure } from '../../pictures/rate-map.js';
 import { stackFigures, svgDocument } from '../../pictures/svg-document.js';
 import { writeFileSafely } from '../safe-write.js';
@@ -16,12 +16,14 @@ import { planVariants } from './plan-variants.js';
 export function runCompare(files: readonly string[], options: CompareOptions, io: Io): ExitCode {
   if (options.json && options.csv) throw new InputError('--csv', 'either --json or --csv, not both', '--json --csv');
   const { plans, comparison: report, inputs } = planVariants(files, io);
-  const text = options.json ? toJson(report) : options.csv ? compareCsv(report) : compareTable(report);
+  // Standard output takes the JSON in pieces; a file gets it whole (the safe write swaps in complete files).
+  const text = options.json && options.output === undefined ? null : options.json ? toJson(report) : options.csv ? compareCsv(report) : compareTable(report);
   if (options.svg !== undefined) {
     const maps = plans.map((plan) => rateMapFigure(plan));
     writeFileSafely(options.svg, svgDocument(stackFigures(maps, `Clock parts on ${report.variants.join(', ')}`, 24)), { force: options.force === true, inputs });
   }
-  if (options.output !== undefined) writeFileSafely(options.output, text, { force: options.force === true, inputs });
+  if (text === null) writeJson(report, io.out);
+  else if (options.output !== undefined) writeFileSafely(options.output, text, { force: options.force === true, inputs });
   else io.out(text);
   const answered = plans.length > 1 ? report.family.length > 0 : report.parts.some((p) => p.passesAll);
   return answered ? EXIT.answered : EXIT.noAnswer;

@@ -2,7 +2,7 @@ import { InputError } from '../../units/input-error.js';
 import { parseFrequency } from '../../units/parse-frequency.js';
 import type { Goal, Scenario } from '../../scenario/scenario.js';
 import { planScenario } from '../../plan/plan-scenario.js';
-import { toJson } from '../../output/json.js';
+import { writeJson } from '../../output/json.js';
 import { readScenarioWithInputs } from '../read-scenario.js';
 import { writeFileSafely } from '../safe-write.js';
 import { EXIT, type ExitCode, type Io } from '../io.js';
@@ -18,7 +18,8 @@ export async function runSolve(file: string, options: SolveOptions, io: Io): Pro
     const { planPicturesSvg } = await import('../../pictures/plan-pictures.js');
     writeFileSafely(options.svg, planPicturesSvg(report), { force: options.force === true, inputs });
   }
-  io.out(options.json ? toJson(report) : (await import('../../output/plan-table.js')).planTable(report));
+  if (options.json) writeJson(report, io.out);
+  else io.out((await import('../../output/plan-table.js')).planTable(report));
   return report.best === null ? EXIT.noAnswer : EXIT.answered;
 }
 

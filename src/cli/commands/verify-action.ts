@@ -4,7 +4,7 @@ import { verifyCaptureWithSpectrum } from '../../report/verify-capture.js';
 // Loaded with the action, which the command imports only when it runs; the capture itself costs far more than the picture writers.
 import { captureSvg } from '../../pictures/capture-picture.js';
 import { verifyTable } from '../../output/verify-table.js';
-import { toJson } from '../../output/json.js';
+import { writeJson } from '../../output/json.js';
 import { readScenarioWithInputs } from '../read-scenario.js';
 import { writeFileSafely } from '../safe-write.js';
 import { positiveFrequency, wholeNumber } from '../option-values.js';
@@ -44,6 +44,7 @@ export function runVerify(file: string, options: VerifyOptions, io: Io): ExitCod
   }
   const { result, levels } = verifyCaptureWithSpectrum(scenario, { rate, samples, wantedTones });
   if (options.svg !== undefined) writeFileSafely(options.svg, captureSvg(result, levels), { force: options.force === true, inputs });
-  io.out(options.json ? toJson(result) : verifyTable(result));
+  if (options.json) writeJson(result, io.out);
+  else io.out(verifyTable(result));
   return result.consistent ? EXIT.answered : EXIT.noAnswer;
 }

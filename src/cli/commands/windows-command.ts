@@ -4,7 +4,7 @@ import { parseFrequency } from '../../units/parse-frequency.js';
 import { InputError } from '../../units/input-error.js';
 import { windowsReport } from '../../report/windows-report.js';
 import { windowsTable } from '../../output/windows-table.js';
-import { toJson } from '../../output/json.js';
+import { writeJson } from '../../output/json.js';
 import { EXIT, type ExitCode, type Io } from '../io.js';
 import { bandFromOptions, guardFromOptions, type BandOptions, type GuardOptions } from '../option-values.js';
 
@@ -36,7 +36,8 @@ export function addWindowsCommand(program: Command, io: Io, settle: (code: ExitC
       const maxRate = options.maxRate === undefined ? hz(Infinity) : parseFrequency(options.maxRate, '--max-rate');
       if (maxRate < minRate) throw new InputError('--max-rate', `a rate not below --min-rate (${options.minRate})`, options.maxRate ?? '');
       const report = windowsReport(band, guard, { minRate, maxRate });
-      io.out(options.json ? toJson(report) : windowsTable(report));
+      if (options.json) writeJson(report, io.out);
+      else io.out(windowsTable(report));
       settle(report.windows.length > 0 ? EXIT.answered : EXIT.noAnswer);
     });
 }
