@@ -2,6 +2,7 @@
 // runs, counts what it writes to standard output without keeping it, and
 // prints on standard error one line `MEASURE {"ms","peakRssMb","outBytes","exit","error"}`.
 // Used by the scaling benchmark: node test/bench/lib/measure-child.mjs solve FILE --json
+import { Buffer } from 'node:buffer';
 import { runCli } from '../../../dist/bundle/main.js';
 
 const start = process.hrtime.bigint();
