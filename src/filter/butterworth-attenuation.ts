@@ -1,7 +1,11 @@
 import { db, type Db, type Hz } from '../units/quantities.js';
 import { capAttenuation, ATTENUATION_CAP } from './attenuation-cap.js';
 
-/** A Butterworth band-pass of order N between passband edges passLow < passHigh, Hz. */
+/**
+ * A Butterworth band-pass of order N between passband edges passLow < passHigh, Hz.
+ * passLow = 0 is the low-pass of cut-off passHigh and passHigh = Infinity the
+ * high-pass of cut-off passLow: the limits of the band-pass transform.
+ */
 export interface ButterworthBandPass {
   readonly order: number;
   readonly passLow: Hz;
@@ -19,6 +23,8 @@ export interface ButterworthBandPass {
  * @example butterworthOmega({ order: 5, passLow: hz(30e6), passHigh: hz(80e6) }, hz(120e6)) // 2
  */
 export function butterworthOmega(filter: ButterworthBandPass, frequency: Hz): number {
+  // passHigh → ∞ takes Ω to −passLow/f, the high-pass transform; passLow = 0 needs no case (Ω = f/passHigh).
+  if (filter.passHigh === Infinity) return -filter.passLow / frequency;
   const f0Squared = filter.passLow * filter.passHigh;
   return (frequency * frequency - f0Squared) / (frequency * (filter.passHigh - filter.passLow));
 }
@@ -26,9 +32,10 @@ export function butterworthOmega(filter: ButterworthBandPass, frequency: Hz): nu
 /**
  * Attenuation of the Butterworth band-pass, 10·log10(1 + Ω^(2N)) dB, from
  * the standard magnitude |H|² = 1/(1 + Ω^(2N)). The filter is real, so a
- * negative frequency is attenuated as its magnitude. At DC (Ω → −∞) the
- * attenuation is infinite; it is reported as ATTENUATION_CAP (300 dB), as is
- * anything above it.
+ * negative frequency is attenuated as its magnitude. At DC (Ω → −∞) a
+ * band-pass or high-pass attenuates infinitely; that is reported as
+ * ATTENUATION_CAP (300 dB), as is anything above it. A low-pass (passLow = 0)
+ * passes DC (0 dB).
  *
  * @param filter order and passband edges, Hz
  * @param frequency Hz (sign ignored)
@@ -37,7 +44,7 @@ export function butterworthOmega(filter: ButterworthBandPass, frequency: Hz): nu
  */
 export function butterworthAttenuation(filter: ButterworthBandPass, frequency: Hz): Db {
   const f = Math.abs(frequency);
-  if (f === 0) return ATTENUATION_CAP;
+  if (f === 0) return filter.passLow === 0 ? db(0) : ATTENUATION_CAP;
   const omega = Math.abs(butterworthOmega(filter, f as Hz));
   if (omega <= 1) return capAttenuation(10 * Math.log10(1 + omega ** (2 * filter.order)));
   // Written as 20N·log10|Ω| + 10·log10(1 + |Ω|^(−2N)) so a huge Ω^(2N) never overflows to ∞.
@@ -64,7 +71,8 @@ export function butterworthAttenuation(filter: ButterworthBandPass, frequency: H
  */
 export function butterworthLeastAttenuation(filter: ButterworthBandPass, low: Hz, high: Hz): Db {
   const [near, far] = magnitudeRange(low, high);
-  const f0 = Math.sqrt(filter.passLow * filter.passHigh);
+  // A high-pass's centre is at ∞: every extent lies below it.
+  const f0 = filter.passHigh === Infinity ? Infinity : Math.sqrt(filter.passLow * filter.passHigh);
   if (near <= f0 && f0 <= far) return db(0);
   return butterworthAttenuation(filter, (far < f0 ? far : near) as Hz);
 }
@@ -73,14 +81,15 @@ export function butterworthLeastAttenuation(filter: ButterworthBandPass, low: Hz
  * Checks a Butterworth band-pass once at the boundary.
  *
  * @param filter order and passband edges, Hz
- * @throws RangeError unless the order is an integer ≥ 1 and 0 < passLow < passHigh (finite)
+ * @throws RangeError unless the order is an integer ≥ 1 and 0 ≤ passLow < passHigh
+ *   (passLow = 0: a low-pass; passHigh = Infinity: a high-pass; not both)
  * @example checkButterworth({ order: 0, passLow: hz(1), passHigh: hz(2) }) // throws
  */
 export function checkButterworth(filter: ButterworthBandPass): void {
   if (!(Number.isInteger(filter.order) && filter.order >= 1)) throw new RangeError(`Butterworth order must be an integer ≥ 1, found ${filter.order}`);
   const { passLow, passHigh } = filter;
-  if (!(passLow > 0 && passHigh > passLow && Number.isFinite(passHigh))) {
-    throw new RangeError(`Butterworth passband needs 0 < passLow < passHigh, found [${passLow}, ${passHigh}] Hz`);
+  if (!(passLow >= 0 && Number.isFinite(passLow) && passHigh > passLow && !(passLow === 0 && passHigh === Infinity))) {
+    throw new RangeError(`Butterworth passband needs 0 ≤ passLow < passHigh, not both open, found [${passLow}, ${passHigh}] Hz`);
   }
 }
 

@@ -5,6 +5,9 @@ import type { ClockPart, IntegerRange, RateDerivation } from './scenario.js';
 import { refuseAt } from './band-forms.js';
 import { countFromOne, label, positiveFrequency, time, tolerance } from './scenario-fields.js';
 
+/** Most (M, D) pairs of a synthesiser: the planner searches N for each pair. */
+export const MOST_DIVIDER_PAIRS = 4096;
+
 const RANGE_WORDS = 'a whole number 1 or more, or a [min, max] pair of them';
 
 /**
@@ -43,7 +46,13 @@ const synthesiser = z
     d: integerRange('Output divider D (default [1, 1])').prefault([1, 1]),
     vco: vcoRange.nullable().prefault(null),
   })
-  .meta({ description: 'A synthesiser fed by the part: rate = f × N / (M × D), with the VCO at f × N / M' });
+  .meta({ description: `A synthesiser fed by the part: rate = f × N / (M × D), with the VCO at f × N / M; at most ${MOST_DIVIDER_PAIRS} (M, D) pairs` })
+  .superRefine((written, ctx) => {
+    const pairs = (written.m.max - written.m.min + 1) * (written.d.max - written.d.min + 1);
+    if (pairs > MOST_DIVIDER_PAIRS) {
+      refuseAt(ctx, ['m'], `ranges of M and D that give at most ${MOST_DIVIDER_PAIRS} (M, D) pairs, each planned on its own; narrow m or d`, `${pairs} pairs`, [['d']]);
+    }
+  });
 
 const DERIVE_WORDS = ['direct', 'divider'] as const;
 

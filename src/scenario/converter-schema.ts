@@ -3,11 +3,12 @@ import type { Db } from '../units/quantities.js';
 import type { Converter } from './scenario.js';
 import { refuseAt } from './band-forms.js';
 import { formatFrequency } from '../units/format-frequency.js';
-import { countFromOne, label, level, positiveFrequency, time, wholeNumber } from './scenario-fields.js';
+import { countFromOne, label, level, levelAtMostFullScale, levelBelowCarrier, positiveFrequency, time, wholeNumber } from './scenario-fields.js';
 
-const HARMONIC_ORDER_KEY = /^(?:[2-9]|[1-9]\d+)$/;
+/** Orders 2 to 99: the checks stop at harmonicOrder (at most 15), the capture model at the highest order listed. */
+const HARMONIC_ORDER_KEY = /^(?:[2-9]|[1-9]\d)$/;
 
-const optionalLevel = (description: string) => level(description).nullable().prefault(null);
+const optionalLevel = (description: string) => levelAtMostFullScale(description).nullable().prefault(null);
 
 /** The converter's rate-tied spurs, dBFS; any may be left out. */
 const rateSpurs = z
@@ -22,8 +23,8 @@ const rateSpurs = z
 const interleave = z
   .strictObject({
     ways: wholeNumber(2, 64, 'Number of interleaved cores M'),
-    offsetSpur: level('Offset spurs at k·rate/M, dBFS'),
-    imageLevel: level('Images of the input at k·rate/M ± f, dBc'),
+    offsetSpur: levelAtMostFullScale('Offset spurs at k·rate/M, dBFS'),
+    imageLevel: levelBelowCarrier('Images of the input at k·rate/M ± f, dBc'),
   })
   .meta({ description: 'Interleaved cores; leave out (or null) for a single core' });
 
@@ -42,15 +43,16 @@ export const converterSchema = z
     inputBandwidth: positiveFrequency('Analog input bandwidth; a wanted band above it is refused'),
     bits: wholeNumber(1, 32, 'Resolution, bits'),
     harmonics: z
-      .record(z.string().regex(HARMONIC_ORDER_KEY, { error: 'a harmonic order as the key: a whole number 2 or more, e.g. "3"' }), level('dBc'))
+      .record(z.string().regex(HARMONIC_ORDER_KEY, { error: 'a harmonic order as the key: a whole number 2 or more (at most 99), e.g. "3"' }), levelBelowCarrier('dBc, below 0'))
       .meta({ description: 'Harmonic levels by order, dBc at the strongest wanted level, e.g. { "2": -75, "3": -80 }' }),
-    intercept3: optionalLevel('Third-order input intercept referred to full scale, dBFS; leave out to derive it from the 3rd harmonic'),
+    intercept3: level('Third-order input intercept referred to full scale, dBFS (may exceed 0); leave out to derive it from the 3rd harmonic').nullable().prefault(null),
     rateSpurs: rateSpurs.nullable().prefault(null),
     interleave: interleave.nullable().prefault(null),
     apertureJitter: time.meta({ description: 'Aperture jitter, rms: seconds as a number, or text such as "80 fs", "0.2 ps" (default 0)' }).prefault(0),
     clockDividers: z
       .array(countFromOne('A divider D: the converter samples at its clock input / D'), { error: 'a list of whole-number clock dividers, e.g. [1, 2, 4]' })
       .min(1, { error: 'a list of at least one clock divider (1: undivided)' })
+      .max(64, { error: 'a list of at most 64 clock dividers' })
       .meta({ description: 'Integer dividers the converter can apply to its clock input, each listed once, e.g. [1, 2, 4] (default [1]: undivided only)', uniqueItems: true })
       .prefault([1]),
   })

@@ -1,4 +1,5 @@
 import { ScenarioError } from './scenario-issue.js';
+import { strictJsonProblems } from './strict-json.js';
 
 /** Where and why a JSON text stops being JSON (RFC 8259 grammar). */
 export interface JsonSyntaxProblem {
@@ -11,18 +12,23 @@ export interface JsonSyntaxProblem {
 }
 
 /**
- * Parses a scenario file's text as JSON, skipping a leading byte-order mark.
+ * Parses a scenario file's text as strict JSON, skipping a leading byte-order
+ * mark: besides the grammar, no key twice in an object, no `__proto__` or
+ * `constructor` key, no number a double cannot hold (see
+ * strictJsonProblems).
  *
  * @param text the file's text
  * @param file the file's name, for the error
  * @returns the parsed value
- * @throws ScenarioError with one `syntax` issue whose path is `line:column`
+ * @throws ScenarioError with one `syntax` issue whose path is `line:column`,
+ *   or with every strictness issue, each at its document path and position
  * @example parseJsonText('{"name": "Heron"}', 'heron.json') // { name: 'Heron' }
  */
 export function parseJsonText(text: string, file: string): unknown {
   const body = text.startsWith('\uFEFF') ? text.slice(1) : text;
+  let value: unknown;
   try {
-    return JSON.parse(body) as unknown;
+    value = JSON.parse(body) as unknown;
   } catch (error) {
     const problem = jsonSyntaxProblem(body) ?? {
       line: 1,
@@ -34,6 +40,9 @@ export function parseJsonText(text: string, file: string): unknown {
       { kind: 'syntax', file, path: `${problem.line}:${problem.column}`, expected: problem.expected, received: problem.received },
     ]);
   }
+  const problems = strictJsonProblems(body, file);
+  if (problems.length > 0) throw new ScenarioError(problems);
+  return value;
 }
 
 type Expecting = 'value' | 'value-or-close' | 'key' | 'key-or-close' | 'colon' | 'comma-or-close' | 'end';

@@ -1,8 +1,8 @@
 import * as z from 'zod';
-import { db, hz, type Db } from '../units/quantities.js';
+import { hz } from '../units/quantities.js';
 import type { Goal, Requirements, WantedBand } from './scenario.js';
 import { bandFromForm, EDGES_OR_CENTRE, refuseAt } from './band-forms.js';
-import { frequency, guardWidth, levelAtMostFullScale, oneFormOf, positiveFrequency, tolerance, type GuardWidth } from './scenario-fields.js';
+import { decibels, frequency, guardWidth, levelAtMostFullScale, oneFormOf, positiveFrequency, tolerance, type GuardWidth } from './scenario-fields.js';
 
 /** The wanted IF band, by low/high or center/width, with its planning levels. */
 export const wantedSchema = z
@@ -46,11 +46,7 @@ export const guardSchema = z
 export const requirementsSchema = z
   .strictObject({
     margin: frequency("Frequency margin to keep between a blocking interferer's alias and the wanted alias"),
-    rejection: z
-      .number()
-      .min(0, { error: 'a rejection in dB, not negative' })
-      .meta({ description: 'An interferer this many dB below the weakest wanted level may land anywhere' })
-      .transform((value): Db => db(value)),
+    rejection: decibels('An interferer this many dB below the weakest wanted level may land anywhere', 'a rejection'),
     tolerancePpm: tolerance.meta({ description: 'Drift a solved rate (not a listed clock) must survive, ±ppm (default 50)' }).prefault(50),
   })
   .meta({ description: 'What a frequency plan must keep' })

@@ -77,7 +77,7 @@ function readChain(first: string, readText: ReadText): ChainLayer[] {
           : { kind: 'unreadable', file: namedBy, path: 'extends', expected: 'a base file that can be read', received: `${file}: ${reason}`, chain: files },
       ]);
     }
-    const layer = layerOf(parseJsonText(text, file), file);
+    const layer = layerOf(parsedInChain(text, file, files), file);
     chain.push(layer);
     if (layer.extendsPath === null) return chain;
     const next = normalize(isAbsolute(layer.extendsPath) ? layer.extendsPath : join(dirname(file), layer.extendsPath));
@@ -94,6 +94,16 @@ function readChain(first: string, readText: ReadText): ChainLayer[] {
       ]);
     }
     file = next;
+  }
+}
+
+/** Parses one file of the chain; a base file's problems show the chain that led to it. */
+function parsedInChain(text: string, file: string, files: readonly string[]): unknown {
+  try {
+    return parseJsonText(text, file);
+  } catch (error) {
+    if (!(error instanceof ScenarioError) || files.length < 2) throw error;
+    throw new ScenarioError(error.issues.map((issue) => ({ ...issue, chain: files })));
   }
 }
 

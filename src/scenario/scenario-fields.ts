@@ -31,7 +31,7 @@ const frequencyText = z
   });
 
 const positiveFrequencyText = frequencyText.refine((value) => value > 0, { error: 'a frequency above zero' });
-const FREQUENCY_HINT = 'hertz as a number, or text such as "70M", "70 MHz", "455k"';
+const FREQUENCY_HINT = 'hertz as a number, or text such as "70M", "70 MHz", "455k"; at most 1 THz';
 
 /**
  * A frequency ≥ 0 field: hertz as a number, or text with a prefix (`70M`,
@@ -93,21 +93,55 @@ export const time = z
     }
   });
 
-/** A level in decibels (dBFS or dBc as the field says). */
-export const level = (description: string) => z.number().meta({ description }).transform((value): Db => db(value));
+/**
+ * Bounds on levels, dB. Nothing the tool models lies beyond them: a 32-bit
+ * converter spans about 194 dB, and the filter model caps attenuation at
+ * 300 dB. Each bound also catches a dropped minus sign.
+ */
+export const LEVEL_BOUNDS = {
+  /** Lowest level of any kind, dB. */
+  floor: -300,
+  /** Highest level at the filter's input (neighbours, blockers, spurs coupled before the filter), dBFS. */
+  filterInput: 100,
+} as const;
 
-/** A level at or below full scale, dBFS. */
+/** A level number within [least, most], refused in one wording when outside. */
+const boundedLevel = (description: string, least: number, most: number, words: string, strictlyBelow = false) => {
+  const number = z.number().min(least, { error: words });
+  return (strictlyBelow ? number.lt(most, { error: words }) : number.max(most, { error: words })).meta({ description }).transform((value): Db => db(value));
+};
+
+/**
+ * A level in dBFS at the filter's input (a neighbour, a blocker, a spur
+ * coupled before the filter): it may exceed full scale, the filter takes it down.
+ *
+ * @param description what the field means, for the JSON Schema
+ */
+export const level = (description: string) =>
+  boundedLevel(description, LEVEL_BOUNDS.floor, LEVEL_BOUNDS.filterInput, `a level in dBFS from ${LEVEL_BOUNDS.floor} to +${LEVEL_BOUNDS.filterInput}`);
+
+/** A level at the converter, dBFS: at most 0 (full scale). */
 export const levelAtMostFullScale = (description: string) =>
-  z
-    .number()
-    .max(0, { error: 'a level in dBFS at most 0 (full scale)' })
-    .meta({ description })
-    .transform((value): Db => db(value));
+  boundedLevel(description, LEVEL_BOUNDS.floor, 0, `a level in dBFS at most 0 (full scale) and at least ${LEVEL_BOUNDS.floor}`);
+
+/**
+ * A figure relative to the carrier, dBc, below 0: a harmonic, an image, a
+ * spur quoted against the signal that makes it (+75 is a dropped minus sign).
+ *
+ * @param description what the field means, for the JSON Schema
+ */
+export const levelBelowCarrier = (description: string) =>
+  boundedLevel(description, LEVEL_BOUNDS.floor, 0, `a level in dBc below 0, from ${LEVEL_BOUNDS.floor} (e.g. -75)`, true);
+
+/** A positive amount of decibels (an attenuation, a rejection): 0 to 300 dB. */
+export const decibels = (description: string, words: string) =>
+  boundedLevel(description, 0, -LEVEL_BOUNDS.floor, `${words} from 0 to ${-LEVEL_BOUNDS.floor} dB`);
 
 /** A tolerance in ±ppm, not negative. */
 export const tolerance = z
   .number()
   .min(0, { error: 'a tolerance in ppm, not negative' })
+  .max(1e6, { error: 'a tolerance in ppm of at most 1000000 (100 %)' })
   .meta({ description: 'Tolerance, ±ppm' })
   .transform((value): Ppm => ppm(value));
 
@@ -123,18 +157,23 @@ export const wholeNumber = (least: number, most: number, description: string) =>
     .max(most, { error: `a whole number from ${least} to ${most}` })
     .meta({ description });
 
+/** Largest divider or synthesiser setting (N, M, D): far beyond any part, and exact in a double. */
+export const MOST_SETTING = 1_000_000_000;
+
 /**
- * A whole number 1 or more, with no upper limit beyond exact doubles (a
- * divider or a synthesiser setting).
+ * A whole number from 1 to MOST_SETTING (a divider or a synthesiser setting).
  *
  * @param description what the field means, for the JSON Schema
  */
-export const countFromOne = (description: string) =>
-  z
-    .number({ error: 'a whole number 1 or more' })
-    .int({ error: 'a whole number 1 or more' })
-    .min(1, { error: 'a whole number 1 or more' })
+export const countFromOne = (description: string) => {
+  const words = 'a whole number 1 or more';
+  return z
+    .number({ error: words })
+    .int({ error: words })
+    .min(1, { error: words })
+    .max(MOST_SETTING, { error: `a whole number at most ${MOST_SETTING}` })
     .meta({ description });
+};
 
 /** A guard width before the band is known: Hz, or a percentage of the band's width. */
 export type GuardWidth = { readonly hz: Hz } | { readonly percent: number };

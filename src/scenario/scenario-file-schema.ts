@@ -16,6 +16,13 @@ import { ifShiftSchema } from './if-shift-schema.js';
 // costs more to build (about 5 ms at start-up) than it saves on a few parses.
 z.config({ jitless: true });
 
+/** Most board spurs in a scenario: each brings up to 20 harmonics, and the simulated capture synthesises every one. */
+export const MOST_BOARD_SPURS = 64;
+/** Most neighbours: their third-order products grow as the cube of their number (64 already takes seconds). */
+export const MOST_NEIGHBOURS = 32;
+/** Most clock parts: each is planned on every feasible interval. */
+export const MOST_CLOCKS = 256;
+
 /**
  * The scenario file format, defined once: zod validates a parsed JSON
  * document with it, `z.input` gives the file's TypeScript type, and
@@ -37,11 +44,23 @@ export const scenarioFileSchema = z
     guard: guardSchema.prefault(0),
     converter: converterSchema,
     harmonicOrder: wholeNumber(2, 15, 'Highest harmonic order of the wanted band checked (default 5)').default(5),
-    boardSpurs: z.array(boardSpurSchema).meta({ description: 'Fixed tones and bands from the board' }).prefault([]),
-    neighbours: z.array(neighbourSchema).meta({ description: 'Neighbour channels and blockers' }).prefault([]),
+    boardSpurs: z
+      .array(boardSpurSchema)
+      .max(MOST_BOARD_SPURS, { error: `a list of at most ${MOST_BOARD_SPURS} board spurs` })
+      .meta({ description: `Fixed tones and bands from the board (at most ${MOST_BOARD_SPURS})` })
+      .prefault([]),
+    neighbours: z
+      .array(neighbourSchema)
+      .max(MOST_NEIGHBOURS, { error: `a list of at most ${MOST_NEIGHBOURS} neighbours (their third-order products grow as the cube)` })
+      .meta({ description: `Neighbour channels and blockers (at most ${MOST_NEIGHBOURS})` })
+      .prefault([]),
     filter: filterSchema.nullable().prefault(null),
     requirements: requirementsSchema,
-    clocks: z.array(clockPartSchema).meta({ description: 'Candidate clock parts: crystals, oscillators, synthesiser references' }).prefault([]),
+    clocks: z
+      .array(clockPartSchema)
+      .max(MOST_CLOCKS, { error: `a list of at most ${MOST_CLOCKS} clock parts` })
+      .meta({ description: `Candidate clock parts: crystals, oscillators, synthesiser references (at most ${MOST_CLOCKS})` })
+      .prefault([]),
     goal: goalSchema.prefault('widest-margin'),
     ifShift: ifShiftSchema.nullable().prefault(null),
   })

@@ -1,6 +1,6 @@
 import * as z from 'zod';
 import type { BoardSpur, Neighbour } from './scenario.js';
-import { bandFromForm, EDGES_OR_CENTRE, TONE_OR_EDGES } from './band-forms.js';
+import { bandFromForm, EDGES_OR_CENTRE, refuseAt, TONE_OR_EDGES } from './band-forms.js';
 import { frequency, label, level, oneFormOf, wholeNumber } from './scenario-fields.js';
 
 /** A fixed tone or band on the board: reference clock, LO leakage, regulator. */
@@ -10,7 +10,7 @@ export const boardSpurSchema = z
     frequency: frequency('A tone at this frequency (or give low and high for a band)').nullable().optional(),
     low: frequency('Lower edge of a band-shaped spur').nullable().optional(),
     high: frequency('Upper edge of a band-shaped spur').nullable().optional(),
-    level: level('Level, dBFS at the converter (before the filter when coupling is before-filter)'),
+    level: level('Level, dBFS at the converter (at most 0), or at the filter\'s input when coupling is before-filter (may exceed 0)'),
     coupling: z
       .enum(['before-filter', 'after-filter'])
       .default('after-filter')
@@ -20,6 +20,10 @@ export const boardSpurSchema = z
   .meta({ description: 'A spur from the board: a tone (frequency) or a band (low, high)', ...oneFormOf(TONE_OR_EDGES) })
   .transform((written, ctx): BoardSpur => {
     const band = bandFromForm(written, TONE_OR_EDGES, ctx, true);
+    if (written.coupling === 'after-filter' && written.level > 0) {
+      const words = 'a level at the converter of at most 0 dBFS (full scale); above it only at the filter\'s input, with coupling "before-filter"';
+      refuseAt(ctx, ['level'], words, `${written.level} dBFS`, [['coupling']]);
+    }
     if (!band) return z.NEVER;
     return { label: written.label, ...band, level: written.level, coupling: written.coupling, harmonics: written.harmonics };
   });

@@ -8,6 +8,12 @@ const WRITTEN = new RegExp(String.raw`^(${NUMBER})\s*([A-Za-z]*)$`);
 const PREFIX_POWER: Readonly<Record<string, number>> = { '': 0, k: 3, M: 6, G: 9 };
 
 /**
+ * The highest frequency read, Hz (1 THz): far above any converter's input,
+ * and low enough that the folding work it implies stays bounded.
+ */
+export const MOST_FREQUENCY = 1e12;
+
+/**
  * Reads a frequency as engineers write it: plain hertz (`70000000`, `70e6`) or
  * a number with an SI prefix and an optional unit (`70M`, `70 MHz`, `455k`,
  * `2.4G`, `10.7e6 Hz`). Prefixes are case-sensitive as in SI; the unit `Hz`
@@ -15,10 +21,12 @@ const PREFIX_POWER: Readonly<Record<string, number>> = { '': 0, k: 3, M: 6, G: 9
  *
  * @param written the text (or number of hertz) to read
  * @param where the option or path named in an error, e.g. `--low`
- * @returns the frequency in Hz, finite and not negative
+ * @returns the frequency in Hz, finite, not negative, at most MOST_FREQUENCY (1 THz)
  * @throws InputError naming `where` and the value, for an empty text, NaN,
- *   an infinity, a negative value, an unknown unit, or a lower-case `m`
- *   (milli, nearly always a typo for M)
+ *   an infinity, a negative value, a value above 1 THz, a non-zero value too
+ *   small for a double (`1e-400`), an exponent together with a prefix
+ *   (`1e6k`), an unknown unit, or a lower-case `m` (milli, nearly always a
+ *   typo for M)
  * @example parseFrequency('12.288 MHz', '--rate') // 12288000
  */
 export function parseFrequency(written: string | number, where: string): Hz {
@@ -31,6 +39,12 @@ export function parseFrequency(written: string | number, where: string): Hz {
   const [, digits = '', suffix = ''] = match;
   const prefix = unitPrefix(suffix, digits, written, where);
   const [mantissa = '', exponent = '0'] = digits.split(/[eE]/);
+  if (prefix !== '' && /[eE]/.test(digits)) {
+    throw new InputError(where, `a frequency with an exponent or a prefix, not both (${digits} Hz, or ${mantissa}${prefix})`, written);
+  }
+  if (/[1-9]/.test(mantissa) && Number(`${mantissa}e${Number(exponent) + (PREFIX_POWER[prefix] ?? 0)}`) === 0) {
+    throw new InputError(where, 'a frequency above zero that a double can hold (this one underflows to 0)', written);
+  }
   const power = Number(exponent) + (PREFIX_POWER[prefix] ?? 0);
   return checkedNumber(Number(`${mantissa}e${power}`), written, where);
 }
@@ -50,5 +64,6 @@ function checkedNumber(value: number, written: string, where: string): Hz {
   if (Number.isNaN(value)) throw new InputError(where, 'a frequency, not NaN', written);
   if (!Number.isFinite(value)) throw new InputError(where, 'a finite frequency', written);
   if (value < 0) throw new InputError(where, 'a frequency that is not negative', written);
+  if (value > MOST_FREQUENCY) throw new InputError(where, 'a frequency of at most 1 THz (1e12 Hz)', written);
   return hz(value);
 }

@@ -33,6 +33,9 @@ export function parseTime(written: string | number, where: string): Seconds {
   const match = WRITTEN.exec(text);
   if (!match) throw new InputError(where, 'a time such as 150 fs, 0.2 ps, 1.5 ns or 1e-12 (seconds)', written);
   const [, digits = '', unit = ''] = match;
+  if (/[1-9]/.test(digits.split(/[eE]/)[0] ?? '') && Number(digits) === 0) {
+    throw new InputError(where, 'a time above zero that a double can hold (this one underflows to 0)', written);
+  }
   return checkedTime(Number(digits) / divisorOf(unit, digits, written, where), written, where);
 }
 

@@ -102,7 +102,11 @@ describe('butterworthAttenuation: the standard magnitude', () => {
     expect(() => checkButterworth({ order: 0, passLow: hz(1), passHigh: hz(2) })).toThrow(RangeError);
     expect(() => checkButterworth({ order: 2.5, passLow: hz(1), passHigh: hz(2) })).toThrow(RangeError);
     expect(() => checkButterworth({ order: 2, passLow: hz(2), passHigh: hz(2) })).toThrow(RangeError);
-    expect(() => checkButterworth({ order: 2, passLow: hz(0), passHigh: hz(2) })).toThrow(RangeError);
+    // passLow 0 is a low-pass and passHigh ∞ a high-pass; both at once pass everything and are refused.
+    expect(() => checkButterworth({ order: 2, passLow: hz(0), passHigh: hz(2) })).not.toThrow();
+    expect(() => checkButterworth({ order: 2, passLow: hz(2), passHigh: hz(Infinity) })).not.toThrow();
+    expect(() => checkButterworth({ order: 2, passLow: hz(0), passHigh: hz(Infinity) })).toThrow(RangeError);
+    expect(() => checkButterworth({ order: 2, passLow: hz(-1), passHigh: hz(2) })).toThrow(RangeError);
     expect(() => checkButterworth(band(5))).not.toThrow();
   });
 });

@@ -1,0 +1,76 @@
+import { readFileSync } from 'node:fs';
+import { describe, expect, it } from 'vitest';
+import { resolveScenario } from '../../src/scenario/resolve-scenario.js';
+import { ScenarioError } from '../../src/scenario/scenario-issue.js';
+import { memoryFiles } from './memory-files.js';
+
+/**
+ * Levels bounded by what they mean, and counts bounded so that the work
+ * stays proportionate. A harmonic or image figure in dBc lies below its
+ * carrier (a positive figure is a dropped minus sign: common practice, no
+ * source); a level at the converter is at most full scale (0 dBFS, by the
+ * definition of dBFS); a level at the filter's input may exceed it. Before,
+ * +75 dBc and +40 dBFS at the converter were accepted silently.
+ */
+const BASE = JSON.parse(readFileSync(new URL('../../scenarios/heron-base.json', import.meta.url), 'utf8')) as Record<string, unknown>;
+
+function firstIssue(variant: Record<string, unknown>): { path: string; expected: string } | null {
+  try {
+    resolveScenario('v.json', memoryFiles({ 'v.json': { extends: 'b.json', ...variant }, 'b.json': BASE }));
+    return null;
+  } catch (error) {
+    if (!(error instanceof ScenarioError)) throw error;
+    return error.issues[0]!;
+  }
+}
+
+describe('levels bounded by meaning', () => {
+  it.each([
+    ['a harmonic at +75 dBc', { converter: { harmonics: { '2': 75 } } }, 'converter.harmonics["2"]', 'below 0'],
+    ['a harmonic at 0 dBc', { converter: { harmonics: { '3': 0 } } }, 'converter.harmonics["3"]', 'below 0'],
+    ['an interleaving image at +60 dBc', { converter: { interleave: { ways: 2, offsetSpur: -80, imageLevel: 60 } } }, 'converter.interleave.imageLevel', 'below 0'],
+    ['a rate-tied spur above full scale', { converter: { rateSpurs: { dc: 3 } } }, 'converter.rateSpurs.dc', 'at most 0'],
+    ['a board spur at +40 dBFS at the converter', { boardSpurs: [{ label: 's', frequency: '10M', level: 40 }] }, 'boardSpurs[0].level', 'at most 0 dBFS'],
+    ['a neighbour at +140 dBFS', { neighbours: [{ label: 'n', center: '100M', width: '1M', level: 140 }] }, 'neighbours[0].level', 'from -300 to +100'],
+    ['a filter point of negative attenuation', { filter: { kind: 'table', points: [['1M', -3], ['2M', 40]] } }, 'filter.points[0][1]', 'from 0 to 300'],
+    ['a wanted level of -1000 dBFS', { wanted: { weakestLevel: -1000 } }, 'wanted.weakestLevel', 'at least -300'],
+  ])('refuses %s', (_name, variant, path, words) => {
+    const issue = firstIssue(variant);
+    expect(issue?.path).toBe(path);
+    expect(issue?.expected).toContain(words);
+  });
+
+  it('takes levels above full scale at the filter input: a neighbour, a spur coupled before the filter', () => {
+    expect(firstIssue({ neighbours: [{ label: 'n', center: '100M', width: '1M', level: 20 }] })).toBeNull();
+    expect(firstIssue({ boardSpurs: [{ label: 's', frequency: '10M', level: 20, coupling: 'before-filter' }] })).toBeNull();
+  });
+});
+
+describe('counts and frequencies bounded', () => {
+  const many = (count: number, make: (i: number) => unknown) => Array.from({ length: count }, (_, i) => make(i));
+
+  it.each([
+    ['33 neighbours', { neighbours: many(33, (i) => ({ label: `n${i}`, center: `${100 + i}M`, width: '100k', level: -30 })) }, 'neighbours', 'at most 32'],
+    ['65 board spurs', { boardSpurs: many(65, (i) => ({ label: `s${i}`, frequency: `${i + 1}M`, level: -90 })) }, 'boardSpurs', 'at most 64'],
+    ['a spur at 1e18 Hz', { boardSpurs: [{ label: 's', frequency: 1e18, level: -90 }] }, 'boardSpurs[0].frequency', 'at most 1 THz'],
+    ['a spur at 1e308 Hz', { boardSpurs: [{ label: 's', frequency: '1e308', level: -90 }] }, 'boardSpurs[0].frequency', 'at most 1 THz'],
+    ['an exponent with a prefix (1e6k)', { boardSpurs: [{ label: 's', frequency: '1e6k', level: -90 }] }, 'boardSpurs[0].frequency', 'not both'],
+    ['a frequency that underflows', { boardSpurs: [{ label: 's', frequency: '1e-400 Hz', level: -90 }] }, 'boardSpurs[0].frequency', 'underflows'],
+    [
+      'a synthesiser with a million (M, D) pairs',
+      { clocks: [{ label: 'ref', frequency: '10M', tolerance: 10, derive: { kind: 'synthesiser', n: [1, 100], m: [1, 1000], d: [1, 1000] } }] },
+      'clocks[0].derive.m',
+      'at most 4096',
+    ],
+  ])('refuses %s', (_name, variant, path, words) => {
+    const issue = firstIssue(variant);
+    expect(issue?.path).toBe(path);
+    expect(issue?.expected).toContain(words);
+  });
+
+  it('takes the limits themselves: 32 neighbours, 64 spurs, 1 THz', () => {
+    expect(firstIssue({ neighbours: many(32, (i) => ({ label: `n${i}`, center: `${100 + i}M`, width: '100k', level: -30 })) })).toBeNull();
+    expect(firstIssue({ boardSpurs: many(64, (i) => ({ label: `s${i}`, frequency: `${i + 1}M`, level: -90 })) })).toBeNull();
+    expect(firstIssue({ boardSpurs: [{ label: 's', frequency: '1000G', level: -90 }] })).toBeNull();
+  });
+});
