@@ -7,6 +7,8 @@ import type { PlanReport, ReportedCandidate } from '../plan/plan-report.js';
 import type { CompareReport } from '../plan/compare-report.js';
 import { htmlTable } from './html-table.js';
 import { shiftParts } from './shift-table.js';
+import { afterRateHtml } from './after-rate-html.js';
+import { filterOrdersText } from './after-rate-words.js';
 
 const JOB = 'Sample-clock plan for an IF-sampling receiver: the rates at which the wanted channel sits whole in one Nyquist zone with its guard bands and nothing strong enough folds onto it.';
 
@@ -63,13 +65,14 @@ function comparisonSection(report: CompareReport): string {
       v.limitedBy,
       v.headroomPpm === null ? '–' : `−${trimmed(v.headroomPpm.down, 4)} / +${trimmed(v.headroomPpm.up, 4)} (±${trimmed(p.tolerancePpm, 4)})`,
       v.channelSnrDb === null ? '–' : trimmed(v.channelSnrDb, 4),
+      filterOrdersText(v),
       verdictCell(v.pass),
     ]),
   );
   const family = report.family.length > 0 ? `One part for the whole family, best first: ${report.family.join(', ')}.` : 'No part passes every variant.';
   return (
     '<h2>Clock parts across the variants</h2>' +
-    htmlTable(['part', 'variant', 'rate', 'settings', 'zone', 'worst margin', 'limited by', 'drift room ppm (tolerance)', 'channel SNR dB', 'verdict'], rows) +
+    htmlTable(['part', 'variant', 'rate', 'settings', 'zone', 'worst margin', 'limited by', 'drift room ppm (tolerance)', 'channel SNR dB', 'filter orders B/C/E', 'verdict'], rows) +
     `<p>${escapeXml(family)}</p>`
   );
 }
@@ -85,6 +88,7 @@ function planSection(report: PlanReport): string {
     candidatesTable(report),
     focus ? checksTable(focus) : '',
     report.ifShift ? shiftHtml(report.ifShift) : '',
+    focus ? afterRateHtml(focus) : '',
     `<p><strong>${escapeXml(verdictLine(report, focus))}</strong></p>`,
     ...pictures.map((svg) => `<figure>${svg}</figure>`),
   ].join('\n');

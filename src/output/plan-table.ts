@@ -2,6 +2,8 @@ import { formatFrequency, trimmed } from '../units/format-frequency.js';
 import type { PlanReport, ReportedCandidate, ReportedCheck } from '../plan/plan-report.js';
 import { plainTable } from './table.js';
 import { shiftSection } from './shift-table.js';
+import { afterRateSection } from './after-rate-table.js';
+import { maskShortfall } from './after-rate-words.js';
 
 const MOST_CANDIDATES_SHOWN = 12;
 const MOST_CHECKS_SHOWN = 30;
@@ -11,6 +13,7 @@ export function planTable(report: PlanReport): string {
   const sections = [heading(report), windowsSection(report), feasibleSection(report), candidatesSection(report)];
   const focus = report.candidates[0];
   if (focus) sections.push(checksSection(focus));
+  if (focus?.afterRate) sections.push(afterRateSection(focus));
   if (report.ifShift) sections.push(shiftSection(report.ifShift));
   sections.push(verdict(report), report.caution);
   return sections.join('\n\n') + '\n';
@@ -105,7 +108,10 @@ function verdict(report: PlanReport): string {
   const nearest = report.candidates[0];
   if (!nearest) return 'No candidate: no legal window inside the rate range.';
   const failing = nearest.checks.filter((c) => !c.pass).sort((a, b) => a.margin - a.requiredMargin - (b.margin - b.requiredMargin))[0];
-  const cause = failing
+  const shortfall = maskShortfall(nearest);
+  const cause = shortfall !== null && failing === undefined && nearest.zoneEdgeMargin >= 0
+    ? shortfall
+    : failing
     ? `${failing.label} lands ${formatFrequency(failing.margin)} from the band where ${formatFrequency(failing.requiredMargin)} is required (short by ${formatFrequency(failing.requiredMargin - failing.margin)})`
     : `the guarded band crosses a zone edge by ${formatFrequency(-nearest.zoneEdgeMargin)}`;
   return `No candidate passes. Nearest: ${nearest.label} at ${formatFrequency(nearest.rate)}: ${cause}.`;

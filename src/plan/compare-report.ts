@@ -2,6 +2,8 @@ import { hz, type Db, type Hz, type Ppm, type Seconds } from '../units/quantitie
 import type { ClockPart } from '../scenario/scenario.js';
 import type { PartPlan, RateSettings } from '../clocks/part-plan.js';
 import { PAPER_DESIGN_CAUTION } from './caution.js';
+import { afterRate, type AfterRateInputs } from '../after-rate/after-rate.js';
+import type { PrototypeOrders } from '../after-rate/prototype-order.js';
 
 /** Why a part has no verdict on a variant. */
 export const NOT_PLANNED = 'no rate of this part keeps its drift inside the converter\'s rate range';
@@ -21,6 +23,13 @@ export interface VariantVerdict {
   readonly headroomPpm: { readonly down: Ppm; readonly up: Ppm } | null;
   readonly jitterSnrDb: Db | null;
   readonly channelSnrDb: Db | null;
+  /**
+   * The least anti-alias filter orders this rate needs (low-pass prototype: Butterworth, Chebyshev I, elliptic); null when
+   * the variant was compared without after-rate inputs, the part gives no rate, or no filter can meet the mask.
+   */
+  readonly filterOrders: PrototypeOrders | null;
+  /** The scenario filter's least margin over the rate's alias bands, dB; null as filterOrders or with no alias band. */
+  readonly maskMarginDb: Db | null;
   readonly pass: boolean;
 }
 
@@ -52,6 +61,8 @@ export interface VariantPlans {
   readonly name: string;
   readonly plans: readonly PartPlan[];
   readonly unplanned: readonly ClockPart[];
+  /** The variant's after-rate inputs: each verdict then carries the filter orders its rate needs, and a stated out-of-band level can fail it. */
+  readonly afterRate?: AfterRateInputs | null;
 }
 
 /**
@@ -78,7 +89,7 @@ export function compareReport(variants: readonly VariantPlans[]): CompareReport 
 function comparedPart(part: ClockPart, variants: readonly VariantPlans[]): ComparedPart {
   const perVariant = variants.flatMap((v) => {
     const plan = v.plans.find((p) => p.part.label === part.label);
-    if (plan) return [verdict(v.name, plan)];
+    if (plan) return [verdict(v.name, plan, v.afterRate ?? null)];
     return v.unplanned.some((u) => u.label === part.label) ? [unplanned(v.name)] : [];
   });
   const worst = perVariant.reduce<VariantVerdict | null>((w, v) => (w === null || v.worstSlack < w.worstSlack ? v : w), null);
@@ -108,12 +119,15 @@ function unplanned(variant: string): VariantVerdict {
     headroomPpm: null,
     jitterSnrDb: null,
     channelSnrDb: null,
+    filterOrders: null,
+    maskMarginDb: null,
     pass: false,
   };
 }
 
-function verdict(variant: string, plan: PartPlan): VariantVerdict {
+function verdict(variant: string, plan: PartPlan, inputs: AfterRateInputs | null): VariantVerdict {
   const e = plan.evaluation;
+  const after = inputs === null ? null : afterRate(inputs, plan.rate, e.tolerancePpm, e.center, e.inverted);
   return {
     variant,
     rate: plan.rate,
@@ -126,6 +140,8 @@ function verdict(variant: string, plan: PartPlan): VariantVerdict {
     headroomPpm: plan.headroom ? { down: plan.headroom.downPpm, up: plan.headroom.upPpm } : null,
     jitterSnrDb: plan.snr.jitterSnrDb,
     channelSnrDb: plan.snr.channelSnrDb,
-    pass: plan.pass,
+    filterOrders: after ? after.design.orders : null,
+    maskMarginDb: after?.mask.worst ? after.mask.worst.marginDb : null,
+    pass: plan.pass && (after === null || after.mask.pass),
   };
 }

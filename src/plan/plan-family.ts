@@ -2,6 +2,7 @@ import type { ClockPart, Scenario } from '../scenario/scenario.js';
 import { compareReport, type CompareReport } from './compare-report.js';
 import type { PlanReport } from './plan-report.js';
 import { solveScenario, type PlanOptions } from './plan-scenario.js';
+import { afterRateInputs } from '../after-rate/after-rate.js';
 
 /** One variant of a family: its scenario and where it came from (a file name, used to tell apart two variants of one name). */
 export interface FamilyVariant {
@@ -44,6 +45,7 @@ export function planFamily(
       name: names[index]!,
       plans: s.result.parts,
       unplanned: s.context.clocks.filter((p) => s.result.unplannedParts.includes(p.label)),
+      afterRate: afterRateInputs(variants[index]!.scenario, s.context.goal),
     })),
   );
   return { plans: solved.map((s) => s.report), comparison };

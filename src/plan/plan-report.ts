@@ -9,6 +9,7 @@ import type { CheckResult, RateEvaluation } from '../solve/evaluate-rate.js';
 import type { ShiftSearch } from '../solve/if-shift/best-shift-and-rate.js';
 import { PAPER_DESIGN_CAUTION } from './caution.js';
 import { shiftReport, type ShiftReport } from './shift-report.js';
+import { afterRate, channelSnrWithDriver, type AfterRate, type AfterRateInputs } from '../after-rate/after-rate.js';
 
 /** An interferer as reported: the solver's own record (extent rateMultiple·r + shiftMultiple·δ + [low, high], level, blocking). */
 export type ReportedInterferer = Interferer;
@@ -59,6 +60,10 @@ export interface ReportedCandidate {
   /** Combined jitter and quantisation SNR plus the processing gain to the channel, dB; null when not from a part. */
   readonly channelSnrDb: Db | null;
   readonly checks: readonly ReportedCheck[];
+  /** The filter mask, filter orders, noise folding and down-converter settings at this rate; null when the report was built without them. */
+  readonly afterRate: AfterRate | null;
+  /** channelSnrDb lowered by the driver's noise folded into the channel, dB; null without both. */
+  readonly channelSnrWithDriverDb: Db | null;
 }
 
 /** The solved plan for people and programs alike: the `solve` JSON contract. */
@@ -79,6 +84,8 @@ export interface PlanReport {
   readonly unplannedParts: readonly string[];
   /** The best (IF shift, rate) pair when the scenario lets the first LO move (ifShift); null when the LO is fixed. */
   readonly ifShift: ShiftReport | null;
+  /** What the after-rate figures of the candidates were computed from (the filter, the input bandwidth, the settings); null when they were not. */
+  readonly afterRateInputs: AfterRateInputs | null;
   readonly caution: string;
 }
 
@@ -89,9 +96,13 @@ export interface PlanReport {
  * @param context the plan that was solved
  * @param result what the solver found
  * @param shift what bestShiftAndRate found, when the scenario has ifShift
+ * @param after the scenario's after-rate inputs (afterRateInputs): each candidate then carries its filter mask, filter
+ *   orders, noise folding and down-converter settings, and a stated out-of-band level the filter cannot hold back fails it
  */
-export function planReport(name: string, context: PlanContext, result: PlanResult, shift: ShiftSearch | null = null): PlanReport {
-  const passing = result.candidates.find((c) => c.evaluation.pass);
+export function planReport(name: string, context: PlanContext, result: PlanResult, shift: ShiftSearch | null = null, after: AfterRateInputs | null = null): PlanReport {
+  // A candidate the mask fails moves behind the passing ones (stable: the solver's order is kept otherwise).
+  const candidates = result.candidates.map((c) => reportedCandidate(context, c, after)).sort((a, b) => Number(b.pass) - Number(a.pass));
+  const passing = candidates.find((c) => c.pass);
   return {
     scenario: name,
     band: context.band,
@@ -105,16 +116,19 @@ export function planReport(name: string, context: PlanContext, result: PlanResul
       return { ...f, width, widthPpm: ppm((width / (f.maxRate + f.minRate)) * 1e6) };
     }),
     blocked: result.blocked,
-    candidates: result.candidates.map((c) => reportedCandidate(context, c)),
+    candidates,
     best: passing ? passing.label : null,
     unplannedParts: result.unplannedParts,
     ifShift: shift ? shiftReport(context.band, shift) : null,
+    afterRateInputs: after,
     caution: PAPER_DESIGN_CAUTION,
   };
 }
 
-function reportedCandidate(context: PlanContext, candidate: Candidate): ReportedCandidate {
+function reportedCandidate(context: PlanContext, candidate: Candidate, after: AfterRateInputs | null): ReportedCandidate {
   const e: RateEvaluation = candidate.evaluation;
+  const atRate = after === null ? null : afterRate(after, e.rate, e.tolerancePpm, e.center, e.inverted);
+  const channelSnrDb = candidate.snr ? candidate.snr.channelSnrDb : null;
   return {
     label: candidate.label,
     origin: candidate.origin,
@@ -130,12 +144,12 @@ function reportedCandidate(context: PlanContext, candidate: Candidate): Reported
     worstMargin: e.worstMargin,
     limitedBy: e.limitedBy,
     worstSlack: e.worstSlack,
-    pass: e.pass,
+    pass: e.pass && (atRate === null || atRate.mask.pass),
     settings: candidate.settings ? { N: candidate.settings.N, M: candidate.settings.M, D: candidate.settings.D } : null,
     headroomPpm: candidate.headroom ? { down: candidate.headroom.downPpm, up: candidate.headroom.upPpm } : null,
     headroomLimitedBy: candidate.headroom ? { down: candidate.headroom.downLimitedBy, up: candidate.headroom.upLimitedBy } : null,
     jitterSnrDb: candidate.snr ? candidate.snr.jitterSnrDb : null,
-    channelSnrDb: candidate.snr ? candidate.snr.channelSnrDb : null,
+    channelSnrDb,
     checks: e.checks.map((check, index) => {
       const interferer = context.interferers[index]!;
       const offset = interferer.rateMultiple * e.rate;
@@ -143,5 +157,7 @@ function reportedCandidate(context: PlanContext, candidate: Candidate): Reported
       const input = [hz(magnitude.low), hz(magnitude.high)] as const;
       return { ...check, input };
     }),
+    afterRate: atRate,
+    channelSnrWithDriverDb: channelSnrWithDriver(channelSnrDb, atRate?.noise ?? null),
   };
 }

@@ -6,6 +6,7 @@ import type { PlanContext } from '../solve/plan-context.js';
 import { bestShiftAndRate, type ShiftSearch } from '../solve/if-shift/best-shift-and-rate.js';
 import { planReport, type PlanReport } from './plan-report.js';
 import { solvePlan, type PlanResult } from './solve-plan.js';
+import { afterRateInputs } from '../after-rate/after-rate.js';
 
 /** What a caller may change about a scenario's plan without editing the scenario. */
 export interface PlanOptions {
@@ -31,8 +32,9 @@ export interface SolvedScenario {
  * the solver's view of the scenario (interferers, level threshold, rate
  * range), the legal windows of the guarded band, the exact feasible set,
  * each clock part at its best rate, the best rate of each feasible interval,
- * drift headroom and SNR, and, when the first LO may move, the best
- * (IF shift, rate) pair. Pure.
+ * drift headroom and SNR, when the first LO may move, the best
+ * (IF shift, rate) pair, and for every candidate what its rate asks of the
+ * anti-alias filter and the down-converter (src/after-rate/). Pure.
  *
  * @param scenario a validated scenario (readScenarioFile or resolveScenario)
  * @param options goal, clock parts or name instead of the scenario's
@@ -59,7 +61,8 @@ export function solveScenario(scenario: Scenario, options: PlanOptions = {}): So
   const context = contextFromScenario(planned);
   const result = solvePlan(context);
   const shift = planned.ifShift ? bestShiftAndRate(planned) : null;
-  return { context, result, shift, report: planReport(options.name ?? scenario.name, context, result, shift) };
+  const report = planReport(options.name ?? scenario.name, context, result, shift, afterRateInputs(planned, planned.goal));
+  return { context, result, shift, report };
 }
 
 /**

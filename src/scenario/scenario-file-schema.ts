@@ -11,6 +11,7 @@ import { guardHz, wholeNumber } from './scenario-fields.js';
 import { boardSpurSchema, neighbourSchema } from './signals-schema.js';
 import { clockPartSchema } from './clock-part-schema.js';
 import { ifShiftSchema } from './if-shift-schema.js';
+import { afterRateFileFields, afterRateSettings } from './after-rate-schema.js';
 
 // A command reads one scenario or a few: zod's compiled fast path for objects
 // costs more to build (about 5 ms at start-up) than it saves on a few parses.
@@ -63,6 +64,7 @@ export const scenarioFileSchema = z
       .prefault([]),
     goal: goalSchema.prefault('widest-margin'),
     ifShift: ifShiftSchema.nullable().prefault(null),
+    ...afterRateFileFields,
   })
   .meta({
     $id: 'https://ifzone.invalid/ifzone-scenario.schema.json',
@@ -101,6 +103,7 @@ export const scenarioFileSchema = z
       clocks: file.clocks,
       goal: file.goal,
       ifShift: file.ifShift,
+      afterRate: afterRateSettings(file),
     };
   });
 

@@ -32,6 +32,26 @@ export interface Scenario {
    * null when the LO is fixed.
    */
   readonly ifShift: { readonly low: Hz; readonly high: Hz } | null;
+  /** What the work after the rate needs: the filter mask, the driver's noise, the down-converter (src/after-rate/). */
+  readonly afterRate: AfterRateSettings;
+}
+
+/** Settings for the anti-alias mask, noise folding and down-converter figures of a chosen rate. */
+export interface AfterRateSettings {
+  /** Strongest signal outside the channel at the filter input, dBFS; null: not stated (full scale assumed, reported only). */
+  readonly outOfBandLevel: Db | null;
+  /** Passband ripple the filter orders are sized for, dB. */
+  readonly passbandRipple: Db;
+  /** Wideband noise density of the driver ahead of the filter, dBFS/Hz; null when not stated. */
+  readonly driverNoiseDensity: Db | null;
+  readonly downConverter: {
+    /** NCO accumulator width, bits; null: no tuning word. */
+    readonly ncoBits: number | null;
+    /** Complex output rate, Hz; null: the decimation goal's, if any. */
+    readonly outputRate: Hz | null;
+    /** Part of the output band left usable by the digital filter's transition, (0, 1]. */
+    readonly usableFraction: number;
+  };
 }
 
 export interface WantedBand extends Band {

@@ -63,7 +63,7 @@ describe('ifzone report --html', () => {
     const sections = await page.locator('h2').allTextContents();
     expect(sections).toEqual(['Clock parts across the variants', 'Heron-4 base', 'Heron-4N narrowband', 'Heron-4W wideband', 'Heron-2L low IF']);
     const captions = await page.locator('caption').allTextContents();
-    for (const caption of ['Legal windows', 'Feasible intervals', 'Candidates, best first']) {
+    for (const caption of ['Legal windows', 'Feasible intervals', 'Candidates, best first', 'Alias bands up to the input bandwidth']) {
       expect(captions.filter((c) => c.startsWith(caption)).length).toBe(4);
     }
     expect(await page.locator('figure svg').count()).toBe(12);

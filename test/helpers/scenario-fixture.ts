@@ -58,6 +58,7 @@ export function scenarioFixture(overrides: Partial<Scenario> = {}): Scenario {
     ],
     goal: { kind: 'widest-margin' },
     ifShift: null,
+    afterRate: { outOfBandLevel: null, passbandRipple: db(1), driverNoiseDensity: null, downConverter: { ncoBits: null, outputRate: null, usableFraction: 0.8 } },
     ...overrides,
   };
 }

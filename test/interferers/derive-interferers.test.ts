@@ -88,6 +88,7 @@ const handWorked: Scenario = {
   clocks: [],
   goal: { kind: 'widest-margin' },
   ifShift: null,
+  afterRate: scenarioFixture().afterRate,
 };
 
 // [label, kind, order, rateMultiple, low MHz, high MHz, level dBFS, blocking], from the comment above.

@@ -27,6 +27,9 @@ export function scenarioDocument(scenario: Scenario): Record<string, unknown> {
     clocks: scenario.clocks.map(clockDocument),
     goal: { ...scenario.goal },
     ifShift: scenario.ifShift && { ...scenario.ifShift },
+    filterMask: { outOfBandLevel: scenario.afterRate.outOfBandLevel, passbandRipple: scenario.afterRate.passbandRipple },
+    driverNoiseDensity: scenario.afterRate.driverNoiseDensity,
+    downConverter: { ...scenario.afterRate.downConverter },
   };
 }
 

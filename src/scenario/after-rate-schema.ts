@@ -1,0 +1,60 @@
+import { z } from 'zod';
+import { db, type Db } from '../units/quantities.js';
+import type { AfterRateSettings } from './scenario.js';
+import { level, levelAtMostFullScale, positiveFrequency, wholeNumber } from './scenario-fields.js';
+
+/** Widest NCO accumulator accepted, bits: every tuning word stays an exact integer in a double. */
+const MOST_NCO_BITS = 48;
+
+/** What the anti-alias filter must reject, and the passband ripple its order is sized for. */
+const filterMaskSchema = z.strictObject({
+  outOfBandLevel: levelAtMostFullScale(
+    'Strongest signal that may appear anywhere outside the channel at the filter input, dBFS; when stated, an alias band where the filter falls short blocks the rate (leave out: full scale assumed, reported only)',
+  )
+    .nullable()
+    .prefault(null),
+  passbandRipple: z
+    .number({ error: 'a passband ripple in dB above 0' })
+    .gt(0, { error: 'a passband ripple in dB above 0' })
+    .meta({ description: 'Passband ripple the filter orders are sized for, dB (default 1)' })
+    .transform((value): Db => db(value))
+    .prefault(1),
+});
+
+/** The digital down-converter after the converter. */
+const downConverterSchema = z.strictObject({
+  ncoBits: wholeNumber(1, MOST_NCO_BITS, 'NCO phase accumulator width, bits (leave out: no tuning word reported)').nullable().prefault(null),
+  outputRate: positiveFrequency('Complex output rate after decimation (leave out: the decimation goal\'s output rate, if any)').nullable().prefault(null),
+  usableFraction: z
+    .number({ error: 'a fraction above 0 and at most 1, e.g. 0.8' })
+    .gt(0, { error: 'a fraction above 0 and at most 1, e.g. 0.8' })
+    .max(1, { error: 'a fraction above 0 and at most 1, e.g. 0.8' })
+    .meta({ description: "Fraction of the output band the digital filter's transition leaves usable (default 0.8)" })
+    .prefault(0.8),
+});
+
+/**
+ * The scenario file's fields for the work after the rate (src/after-rate/),
+ * each optional: spread into the scenario's object schema.
+ */
+export const afterRateFileFields = {
+  filterMask: filterMaskSchema.meta({ description: 'The anti-alias filter mask: the strongest out-of-band level and the passband ripple (optional)' }).prefault({}),
+  driverNoiseDensity: level("Wideband noise density of the driver ahead of the anti-alias filter, dBFS/Hz (optional: when stated, the noise folded into the channel lowers the channel SNR)")
+    .nullable()
+    .prefault(null),
+  downConverter: downConverterSchema.meta({ description: 'The digital down-converter: NCO width, output rate and usable band (optional)' }).prefault({}),
+};
+
+/** The file's after-rate fields as the model's settings. */
+export function afterRateSettings(file: {
+  readonly filterMask: { readonly outOfBandLevel: Db | null; readonly passbandRipple: Db };
+  readonly driverNoiseDensity: Db | null;
+  readonly downConverter: AfterRateSettings['downConverter'];
+}): AfterRateSettings {
+  return {
+    outOfBandLevel: file.filterMask.outOfBandLevel,
+    passbandRipple: file.filterMask.passbandRipple,
+    driverNoiseDensity: file.driverNoiseDensity,
+    downConverter: { ncoBits: file.downConverter.ncoBits, outputRate: file.downConverter.outputRate, usableFraction: file.downConverter.usableFraction },
+  };
+}

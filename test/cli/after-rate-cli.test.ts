@@ -1,0 +1,78 @@
+import { mkdtempSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { ensureBuilt, ROOT, runBin } from '../helpers/run-bin.js';
+
+/**
+ * The after-rate figures end to end through bin/ifzone: the JSON fields, the solve table's block, the
+ * compare column and a stated out-of-band level that blocks. Plumbing and contracts; the reference values
+ * live in test/after-rate/.
+ */
+const BASE = join(ROOT, 'scenarios/heron-base.json');
+const dir = mkdtempSync(join(tmpdir(), 'ifzone-after-rate-'));
+
+function variant(name: string, overrides: Record<string, unknown>): string {
+  const path = join(dir, name);
+  writeFileSync(path, JSON.stringify({ extends: BASE, name, ...overrides }, null, 2));
+  return path;
+}
+
+beforeAll(() => ensureBuilt());
+
+describe('after-rate outputs', () => {
+  it('solve --json: every candidate carries afterRate (mask, design, noise, downConverter), the inputs are echoed', () => {
+    const run = runBin('solve', BASE, '--json');
+    expect(run.status).toBe(0);
+    const plan = JSON.parse(run.stdout);
+    expect(plan.afterRateInputs).toMatchObject({ inputBandwidth: 650e6, outputRate: 30.72e6, settings: { driverNoiseDensity: -155, passbandRipple: 1 } });
+    for (const c of plan.candidates) {
+      expect(Object.keys(c.afterRate)).toEqual(['mask', 'design', 'noise', 'downConverter']);
+      expect(Object.keys(c.afterRate.mask)).toEqual(expect.arrayContaining(['outOfBandLevel', 'levelStated', 'threshold', 'requiredDb', 'bands', 'worst', 'pass']));
+      for (const band of c.afterRate.mask.bands) {
+        expect(band.low).toBeLessThanOrEqual(band.high);
+        expect(band.high).toBeLessThanOrEqual(650e6);
+      }
+      expect(Object.keys(c.afterRate.design.orders ?? {})).toEqual(expect.arrayContaining(['butterworth', 'chebyshev', 'elliptic']));
+      expect(c).toHaveProperty('channelSnrWithDriverDb');
+    }
+    const best = plan.candidates.find((c: { label: string }) => c.label === plan.best);
+    expect(best.afterRate.downConverter.nco).toMatchObject({ bits: 32, target: best.nco, inverted: best.inverted });
+  });
+
+  it('solve: the table has the after-rate block for the best candidate, no line over 100 columns but the tables', () => {
+    const run = runBin('solve', BASE);
+    const block = run.stdout.slice(run.stdout.indexOf('After the rate, at '));
+    expect(block).toMatch(/Anti-alias mask: /);
+    expect(block).toMatch(/Filter that would do .*Butterworth \d+, Chebyshev I \d+, elliptic \d+/s);
+    expect(block).toMatch(/Noise folding: \+\d/);
+    expect(block).toMatch(/NCO \(32-bit\): word \d+/);
+    expect(block).toMatch(/Decimation to 30\.72 MHz: ÷\d+/);
+    const prose = block.split('\n\n')[0]!.split('\n').filter((line) => !/[│┌└├]/.test(line));
+    for (const line of prose) expect([...line].length, line).toBeLessThanOrEqual(100);
+  });
+
+  it('a stated out-of-band level that a 2nd-order filter cannot hold back blocks every rate: exit 1, the mask named', () => {
+    const weak = variant('weak.json', { filter: { kind: 'butterworth', order: 2, passLow: '128M', passHigh: '152M' }, filterMask: { outOfBandLevel: -20 } });
+    const run = runBin('solve', weak);
+    expect(run.status).toBe(1);
+    expect(run.stdout).toMatch(/No candidate passes\. Nearest: .*anti-alias mask: the filter gives/s);
+  });
+
+  it('compare: the filter orders each part\'s rate needs', () => {
+    const run = runBin('compare', BASE, '--csv');
+    expect(run.status).toBe(0);
+    const [head, ...rows] = run.stdout.trim().split(/\r?\n/);
+    expect(head).toMatch(/butterworth_order,chebyshev_order,elliptic_order,mask_margin_db$/);
+    expect(rows.some((row) => /,\d+,\d+,\d+,-?[\d.]+$/.test(row))).toBe(true);
+    expect(runBin('compare', BASE).stdout).toContain('filter B/C/E');
+  });
+
+  it('refuses a bad after-rate field with one line and exit 2', () => {
+    const bad = variant('bad.json', { downConverter: { usableFraction: 2 } });
+    const run = runBin('solve', bad);
+    expect(run.status).toBe(2);
+    expect(run.stderr).toMatch(/^ifzone: .*downConverter\.usableFraction/);
+    expect(run.stderr.trim().split('\n')).toHaveLength(1);
+  });
+});
