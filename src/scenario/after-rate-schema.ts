@@ -1,21 +1,22 @@
 import { z } from 'zod';
 import { db, type Db } from '../units/quantities.js';
 import type { AfterRateSettings } from './scenario.js';
-import { level, levelAtMostFullScale, positiveFrequency, wholeNumber } from './scenario-fields.js';
+import { level, positiveFrequency, wholeNumber } from './scenario-fields.js';
 
 /** Widest NCO accumulator accepted, bits: every tuning word stays an exact integer in a double. */
 const MOST_NCO_BITS = 48;
 
 /** What the anti-alias filter must reject, and the passband ripple its order is sized for. */
 const filterMaskSchema = z.strictObject({
-  outOfBandLevel: levelAtMostFullScale(
-    'Strongest signal that may appear anywhere outside the channel at the filter input, dBFS; when stated, an alias band where the filter falls short blocks the rate (leave out: full scale assumed, reported only)',
+  outOfBandLevel: level(
+    'Strongest signal that may appear anywhere outside the channel at the filter input, dBFS (referred to converter full scale; may be above 0, the filter attenuates it); when stated, an alias band where the filter falls short blocks the rate (leave out: full scale assumed, reported only)',
   )
     .nullable()
     .prefault(null),
   passbandRipple: z
-    .number({ error: 'a passband ripple in dB above 0' })
-    .gt(0, { error: 'a passband ripple in dB above 0' })
+    .number({ error: 'a passband ripple in dB above 0 and at most 20' })
+    .gt(0, { error: 'a passband ripple in dB above 0 and at most 20' })
+    .max(20, { error: 'a passband ripple in dB above 0 and at most 20' })
     .meta({ description: 'Passband ripple the filter orders are sized for, dB (default 1)' })
     .transform((value): Db => db(value))
     .prefault(1),

@@ -36,7 +36,8 @@ describe('after-rate fields of the scenario file', () => {
   });
 
   it.each([
-    [{ filterMask: { outOfBandLevel: 3 } }, 'filterMask.outOfBandLevel'],
+    [{ filterMask: { outOfBandLevel: 150 } }, 'filterMask.outOfBandLevel'],
+    [{ filterMask: { passbandRipple: 25 } }, 'filterMask.passbandRipple'],
     [{ filterMask: { passbandRipple: 0 } }, 'filterMask.passbandRipple'],
     [{ downConverter: { ncoBits: 64 } }, 'downConverter.ncoBits'],
     [{ downConverter: { usableFraction: 1.2 } }, 'downConverter.usableFraction'],
