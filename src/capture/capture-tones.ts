@@ -1,7 +1,8 @@
 import { db, hz, type Db, type Hz } from '../units/quantities.js';
 import type { Scenario } from '../scenario/scenario.js';
 import { leastAttenuation } from '../filter/filter-attenuation.js';
-import { cyclesFrequency, nearestCycles } from './coherent-bins.js';
+import { cyclesFrequency, foldCycles, nearestCycles } from './coherent-bins.js';
+import { rateFractionLabel } from '../interferers/converter-spurs.js';
 import { seededUniform } from './seeded-random.js';
 
 /** What a synthesised tone stands for. */
@@ -9,9 +10,8 @@ export type ToneSource =
   | { readonly kind: 'wanted'; readonly index: number }
   | { readonly kind: 'neighbour'; readonly index: number }
   | { readonly kind: 'board spur'; readonly index: number; readonly harmonic: number }
-  | { readonly kind: 'rate spur'; readonly which: 'dc' | 'half' | 'quarter' }
-  | { readonly kind: 'interleave offset'; readonly k: number }
-  | { readonly kind: 'interleave image'; readonly k: number; readonly wanted: number };
+  | { readonly kind: 'rate spur'; readonly numerator: number; readonly denominator: number }
+  | { readonly kind: 'interleave offset'; readonly k: number };
 
 /** One tone of the simulated capture. */
 export interface CaptureTone {
@@ -105,11 +105,11 @@ export function movedScenario(scenario: Scenario, record: CaptureRecord): Scenar
  * - each board spur and its harmonics h = 2..harmonics as tones of h times
  *   the spur's cycles, at level − 20·log10(h) (the plan's roll-off), less the
  *   filter's attenuation when coupled before the filter;
- * - after the converter: DC, rate/2, rate/4 where stated, the interleaving
+ * - after the converter: DC, rate/2, rate/4 and each listed fraction p/q of
+ *   the rate where stated (at round(p·N/q) cycles), and the interleaving
  *   offset spurs at k·R/M (k ≤ M/2: k and M − k fold to one place, one real
- *   tone), and the interleaving images at k·R/M + f of each wanted tone
- *   (k = 1..M−1; k·R/M − f folds onto (M−k)·R/M + f), at the tone's level
- *   plus the stated image level.
+ *   tone). The interleaving images are not tones: the capture makes them by
+ *   sampling with M mismatched cores (see interleaveMismatch).
  * Phases are drawn from a fixed seed; DC and rate/2 are in phase (a real
  * component there has no quadrature part).
  *
@@ -148,22 +148,21 @@ export function captureTones(scenario: Scenario, record: CaptureRecord, layout: 
       add(h === 1 ? spur.label : `${spur.label} H${h}`, { kind: 'board spur', index: i, harmonic: h }, true, h * centre, h * cycles, spur.level - 20 * Math.log10(h) - loss);
     }
   });
-  const { dc, halfRate, quarterRate } = scenario.converter.rateSpurs;
-  if (dc !== null) add('DC', { kind: 'rate spur', which: 'dc' }, false, 0, 0, dc, true);
-  if (halfRate !== null) add('rate/2', { kind: 'rate spur', which: 'half' }, false, rate / 2, samples / 2, halfRate, true);
-  if (quarterRate !== null) add('rate/4', { kind: 'rate spur', which: 'quarter' }, false, rate / 4, samples / 4, quarterRate);
+  const { dc, halfRate, quarterRate, fractions } = scenario.converter.rateSpurs;
+  const rateSpur = (numerator: number, denominator: number, level: number) => {
+    const cycles = Math.round((numerator * samples) / denominator);
+    const onEdge = foldCycles(cycles, samples) === 0 || foldCycles(cycles, samples) === samples / 2;
+    add(rateFractionLabel(numerator, denominator), { kind: 'rate spur', numerator, denominator }, false, (numerator * rate) / denominator, cycles, level, onEdge);
+  };
+  if (dc !== null) rateSpur(0, 1, dc);
+  if (halfRate !== null) add('rate/2', { kind: 'rate spur', numerator: 1, denominator: 2 }, false, rate / 2, samples / 2, halfRate, true);
+  if (quarterRate !== null) add('rate/4', { kind: 'rate spur', numerator: 1, denominator: 4 }, false, rate / 4, samples / 4, quarterRate);
+  for (const spur of fractions ?? []) rateSpur(spur.numerator, spur.denominator, spur.level);
   const interleave = scenario.converter.interleave;
   if (interleave !== null) {
     const m = interleave.ways;
     for (let k = 1; 2 * k <= m; k++) {
       add(`IL offset ${k}/${m}`, { kind: 'interleave offset', k }, false, (k * rate) / m, Math.round((k * samples) / m), interleave.offsetSpur, 2 * k === m);
-    }
-    const wanted = tones.filter((t) => t.source.kind === 'wanted');
-    for (let k = 1; k < m; k++) {
-      for (const w of wanted) {
-        const index = (w.source as { index: number }).index;
-        add(`IL image ${k}/${m} + ${w.label}`, { kind: 'interleave image', k, wanted: index }, false, (k * rate) / m + w.frequency, Math.round((k * samples) / m) + w.cycles, w.level + interleave.imageLevel);
-      }
     }
   }
   return tones;

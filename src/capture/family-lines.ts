@@ -1,5 +1,7 @@
 import type { CaptureTone } from './capture-tones.js';
-import type { Group, LineFamily } from './check-families.js';
+import type { MixingTerm } from '../interferers/interferer.js';
+import type { LineFamily } from './check-families.js';
+import { imageKey } from './model-components.js';
 
 /**
  * One spectral line the capture expects for an interferer: a product of the
@@ -16,6 +18,10 @@ export interface LineDraft {
   readonly net: readonly number[] | null;
   /** Index into the capture's tones of the after-converter tone, or null. */
   readonly tone: number | null;
+  /** For an interleaving image at k/M·R + f of the product `net`: round(k·N/M), the cycles it adds; absent otherwise. */
+  readonly offset?: number;
+  /** For an interleaving image: the whole cycles of its source product `net` (its frequency sets a timing-skew image's level). */
+  readonly sourceCycles?: number;
 }
 
 /** Input tones in order, and each tone's position among them. */
@@ -37,53 +43,93 @@ export function inputIndex(tones: readonly CaptureTone[]): InputIndex {
 }
 
 /**
- * The lines of one family (see LineFamily), e.g. for the 3rd harmonic of the
- * wanted band with tones W1, W2: 3·W1, 2·W1 + W2, W1 + 2·W2, 3·W2; for the
- * differences inside the wanted band with W1..W3: W1 − W2, W1 − W3, W2 − W3.
+ * The lines of one family (see LineFamily). For a mixing family, each term's
+ * signal stands for its tones (the wanted band: every wanted tone; a
+ * neighbour or a board spur harmonic: its one tone), and the term's plus
+ * and minus picks are multisets of those tones: e.g. the 3rd harmonic of the
+ * wanted band with tones W1, W2 gives 3·W1, 2·W1 + W2, W1 + 2·W2, 3·W2; the
+ * band's own differences with W1..W3 give W1 − W2, W1 − W3, W2 − W3 (a
+ * product and its negative are one line; a tone taken with both signs
+ * cancels to a lower order, so such picks are none; with one wanted tone
+ * the band's differences have no line). An
+ * image family puts each such line at k/M·R + side·f.
  *
  * @param family the family
  * @param tones the capture's tones
  * @param index the input index of those tones
- * @param ways M of an interleaved converter (for images), or null
+ * @param samples record length N (for the image offsets k·N/M)
  * @returns the lines, possibly several for one component
- * @example familyLines({ kind: 'tone harmonic', tone: 1, order: 2 }, tones, index, null)[0].what // '2·ADJ'
+ * @example familyLines({ kind: 'mixing', terms: [{ signal: 'neighbour', index: 0, harmonic: 1, plus: 2, minus: 0 }] }, tones, index, 65536)[0].what // '2·ADJ'
  */
-export function familyLines(family: LineFamily, tones: readonly CaptureTone[], index: InputIndex, ways: number | null): LineDraft[] {
-  const wanted = tones.flatMap((t, i) => (t.source.kind === 'wanted' ? [i] : []));
-  const product = (terms: ReadonlyArray<readonly [number, number]>): LineDraft => {
-    const net = new Array<number>(index.inputs.length).fill(0);
-    for (const [tone, multiple] of terms) net[index.position.get(tone)!]! += multiple;
-    const normal = normalisedNet(net);
-    const cycles = terms.reduce((sum, [tone, multiple]) => sum + multiple * tones[tone]!.cycles, 0);
-    return { what: productName(normal, index, tones), component: `n:${normal.join(',')}`, cycles, net: normal, tone: null };
-  };
-  const direct = (tone: number): LineDraft => {
-    const t = tones[tone]!;
-    return t.input ? product([[tone, 1]]) : { what: t.label, component: `t:${tone}`, cycles: t.cycles, net: null, tone };
-  };
-  const members = (group: Group) => (group === 'wanted' ? wanted : tones.flatMap((t, i) => (t.source.kind === 'neighbour' && t.source.index === group.neighbour ? [i] : [])));
+export function familyLines(family: LineFamily, tones: readonly CaptureTone[], index: InputIndex, samples: number): LineDraft[] {
   switch (family.kind) {
-    case 'wanted harmonic':
-      return multisets(wanted, family.order).map((pick) => product(pick.map((tone) => [tone, 1] as const)));
-    case 'tone':
-      return [direct(family.tone)];
-    case 'tone harmonic':
-      return [product([[family.tone, family.order]])];
-    case 'intermod':
-      return members(family.doubled).flatMap((a) => members(family.other).map((b) => product([[a, 2], [b, -1]])));
-    case 'second order': {
-      const same = family.first === family.second;
-      // Within one group (the wanted tones) each pair once: Wi − Wj and Wj − Wi are one real tone, Wi − Wi is DC.
-      return members(family.first).flatMap((a, i) => members(family.second).flatMap((b, j) => (same && j <= i ? [] : [product([[a, 1], [b, family.sign]])])));
+    case 'tone': {
+      const t = tones[family.tone]!;
+      return [{ what: t.label, component: `t:${family.tone}`, cycles: t.cycles, net: null, tone: family.tone }];
     }
-    case 'interleave image': {
-      if (ways === null) return [];
-      const k = family.side === 1 ? family.k : ways - family.k;
-      return tones.flatMap((t, i) => (t.source.kind === 'interleave image' && t.source.k === k ? [direct(i)] : []));
-    }
+    case 'mixing':
+      return mixingLines(family.terms, tones, index).map((line) => ({ what: productName(line.normal, index, tones), component: `n:${line.normal.join(',')}`, cycles: line.cycles, net: line.normal, tone: null }));
+    case 'interleave image':
+      return mixingLines(family.terms, tones, index).map((line) => {
+        // k/M·R + side·f with f written as its normal form: the normal form may be −f, which turns the side.
+        // (k/M·R − f folds where (M − k)/M·R + f does: one real tone, keyed and placed by the latter.)
+        const side = family.side * line.sign;
+        const k = side === 1 ? family.k : family.ways - family.k;
+        const offset = Math.round((k * samples) / family.ways);
+        return {
+          what: `IL ${family.k}/${family.ways} ${family.side === 1 ? '+' : '−'} (${productName(line.normal, index, tones)})`,
+          component: imageKey(k, line.normal),
+          cycles: offset + line.cycles,
+          net: line.normal,
+          tone: null,
+          offset,
+          sourceCycles: line.cycles,
+        };
+      });
     case 'not simulated':
       return [];
   }
+}
+
+/** Every product of the terms' tones: its normal form, the sign that gives it (+1 or −1) and its whole cycles before folding. */
+function mixingLines(terms: readonly MixingTerm[], tones: readonly CaptureTone[], index: InputIndex): Array<{ normal: number[]; sign: 1 | -1; cycles: number }> {
+  const members = (term: MixingTerm) =>
+    tones.flatMap((t, i) => {
+      const s = t.source;
+      const match =
+        term.signal === 'wanted' ? s.kind === 'wanted' : term.signal === 'neighbour' ? s.kind === 'neighbour' && s.index === term.index : s.kind === 'board spur' && s.index === term.index && s.harmonic === term.harmonic;
+      return match ? [i] : [];
+    });
+  let partial: number[][] = [new Array<number>(index.inputs.length).fill(0)];
+  for (const term of terms) {
+    const own = members(term);
+    const next: number[][] = [];
+    for (const plus of multisets(own, term.plus)) {
+      for (const minus of multisets(own, term.minus)) {
+        // One tone taken with both signs cancels to a product of lower order, which is not this one (W1 + B − W1 is B itself).
+        if (plus.some((tone) => minus.includes(tone))) continue;
+        for (const net of partial) {
+          const grown = [...net];
+          for (const tone of plus) grown[index.position.get(tone)!]! += 1;
+          for (const tone of minus) grown[index.position.get(tone)!]! -= 1;
+          next.push(grown);
+        }
+      }
+    }
+    partial = next;
+  }
+  const seen = new Set<string>();
+  const lines: Array<{ normal: number[]; sign: 1 | -1; cycles: number }> = [];
+  for (const net of partial) {
+    if (net.every((n) => n === 0)) continue;
+    const normal = normalisedNet(net);
+    const key = normal.join(',');
+    if (seen.has(key)) continue;
+    seen.add(key);
+    const cycles = normal.reduce((sum, n, p) => sum + n * tones[index.inputs[p]!]!.cycles, 0);
+    lines.push({ normal, sign: normal.some((n, p) => n !== net[p]) ? -1 : 1, cycles });
+  }
+  return lines;
 }
 
 /**

@@ -3,6 +3,17 @@ import type { CaptureTone } from './capture-tones.js';
 import type { Coefficients } from './converter-polynomial.js';
 import { productName, type InputIndex } from './family-lines.js';
 import { enumerateProducts } from './mixing-products.js';
+import type { CoreMismatch } from './interleave-mismatch.js';
+
+/**
+ * The key of the interleaving image at k/M·R + f of the product with net
+ * multiples `net` (first nonzero positive): `i<k>:<net>`.
+ *
+ * @example imageKey(1, [1, 0]) // 'i1:1,0'
+ */
+export function imageKey(k: number, net: readonly number[]): string {
+  return `i${k}:${net.join(',')}`;
+}
 
 /** One spectral component the capture's model expects, wherever it comes from. */
 export interface ModelComponent {
@@ -28,19 +39,24 @@ export interface ModelComponents {
 /**
  * Every component the model expects down to `cutoff`: the products of the
  * input tones through the polynomial (the tones themselves included, with
- * their compression) and the tones added after the converter.
+ * their compression), the tones added after the converter, and with
+ * interleaved cores the images of every product at k/M·R + f.
  *
  * @param tones the capture's tones
  * @param index their input index
  * @param coefficients the polynomial
  * @param samples record length N
  * @param cutoff least amplitude kept
+ * @param cores the mismatched cores of an interleaved converter and the rate R (Hz): the images of every product are components too; null for one core
  * @returns the components, and whether the product search ran to its end
  * @example modelComponents(tones, index, a, 65536, 1e-8).components.find((c) => c.name === '2·W1') // the 2nd harmonic of W1
  */
-export function modelComponents(tones: readonly CaptureTone[], index: InputIndex, coefficients: Coefficients, samples: number, cutoff: number): ModelComponents {
+export function modelComponents(tones: readonly CaptureTone[], index: InputIndex, coefficients: Coefficients, samples: number, cutoff: number, cores: { readonly mismatch: CoreMismatch; readonly rate: number } | null = null): ModelComponents {
+  const mismatch = cores?.mismatch ?? null;
   const amplitudes = index.inputs.map((i) => tones[i]!.amplitude);
-  const list = enumerateProducts(coefficients, amplitudes, cutoff);
+  // Images are at most a factor below their source: search the products down to that much lower, keep the images above the cutoff.
+  const factor = mismatch ? Math.max(1e-30, ...tones.filter((t) => t.input).map((t) => mismatch.imageFactor(t.frequency * (coefficients.length - 1)))) : 1;
+  const list = enumerateProducts(coefficients, amplitudes, mismatch ? Math.min(cutoff, cutoff / factor) : cutoff);
   const products = list.products.map((p) => {
     const cycles = p.net.reduce((sum, n, i) => sum + n * tones[index.inputs[i]!]!.cycles, 0);
     const single = p.order === 1 ? index.inputs[p.net.findIndex((n) => n !== 0)]! : -1;
@@ -54,5 +70,17 @@ export function modelComponents(tones: readonly CaptureTone[], index: InputIndex
     };
   });
   const added = tones.flatMap((t, i) => (t.input ? [] : [{ key: `t:${i}`, name: t.label, order: 1, bin: foldCycles(t.cycles, samples), amplitude: t.amplitude, wanted: false }]));
-  return { components: [...products, ...added], complete: list.complete };
+  const images: ModelComponent[] = [];
+  if (mismatch) {
+    const rate = cores!.rate;
+    list.products.forEach((p, j) => {
+      const cycles = p.net.reduce((sum, n, i) => sum + n * tones[index.inputs[i]!]!.cycles, 0);
+      const amplitude = p.amplitude * mismatch.imageFactor((cycles * rate) / samples);
+      if (amplitude < cutoff) return;
+      for (let k = 1; k < mismatch.ways; k++) {
+        images.push({ key: imageKey(k, p.net), name: `IL ${k}/${mismatch.ways} + (${products[j]!.name})`, order: p.order, bin: foldCycles(Math.round((k * samples) / mismatch.ways) + cycles, samples), amplitude, wanted: false });
+      }
+    });
+  }
+  return { components: [...products.filter((p) => p.amplitude >= cutoff), ...added, ...images], complete: list.complete };
 }

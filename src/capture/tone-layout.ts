@@ -24,6 +24,8 @@ export interface ComponentTemplate {
   readonly tone: number | null;
   /** A line of the plan or a wanted tone (true), or another product of the model (false). */
   readonly watched: boolean;
+  /** Whole cycles added to the product (an interleaving image at k/M·R + f: round(k·N/M)); absent: none. */
+  readonly offset?: number;
 }
 
 /**
@@ -49,12 +51,11 @@ export function chooseLayout(scenario: Scenario, record: CaptureRecord, componen
   const cycles = base.map((t) => t.cycles);
   const range = (low: number, high: number, first: number) => ({ least: Math.ceil((low * samples) / rate) - first, most: Math.floor((high * samples) / rate) - first });
   const layout = { wanted: wantedNominals(scenario.wanted, record.wantedTones).map(() => 0), neighbours: scenario.neighbours.map(() => 0) };
-  // Each movable tone, the tones that move with it (its interleaving images), and how far it may go.
+  // Each movable tone and how far it may go.
   const movable = base.flatMap((t, i) => {
     const source = t.source;
     if (source.kind === 'wanted') {
-      const followers = base.flatMap((u, j) => (u.source.kind === 'interleave image' && u.source.wanted === source.index ? [j] : []));
-      return [{ offsets: layout.wanted, slot: source.index, tones: [i, ...followers], allowed: range(scenario.wanted.low, scenario.wanted.high, t.cycles) }];
+      return [{ offsets: layout.wanted, slot: source.index, tones: [i], allowed: range(scenario.wanted.low, scenario.wanted.high, t.cycles) }];
     }
     if (source.kind === 'neighbour') {
       const n = scenario.neighbours[source.index]!;
@@ -96,7 +97,7 @@ export function chooseLayout(scenario: Scenario, record: CaptureRecord, componen
  */
 export function crowding(components: readonly ComponentTemplate[], cycles: readonly number[], inputs: readonly number[], samples: number): number {
   const placed = components.map((c) => {
-    const total = c.net === null ? cycles[c.tone!]! : c.net.reduce((sum, n, i) => (n === 0 ? sum : sum + n * cycles[inputs[i]!]!), 0);
+    const total = c.net === null ? cycles[c.tone!]! : c.net.reduce((sum, n, i) => (n === 0 ? sum : sum + n * cycles[inputs[i]!]!), c.offset ?? 0);
     const bin = foldCycles(total, samples);
     return { bin, watched: c.watched, atEdge: c.net === null && (bin === 0 || bin === samples / 2) };
   });

@@ -25,11 +25,12 @@ export function spurHarmonicLevel(spur: BoardSpur, h: number): number {
  * each extent; an after-filter spur is not.
  *
  * @param spur one board spur
+ * @param index its place among the scenario's board spurs
  * @param scenario the validated scenario (filter)
  * @returns drafts labelled `<label>`, `<label> H2`, ...
- * @example boardSpurDrafts({ label: 'REF 10M', low: hz(10e6), high: hz(10e6), level: db(-30), coupling: 'after-filter', harmonics: 2 }, s) // REF 10M, REF 10M H2
+ * @example boardSpurDrafts({ label: 'REF 10M', low: hz(10e6), high: hz(10e6), level: db(-30), coupling: 'after-filter', harmonics: 2, margin: null }, 0, s) // REF 10M, REF 10M H2
  */
-export function boardSpurDrafts(spur: BoardSpur, scenario: Scenario): InterfererDraft[] {
+export function boardSpurDrafts(spur: BoardSpur, index: number, scenario: Scenario): InterfererDraft[] {
   const drafts: InterfererDraft[] = [];
   for (let h = 1; h <= Math.max(1, spur.harmonics); h++) {
     const extent = scaled(h, spur);
@@ -47,6 +48,8 @@ export function boardSpurDrafts(spur: BoardSpur, scenario: Scenario): Interferer
       shiftMultiple: 0, // on the board, not converted by the LO
       ...extent,
       level: level(before - loss),
+      mixing: [{ signal: 'board spur', index, harmonic: h, plus: 1, minus: 0 }],
+      ownMargin: spur.margin ?? null,
     });
   }
   return drafts;

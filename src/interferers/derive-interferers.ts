@@ -1,22 +1,106 @@
+import type { Db } from '../units/quantities.js';
 import type { Scenario } from '../scenario/scenario.js';
-import type { Interferer } from '../solve/interferer.js';
+import type { Interferer } from './interferer.js';
 import { boardSpurDrafts } from './board-spurs.js';
+import { orderLaw } from './converter-law.js';
 import { converterSpurDrafts } from './converter-spurs.js';
-import { complete } from './interferer-draft.js';
-import { intermodDrafts } from './intermodulation.js';
-import { neighbourDrafts } from './neighbours.js';
-import { secondOrderDrafts } from './second-order.js';
+import { inputSignals } from './input-signals.js';
+import { complete, type InterfererDraft } from './interferer-draft.js';
+import { interleaveImages } from './interleave-images.js';
+import { levelThreshold } from './level-threshold.js';
+import { mixingProducts } from './mixing-products.js';
+import { neighbourDraft } from './neighbours.js';
 import { uniqueLabels } from './unique-labels.js';
-import { wantedHarmonics } from './wanted-harmonics.js';
+
+/** The mixing order when a scenario states none. */
+export const DEFAULT_MAX_ORDER = 3;
+
+/** How the interferer list was made, for the report: what was generated and what was left out. */
+export interface DerivationSummary {
+  /** Highest total order of the mixing products generated. */
+  readonly maxOrder: number;
+  /** Highest harmonic order of each signal. */
+  readonly harmonicOrder: number;
+  /** Mixing products and harmonics listed (above the threshold). */
+  readonly products: number;
+  /** Products at or below the threshold, left out; most never enumerated. */
+  readonly pruned: number;
+  /** The strongest product left out, dBFS; null when none was. */
+  readonly strongestPruned: Db | null;
+  /** Products of the wanted band alone that fall back onto it (its own in-band distortion), not listed. */
+  readonly inBand: number;
+  /** Interleaving images at or below the threshold, left out. */
+  readonly prunedImages: number;
+  /** The level at or below which nothing blocks, dBFS. */
+  readonly threshold: Db;
+}
+
+/** The interferers of a scenario and how they were derived. */
+export interface DerivedInterferers {
+  readonly interferers: Interferer[];
+  readonly summary: DerivationSummary;
+}
 
 /**
- * Every interferer of a scenario, with its level at the converter: harmonics
- * of the wanted band, board spurs and their harmonics, neighbour bands and
- * their 2nd/3rd harmonics, third-order intermodulation, second-order
- * products (differences and sums of the bands), and the converter's
- * rate-tied spurs, in that order. Each carries the scenario's margin and is
- * blocking when its level is above levelThreshold(scenario). Labels are
- * unique (repeats suffixed ` #2`, ...).
+ * Every interferer of a scenario, with its level at the converter: board
+ * spurs and their harmonics, neighbour bands, every mixing product and
+ * harmonic of the signals at the converter input above the threshold
+ * (mixingProducts, orders 2..maxOrder and harmonics to harmonicOrder), the
+ * converter's rate-tied spurs, and the interleaving images of every input
+ * signal and every listed product, in that order. Each carries its required
+ * margin (its own, its kind's or the scenario's) and is blocking when its
+ * level is above levelThreshold(scenario). Labels are unique (repeats
+ * suffixed ` #2`, ...).
+ *
+ * @param scenario the validated scenario
+ * @returns the interferers (extents rateMultiple·r + [low, high] in Hz, levels in dBFS) and the summary
+ * @throws RangeError for a malformed filter (see leastAttenuation)
+ * @example deriveInterfererList(s).summary.pruned // products left out below the threshold
+ */
+export function deriveInterfererList(scenario: Scenario): DerivedInterferers {
+  const threshold = levelThreshold(scenario);
+  const signals = inputSignals(scenario);
+  const reference = scenario.wanted.strongestLevel;
+  const products = mixingProducts({
+    signals,
+    law: (order) => orderLaw(scenario.converter, order, reference),
+    maxOrder: scenario.maxOrder ?? DEFAULT_MAX_ORDER,
+    harmonicOrder: scenario.harmonicOrder,
+    threshold,
+  });
+  const spurs = scenario.boardSpurs.flatMap((spur, i) => boardSpurDrafts(spur, i, scenario));
+  const neighbours = scenario.neighbours.map((n, i) => neighbourDraft(n, i, scenario));
+  const wanted: InterfererDraft = {
+    label: 'wanted',
+    kind: 'neighbour',
+    order: null,
+    source: 'the wanted band',
+    rateMultiple: 0,
+    shiftMultiple: 1,
+    low: scenario.wanted.low,
+    high: scenario.wanted.high,
+    level: scenario.wanted.strongestLevel,
+    mixing: [{ signal: 'wanted', index: 0, harmonic: 1, plus: 1, minus: 0 }],
+  };
+  const images = interleaveImages([wanted, ...spurs, ...neighbours, ...products.drafts], scenario);
+  const drafts = [...spurs, ...neighbours, ...products.drafts, ...converterSpurDrafts(scenario), ...images.drafts];
+  return {
+    interferers: uniqueLabels(drafts).map((draft) => complete(draft, scenario)),
+    summary: {
+      maxOrder: scenario.maxOrder ?? DEFAULT_MAX_ORDER,
+      harmonicOrder: scenario.harmonicOrder,
+      products: products.drafts.length,
+      pruned: products.pruned,
+      strongestPruned: products.strongestPruned,
+      inBand: products.inBand,
+      prunedImages: images.pruned,
+      threshold,
+    },
+  };
+}
+
+/**
+ * The interferers of deriveInterfererList, without the summary.
  *
  * @param scenario the validated scenario
  * @returns interferers, extents rateMultiple·r + [low, high] in Hz, levels in dBFS
@@ -24,13 +108,5 @@ import { wantedHarmonics } from './wanted-harmonics.js';
  * @example deriveInterferers(s).find((i) => i.label === 'H2 wanted') // 2·[low, high], strongestLevel + HD2
  */
 export function deriveInterferers(scenario: Scenario): Interferer[] {
-  const drafts = [
-    ...wantedHarmonics(scenario),
-    ...scenario.boardSpurs.flatMap((spur) => boardSpurDrafts(spur, scenario)),
-    ...scenario.neighbours.flatMap((n) => neighbourDrafts(n, scenario)),
-    ...intermodDrafts(scenario),
-    ...secondOrderDrafts(scenario),
-    ...converterSpurDrafts(scenario),
-  ];
-  return uniqueLabels(drafts).map((draft) => complete(draft, scenario));
+  return deriveInterfererList(scenario).interferers;
 }

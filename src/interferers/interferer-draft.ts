@@ -1,13 +1,29 @@
 import type { Db, Hz } from '../units/quantities.js';
 import type { Scenario } from '../scenario/scenario.js';
-import type { Interferer } from '../solve/interferer.js';
+import type { Interferer } from './interferer.js';
 import { isBlocking } from './level-threshold.js';
 
-/** An interferer before the scenario-wide fields (margin, blocking) are filled in. */
-export type InterfererDraft = Omit<Interferer, 'requiredMargin' | 'blocking'>;
+/**
+ * An interferer before the scenario-wide fields (margin, blocking) are
+ * filled in; `ownMargin` carries a margin its signal states for itself.
+ */
+export type InterfererDraft = Omit<Interferer, 'requiredMargin' | 'blocking'> & { readonly ownMargin?: Hz | null };
 
 /**
- * Completes a draft with the scenario's required margin and its blocking flag.
+ * The margin an interferer must keep, Hz: its signal's own where stated,
+ * else its kind's (requirements.kindMargins), else the scenario's.
+ *
+ * @param draft the draft (kind, ownMargin)
+ * @param scenario the validated scenario
+ * @returns Hz
+ * @example requiredMarginOf({ kind: 'neighbour', ownMargin: hz(0), … }, s) // 0
+ */
+export function requiredMarginOf(draft: InterfererDraft, scenario: Scenario): Hz {
+  return draft.ownMargin ?? scenario.requirements.kindMargins?.[draft.kind] ?? scenario.requirements.margin;
+}
+
+/**
+ * Completes a draft with its required margin (requiredMarginOf) and its blocking flag.
  *
  * @param draft label, kind, order, source, extent (Hz) and level (dBFS)
  * @param scenario the validated scenario
@@ -15,7 +31,8 @@ export type InterfererDraft = Omit<Interferer, 'requiredMargin' | 'blocking'>;
  * @example complete({ label: 'DC', kind: 'converter', order: null, source: '…', rateMultiple: 0, shiftMultiple: 0, low: hz(0), high: hz(0), level: db(-80) }, s)
  */
 export function complete(draft: InterfererDraft, scenario: Scenario): Interferer {
-  return { ...draft, requiredMargin: scenario.requirements.margin, blocking: isBlocking(draft.level, scenario) };
+  const { ownMargin: _own, ...rest } = draft;
+  return { ...rest, requiredMargin: requiredMarginOf(draft, scenario), blocking: isBlocking(draft.level, scenario) };
 }
 
 /** A fixed extent k·[low, high] for k ≥ 0, Hz. */

@@ -1,9 +1,8 @@
 import type { Db } from '../units/quantities.js';
 import type { Neighbour, Scenario } from '../scenario/scenario.js';
 import { leastAttenuation } from '../filter/filter-attenuation.js';
-import { harmonicFigure } from './harmonic-figure.js';
-import { level, scaled, type InterfererDraft } from './interferer-draft.js';
-import { dbText, ordinal } from './words.js';
+import { level, type InterfererDraft } from './interferer-draft.js';
+import { dbText } from './words.js';
 
 /**
  * A neighbour's level at the converter, dBFS: its level at the filter input
@@ -19,66 +18,29 @@ export function neighbourLevel(neighbour: Neighbour, scenario: Scenario): Db {
 }
 
 /**
- * Level of the k-th harmonic the converter makes of a signal at level L, dBFS.
- *
- * Derivation: in a memoryless polynomial y = Σ a_n·x^n, a tone of amplitude A
- * makes a k-th harmonic of amplitude ≈ (a_k/2^(k−1))·A^k (leading term). In
- * dB its level is k·L + c_k, so its dBc (level − L) is (k−1)·L + c_k: it
- * grows (k−1) dB per dB of input. Knowing HDk dBc at Lref = strongestLevel
- * fixes c_k, so dBc at L is HDk + (k−1)·(L − Lref) and the level is
- * L + HDk + (k−1)·(L − Lref). At L = Lref this is Lref + HDk, the wanted
- * band's own harmonic.
- *
- * @param inputLevel L, dBFS at the converter
- * @param figureDbc HDk, dBc at the reference level
- * @param referenceLevel Lref, dBFS (the strongest wanted level)
- * @param order k ≥ 2
- * @returns dBFS
- * @example converterHarmonicLevel(-21, -70, -1, 2) // −111 (20 dB lower input: H2 dBc 20 dB better)
- */
-export function converterHarmonicLevel(inputLevel: number, figureDbc: number, referenceLevel: number, order: number): Db {
-  return level(inputLevel + figureDbc + (order - 1) * (inputLevel - referenceLevel));
-}
-
-/**
- * A neighbour band at its post-filter level, and its 2nd and 3rd harmonics
- * (orders up to harmonicOrder) made in the converter from that level. The
- * harmonics are skipped when the converter states no harmonic figure.
+ * A neighbour band at its post-filter level (its harmonics and its mixing
+ * with other signals come from mixingProducts), with its own required
+ * margin when it states one.
  *
  * @param neighbour one neighbour band
+ * @param index its place among the scenario's neighbours
  * @param scenario the validated scenario
- * @returns drafts labelled `<label>`, `<label> H2`, `<label> H3`
- * @example neighbourDrafts(adjUp, s).map((d) => d.label) // ['ADJ-UP', 'ADJ-UP H2', 'ADJ-UP H3']
+ * @returns the draft labelled `<label>`
+ * @example neighbourDraft(adjUp, 0, s).level // 10 − 30.10 with a 5th-order 30–80 MHz Butterworth
  */
-export function neighbourDrafts(neighbour: Neighbour, scenario: Scenario): InterfererDraft[] {
+export function neighbourDraft(neighbour: Neighbour, index: number, scenario: Scenario): InterfererDraft {
   const loss = leastAttenuation(scenario.filter, neighbour.low, neighbour.high);
-  const atConverter = neighbourLevel(neighbour, scenario);
-  const drafts: InterfererDraft[] = [
-    {
-      label: neighbour.label,
-      kind: 'neighbour',
-      order: null,
-      source: `neighbour band ${neighbour.label} at ${dbText(neighbour.level, 'dBFS')} before the filter, ${dbText(loss, 'dB')} least filter attenuation`,
-      rateMultiple: 0,
-      shiftMultiple: 1, // converted by the same LO as the wanted band
-      low: neighbour.low,
-      high: neighbour.high,
-      level: atConverter,
-    },
-  ];
-  for (let k = 2; k <= Math.min(3, scenario.harmonicOrder); k++) {
-    const figure = harmonicFigure(scenario.converter, k);
-    if (figure === null) break;
-    drafts.push({
-      label: `${neighbour.label} H${k}`,
-      kind: 'harmonic',
-      order: k,
-      source: `${ordinal(k)} harmonic of neighbour ${neighbour.label}, made in the converter (${figure.note} at ${dbText(scenario.wanted.strongestLevel, 'dBFS')}, scaled to the neighbour's level)`,
-      rateMultiple: 0,
-      shiftMultiple: k,
-      ...scaled(k, neighbour),
-      level: converterHarmonicLevel(atConverter, figure.dbc, scenario.wanted.strongestLevel, k),
-    });
-  }
-  return drafts;
+  return {
+    label: neighbour.label,
+    kind: 'neighbour',
+    order: null,
+    source: `neighbour band ${neighbour.label} at ${dbText(neighbour.level, 'dBFS')} before the filter, ${dbText(loss, 'dB')} least filter attenuation`,
+    rateMultiple: 0,
+    shiftMultiple: 1, // converted by the same LO as the wanted band
+    low: neighbour.low,
+    high: neighbour.high,
+    level: neighbourLevel(neighbour, scenario),
+    mixing: [{ signal: 'neighbour', index, harmonic: 1, plus: 1, minus: 0 }],
+    ownMargin: neighbour.margin ?? null,
+  };
 }

@@ -10,6 +10,7 @@ const MOST_CHECKS_SHOWN = 30;
 
 /** The solved plan as text for people: windows, feasible set, candidates, the best one's checks and, with ifShift, the best (IF shift, rate) pair. */
 export function planTable(report: PlanReport): string {
+  if (report.conflicts.length > 0) return [heading(report), conflictsSection(report), report.caution].join('\n\n') + '\n';
   const sections = [heading(report), windowsSection(report), feasibleSection(report), candidatesSection(report)];
   const focus = report.candidates[0];
   if (focus) sections.push(checksSection(focus));
@@ -27,7 +28,18 @@ function heading(report: PlanReport): string {
     `Wanted band ${range(band.low, band.high)} (width ${formatFrequency(band.high - band.low)}), guards ${formatFrequency(guard.low)} below and ${formatFrequency(guard.high)} above.`,
     `Rates searched ${range(search.minRate, search.maxRate)}; goal: ${goalText(report)}.`,
     `${report.interferers.length} interferers derived, ${blocking} strong enough to block.`,
+    ...(report.derivation ? [derivationText(report.derivation)] : []),
   ].join('\n');
+}
+
+function derivationText(d: NonNullable<PlanReport['derivation']>): string {
+  const strongest = d.strongestPruned === null ? '' : ` (the strongest at ${trimmed(d.strongestPruned, 4)} dBFS)`;
+  const images = d.prunedImages > 0 ? `; ${d.prunedImages} interleaving images under it left out` : '';
+  return `Mixing products to order ${d.maxOrder} (harmonics to ${Math.max(d.maxOrder, d.harmonicOrder)}): ${d.products} listed, ${d.pruned} at or under the threshold ${trimmed(d.threshold, 4)} dBFS left out${strongest}${images}.`;
+}
+
+function conflictsSection(report: PlanReport): string {
+  return 'No sampling rate can work:\n' + report.conflicts.map((c) => `- ${c.sentence}`).join('\n');
 }
 
 function goalText(report: PlanReport): string {

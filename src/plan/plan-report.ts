@@ -2,7 +2,7 @@ import { hz, ppm, type Db, type Hz, type Ppm } from '../units/quantities.js';
 import type { Band, Guard } from '../math/band.js';
 import { extentMagnitude } from '../math/fold-extent.js';
 import type { Goal } from '../scenario/scenario.js';
-import type { Interferer } from '../solve/interferer.js';
+import type { Interferer } from '../interferers/interferer.js';
 import type { PlanContext } from '../solve/plan-context.js';
 import type { Candidate, PlanResult } from './solve-plan.js';
 import type { CheckResult, RateEvaluation } from '../solve/evaluate-rate.js';
@@ -10,6 +10,8 @@ import type { ShiftSearch } from '../solve/if-shift/best-shift-and-rate.js';
 import { PAPER_DESIGN_CAUTION } from './caution.js';
 import { shiftReport, type ShiftReport } from './shift-report.js';
 import { afterRate, channelSnrWithDriver, type AfterRate, type AfterRateInputs } from '../after-rate/after-rate.js';
+import { unfixableConflicts, type Conflict } from '../solve/unfixable-conflicts.js';
+import type { DerivationSummary } from '../interferers/derive-interferers.js';
 
 /** An interferer as reported: the solver's own record (extent rateMultiple·r + shiftMultiple·δ + [low, high], level, blocking). */
 export type ReportedInterferer = Interferer;
@@ -86,6 +88,10 @@ export interface PlanReport {
   readonly ifShift: ShiftReport | null;
   /** What the after-rate figures of the candidates were computed from (the filter, the input bandwidth, the settings); null when they were not. */
   readonly afterRateInputs: AfterRateInputs | null;
+  /** Blocking interferers no sampling rate can clear (closer to the band where they sit still than their margin), each with a sentence naming what can; empty when none. */
+  readonly conflicts: readonly Conflict[];
+  /** How the interferers were derived: mixing products listed and left out below the threshold; null for a plan built by hand. */
+  readonly derivation: DerivationSummary | null;
   readonly caution: string;
 }
 
@@ -121,6 +127,8 @@ export function planReport(name: string, context: PlanContext, result: PlanResul
     unplannedParts: result.unplannedParts,
     ifShift: shift ? shiftReport(context.band, shift) : null,
     afterRateInputs: after,
+    conflicts: unfixableConflicts(context),
+    derivation: context.derivation ?? null,
     caution: PAPER_DESIGN_CAUTION,
   };
 }

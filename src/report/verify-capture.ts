@@ -13,14 +13,15 @@ import { checkFamily, type LineFamily } from '../capture/check-families.js';
 import { applyPolynomial } from '../capture/converter-polynomial.js';
 import { converterCoefficients } from '../capture/converter-model.js';
 import { familyLines, inputIndex } from '../capture/family-lines.js';
+import { applyCoreGains, coreMismatch, type CoreMismatch } from '../capture/interleave-mismatch.js';
 import { FIND_ABOVE_FLOOR, judgeLine, SEARCH_BINS, type Measurement } from './judge-line.js';
 import { enumerateProducts, orderSupremums, productAmplitude, productBound } from '../capture/mixing-products.js';
 import { expectedNoiseLevel } from '../capture/noise-level.js';
-import { modelComponents, type ModelComponent } from '../capture/model-components.js';
+import { imageKey, modelComponents, type ModelComponent } from '../capture/model-components.js';
 import { quantise } from '../capture/quantiser.js';
 import { seededUniform } from '../capture/seeded-random.js';
 import { findPeaks, levelSpectrum } from '../capture/capture-spectrum.js';
-import { addTones, phaseTable } from '../capture/tone-synthesis.js';
+import { addSkewedTones, addTones, phaseTable } from '../capture/tone-synthesis.js';
 import { chooseLayout, type ComponentTemplate } from '../capture/tone-layout.js';
 import { blackmanHarris } from '../capture/window.js';
 import { CONTRADICTING, type PeakRow, type PredictionRow, type ToneRow, type UnderFloor, type VerifyResult } from './verify-result.js';
@@ -94,7 +95,7 @@ export function verifyCaptureWithSpectrum(scenario: Scenario, settings: CaptureS
   const { rate } = settings;
   const record: CaptureRecord = { rate, samples, wantedTones };
   const binWidth = rate / samples;
-  const ways = scenario.converter.interleave?.ways ?? null;
+  const mismatch = scenario.converter.interleave ? coreMismatch(scenario.converter.interleave) : null;
 
   // The plan as written, and re-derived at the frequencies the record can hold.
   const plan = planAtRate(scenario, rate, ppm(0));
@@ -103,17 +104,20 @@ export function verifyCaptureWithSpectrum(scenario: Scenario, settings: CaptureS
   const checks = evaluateRate(movedContext, rate, ppm(0)).checks;
   const claimed = new Set<number>();
   const firstTones = captureTones(scenario, record, { wanted: [], neighbours: [] });
-  const families = movedContext.interferers.map((i) => checkFamily(i, moved, firstTones, samples, claimed));
+  const families = movedContext.interferers.map((i) => checkFamily(i, firstTones, samples, claimed));
   const coefficients = converterCoefficients(scenario);
   const window = blackmanHarris(samples);
   const expectedNoise = expectedNoiseLevel(scenario.converter.bits, samples, window.noiseBandwidthBins, true);
-  const tones = captureTones(scenario, record, chooseLayout(scenario, record, layoutComponents(firstTones, families, coefficients, ways, expectedNoise)));
+  const tones = captureTones(scenario, record, chooseLayout(scenario, record, layoutComponents(firstTones, families, coefficients, mismatch, record, expectedNoise)));
 
   // The capture.
   const capture = new Float64Array(samples);
   const table = phaseTable(samples);
-  addTones(capture, tones.filter((t) => t.input), table);
+  // The input signals, sampled by M cores at their own instants (a timing mismatch), through the polynomial, each core at its own gain.
+  if (mismatch && mismatch.skews.some((tau) => tau !== 0)) addSkewedTones(capture, tones.filter((t) => t.input), rate, mismatch.skews, table);
+  else addTones(capture, tones.filter((t) => t.input), table);
   applyPolynomial(capture, coefficients);
+  if (mismatch) applyCoreGains(capture, mismatch.gains);
   const clippedSamples = quantise(capture, scenario.converter.bits, seededUniform(DITHER_SEED));
   addTones(capture, tones.filter((t) => !t.input), table);
   const spectrum = levelSpectrum(capture, window);
@@ -123,7 +127,7 @@ export function verifyCaptureWithSpectrum(scenario: Scenario, settings: CaptureS
   // The model's components, and each line of the plan judged.
   const index = inputIndex(tones);
   const amplitudes = index.inputs.map((i) => tones[i]!.amplitude);
-  const model = modelComponents(tones, index, coefficients, samples, 10 ** (Math.max(spectrum.medianLevel - CUTOFF_BELOW_MEDIAN, -240) / 20));
+  const model = modelComponents(tones, index, coefficients, samples, 10 ** (Math.max(spectrum.medianLevel - CUTOFF_BELOW_MEDIAN, -240) / 20), mismatch ? { mismatch, rate } : null);
   const components = model.components;
   const threshold = levelThreshold(scenario);
   const edgeKeys = new Set(tones.flatMap((t, i) => (!t.input && (t.cycles === 0 || foldCycles(t.cycles, samples) === samples / 2) ? [`t:${i}`] : [])));
@@ -137,16 +141,18 @@ export function verifyCaptureWithSpectrum(scenario: Scenario, settings: CaptureS
   checks.forEach((check, i) => {
     const interferer = movedContext.interferers[i]!;
     const family = families[i]!;
-    const lines = familyLines(family, tones, index, ways);
-    // With one wanted tone the band's own differences make no line (a tone less itself is DC): simulated, and nothing to see.
-    const noDifference = family.kind === 'second order' && family.first === 'wanted' && family.second === 'wanted' && wantedTones === 1;
-    if (lines.length === 0 && !noDifference) notSimulated.push(check.label);
+    const lines = familyLines(family, tones, index, samples);
+    // A family whose every product is DC (the band's own differences with one wanted tone: a tone less itself) is simulated, with nothing to see.
+    const simulated = family.kind === 'mixing' || family.kind === 'interleave image';
+    if (lines.length === 0 && !simulated) notSimulated.push(check.label);
     let under = { lines: 0, strongest: -Infinity };
-    const exact = (net: readonly number[]) => Math.abs(productAmplitude(coefficients, amplitudes, net));
     for (const line of lines) {
       lineKeys.add(line.component);
+      // An image is its source product times the image factor at the source's frequency.
+      const factor = line.sourceCycles === undefined || !mismatch ? 1 : mismatch.imageFactor((line.sourceCycles * rate) / samples);
+      const exact = (net: readonly number[]) => factor * Math.abs(productAmplitude(coefficients, amplitudes, net));
       // The cheap bound first: most products of many tones at high orders are far under the floor.
-      const amplitude = line.net === null ? tones[line.tone!]!.amplitude : productBound(bounds, amplitudes, line.net) < lookedFor ? null : exact(line.net);
+      const amplitude = line.net === null ? tones[line.tone!]!.amplitude : factor * productBound(bounds, amplitudes, line.net) < lookedFor ? null : exact(line.net);
       if (amplitude === null || amplitude < lookedFor) {
         const strongest = lines.length <= UNDER_FLOOR_EXACT ? 20 * Math.log10(amplitude ?? exact(line.net!)) : -Infinity;
         under = { lines: under.lines + 1, strongest: Math.max(under.strongest, strongest) };
@@ -154,7 +160,7 @@ export function verifyCaptureWithSpectrum(scenario: Scenario, settings: CaptureS
       }
       predictions.push(
         judgeLine(
-          { check, line, width: interferer.low === interferer.high ? 'tone' : 'band', basis: levelBasis(family, wantedTones), amplitude, samples, binWidth, bin: foldCycles(line.cycles, samples) },
+          { check, line, width: interferer.low === interferer.high ? 'tone' : 'band', basis: levelBasis(family, wantedTones, mismatch), amplitude, samples, binWidth, bin: foldCycles(line.cycles, samples) },
           measurement,
         ),
       );
@@ -227,16 +233,18 @@ export function verifyCaptureWithSpectrum(scenario: Scenario, settings: CaptureS
  * (watched), and the model's products strong enough to show (above the
  * expected mean noise), which must not land on a watched line.
  */
-function layoutComponents(tones: readonly CaptureTone[], families: readonly LineFamily[], coefficients: readonly number[], ways: number | null, noiseLevel: number): ComponentTemplate[] {
+function layoutComponents(tones: readonly CaptureTone[], families: readonly LineFamily[], coefficients: readonly number[], mismatch: CoreMismatch | null, record: CaptureRecord, noiseLevel: number): ComponentTemplate[] {
+  const { samples, rate } = record;
   const index = inputIndex(tones);
   const watched = new Map<string, ComponentTemplate>();
   const amplitudes = index.inputs.map((i) => tones[i]!.amplitude);
   const bounds = orderSupremums(coefficients, amplitudes.reduce((sum, a) => sum + a, 0));
   const visible = 10 ** (noiseLevel / 20);
+  const factorOf = (line: { sourceCycles?: number }) => (line.sourceCycles === undefined || !mismatch ? 1 : mismatch.imageFactor((line.sourceCycles * rate) / samples));
   for (const family of families) {
-    for (const line of familyLines(family, tones, index, ways)) {
-      if (line.net !== null && productBound(bounds, amplitudes, line.net) < visible) continue; // under the noise: its place does not matter
-      watched.set(line.component, { key: line.component, net: line.net, tone: line.tone, watched: true });
+    for (const line of familyLines(family, tones, index, samples)) {
+      if (line.net !== null && factorOf(line) * productBound(bounds, amplitudes, line.net) < visible) continue; // under the noise: its place does not matter
+      watched.set(line.component, { key: line.component, net: line.net, tone: line.tone, watched: true, ...(line.offset === undefined ? {} : { offset: line.offset }) });
     }
   }
   index.inputs.forEach((tone, p) => {
@@ -244,17 +252,30 @@ function layoutComponents(tones: readonly CaptureTone[], families: readonly Line
     const net = index.inputs.map((_, q) => (q === p ? 1 : 0));
     watched.set(`n:${net.join(',')}`, { key: `n:${net.join(',')}`, net, tone: null, watched: true });
   });
-  const others = enumerateProducts(coefficients, amplitudes, visible)
-    .products.map((p) => ({ key: `n:${p.net.join(',')}`, net: p.net, tone: null, watched: false }))
-    .filter((c) => !watched.has(c.key));
-  return [...watched.values(), ...others];
+  const products = enumerateProducts(coefficients, amplitudes, visible).products;
+  const others: ComponentTemplate[] = products.map((p) => ({ key: `n:${p.net.join(',')}`, net: p.net, tone: null, watched: false }));
+  if (mismatch) {
+    for (const p of products) {
+      const cycles = p.net.reduce((sum, n, i) => sum + n * tones[index.inputs[i]!]!.cycles, 0);
+      if (p.amplitude * mismatch.imageFactor((cycles * rate) / samples) < visible) continue;
+      for (let k = 1; k < mismatch.ways; k++) others.push({ key: imageKey(k, p.net), net: p.net, tone: null, watched: false, offset: Math.round((k * samples) / mismatch.ways) });
+    }
+  }
+  return [...watched.values(), ...others.filter((c) => !watched.has(c.key))];
 }
 
 /** `plan` where the plan's level is the level the capture puts there; `bound` where it is a band's worst case or an extrapolation. */
-function levelBasis(family: LineFamily, wantedTones: number): 'plan' | 'bound' {
+function levelBasis(family: LineFamily, wantedTones: number, mismatch: CoreMismatch | null): 'plan' | 'bound' {
   if (family.kind === 'tone') return 'plan';
-  if ((family.kind === 'wanted harmonic' || family.kind === 'interleave image') && wantedTones === 1) return 'plan';
-  return 'bound';
+  if (family.kind !== 'mixing' && family.kind !== 'interleave image') return 'bound';
+  const [only, ...more] = family.terms;
+  if (only === undefined || more.length > 0 || only.minus > 0) return 'bound';
+  // What the capture puts there: a tone source itself, and with one wanted tone the band's harmonics (quoted at its strongest level).
+  const capturedAsPlanned = only.signal === 'wanted' ? wantedTones === 1 : only.plus === 1;
+  if (family.kind === 'mixing') return capturedAsPlanned ? 'plan' : 'bound';
+  // An image under a timing skew is quoted at a band's highest frequency: a bound unless the source is one tone.
+  const flat = mismatch === null || mismatch.skews.every((tau) => tau === 0);
+  return capturedAsPlanned && only.plus === 1 && (flat || only.signal !== 'wanted') ? 'plan' : 'bound';
 }
 
 /** The plan's line measured on a bin, in words, or 'not named'. */

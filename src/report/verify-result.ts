@@ -1,5 +1,5 @@
 import type { Db, Hz } from '../units/quantities.js';
-import type { InterfererKind } from '../solve/interferer.js';
+import type { InterfererKind } from '../interferers/interferer.js';
 
 /**
  * The result of `ifzone verify`: a simulated capture set beside the plan at

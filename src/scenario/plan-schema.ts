@@ -3,6 +3,7 @@ import { hz } from '../units/quantities.js';
 import type { Goal, Requirements, WantedBand } from './scenario.js';
 import { bandFromForm, EDGES_OR_CENTRE, refuseAt } from './band-forms.js';
 import { decibels, frequency, guardWidth, levelAtMostFullScale, oneFormOf, positiveFrequency, tolerance, type GuardWidth } from './scenario-fields.js';
+import { kindMarginsSchema } from './interferer-model-schema.js';
 
 /** The wanted IF band, by low/high or center/width, with its planning levels. */
 export const wantedSchema = z
@@ -48,9 +49,10 @@ export const requirementsSchema = z
     margin: frequency("Frequency margin to keep between a blocking interferer's alias and the wanted alias"),
     rejection: decibels('An interferer this many dB below the weakest wanted level may land anywhere', 'a rejection'),
     tolerancePpm: tolerance.meta({ description: 'Drift a solved rate (not a listed clock) must survive, ±ppm (default 50)' }).prefault(50),
+    kindMargins: kindMarginsSchema.optional(),
   })
   .meta({ description: 'What a frequency plan must keep' })
-  .transform((written): Requirements => written);
+  .transform(({ kindMargins, ...written }): Requirements => (kindMargins ? { ...written, kindMargins } : written));
 
 const GOAL_KINDS = ['widest-margin', 'lowest-rate', 'quarter-rate'] as const;
 

@@ -12,6 +12,7 @@ import { boardSpurSchema, neighbourSchema } from './signals-schema.js';
 import { clockPartSchema } from './clock-part-schema.js';
 import { ifShiftSchema } from './if-shift-schema.js';
 import { afterRateFileFields, afterRateSettings } from './after-rate-schema.js';
+import { maxOrderSchema } from './interferer-model-schema.js';
 
 // A command reads one scenario or a few: zod's compiled fast path for objects
 // costs more to build (about 5 ms at start-up) than it saves on a few parses.
@@ -44,7 +45,8 @@ export const scenarioFileSchema = z
     wanted: wantedSchema,
     guard: guardSchema.prefault(0),
     converter: converterSchema,
-    harmonicOrder: wholeNumber(2, 15, 'Highest harmonic order of the wanted band checked (default 5)').default(5),
+    harmonicOrder: wholeNumber(2, 15, 'Highest harmonic order checked of each signal at the converter input (default 5)').default(5),
+    maxOrder: maxOrderSchema,
     boardSpurs: z
       .array(boardSpurSchema)
       .max(MOST_BOARD_SPURS, { error: `a list of at most ${MOST_BOARD_SPURS} board spurs` })
@@ -96,6 +98,7 @@ export const scenarioFileSchema = z
       guard: { low: guardHz(file.guard.low, width), high: guardHz(file.guard.high, width) },
       converter,
       harmonicOrder: file.harmonicOrder,
+      maxOrder: file.maxOrder,
       boardSpurs: file.boardSpurs,
       neighbours: file.neighbours,
       filter: file.filter,

@@ -16,8 +16,10 @@ export interface Scenario {
   /** Guard bands for the anti-alias filter's transitions, Hz. */
   readonly guard: { readonly low: Hz; readonly high: Hz };
   readonly converter: Converter;
-  /** Highest harmonic order checked (wanted band, neighbours), ≥ 2. */
+  /** Highest harmonic order checked (every signal at the converter input), ≥ 2. */
   readonly harmonicOrder: number;
+  /** Highest total order of the mixing products generated among the signals at the converter input, ≥ 2 (default 3). */
+  readonly maxOrder?: number;
   readonly boardSpurs: readonly BoardSpur[];
   readonly neighbours: readonly Neighbour[];
   /** The analog anti-alias filter, or null when none is stated (no attenuation). */
@@ -71,10 +73,17 @@ export interface Converter {
   readonly bits: number;
   /** Harmonic levels by order (2, 3, ...), dBc at the strongest wanted level. */
   readonly harmonics: ReadonlyMap<number, Db>;
-  /** Third-order input intercept referred to full scale, dBFS; null: derived from the 3rd harmonic. */
+  /** Third-order input intercept referred to full scale, dBFS; null: derived from the 3rd harmonic (also in `intercepts` as order 3). */
   readonly intercept3: Db | null;
-  /** Rate-tied spurs, dBFS; null where not stated. */
-  readonly rateSpurs: { readonly dc: Db | null; readonly halfRate: Db | null; readonly quarterRate: Db | null };
+  /** Input intercepts by order referred to full scale, dBFS; an order not here follows its harmonic figure (absent: none but intercept3). */
+  readonly intercepts?: ReadonlyMap<number, Db>;
+  /** Rate-tied spurs, dBFS; null where not stated; `fractions` at any p/q of the rate. */
+  readonly rateSpurs: {
+    readonly dc: Db | null;
+    readonly halfRate: Db | null;
+    readonly quarterRate: Db | null;
+    readonly fractions?: readonly RateFractionSpur[];
+  };
   /** M-way interleaving, or null for a single core. */
   readonly interleave: Interleave | null;
   /** Aperture jitter, s rms (0 when not stated). */
@@ -88,8 +97,27 @@ export interface Interleave {
   readonly ways: number;
   /** Offset (gain-independent) spurs at k·rate/M, dBFS. */
   readonly offsetSpur: Db;
-  /** Images of the input at k·rate/M ± f, dBc. */
+  /** Images of the input at k·rate/M ± f, dBc (at imageReference when one is given). */
   readonly imageLevel: Db;
+  /** Input frequency imageLevel is quoted at, Hz: the image rises 20 dB per decade of input frequency (timing skew); null: flat (gain mismatch). */
+  readonly imageReference?: Hz | null;
+}
+
+/** A converter spur at numerator/denominator of the sample rate. */
+export interface RateFractionSpur {
+  readonly numerator: number;
+  readonly denominator: number;
+  /** dBFS. */
+  readonly level: Db;
+}
+
+/** Required margins by interferer kind, Hz; null: the scenario's margin. */
+export interface KindMargins {
+  readonly harmonic: Hz | null;
+  readonly intermod: Hz | null;
+  readonly neighbour: Hz | null;
+  readonly spur: Hz | null;
+  readonly converter: Hz | null;
 }
 
 /** Where a board spur enters: ahead of the anti-alias filter or past it. */
@@ -105,12 +133,16 @@ export interface BoardSpur {
   readonly coupling: Coupling;
   /** Highest harmonic order of the spur itself (1: the fundamental only). */
   readonly harmonics: number;
+  /** Its own required margin, Hz; null or absent: the kind's or the scenario's. */
+  readonly margin?: Hz | null;
 }
 
 export interface Neighbour extends Band {
   readonly label: string;
   /** Level at the filter's input, dBFS (referred to converter full scale). */
   readonly level: Db;
+  /** Its own required margin, Hz; null or absent: the kind's or the scenario's. */
+  readonly margin?: Hz | null;
 }
 
 export type AntiAliasFilter =
@@ -124,6 +156,8 @@ export interface Requirements {
   readonly rejection: Db;
   /** Drift a rate found by the solver (not a listed clock) must survive, ±ppm. */
   readonly tolerancePpm: Ppm;
+  /** Margins by interferer kind, overriding `margin` for that kind (absent: none). */
+  readonly kindMargins?: KindMargins;
 }
 
 /** A clock part: a crystal, an oscillator, or a reference feeding a synthesiser. */

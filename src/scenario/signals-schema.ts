@@ -2,6 +2,7 @@ import * as z from 'zod';
 import type { BoardSpur, Neighbour } from './scenario.js';
 import { bandFromForm, EDGES_OR_CENTRE, refuseAt, TONE_OR_EDGES } from './band-forms.js';
 import { frequency, label, level, oneFormOf, wholeNumber } from './scenario-fields.js';
+import { ownMarginSchema } from './interferer-model-schema.js';
 
 /** A fixed tone or band on the board: reference clock, LO leakage, regulator. */
 export const boardSpurSchema = z
@@ -16,6 +17,7 @@ export const boardSpurSchema = z
       .default('after-filter')
       .meta({ description: 'Where it enters: ahead of the anti-alias filter or past it (default)' }),
     harmonics: wholeNumber(1, 20, 'Highest harmonic order of the spur itself (1: the fundamental only)').default(1),
+    margin: ownMarginSchema,
   })
   .meta({ description: 'A spur from the board: a tone (frequency) or a band (low, high)', ...oneFormOf(TONE_OR_EDGES) })
   .transform((written, ctx): BoardSpur => {
@@ -25,7 +27,7 @@ export const boardSpurSchema = z
       refuseAt(ctx, ['level'], words, `${written.level} dBFS`, [['coupling']]);
     }
     if (!band) return z.NEVER;
-    return { label: written.label, ...band, level: written.level, coupling: written.coupling, harmonics: written.harmonics };
+    return { label: written.label, ...band, level: written.level, coupling: written.coupling, harmonics: written.harmonics, ...(written.margin === null ? {} : { margin: written.margin }) };
   });
 
 /** A neighbour channel or blocker: a band with its level at the filter's input. */
@@ -37,10 +39,11 @@ export const neighbourSchema = z
     center: frequency('Centre (with width)').nullable().optional(),
     width: frequency('Width (with center); 0 for a single tone').nullable().optional(),
     level: level("Level at the filter's input, dBFS (referred to converter full scale)"),
+    margin: ownMarginSchema,
   })
   .meta({ description: 'A neighbour channel or blocker, by low/high or center/width', ...oneFormOf(EDGES_OR_CENTRE) })
   .transform((written, ctx): Neighbour => {
     const band = bandFromForm(written, EDGES_OR_CENTRE, ctx, true);
     if (!band) return z.NEVER;
-    return { label: written.label, ...band, level: written.level };
+    return { label: written.label, ...band, level: written.level, ...(written.margin === null ? {} : { margin: written.margin }) };
   });

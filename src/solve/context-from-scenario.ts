@@ -1,21 +1,23 @@
 import type { Scenario } from '../scenario/scenario.js';
-import { deriveInterferers } from '../interferers/derive-interferers.js';
+import { deriveInterfererList } from '../interferers/derive-interferers.js';
 import { levelThreshold } from '../interferers/level-threshold.js';
 import type { PlanContext } from './plan-context.js';
 
 /**
  * The solver's view of a scenario: the wanted band, guards, the converter's
- * rate range, every derived interferer, the clock parts with the converter's
+ * rate range, every derived interferer (and how they were derived), the clock parts with the converter's
  * clocking (dividers, bits, aperture jitter) and the goal.
  *
  * @param scenario the validated scenario
  */
 export function contextFromScenario(scenario: Scenario): PlanContext {
+  const derived = deriveInterfererList(scenario);
   return {
     band: { low: scenario.wanted.low, high: scenario.wanted.high },
     guard: scenario.guard,
     limits: { minRate: scenario.converter.minRate, maxRate: scenario.converter.maxRate },
-    interferers: deriveInterferers(scenario),
+    interferers: derived.interferers,
+    derivation: derived.summary,
     levelThreshold: levelThreshold(scenario),
     clocks: scenario.clocks,
     clocking: {
@@ -25,5 +27,6 @@ export function contextFromScenario(scenario: Scenario): PlanContext {
     },
     goal: scenario.goal,
     tolerancePpm: scenario.requirements.tolerancePpm,
+    ifShift: scenario.ifShift,
   };
 }

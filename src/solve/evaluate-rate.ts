@@ -6,7 +6,7 @@ import { meetsOpen, type Interval } from '../math/interval-set.js';
 import { imageMargin, marginBreakpoints, nearbyImages, normalisedExtent } from './fold-images.js';
 import { forbiddenRates } from './forbidden-rates.js';
 import { guardedBand } from '../windows/enumerate-windows.js';
-import type { Interferer, InterfererKind } from './interferer.js';
+import type { Interferer, InterfererKind } from '../interferers/interferer.js';
 import type { PlanContext } from './plan-context.js';
 import { driftRange } from './drift.js';
 import { ZONE_EDGE } from './limited-by.js';
@@ -18,7 +18,7 @@ export interface CheckResult {
   readonly source: string;
   /** Aliased segments at the nominal rate, Hz, as [low, high] pairs. */
   readonly alias: ReadonlyArray<readonly [Hz, Hz]>;
-  /** Least frequency margin to the wanted alias over the drift range, Hz; negative: overlap width. */
+  /** Least signed frequency margin to the wanted alias over the drift range, Hz; negative when they overlap: minus the distance the interferer would have to move to clear the band (a tone inside: its distance to the nearer edge). */
   readonly margin: Hz;
   readonly requiredMargin: Hz;
   /** Level at the converter, dBFS. */

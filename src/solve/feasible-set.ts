@@ -4,7 +4,7 @@ import type { Band } from '../math/band.js';
 import { subtractOpen, type Interval } from '../math/interval-set.js';
 import type { RateWindow } from '../windows/rate-window.js';
 import { forbiddenRates } from './forbidden-rates.js';
-import type { Interferer } from './interferer.js';
+import type { Interferer } from '../interferers/interferer.js';
 
 /** A closed interval of rates where the band fits and nothing blocking lands near it. */
 export interface FeasibleInterval {

@@ -1,6 +1,6 @@
 import type { Band } from '../math/band.js';
 import type { Interval } from '../math/interval-set.js';
-import type { Interferer } from './interferer.js';
+import type { Interferer } from '../interferers/interferer.js';
 
 /**
  * One image of the wanted band among the input frequencies that alias onto
@@ -84,25 +84,27 @@ export function closeRates(extent: NormalisedExtent, band: Band, term: BandImage
 
 /**
  * Signed distance, Hz, between the extent and one image at rate r: the gap
- * when apart, minus the overlap's width when they overlap.
+ * when apart; when they overlap, minus the distance the extent would have to
+ * move to clear the image (the smaller of the two clearing shifts: a tone
+ * inside is its distance to the nearer edge). Both cases are one expression,
+ * max(imageLow − high, low − imageHigh) = |centre offset| − (sum of the half
+ * widths), so a deeper intrusion is always a more negative margin.
+ *
+ * @example imageMargin({ rateMultiple: 0, low: 72e6, high: 72e6 }, { low: 70e6, high: 80e6 }, { j: 0, side: 1, slope: 0 }, 100e6) // −2e6: 2 MHz inside
  */
 export function imageMargin(extent: NormalisedExtent, band: Band, term: BandImageTerm, rate: number): number {
   const image = imageOffsets(band, term.side);
   const shift = term.slope * rate;
-  const imageLow = shift + image.low;
-  const imageHigh = shift + image.high;
-  const overlap = Math.min(extent.high, imageHigh) - Math.max(extent.low, imageLow);
-  if (overlap >= 0) return -overlap;
-  return Math.max(imageLow - extent.high, extent.low - imageHigh);
+  return Math.max(shift + image.low - extent.high, extent.low - (shift + image.high));
 }
 
 /**
- * The rates at which `imageMargin` changes slope: where an extent edge meets
- * an image edge. Between them the margin is linear in the rate.
+ * The rate at which `imageMargin` changes slope: where the centres of the
+ * extent and the image meet (the margin is |c·r − k| − const, V-shaped).
+ * Between breakpoints the margin is linear in the rate.
  */
 export function marginBreakpoints(extent: NormalisedExtent, band: Band, term: BandImageTerm): number[] {
   if (term.slope === 0) return [];
   const image = imageOffsets(band, term.side);
-  const c = term.slope;
-  return [extent.low - image.low, extent.low - image.high, extent.high - image.low, extent.high - image.high].map((k) => k / c);
+  return [(extent.low + extent.high - image.low - image.high) / (2 * term.slope)];
 }

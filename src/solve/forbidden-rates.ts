@@ -1,7 +1,7 @@
 import type { Band } from '../math/band.js';
 import { mergeIntervals, type Interval } from '../math/interval-set.js';
 import { closeRates, nearbyImages, normalisedExtent } from './fold-images.js';
-import type { Interferer } from './interferer.js';
+import type { Interferer } from '../interferers/interferer.js';
 
 /**
  * The exact open set of rates inside [minRate, maxRate] at which the

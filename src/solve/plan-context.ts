@@ -1,8 +1,9 @@
-import type { Db, Ppm } from '../units/quantities.js';
+import type { Db, Hz, Ppm } from '../units/quantities.js';
 import type { Band, Guard } from '../math/band.js';
 import type { ClockPart, Converter, Goal } from '../scenario/scenario.js';
 import type { RateLimits } from '../windows/rate-window.js';
-import type { Interferer } from './interferer.js';
+import type { Interferer } from '../interferers/interferer.js';
+import type { DerivationSummary } from '../interferers/derive-interferers.js';
 
 /** Everything the solver needs, independent of how the scenario was written. */
 export interface PlanContext {
@@ -20,6 +21,10 @@ export interface PlanContext {
   readonly goal: Goal;
   /** Drift a solver-chosen rate must survive, ±ppm. */
   readonly tolerancePpm: Ppm;
+  /** How far the IF may move (the band and LO-converted sources by δ), Hz; absent or null when the LO is fixed. */
+  readonly ifShift?: { readonly low: Hz; readonly high: Hz } | null;
+  /** How the interferer list was made (generated, pruned); absent for a plan built by hand. */
+  readonly derivation?: DerivationSummary;
 }
 
 /** The converter's side of clock planning. */

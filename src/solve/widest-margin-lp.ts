@@ -2,7 +2,7 @@ import lpModule, { type SolverAPI } from 'javascript-lp-solver';
 import type { Band, Guard } from '../math/band.js';
 import type { Interval } from '../math/interval-set.js';
 import { imageOffsets, nearbyImages, normalisedExtent } from './fold-images.js';
-import type { Interferer } from './interferer.js';
+import type { Interferer } from '../interferers/interferer.js';
 import { guardedBand } from '../windows/enumerate-windows.js';
 
 /**

@@ -3,7 +3,7 @@ import { wantedZone } from '../math/band.js';
 import type { PlanContext } from './plan-context.js';
 import { driftRange } from './drift.js';
 import { leastMargin, zoneEdgeMarginAt } from './evaluate-rate.js';
-import type { Interferer } from './interferer.js';
+import type { Interferer } from '../interferers/interferer.js';
 
 /**
  * The worst slack evaluateRate would report at a rate, computed from the same

@@ -76,14 +76,35 @@ describe('ifzone solve: exit statuses', () => {
   });
 
   it('exits 1 and names the blocking check and the shortfall when nothing passes', () => {
-    const impossible = variant('impossible.json', { requirements: { margin: '60M' } });
+    // Neighbours keep 4 MHz, everything else 30 MHz: no neighbour is that close at the input, yet no rate passes.
+    const impossible = variant('impossible.json', { requirements: { margin: '30M', kindMargins: { neighbour: '4M' } } });
     const run = runBin('solve', impossible);
     expect(run.status).toBe(1);
     expect(run.stderr).toBe('');
-    expect(run.stdout).toMatch(/No candidate passes\. Nearest: .+ at .+: .+ lands .+ from the band where 60 MHz is required \(short by .+\)\./);
+    expect(run.stdout).toMatch(/No candidate passes\. Nearest: .+ at .+: .+ lands .+ from the band where 30 MHz is required \(short by .+\)\./);
     const plan = JSON.parse(runBin('solve', impossible, '--json').stdout);
     expect(plan.best).toBeNull();
+    expect(plan.conflicts).toEqual([]);
     expect(plan.candidates.every((c: { pass: boolean }) => !c.pass)).toBe(true);
+  });
+
+  it('exits 1 with one sentence per conflict no rate can fix, naming what can, instead of near misses', () => {
+    // The base scenario's lower adjacent channel ends 5 MHz below the band and the paging blocker starts 24.5 MHz above it
+    // (at the converter input): with 60 MHz required, folding (which never moves two frequencies apart) cannot help.
+    const impossible = variant('conflict.json', { requirements: { margin: '60M' } });
+    const run = runBin('solve', impossible);
+    expect(run.status).toBe(1);
+    expect(run.stderr).toBe('');
+    const sentences = run.stdout.split('\n').filter((line) => line.startsWith('- '));
+    expect(sentences).toHaveLength(2);
+    expect(sentences[0]).toMatch(/^- Lower adjacent channel \(neighbour\) lies 5 MHz from the wanted band where 60 MHz is required; .*no sampling rate can clear it: more anti-alias filter rejection .* a different channel plan, or a smaller required margin for it/);
+    expect(sentences[1]).toMatch(/^- Paging blocker 175M \(neighbour\) lies 24\.5 MHz from the wanted band/);
+    expect(run.stdout).not.toMatch(/Nearest:/);
+    const plan = JSON.parse(runBin('solve', impossible, '--json').stdout);
+    expect(plan.conflicts.map((c: { label: string; distance: number }) => [c.label, c.distance])).toEqual([
+      ['Lower adjacent channel', 5e6],
+      ['Paging blocker 175M', 24.5e6],
+    ]);
   });
 
   it('exits 2 with one line for a bad goal or a missing output rate', () => {

@@ -157,6 +157,30 @@ export function unionOf(intervals: readonly { low: number; high: number }[]): { 
   return out;
 }
 
+/**
+ * How far the extent's input frequencies would have to move to clear the
+ * wanted alias, Hz, or 0 when no part of it lands strictly inside: written
+ * from the definition of aliasing alone. The input frequencies that show
+ * inside the alias interval A at rate r are its preimages k·r + A and
+ * k·r − A (every integer k), since alias(f) = |f − r·round(f/r)|. The extent
+ * [low, high] clears one preimage [p, q] by moving up q − low or down
+ * high − p; it must clear every preimage it overlaps, and the depth of an
+ * intrusion is the worst of those smaller shifts (a tone inside: its
+ * distance to the nearer edge of the alias).
+ */
+export function bruteClearingShift(extent: BruteExtent, alias: { low: number; high: number }, rate: number): number {
+  const { low, high } = extentAt(extent, rate);
+  let worst = 0;
+  const first = Math.floor((low - alias.high) / rate) - 1;
+  const last = Math.ceil((high + alias.high) / rate) + 1;
+  for (let k = first; k <= last; k++) {
+    for (const [p, q] of [[k * rate + alias.low, k * rate + alias.high], [k * rate - alias.high, k * rate - alias.low]] as const) {
+      if (Math.min(high, q) - Math.max(low, p) > 0 || (p < low && high < q)) worst = Math.max(worst, Math.min(q - low, high - p));
+    }
+  }
+  return worst;
+}
+
 /** Length of the overlap of two closed intervals, Hz (0 when apart or touching). */
 export function overlapWidth(a: { low: number; high: number }, b: { low: number; high: number }): number {
   return Math.max(0, Math.min(a.high, b.high) - Math.max(a.low, b.low));

@@ -1,5 +1,5 @@
 import { db, hz, ppm, seconds } from '../../src/units/quantities.js';
-import type { Interferer } from '../../src/solve/interferer.js';
+import type { Interferer } from '../../src/interferers/interferer.js';
 import type { PlanContext } from '../../src/solve/plan-context.js';
 import { guardedBand, rateWindows } from '../../src/windows/enumerate-windows.js';
 import { feasibleSet, type FeasibleSet } from '../../src/solve/feasible-set.js';

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import FFT from 'fft.js';
 import { db, hz, ppm } from '../../src/units/quantities.js';
-import type { Interferer } from '../../src/solve/interferer.js';
+import type { Interferer } from '../../src/interferers/interferer.js';
 import type { PlanContext } from '../../src/solve/plan-context.js';
 import { solvePlan } from '../../src/plan/solve-plan.js';
 import { evaluateRate, type RateEvaluation } from '../../src/solve/evaluate-rate.js';

@@ -128,11 +128,13 @@ describe('hand-worked plan: 21–25 MHz, tone at 10 MHz, rate/4 spur, 10–60 MH
     expect(judged.zoneEdgeMargin).toBe(1 * MHZ); // 26 − 25 above, 21 − 13 below
   });
 
-  it('at 31 MHz: the tone lands 10 − (31 − 21) = 0 MHz from the band edge, so the rate fails', () => {
+  it('at 31 MHz: the tone lands 10 − (31 − 21) = 0 MHz from the band edge; the rate/4 spur lands inside, which ranks worse', () => {
     const judged = evaluateRate(context, hz(31 * MHZ), ppm(0));
     // Band at [6, 10] MHz; the tone at 10 MHz sits on its upper edge: margin 0 < 0.5 MHz.
     expect(judged.checks[0]!.margin).toBeCloseTo(0, 6);
+    // The spur at 31/4 = 7.75 MHz lies inside [6, 10]: it would have to move 7.75 − 6 = 1.75 MHz (to the nearer edge) to clear it.
+    expect(judged.checks[1]!.margin).toBeCloseTo(-1.75 * MHZ, 6);
     expect(judged.pass).toBe(false);
-    expect(judged.limitedBy).toBe('board tone 10M');
+    expect(judged.limitedBy).toBe('rate/4 spur');
   });
 });

@@ -3,7 +3,7 @@ import fc from 'fast-check';
 import { hz, ppm } from '../../src/units/quantities.js';
 import { evaluateRate } from '../../src/solve/evaluate-rate.js';
 import { foldExtent } from '../../src/math/fold-extent.js';
-import { bruteLeastDistance, extentAt, foldedPieces, overlapWidth, unionOf, wantedAlias } from '../helpers/brute-force-plan.js';
+import { bruteAlias, bruteClearingShift, bruteLeastDistance, extentAt, foldedPieces, overlapWidth, unionOf, wantedAlias } from '../helpers/brute-force-plan.js';
 import { planArbitrary, sweepRates } from './random-plan.js';
 
 /**
@@ -18,19 +18,13 @@ import { planArbitrary, sweepRates } from './random-plan.js';
  *    distance is 1-Lipschitz in the input frequency (folding has slope ±1).
  *  - With the fold corners (multiples of r/2) added, d̂ = t: a positive least
  *    distance is reached at an end or a corner.
- * Overlapping (solver margin < 0): the solver's margin is minus the widest
- * overlap of the extent with ONE image j·r ± band. The brute force folds the
- * extent piece by piece (cut at the multiples of r/2; each piece lies in one
- * half-zone, which holds exactly one image), so the solver's figure must be
- * minus the widest piece overlap. The folded overlap (the width of the union
- * of all folded pieces inside the wanted alias) could only be larger if two
- * pieces landed on the band side by side. For one contiguous extent they
- * cannot: consecutive pieces share a fold corner, so an extent holding no
- * whole half-zone has at most two pieces, both running from the same corner's
- * alias (0 or r/2) and hence nested; one holding a whole half-zone has a
- * piece folding onto all of [0, r/2]. Either way the union is the widest
- * piece, and the image-based and folded definitions agree; the test asserts
- * that rather than assuming it.
+ * Overlapping (solver margin < 0): the margin is minus the distance the
+ * extent would have to move, at the input, to clear the wanted alias: the
+ * brute force finds every preimage k·r ± A of the alias interval A from the
+ * definition of aliasing and takes, over those the extent overlaps, the worst
+ * of the two clearing shifts (bruteClearingShift). A tone inside is checked
+ * once more in the alias domain alone: minus its distance to the nearer edge
+ * of A (folding is an isometry near a tone that does not sit on a fold edge).
  */
 
 const RATES_PER_PLAN = 200;
@@ -41,8 +35,8 @@ const GRID_STEPS = 100;
 const noiseOf = (scale: number) => 1e-12 * scale;
 
 describe('evaluateRate margins against the brute force (random plans, tolerance 0)', () => {
-  it('apart: the least folded distance; overlapping: minus the widest one-image overlap', () => {
-    const counts = { apart: 0, overlapping: 0, straddling: 0 };
+  it('apart: the least folded distance; overlapping: minus the shift that clears the band', () => {
+    const counts = { apart: 0, overlapping: 0, straddling: 0, toneInside: 0 };
     fc.assert(
       fc.property(planArbitrary(), fc.integer({ min: 0, max: 1e6 }), (context, seed) => {
         for (const rate of sweepRates(context.limits.minRate, context.limits.maxRate, RATES_PER_PLAN, seed)) {
@@ -74,11 +68,15 @@ describe('evaluateRate margins against the brute force (random plans, tolerance 
               expect(Math.abs(withCorners - check.margin), `${check.label} at ${rate} Hz: corners`).toBeLessThanOrEqual(noise);
             } else {
               counts.overlapping++;
-              const widestPiece = Math.max(...pieces.map((p) => overlapWidth(p, alias)));
-              const folded = union.reduce((sum, segment) => sum + overlapWidth(segment, alias), 0);
-              expect(Math.abs(-check.margin - widestPiece), `${check.label} at ${rate} Hz: overlap`).toBeLessThanOrEqual(noise);
-              // Image-based overlap (solver) and folded overlap (brute force) agree (argument above).
-              expect(Math.abs(folded - widestPiece), `${check.label} at ${rate} Hz: folded overlap`).toBeLessThanOrEqual(noise);
+              const depth = bruteClearingShift(interferer, alias, rate);
+              expect(Math.abs(-check.margin - depth), `${check.label} at ${rate} Hz: clearing shift`).toBeLessThanOrEqual(noise);
+              if (low === high) {
+                const a = bruteAlias(low, rate);
+                expect(Math.abs(-check.margin - Math.min(a - alias.low, alias.high - a)), `${check.label} at ${rate} Hz: tone inside`).toBeLessThanOrEqual(noise);
+                counts.toneInside++;
+              }
+              // Some part of the extent does land inside: the folded pieces overlap the alias.
+              expect(pieces.some((p) => overlapWidth(p, alias) > 0 || (p.low > alias.low && p.high < alias.high)), `${check.label} at ${rate} Hz: lands inside`).toBe(true);
               if (pieces.length > 1) counts.straddling++;
             }
           });
@@ -86,10 +84,11 @@ describe('evaluateRate margins against the brute force (random plans, tolerance 
       }),
       { numRuns: 120, seed: 31, plugins: [fc.unbiased()] },
     );
-    console.info(`margins: ${counts.apart} apart, ${counts.overlapping} overlapping (${counts.straddling} of them straddling a fold edge)`);
+    console.info(`margins: ${counts.apart} apart, ${counts.overlapping} overlapping (${counts.straddling} of them straddling a fold edge, ${counts.toneInside} tones inside)`);
     expect(counts.apart).toBeGreaterThan(1000);
     expect(counts.overlapping).toBeGreaterThan(1000);
     expect(counts.straddling).toBeGreaterThan(100);
+    expect(counts.toneInside).toBeGreaterThan(100);
   }, 30_000);
 });
 

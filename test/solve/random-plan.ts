@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { db, hz, ppm } from '../../src/units/quantities.js';
-import type { Interferer, InterfererKind } from '../../src/solve/interferer.js';
+import type { Interferer, InterfererKind } from '../../src/interferers/interferer.js';
 import type { PlanContext } from '../../src/solve/plan-context.js';
 import type { FeasibleSet } from '../../src/solve/feasible-set.js';
 import type { RateWindow } from '../../src/windows/rate-window.js';

@@ -20,7 +20,7 @@ export async function runSolve(file: string, options: SolveOptions, io: Io): Pro
   }
   if (options.json) writeJson(report, io.out);
   else io.out((await import('../../output/plan-table.js')).planTable(report));
-  return report.best === null ? EXIT.noAnswer : EXIT.answered;
+  return report.best === null || report.conflicts.length > 0 ? EXIT.noAnswer : EXIT.answered;
 }
 
 const GOALS = ['widest-margin', 'lowest-rate', 'quarter-rate', 'decimation'] as const;

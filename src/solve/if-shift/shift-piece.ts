@@ -2,7 +2,7 @@ import type { Band, Guard } from '../../math/band.js';
 import type { Interval } from '../../math/interval-set.js';
 import type { RateLimits } from '../../windows/rate-window.js';
 import { imageOffsets } from '../fold-images.js';
-import type { Interferer } from '../interferer.js';
+import type { Interferer } from '../../interferers/interferer.js';
 import { slackAt, type PlaneBox, type PlaneSlack } from './plane-lp.js';
 
 /**
@@ -48,8 +48,8 @@ export interface PieceInputs {
  * sits at (j − a)·r + (s − b)·δ + s·band from the extent's origin, and its gap
  * above the extent is (j − a)·r + (s − b)·δ + imageLow − h (below: the
  * negative of that, from l − imageHigh). A side's gap is never more than the
- * true margin to that image (it is the margin on its own side, and below the
- * negative overlap elsewhere), so the LP's worst slack is a lower bound that
+ * true margin to that image (the signed margin is the larger of the two side
+ * gaps, see imageMargin), so the LP's worst slack is a lower bound that
  * is exact wherever no image changes side. Each is taken at both drift ends
  * r·(1 ± ε). The zone edges give (fL + δ − gL) − (n − 1)·r/2 (0 − … where the
  * lower guard reaches below DC, as in guardedBand) and n·r/2 − (fH + δ + gH).

@@ -33,4 +33,35 @@ export interface Interferer {
   readonly requiredMargin: Hz;
   /** False when the level is at or below the weakest wanted level minus the required rejection. */
   readonly blocking: boolean;
+  /**
+   * What it is made of, when it comes from the signals at the converter
+   * input: each signal with the number of times it is taken with a plus and
+   * a minus sign (a neighbour itself: plus 1; 2·A − B: A plus 2, B minus 1).
+   * Absent for a rate-tied spur and for interferers built by hand.
+   */
+  readonly mixing?: readonly MixingTerm[];
+  /** For an interleaving image, where it sits: k/M·r + side·(what `mixing` makes). */
+  readonly image?: InterleaveImage;
+}
+
+/** Which signal at the converter input a mixing term takes. */
+export interface SignalRef {
+  readonly signal: 'wanted' | 'neighbour' | 'board spur';
+  /** Index among the scenario's neighbours or board spurs (0 for the wanted band). */
+  readonly index: number;
+  /** The board spur's own harmonic (1: the fundamental; 1 for other signals). */
+  readonly harmonic: number;
+}
+
+/** One signal of a mixing product, taken `plus` times with + and `minus` times with −. */
+export interface MixingTerm extends SignalRef {
+  readonly plus: number;
+  readonly minus: number;
+}
+
+/** An interleaving image at k/M of the rate, on the side `side` of its source. */
+export interface InterleaveImage {
+  readonly k: number;
+  readonly ways: number;
+  readonly side: 1 | -1;
 }
