@@ -1,3 +1,4 @@
+import { hz, type Hz } from '../units/quantities.js';
 import { lpSolver, type LinearSlack } from '../solve/widest-margin-lp.js';
 
 /** Ranges of N at or below this many values are enumerated rather than handed to the MILP. */
@@ -25,7 +26,8 @@ const NOISE = 1e-12;
 export interface IntegerLine {
   readonly first: number;
   readonly last: number;
-  readonly rateAt: (N: number) => number;
+  /** The rate at N, Hz. */
+  readonly rateAt: (N: number) => Hz;
 }
 
 /** The best N found and how. */
@@ -49,10 +51,10 @@ export interface IntegerAnswer {
  * @param rate Hz
  * @example modelSlack([{ slope: 1, offset: -5 }, { slope: -1, offset: 9 }], 3) // −2
  */
-export function modelSlack(slacks: readonly LinearSlack[], rate: number): number {
+export function modelSlack(slacks: readonly LinearSlack[], rate: Hz): Hz {
   let least = Infinity;
   for (const s of slacks) least = Math.min(least, s.slope * rate + s.offset);
-  return least;
+  return hz(least);
 }
 
 /**
@@ -80,7 +82,7 @@ export function modelSlack(slacks: readonly LinearSlack[], rate: number): number
  *   answer misses its promise or the best N by more than the allowance
  * @example bestIntegerN(slacks, { first: 40, last: 400, rateAt: (N) => (10e6 * N) / 3 }, 20e6)
  */
-export function bestIntegerN(slacks: readonly LinearSlack[], line: IntegerLine, unit: number, enumerateUpTo = ENUMERATE_UP_TO): IntegerAnswer {
+export function bestIntegerN(slacks: readonly LinearSlack[], line: IntegerLine, unit: Hz, enumerateUpTo = ENUMERATE_UP_TO): IntegerAnswer {
   if (line.last < line.first) throw new Error(`empty N range ${line.first}..${line.last}`);
   const span = line.rateAt(line.last) - line.rateAt(line.first);
   const varying = slacks.filter((s) => Math.abs(s.slope * span) > FLAT * unit);
@@ -116,14 +118,14 @@ function milp(slacks: readonly LinearSlack[], varying: readonly LinearSlack[], l
   // A slack whose least value over the range is above the best any N can reach never binds: leave it out.
   const ceiling = Math.min(...slacks.map((s) => Math.max(s.slope * r0 + s.offset, s.slope * rLast + s.offset)));
   const binding = slacks.filter((s) => Math.min(s.slope * r0 + s.offset, s.slope * rLast + s.offset) <= ceiling);
-  const base = modelSlack(binding, r0);
+  const base = modelSlack(binding, hz(r0));
   const scale = Math.max(...binding.map((s) => Math.abs(s.slope * (rLast - r0))));
   let noise = 0;
   for (const s of slacks) noise = Math.max(noise, NOISE * (Math.abs(s.slope) * Math.max(Math.abs(r0), Math.abs(rLast)) + Math.abs(s.offset)));
   const allowance = MILP_ALLOWANCE * scale + noise;
   const value = (N: number) => modelSlack(slacks, line.rateAt(N));
   let n = 0;
-  let promised = base;
+  let promised: number = base;
   if (scale > 0) {
     const model = { base, scale, r0, step, count };
     const first = solveInteger(binding, [], model, 0);

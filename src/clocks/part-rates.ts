@@ -35,8 +35,8 @@ export function rateOf(frequency: Hz, settings: RateSettings): Hz {
 }
 
 /** The VCO frequency f·N/M of synthesiser settings, Hz, in one expression. */
-export function vcoOf(frequency: Hz, N: number, M: number): number {
-  return (frequency * N) / M;
+export function vcoOf(frequency: Hz, N: number, M: number): Hz {
+  return hz((frequency * N) / M);
 }
 
 /**
@@ -109,7 +109,7 @@ function integerSpan(range: IntegerRange, lowQuotient: number, highQuotient: num
  * @param low, high the rate range, Hz
  * @returns the N range, or null when no N of the family gives a rate inside
  */
-export function nRangeFor(frequency: Hz, family: RateFamily, low: number, high: number): IntegerRange | null {
+export function nRangeFor(frequency: Hz, family: RateFamily, low: Hz, high: Hz): IntegerRange | null {
   const K = family.M * family.D;
   const range = { min: family.nMin, max: family.nMax };
   return integerSpan(range, (low * K) / frequency, (high * K) / frequency, (N) => (frequency * N) / K, low, high); // rateOf's expression
@@ -124,7 +124,7 @@ export function nRangeFor(frequency: Hz, family: RateFamily, low: number, high: 
  * @param low, high the rate range, Hz
  * @example partRates(crystal122M88, [1, 2], 40e6, 250e6) // 122.88 MHz (D 1), 61.44 MHz (D 2)
  */
-export function partRates(part: ClockPart, dividers: readonly number[], low: number, high: number): PartRate[] {
+export function partRates(part: ClockPart, dividers: readonly number[], low: Hz, high: Hz): PartRate[] {
   const rates: PartRate[] = [];
   for (const family of rateFamilies(part, dividers)) {
     const span = nRangeFor(part.frequency, family, low, high);
@@ -138,7 +138,7 @@ export function partRates(part: ClockPart, dividers: readonly number[], low: num
 }
 
 /** How many rates partRates would list, without listing them. */
-export function partRateCount(part: ClockPart, dividers: readonly number[], low: number, high: number): number {
+export function partRateCount(part: ClockPart, dividers: readonly number[], low: Hz, high: Hz): number {
   let count = 0;
   for (const family of rateFamilies(part, dividers)) {
     const span = nRangeFor(part.frequency, family, low, high);

@@ -12,6 +12,7 @@ import { bestIntegerN, ENUMERATE_UP_TO, modelSlack } from './integer-widest-marg
 import type { PartPlan, PartSearch, RateSettings } from './part-plan.js';
 import { nRangeFor, partRates, rateFamilies, rateOf, type RateFamily } from './part-rates.js';
 import { worstSlackAt } from '../solve/worst-slack.js';
+import { limitText } from '../solve/limited-by.js';
 
 /** Tuning of planPart's search (the defaults suit the command line; tests force each path). */
 export interface PlanPartOptions {
@@ -143,7 +144,7 @@ interface Piece {
 }
 
 function bestPassing(context: PlanContext, part: ClockPart, families: readonly RateFamily[], enumerateUpTo: number): Judged | null {
-  const unit = context.band.high - context.band.low;
+  const unit = hz(context.band.high - context.band.low);
   const { minRate, maxRate } = context.limits;
   const pieces = feasiblePieces(context, driftFeasibleSet(context, part.tolerancePpm), part).sort((a, b) => b.bound - a.bound);
   const allowance = SEARCH_ALLOWANCE * unit;
@@ -152,7 +153,7 @@ function bestPassing(context: PlanContext, part: ClockPart, families: readonly R
     if (best && piece.bound + allowance <= best.evaluation.worstSlack) break;
     const lines = new Set<string>();
     for (const family of families) {
-      const span = nRangeFor(part.frequency, family, Math.max(piece.range.low, minRate), Math.min(piece.range.high, maxRate));
+      const span = nRangeFor(part.frequency, family, hz(Math.max(piece.range.low, minRate)), hz(Math.min(piece.range.high, maxRate)));
       if (!span) continue;
       const key = `${family.M * family.D}:${span.min}:${span.max}`; // the same rates as an earlier family
       if (lines.has(key)) continue;
@@ -184,16 +185,16 @@ function driftFeasibleSet(context: PlanContext, tolerancePpm: Ppm): FeasibleSet 
 
 /** The feasible intervals wide enough for the part's drift, their linear slacks and LP bounds. */
 function feasiblePieces(context: PlanContext, set: FeasibleSet, part: ClockPart): Piece[] {
-  const unit = context.band.high - context.band.low;
+  const unit = hz(context.band.high - context.band.low);
   const blocking = context.interferers.filter((i) => i.blocking);
   const pieces: Piece[] = [];
   for (const interval of set.feasible) {
     const range = driftSafeRange(interval, part.tolerancePpm);
     if (!range) continue;
-    const slacks = linearSlacks(context.band, context.guard, interval.zone, blocking, range, part.tolerancePpm * 1e-6);
+    const slacks = linearSlacks(context.band, context.guard, interval.zone, blocking, range, part.tolerancePpm);
     let bound: number;
     if (range.low === range.high) {
-      bound = modelSlack(slacks, range.low);
+      bound = modelSlack(slacks, hz(range.low));
     } else {
       const answer = maximiseWorstSlack(slacks, range, unit);
       if (!answer) throw new Error(`widest-margin LP infeasible on ${interval.minRate}–${interval.maxRate} Hz, a feasible interval`);
@@ -208,11 +209,11 @@ function feasiblePieces(context: PlanContext, set: FeasibleSet, part: ClockPart)
 function recheck(part: ClockPart, piece: Piece, evaluation: RateEvaluation, modelled: number): void {
   const { interval } = piece;
   const where = `${part.label} at ${evaluation.rate} Hz (feasible interval ${interval.minRate}–${interval.maxRate} Hz)`;
-  if (!evaluation.pass) throw new Error(`${where}: its drift range lies inside the interval, yet the exact evaluator fails it (${evaluation.limitedBy})`);
+  if (!evaluation.pass) throw new Error(`${where}: its drift range lies inside the interval, yet the exact evaluator fails it (${limitText(evaluation.limitedBy)})`);
   let scale = 0;
   for (const s of piece.slacks) scale = Math.max(scale, Math.abs(s.slope * evaluation.rate) + Math.abs(s.offset));
   if (Math.abs(evaluation.worstSlack - modelled) > MODEL_AGREEMENT * scale) {
-    throw new Error(`${where}: the linear slacks give a worst slack of ${modelled} Hz, the exact evaluator ${evaluation.worstSlack} Hz (${evaluation.limitedBy})`);
+    throw new Error(`${where}: the linear slacks give a worst slack of ${modelled} Hz, the exact evaluator ${evaluation.worstSlack} Hz (${limitText(evaluation.limitedBy)})`);
   }
 }
 

@@ -1,3 +1,4 @@
+import type { Hz } from '../units/quantities.js';
 import { mergeIntervals, type Interval } from './interval-set.js';
 
 /**
@@ -13,7 +14,7 @@ import { mergeIntervals, type Interval } from './interval-set.js';
  * @returns merged segments, ascending
  * @example foldExtent(60e6, 70e6, 100e6) // [{low: 30e6, high: 40e6}]
  */
-export function foldExtent(low: number, high: number, rate: number): Interval[] {
+export function foldExtent(low: Hz, high: Hz, rate: Hz): Interval[] {
   const half = rate / 2;
   const magnitude = extentMagnitude(low, high);
   // Only an extent at least rate wide surely holds a whole half-zone; a narrower one (up to three pieces) is folded piece by piece.
@@ -28,7 +29,7 @@ export function foldExtent(low: number, high: number, rate: number): Interval[] 
  * The magnitudes of an extent's frequencies: a real signal at −f is the one
  * at f. [−3, −1] → [1, 3]; [−1, 2] → [0, 2].
  */
-export function extentMagnitude(low: number, high: number): Interval {
+export function extentMagnitude(low: Hz, high: Hz): Interval {
   if (high <= 0) return { low: -high, high: -low };
   return low >= 0 ? { low, high } : { low: 0, high: Math.max(-low, high) };
 }

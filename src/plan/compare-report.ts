@@ -1,6 +1,7 @@
 import { hz, type Db, type Hz, type Ppm, type Seconds } from '../units/quantities.js';
 import type { ClockPart } from '../scenario/scenario.js';
 import type { PartPlan, RateSettings } from '../clocks/part-plan.js';
+import { limitText, type LimitKind } from '../solve/limited-by.js';
 import { PAPER_DESIGN_CAUTION } from './caution.js';
 import { afterRate, type AfterRateInputs } from '../after-rate/after-rate.js';
 import type { PrototypeOrders } from '../after-rate/prototype-order.js';
@@ -19,6 +20,8 @@ export interface VariantVerdict {
   /** Margin minus requirement of the limiting check, Hz: what parts are ranked by. */
   readonly worstSlack: Hz;
   readonly limitedBy: string;
+  /** What limitedBy names: 'interferer', 'zone edge', or 'not planned' for a part the variant cannot plan. */
+  readonly limitedByKind: LimitKind | 'not planned';
   /** Null when the nominal rate fails. */
   readonly headroomPpm: { readonly down: Ppm; readonly up: Ppm } | null;
   readonly jitterSnrDb: Db | null;
@@ -116,6 +119,7 @@ function unplanned(variant: string): VariantVerdict {
     worstMargin: hz(-Infinity),
     worstSlack: hz(-Infinity),
     limitedBy: NOT_PLANNED,
+    limitedByKind: 'not planned',
     headroomPpm: null,
     jitterSnrDb: null,
     channelSnrDb: null,
@@ -136,7 +140,8 @@ function verdict(variant: string, plan: PartPlan, inputs: AfterRateInputs | null
     inverted: e.inverted,
     worstMargin: e.worstMargin,
     worstSlack: e.worstSlack,
-    limitedBy: e.limitedBy,
+    limitedBy: limitText(e.limitedBy),
+    limitedByKind: e.limitedBy.kind,
     headroomPpm: plan.headroom ? { down: plan.headroom.downPpm, up: plan.headroom.upPpm } : null,
     jitterSnrDb: plan.snr.jitterSnrDb,
     channelSnrDb: plan.snr.channelSnrDb,

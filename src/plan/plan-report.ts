@@ -1,4 +1,4 @@
-import { hz, ppm, type Db, type Hz, type Ppm } from '../units/quantities.js';
+import { hz, ppmOf, type Db, type Hz, type Ppm } from '../units/quantities.js';
 import type { Band, Guard } from '../math/band.js';
 import { extentMagnitude } from '../math/fold-extent.js';
 import type { Goal } from '../scenario/scenario.js';
@@ -7,6 +7,7 @@ import type { PlanContext } from '../solve/plan-context.js';
 import type { Candidate, PlanResult } from './solve-plan.js';
 import type { CheckResult, RateEvaluation } from '../solve/evaluate-rate.js';
 import type { ShiftSearch } from '../solve/if-shift/best-shift-and-rate.js';
+import { limitText, type LimitKind } from '../solve/limited-by.js';
 import { PAPER_DESIGN_CAUTION } from './caution.js';
 import { shiftReport, type ShiftReport } from './shift-report.js';
 import { afterRate, channelSnrWithDriver, type AfterRate, type AfterRateInputs } from '../after-rate/after-rate.js';
@@ -48,7 +49,10 @@ export interface ReportedCandidate {
   readonly image: { readonly low: Hz; readonly high: Hz } | null;
   readonly zoneEdgeMargin: Hz;
   readonly worstMargin: Hz;
+  /** The limiting check in words: an interferer's label, "zone edge". */
   readonly limitedBy: string;
+  /** What kind of check limitedBy names: 'interferer' or 'zone edge' (so that a label reading "zone edge" is never the zone edge). */
+  readonly limitedByKind: LimitKind;
   readonly worstSlack: Hz;
   readonly pass: boolean;
   /** The part's settings, rate = f·N/(M·D); null for a rate not from a part. */
@@ -57,6 +61,8 @@ export interface ReportedCandidate {
   readonly headroomPpm: { readonly down: Ppm; readonly up: Ppm } | null;
   /** The check met first each way ("zone edge", "rate limit" or an interferer label); null with headroomPpm. */
   readonly headroomLimitedBy: { readonly down: string; readonly up: string } | null;
+  /** The kind of each headroomLimitedBy: 'interferer', 'zone edge' or 'rate limit'; null with headroomPpm. */
+  readonly headroomLimitedByKind: { readonly down: LimitKind; readonly up: LimitKind } | null;
   /** Jitter-limited SNR at the band's highest frequency, dB; null when not from a part or the part states no jitter. */
   readonly jitterSnrDb: Db | null;
   /** Combined jitter and quantisation SNR plus the processing gain to the channel, dB; null when not from a part. */
@@ -119,7 +125,7 @@ export function planReport(name: string, context: PlanContext, result: PlanResul
     windows: result.windows,
     feasible: result.feasible.map((f) => {
       const width = hz(f.maxRate - f.minRate);
-      return { ...f, width, widthPpm: ppm((width / (f.maxRate + f.minRate)) * 1e6) };
+      return { ...f, width, widthPpm: ppmOf(width / (f.maxRate + f.minRate)) };
     }),
     blocked: result.blocked,
     candidates,
@@ -150,18 +156,20 @@ function reportedCandidate(context: PlanContext, candidate: Candidate, after: Af
     image: e.image,
     zoneEdgeMargin: e.zoneEdgeMargin,
     worstMargin: e.worstMargin,
-    limitedBy: e.limitedBy,
+    limitedBy: limitText(e.limitedBy),
+    limitedByKind: e.limitedBy.kind,
     worstSlack: e.worstSlack,
     pass: e.pass && (atRate === null || atRate.mask.pass),
     settings: candidate.settings ? { N: candidate.settings.N, M: candidate.settings.M, D: candidate.settings.D } : null,
     headroomPpm: candidate.headroom ? { down: candidate.headroom.downPpm, up: candidate.headroom.upPpm } : null,
-    headroomLimitedBy: candidate.headroom ? { down: candidate.headroom.downLimitedBy, up: candidate.headroom.upLimitedBy } : null,
+    headroomLimitedBy: candidate.headroom ? { down: limitText(candidate.headroom.downLimitedBy), up: limitText(candidate.headroom.upLimitedBy) } : null,
+    headroomLimitedByKind: candidate.headroom ? { down: candidate.headroom.downLimitedBy.kind, up: candidate.headroom.upLimitedBy.kind } : null,
     jitterSnrDb: candidate.snr ? candidate.snr.jitterSnrDb : null,
     channelSnrDb,
     checks: e.checks.map((check, index) => {
       const interferer = context.interferers[index]!;
       const offset = interferer.rateMultiple * e.rate;
-      const magnitude = extentMagnitude(offset + interferer.low, offset + interferer.high);
+      const magnitude = extentMagnitude(hz(offset + interferer.low), hz(offset + interferer.high));
       const input = [hz(magnitude.low), hz(magnitude.high)] as const;
       return { ...check, input };
     }),

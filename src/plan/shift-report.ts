@@ -2,6 +2,7 @@ import { hz, type Hz, type Ppm } from '../units/quantities.js';
 import type { Band } from '../math/band.js';
 import type { RateEvaluation } from '../solve/evaluate-rate.js';
 import type { ShiftedRate, ShiftSearch } from '../solve/if-shift/best-shift-and-rate.js';
+import { interfererLimit, limitText, ZONE_EDGE, type Limit, type LimitKind } from '../solve/limited-by.js';
 
 /** One (IF shift, rate) pair as reported. */
 export interface ReportedShift {
@@ -17,9 +18,11 @@ export interface ReportedShift {
   readonly nco: Hz | null;
   readonly worstMargin: Hz;
   readonly limitedBy: string;
+  /** 'interferer' or 'zone edge': what limitedBy names. */
+  readonly limitedByKind: LimitKind;
   readonly worstSlack: Hz;
   /** The tightest check with more slack than the worst (what decides between pairs that tie on the worst); null when none. */
-  readonly next: { readonly limitedBy: string; readonly margin: Hz; readonly slack: Hz } | null;
+  readonly next: { readonly limitedBy: string; readonly limitedByKind: LimitKind; readonly margin: Hz; readonly slack: Hz } | null;
   /** "piece": a two-variable LP optimum; "sample": the fixed-shift solver's best at a seed shift. */
   readonly origin: ShiftedRate['origin'];
   readonly pass: boolean;
@@ -67,7 +70,8 @@ function reportedShift(band: Band, pair: ShiftedRate): ReportedShift {
     inverted: e.inverted,
     nco: e.center,
     worstMargin: e.worstMargin,
-    limitedBy: e.limitedBy,
+    limitedBy: limitText(e.limitedBy),
+    limitedByKind: e.limitedBy.kind,
     worstSlack: e.worstSlack,
     next: nextLimit(e, band.high - band.low),
     origin: pair.origin,
@@ -77,8 +81,8 @@ function reportedShift(band: Band, pair: ShiftedRate): ReportedShift {
 
 /** The tightest check (zone edge or blocking) whose slack exceeds the worst by more than 1e-9 of the bandwidth. */
 function nextLimit(e: RateEvaluation, width: number): ReportedShift['next'] {
-  const rows = [{ limitedBy: 'zone edge', margin: e.zoneEdgeMargin, slack: e.zoneEdgeMargin as number }];
-  for (const c of e.checks) if (c.blocking) rows.push({ limitedBy: c.label, margin: c.margin, slack: c.margin - c.requiredMargin });
+  const rows: { limit: Limit; margin: Hz; slack: number }[] = [{ limit: ZONE_EDGE, margin: e.zoneEdgeMargin, slack: e.zoneEdgeMargin }];
+  for (const c of e.checks) if (c.blocking) rows.push({ limit: interfererLimit(c.label), margin: c.margin, slack: c.margin - c.requiredMargin });
   const next = rows.filter((r) => r.slack > e.worstSlack + 1e-9 * width).sort((a, b) => a.slack - b.slack)[0];
-  return next ? { limitedBy: next.limitedBy, margin: next.margin, slack: hz(next.slack) } : null;
+  return next ? { limitedBy: limitText(next.limit), limitedByKind: next.limit.kind, margin: next.margin, slack: hz(next.slack) } : null;
 }

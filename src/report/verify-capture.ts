@@ -7,6 +7,7 @@ import { levelThreshold } from '../interferers/level-threshold.js';
 import { foldExtent } from '../math/fold-extent.js';
 import { PAPER_DESIGN_CAUTION } from '../plan/caution.js';
 import { planAtRate } from '../plan/plan-scenario.js';
+import { limitText } from '../solve/limited-by.js';
 import { binDistance, foldCycles } from '../capture/coherent-bins.js';
 import { captureTones, movedScenario, type CaptureRecord, type CaptureTone } from '../capture/capture-tones.js';
 import { checkFamily, type LineFamily } from '../capture/check-families.js';
@@ -217,7 +218,7 @@ export function verifyCaptureWithSpectrum(scenario: Scenario, settings: CaptureS
     underFloor,
     unlisted,
     intrusions,
-    plan: { pass: plan.pass, limitedBy: plan.limitedBy, worstMargin: plan.worstMargin },
+    plan: { pass: plan.pass, limitedBy: limitText(plan.limitedBy), limitedByKind: plan.limitedBy.kind, worstMargin: plan.worstMargin },
     notSimulated,
     contradictions,
     consistent: contradictions.length === 0,

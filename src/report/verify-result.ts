@@ -1,5 +1,6 @@
 import type { Db, Hz } from '../units/quantities.js';
 import type { InterfererKind } from '../interferers/interferer.js';
+import type { LimitKind } from '../solve/limited-by.js';
 
 /**
  * The result of `ifzone verify`: a simulated capture set beside the plan at
@@ -44,7 +45,7 @@ export interface VerifyResult {
   /** Peaks above the threshold inside the margin of the wanted image. */
   readonly intrusions: readonly PeakRow[];
   /** The plan's own verdict at the nominal rate, no drift. */
-  readonly plan: { readonly pass: boolean; readonly limitedBy: string; readonly worstMargin: Hz };
+  readonly plan: { readonly pass: boolean; readonly limitedBy: string; readonly limitedByKind: LimitKind; readonly worstMargin: Hz };
   /** Interferers of the plan that nothing in the capture stands for. */
   readonly notSimulated: readonly string[];
   /** Whether the model's list of products ran to its end (see enumerateProducts); false: unexplained peaks may be unnamed products. */

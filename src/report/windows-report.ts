@@ -1,4 +1,4 @@
-import { hz, ppm, type Hz, type Ppm } from '../units/quantities.js';
+import { hz, ppmOf, type Hz, type Ppm } from '../units/quantities.js';
 import { bandImage, type Band, type BandImage, type Guard } from '../math/band.js';
 import { guardedBand, lowestLegalRate, rateWindows } from '../windows/enumerate-windows.js';
 import type { RateLimits, RateWindow } from '../windows/rate-window.js';
@@ -54,6 +54,6 @@ function describeWindow(window: RateWindow, band: Band): WindowRow {
   const width = hz(window.maxRate - window.minRate);
   if (window.maxRate === Infinity) return { ...window, width, center: null, tolerancePpm: null, image: null };
   const center = hz((window.minRate + window.maxRate) / 2);
-  const tolerancePpm = ppm((width / 2 / center) * 1e6);
+  const tolerancePpm = ppmOf(width / 2 / center);
   return { ...window, width, center, tolerancePpm, image: bandImage(band, center) };
 }

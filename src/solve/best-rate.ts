@@ -5,6 +5,7 @@ import type { FeasibleInterval } from './feasible-set.js';
 import type { PlanContext } from './plan-context.js';
 import { driftSafeRange } from './drift.js';
 import { linearSlacks, maximiseWorstSlack } from './widest-margin-lp.js';
+import { limitText } from './limited-by.js';
 
 /** Decimation ratios tried one by one inside an interval before falling back to the LP optimum's neighbours. */
 const MOST_RATIOS_TRIED = 200;
@@ -41,13 +42,13 @@ export function bestRateIn(context: PlanContext, interval: FeasibleInterval): Ra
 function widestMargin(context: PlanContext, interval: FeasibleInterval, range: Interval, judge: (rate: number) => RateEvaluation): RateEvaluation {
   if (range.low === range.high) return judge(range.low);
   const blocking = context.interferers.filter((i) => i.blocking);
-  const slacks = linearSlacks(context.band, context.guard, interval.zone, blocking, range, context.tolerancePpm * 1e-6);
-  const answer = maximiseWorstSlack(slacks, range, context.band.high - context.band.low);
+  const slacks = linearSlacks(context.band, context.guard, interval.zone, blocking, range, context.tolerancePpm);
+  const answer = maximiseWorstSlack(slacks, range, hz(context.band.high - context.band.low));
   if (!answer) throw new Error(`widest-margin LP infeasible on ${interval.minRate}–${interval.maxRate} Hz, a feasible interval`);
   const judged = judge(answer.rate);
   const allowance = 1e-6 * (range.high + context.band.high - context.band.low);
   if (judged.worstSlack < answer.worstSlack - allowance) {
-    throw new Error(`widest-margin LP promised ${answer.worstSlack} Hz at ${answer.rate} Hz; the exact re-check found ${judged.worstSlack} Hz (${judged.limitedBy})`);
+    throw new Error(`widest-margin LP promised ${answer.worstSlack} Hz at ${answer.rate} Hz; the exact re-check found ${judged.worstSlack} Hz (${limitText(judged.limitedBy)})`);
   }
   return judged;
 }

@@ -1,8 +1,8 @@
-import { hz, ppm, type Hz, type Ppm } from '../units/quantities.js';
+import { fractionOf, hz, ppm, ppmOf, type Hz, type Ppm } from '../units/quantities.js';
 import { sameEdge } from '../math/edge-tolerance.js';
 import type { Interval } from '../math/interval-set.js';
 import type { RateLimits } from '../windows/rate-window.js';
-import { RATE_LIMIT, ZONE_EDGE } from './limited-by.js';
+import { interfererLimit, RATE_LIMIT, ZONE_EDGE, type Limit } from './limited-by.js';
 import type { FeasibleInterval, FeasibleSet } from './feasible-set.js';
 
 /**
@@ -16,9 +16,21 @@ import type { FeasibleInterval, FeasibleSet } from './feasible-set.js';
 export interface DriftHeadroom {
   readonly downPpm: Ppm;
   readonly upPpm: Ppm;
-  /** The check that fails first below: an interferer label, "zone edge" or "rate limit". */
-  readonly downLimitedBy: string;
-  readonly upLimitedBy: string;
+  /** The check that fails first below: an interferer, the zone edge or the converter's rate limit. */
+  readonly downLimitedBy: Limit;
+  readonly upLimitedBy: Limit;
+}
+
+/**
+ * The factors a drifting rate is multiplied by at its ends: 1 − ε and 1 + ε.
+ *
+ * @param tolerancePpm ± drift, ppm
+ * @returns the two factors (dimensionless)
+ * @example driftFactors(ppm(20)) // { down: 0.99998, up: 1.00002 }
+ */
+export function driftFactors(tolerancePpm: Ppm): { readonly down: number; readonly up: number } {
+  const epsilon = fractionOf(tolerancePpm);
+  return { down: 1 - epsilon, up: 1 + epsilon };
 }
 
 /**
@@ -30,8 +42,8 @@ export interface DriftHeadroom {
  * @example driftRange(hz(100e6), ppm(20)) // { low: 99998000, high: 100002000 }
  */
 export function driftRange(rate: Hz, tolerancePpm: Ppm): { low: Hz; high: Hz } {
-  const epsilon = tolerancePpm * 1e-6;
-  return { low: hz(rate * (1 - epsilon)), high: hz(rate * (1 + epsilon)) };
+  const { down, up } = driftFactors(tolerancePpm);
+  return { low: hz(rate * down), high: hz(rate * up) };
 }
 
 /**
@@ -46,9 +58,9 @@ export function driftRange(rate: Hz, tolerancePpm: Ppm): { low: Hz; high: Hz } {
  * @example driftSafeRange({ minRate: hz(99e6), maxRate: hz(101e6) }, ppm(10000)) // { low: 100e6, high: 100e6 } (up to an ulp)
  */
 export function driftSafeRange(interval: { readonly minRate: Hz; readonly maxRate: Hz }, tolerancePpm: Ppm): Interval | null {
-  const epsilon = tolerancePpm * 1e-6;
-  let low = interval.minRate / (1 - epsilon);
-  let high = interval.maxRate / (1 + epsilon);
+  const { down, up } = driftFactors(tolerancePpm);
+  let low = interval.minRate / down;
+  let high = interval.maxRate / up;
   // (x/(1 − ε))·(1 − ε) may round an ulp below x, putting the drift end inside the open forbidden interval beyond the edge: step in.
   while (driftRange(hz(low), tolerancePpm).low < interval.minRate) low += low * Number.EPSILON;
   while (driftRange(hz(high), tolerancePpm).high > interval.maxRate) high -= high * Number.EPSILON;
@@ -112,7 +124,7 @@ export function containingInterval(feasible: readonly FeasibleInterval[], rate: 
  * @param limits the converter's rate range searched, Hz
  * @param rate the nominal rate, Hz
  * @returns the headroom, or null when the nominal rate itself is in no feasible interval
- * @example driftHeadroom(handWorkedSet, { minRate: hz(20e6), maxRate: hz(60e6) }, hz(26e6)) // { downPpm: 38461.5…, upPpm: 51282.0…, downLimitedBy: 'zone edge', upLimitedBy: 'rate/4 spur' }
+ * @example driftHeadroom(handWorkedSet, { minRate: hz(20e6), maxRate: hz(60e6) }, hz(26e6)) // { downPpm: 38461.5, upPpm: 51282.1, downLimitedBy: { kind: 'zone edge' }, upLimitedBy: { kind: 'interferer', label: 'rate/4 spur' } }
  */
 export function driftHeadroom(set: FeasibleSet, limits: RateLimits, rate: Hz): DriftHeadroom | null {
   const index = containingInterval(set.feasible, rate, ppm(0));
@@ -121,11 +133,11 @@ export function driftHeadroom(set: FeasibleSet, limits: RateLimits, rate: Hz): D
   const sameZone = set.blocked.filter((b) => b.zone === interval.zone);
   const below = sameZone.find((b) => b.minRate < b.maxRate && sameEdge(b.maxRate, interval.minRate));
   const above = sameZone.find((b) => b.minRate < b.maxRate && sameEdge(b.minRate, interval.maxRate));
-  const edge = (at: number, blocker: { label: string } | undefined, limit: number) =>
-    blocker ? blocker.label : sameEdge(at, limit) ? RATE_LIMIT : ZONE_EDGE;
+  const edge = (at: number, blocker: { label: string } | undefined, limit: number): Limit =>
+    blocker ? interfererLimit(blocker.label) : sameEdge(at, limit) ? RATE_LIMIT : ZONE_EDGE;
   return {
-    downPpm: ppm((1 - interval.minRate / rate) * 1e6),
-    upPpm: ppm((interval.maxRate / rate - 1) * 1e6),
+    downPpm: ppmOf(1 - interval.minRate / rate),
+    upPpm: ppmOf(interval.maxRate / rate - 1),
     downLimitedBy: edge(interval.minRate, below, limits.minRate),
     upLimitedBy: edge(interval.maxRate, above, limits.maxRate),
   };

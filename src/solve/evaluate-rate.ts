@@ -2,14 +2,14 @@ import { db, hz, type Db, type Hz, type Ppm } from '../units/quantities.js';
 import { bandImage, wantedZone, type Band, type Guard } from '../math/band.js';
 import { foldExtent } from '../math/fold-extent.js';
 import { EDGE_TOLERANCE } from '../math/edge-tolerance.js';
-import { meetsOpen, type Interval } from '../math/interval-set.js';
+import { meetsOpen } from '../math/interval-set.js';
 import { imageMargin, marginBreakpoints, nearbyImages, normalisedExtent } from './fold-images.js';
 import { forbiddenRates } from './forbidden-rates.js';
 import { guardedBand } from '../windows/enumerate-windows.js';
 import type { Interferer, InterfererKind } from '../interferers/interferer.js';
 import type { PlanContext } from './plan-context.js';
 import { driftRange } from './drift.js';
-import { ZONE_EDGE } from './limited-by.js';
+import { interfererLimit, ZONE_EDGE, type Limit } from './limited-by.js';
 
 /** One interferer measured at one rate. */
 export interface CheckResult {
@@ -43,8 +43,8 @@ export interface RateEvaluation {
   /** Least distance from the guarded band to a fold edge over the drift range, Hz (negative: crosses). */
   readonly zoneEdgeMargin: Hz;
   readonly checks: readonly CheckResult[];
-  /** The check with the least slack (margin − required): an interferer label or "zone edge". */
-  readonly limitedBy: string;
+  /** The check with the least slack (margin − required): a blocking interferer or the zone edge. */
+  readonly limitedBy: Limit;
   /** That check's margin, Hz. */
   readonly worstMargin: Hz;
   /** That check's margin minus its requirement, Hz: the figure candidates are ranked by. */
@@ -69,13 +69,13 @@ export function evaluateRate(context: PlanContext, rate: Hz, tolerancePpm: Ppm):
   const zoneEdgeMargin = hz(Math.min(zoneEdgeMarginAt(context.band, context.guard, zone, drift.low), zoneEdgeMarginAt(context.band, context.guard, zone, drift.high)));
   const zonePass = image !== null && zoneEdgeMargin >= -EDGE_TOLERANCE * rate;
   const checks = context.interferers.map((i) => checkInterferer(context, i, rate, drift));
-  let limitedBy = ZONE_EDGE;
+  let limitedBy: Limit = ZONE_EDGE;
   let worstMargin: number = zoneEdgeMargin;
   let worstSlack: number = zoneEdgeMargin;
   for (const check of checks) {
     if (!check.blocking) continue;
     const slack = check.margin - check.requiredMargin;
-    if (slack < worstSlack) [limitedBy, worstMargin, worstSlack] = [check.label, check.margin, slack];
+    if (slack < worstSlack) [limitedBy, worstMargin, worstSlack] = [interfererLimit(check.label), check.margin, slack];
   }
   return {
     rate,
@@ -94,18 +94,18 @@ export function evaluateRate(context: PlanContext, rate: Hz, tolerancePpm: Ppm):
 }
 
 /** Distance from the guarded band to the nearer edge of zone n at rate r, Hz. A lower guard stops at DC, as in guardedBand. */
-export function zoneEdgeMarginAt(band: Band, guard: Guard, zone: number, rate: number): number {
+export function zoneEdgeMarginAt(band: Band, guard: Guard, zone: number, rate: Hz): Hz {
   const guarded = guardedBand(band, guard.low, guard.high);
   const below = guarded.low - ((zone - 1) * rate) / 2;
   const above = (zone * rate) / 2 - guarded.high;
-  return Math.min(below, above);
+  return hz(Math.min(below, above));
 }
 
-function checkInterferer(context: PlanContext, interferer: Interferer, rate: Hz, drift: Interval): CheckResult {
+function checkInterferer(context: PlanContext, interferer: Interferer, rate: Hz, drift: { readonly low: Hz; readonly high: Hz }): CheckResult {
   const margin = leastMargin(interferer, context.band, drift);
   const levelMargin = db(context.levelThreshold - interferer.level);
   const blocked = interferer.blocking && meetsOpen(drift, forbiddenRates(interferer, context.band, drift.low, drift.high));
-  const alias = foldExtent(interferer.rateMultiple * rate + interferer.low, interferer.rateMultiple * rate + interferer.high, rate);
+  const alias = foldExtent(hz(interferer.rateMultiple * rate + interferer.low), hz(interferer.rateMultiple * rate + interferer.high), rate);
   return {
     label: interferer.label,
     kind: interferer.kind,
@@ -125,12 +125,12 @@ function checkInterferer(context: PlanContext, interferer: Interferer, rate: Hz,
  * rates: the minimum over every nearby image, each image's margin being
  * piecewise linear with known breakpoints.
  */
-export function leastMargin(interferer: Interferer, band: Band, range: Interval): number {
+export function leastMargin(interferer: Interferer, band: Band, range: { readonly low: Hz; readonly high: Hz }): Hz {
   const extent = normalisedExtent(interferer);
   let least = Infinity;
-  for (const term of nearbyImages(extent, band, 0, range.low, range.high)) {
+  for (const term of nearbyImages(extent, band, hz(0), range.low, range.high)) {
     const rates = [range.low, range.high, ...marginBreakpoints(extent, band, term).filter((r) => r > range.low && r < range.high)];
     for (const r of rates) least = Math.min(least, imageMargin(extent, band, term, r));
   }
-  return least;
+  return hz(least);
 }

@@ -1,3 +1,4 @@
+import { hz, type Hz } from '../units/quantities.js';
 import type { Band } from '../math/band.js';
 import type { Interval } from '../math/interval-set.js';
 import type { Interferer } from '../interferers/interferer.js';
@@ -53,7 +54,7 @@ export function imageOffsets(band: Band, side: 1 | -1): Interval {
  * @param reach margin, Hz, ≥ 0
  * @param minRate, maxRate the rate range, Hz, 0 < minRate ≤ maxRate < ∞
  */
-export function nearbyImages(extent: NormalisedExtent, band: Band, reach: number, minRate: number, maxRate: number): BandImageTerm[] {
+export function nearbyImages(extent: NormalisedExtent, band: Band, reach: Hz, minRate: Hz, maxRate: Hz): BandImageTerm[] {
   const terms: BandImageTerm[] = [];
   for (const side of [1, -1] as const) {
     const image = imageOffsets(band, side);
@@ -73,7 +74,7 @@ export function nearbyImages(extent: NormalisedExtent, band: Band, reach: number
  * image: c·r ∈ (l − imageHigh − reach, h − imageLow + reach). Empty, one
  * interval, or all rates (slope 0 with the extent inside the reach).
  */
-export function closeRates(extent: NormalisedExtent, band: Band, term: BandImageTerm, reach: number): Interval | null {
+export function closeRates(extent: NormalisedExtent, band: Band, term: BandImageTerm, reach: Hz): Interval | null {
   const image = imageOffsets(band, term.side);
   const lowest = extent.low - image.high - reach;
   const highest = extent.high - image.low + reach;
@@ -92,10 +93,10 @@ export function closeRates(extent: NormalisedExtent, band: Band, term: BandImage
  *
  * @example imageMargin({ rateMultiple: 0, low: 72e6, high: 72e6 }, { low: 70e6, high: 80e6 }, { j: 0, side: 1, slope: 0 }, 100e6) // −2e6: 2 MHz inside
  */
-export function imageMargin(extent: NormalisedExtent, band: Band, term: BandImageTerm, rate: number): number {
+export function imageMargin(extent: NormalisedExtent, band: Band, term: BandImageTerm, rate: Hz): Hz {
   const image = imageOffsets(band, term.side);
   const shift = term.slope * rate;
-  return Math.max(shift + image.low - extent.high, extent.low - (shift + image.high));
+  return hz(Math.max(shift + image.low - extent.high, extent.low - (shift + image.high)));
 }
 
 /**
@@ -103,8 +104,8 @@ export function imageMargin(extent: NormalisedExtent, band: Band, term: BandImag
  * extent and the image meet (the margin is |c·r − k| − const, V-shaped).
  * Between breakpoints the margin is linear in the rate.
  */
-export function marginBreakpoints(extent: NormalisedExtent, band: Band, term: BandImageTerm): number[] {
+export function marginBreakpoints(extent: NormalisedExtent, band: Band, term: BandImageTerm): Hz[] {
   if (term.slope === 0) return [];
   const image = imageOffsets(band, term.side);
-  return [(extent.low + extent.high - image.low - image.high) / (2 * term.slope)];
+  return [hz((extent.low + extent.high - image.low - image.high) / (2 * term.slope))];
 }

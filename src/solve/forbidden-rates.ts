@@ -1,3 +1,4 @@
+import type { Hz } from '../units/quantities.js';
 import type { Band } from '../math/band.js';
 import { mergeIntervals, type Interval } from '../math/interval-set.js';
 import { closeRates, nearbyImages, normalisedExtent } from './fold-images.js';
@@ -17,7 +18,7 @@ import type { Interferer } from '../interferers/interferer.js';
  *   ends may lie outside it, so that subtracting them from a closed window
  *   also removes an edge they cover)
  */
-export function forbiddenRates(interferer: Interferer, band: Band, minRate: number, maxRate: number): Interval[] {
+export function forbiddenRates(interferer: Interferer, band: Band, minRate: Hz, maxRate: Hz): Interval[] {
   const extent = normalisedExtent(interferer);
   const reach = interferer.requiredMargin;
   const found: Interval[] = [];

@@ -65,7 +65,7 @@ export function unfixableConflicts(context: PlanContext): Conflict[] {
  */
 function stillDistance(interferer: Interferer, band: Band): number {
   const extent = normalisedExtent(interferer);
-  return Math.min(...([1, -1] as const).map((side) => imageMargin(extent, band, { j: extent.rateMultiple, side, slope: 0 }, 0)));
+  return Math.min(...([1, -1] as const).map((side) => imageMargin(extent, band, { j: extent.rateMultiple, side, slope: 0 }, hz(0))));
 }
 
 function conflictSentence(interferer: Interferer, distance: number, excess: number): string {

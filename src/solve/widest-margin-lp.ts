@@ -3,6 +3,8 @@ import type { Band, Guard } from '../math/band.js';
 import type { Interval } from '../math/interval-set.js';
 import { imageOffsets, nearbyImages, normalisedExtent } from './fold-images.js';
 import type { Interferer } from '../interferers/interferer.js';
+import { driftFactors } from './drift.js';
+import { hz, type Hz, type Ppm } from '../units/quantities.js';
 import { guardedBand } from '../windows/enumerate-windows.js';
 
 /**
@@ -25,11 +27,18 @@ export interface LinearSlack {
  * on one side of each extent and its gap is linear. Each is taken at both
  * drift ends r·(1 ± ε), which keeps it linear in the nominal rate.
  *
+ * @param band the wanted band, Hz
+ * @param guard its guards, Hz
+ * @param zone the interval's Nyquist zone
+ * @param blocking the blocking interferers
  * @param range the nominal rates allowed (drift ends inside the interval), Hz
- * @param drift ε = tolerance in ppm × 1e-6
+ * @param tolerancePpm ± drift of the rate, ppm
+ * @returns the slacks, t ≤ slope·r + offset, Hz
+ * @example linearSlacks(band, guard, 2, [], { low: 30e6, high: 40e6 }, ppm(0)).length // 4: two zone edges at each drift end
  */
-export function linearSlacks(band: Band, guard: Guard, zone: number, blocking: readonly Interferer[], range: Interval, drift: number): LinearSlack[] {
-  const scales = [1 - drift, 1 + drift];
+export function linearSlacks(band: Band, guard: Guard, zone: number, blocking: readonly Interferer[], range: Interval, tolerancePpm: Ppm): LinearSlack[] {
+  const { down, up } = driftFactors(tolerancePpm);
+  const scales = [down, up];
   const middle = (range.low + range.high) / 2;
   const slacks: LinearSlack[] = [];
   const guarded = guardedBand(band, guard.low, guard.high);
@@ -41,7 +50,7 @@ export function linearSlacks(band: Band, guard: Guard, zone: number, blocking: r
   for (const interferer of blocking) {
     const extent = normalisedExtent(interferer);
     const reach = interferer.requiredMargin;
-    for (const term of nearbyImages(extent, band, reach, range.low * scales[0]!, range.high * scales[1]!)) {
+    for (const term of nearbyImages(extent, band, reach, hz(range.low * down), hz(range.high * up))) {
       const image = imageOffsets(band, term.side);
       const above = term.slope * middle + image.low >= extent.high;
       for (const k of scales) {
@@ -78,7 +87,7 @@ export interface LpAnswer {
  * @returns the chosen rate and the worst slack t* it keeps, or null when the
  *   LP is infeasible
  */
-export function maximiseWorstSlack(slacks: readonly LinearSlack[], range: Interval, unit: number): LpAnswer | null {
+export function maximiseWorstSlack(slacks: readonly LinearSlack[], range: Interval, unit: Hz): LpAnswer | null {
   const first = solveStage(slacks, [], range, unit);
   if (!first) return null;
   const varying = slacks.filter((s) => Math.abs(s.slope * (range.high - range.low)) > 1e-9 * unit);

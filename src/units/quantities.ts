@@ -23,3 +23,20 @@ export const db = (value: number): Db => value as Db;
 export const ppm = (value: number): Ppm => value as Ppm;
 /** Brands a number of seconds. */
 export const seconds = (value: number): Seconds => value as Seconds;
+
+/**
+ * A relative offset as parts per million: 1e-6 is 1 ppm.
+ *
+ * @param fraction the offset relative to the nominal value (dimensionless)
+ * @returns ppm
+ * @example ppmOf(2000 / 100e6) // 20
+ */
+export const ppmOf = (fraction: number): Ppm => ppm(fraction * 1e6);
+/**
+ * Parts per million as a relative offset: 20 ppm is 2e-5.
+ *
+ * @param value ppm
+ * @returns the relative offset (dimensionless)
+ * @example fractionOf(ppm(20)) // 0.00002
+ */
+export const fractionOf = (value: Ppm): number => value * 1e-6;

@@ -1,3 +1,4 @@
+import { hz } from '../../src/units/quantities.js';
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { bestIntegerN, modelSlack } from '../../src/clocks/integer-widest-margin.js';
@@ -22,11 +23,11 @@ describe('the best integer N for the worst of linear slacks', () => {
     { slope: 2, offset: -10 },
     { slope: -1, offset: 20 },
   ];
-  const line = { first: 1, last: 100, rateAt: (N: number) => 0.7 * N };
+  const line = { first: 1, last: 100, rateAt: (N: number) => hz(0.7 * N) };
 
   it('enumeration and the MILP both find N = 14, t = 9.6 (worked by hand)', () => {
     for (const enumerateUpTo of [Infinity, 0]) {
-      const answer = bestIntegerN(slacks, line, 1, enumerateUpTo);
+      const answer = bestIntegerN(slacks, line, hz(1), enumerateUpTo);
       expect(answer.method).toBe(enumerateUpTo === 0 ? 'milp' : 'enumeration');
       expect(answer.N).toBe(14);
       expect(answer.worstSlack).toBeCloseTo(9.6, 12);
@@ -37,7 +38,7 @@ describe('the best integer N for the worst of linear slacks', () => {
     // t ≤ 3 everywhere; both varying slacks reach 3 for r in [6.5, 17], N = 10..24, a plateau; the varying pair peaks at N = 14 as above.
     const withConstant = [...slacks, { slope: 0, offset: 3 }];
     for (const enumerateUpTo of [Infinity, 0]) {
-      const answer = bestIntegerN(withConstant, line, 1, enumerateUpTo);
+      const answer = bestIntegerN(withConstant, line, hz(1), enumerateUpTo);
       expect(answer.worstSlack).toBe(3);
       expect(answer.N).toBe(14);
     }
@@ -55,7 +56,7 @@ describe('the best integer N for the worst of linear slacks', () => {
         fc.integer({ min: 1, max: 64 }),
         (shape, first, span, frequency, K) => {
           // Rates f·N/K around 1e7–1e10 Hz; slacks scaled so that they cross inside the range.
-          const rateAt = (N: number) => (frequency * N) / K;
+          const rateAt = (N: number) => hz((frequency * N) / K);
           const middle = rateAt(first + span / 2);
           const unit = 1e6;
           // Slopes below 1e-9 read as 0: denormal slopes only test the arithmetic of denormals.
@@ -65,7 +66,7 @@ describe('the best integer N for the worst of linear slacks', () => {
           });
           const reference = exhaustive(slacks, first, first + span, rateAt);
           for (const enumerateUpTo of [Infinity, 0]) {
-            const answer = bestIntegerN(slacks, { first, last: first + span, rateAt }, unit, enumerateUpTo);
+            const answer = bestIntegerN(slacks, { first, last: first + span, rateAt }, hz(unit), enumerateUpTo);
             if (answer.method === 'milp') milps++;
             expect(answer.N).toBeGreaterThanOrEqual(first);
             expect(answer.N).toBeLessThanOrEqual(first + span);

@@ -10,13 +10,13 @@ const key = (s: { N: number; M: number; D: number }) => `${s.N}/${s.M}/${s.D}`;
 describe('the rates a part gives (rate = f·N/(M·D), the synthesiser relation; common practice, no source)', () => {
   it('a direct part gives its own frequency, N = M = D = 1', () => {
     const xo = part('XO-A 122.88M', 122.88 * MHZ, { kind: 'direct' });
-    expect(partRates(xo, [1, 2, 4], 40 * MHZ, 250 * MHZ)).toEqual([{ rate: 122.88 * MHZ, settings: { N: 1, M: 1, D: 1 } }]);
-    expect(partRates(xo, [1], 130 * MHZ, 250 * MHZ)).toEqual([]);
+    expect(partRates(xo, [1, 2, 4], hz(40 * MHZ), hz(250 * MHZ))).toEqual([{ rate: 122.88 * MHZ, settings: { N: 1, M: 1, D: 1 } }]);
+    expect(partRates(xo, [1], hz(130 * MHZ), hz(250 * MHZ))).toEqual([]);
   });
 
   it('a divider part gives f/D for each converter divider inside the range', () => {
     const xo = part('XO-G 491.52M', 491.52 * MHZ, { kind: 'divider' });
-    const rates = partRates(xo, [1, 2, 4], 40 * MHZ, 250 * MHZ);
+    const rates = partRates(xo, [1, 2, 4], hz(40 * MHZ), hz(250 * MHZ));
     expect(rates.map((r) => [r.rate, r.settings.D])).toEqual([
       [245.76 * MHZ, 2],
       [122.88 * MHZ, 4],
@@ -39,7 +39,7 @@ describe('the rates a part gives (rate = f·N/(M·D), the synthesiser relation; 
   it('keeps a rate that lands exactly on a range end: 12.288 MHz × 10 / 1 = 122.88 MHz with the range ending there', () => {
     const syn = part('SYN-2', 12.288 * MHZ, synthesiser([1, 20], [1, 1], [1, 1]));
     const top = (12.288 * MHZ * 10) / 1;
-    expect(partRates(syn, [1], 40 * MHZ, top).map((r) => r.settings.N)).toEqual([4, 5, 6, 7, 8, 9, 10]);
+    expect(partRates(syn, [1], hz(40 * MHZ), hz(top)).map((r) => r.settings.N)).toEqual([4, 5, 6, 7, 8, 9, 10]);
   });
 
   it('lists exactly the settings the definition gives, on random parts and ranges (fast-check)', () => {
@@ -61,11 +61,11 @@ describe('the rates a part gives (rate = f·N/(M·D), the synthesiser relation; 
           const top = (f * nMax) / mMin;
           const low = top * limitShape[0];
           const high = low + top * limitShape[1];
-          const listed = partRates(syn, [1], low, high);
+          const listed = partRates(syn, [1], hz(low), hz(high));
           const expected = everySetting(syn, [1], low, high);
           expect(listed.map((r) => key(r.settings)).sort()).toEqual(expected.map(key).sort());
           for (const r of listed) expect(r.rate).toBe((f * r.settings.N) / (r.settings.M * r.settings.D));
-          expect(partRateCount(syn, [1], low, high)).toBe(expected.length);
+          expect(partRateCount(syn, [1], hz(low), hz(high))).toBe(expected.length);
         },
       ),
       { numRuns: 400 },

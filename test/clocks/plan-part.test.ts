@@ -44,12 +44,12 @@ describe('the best rate of a synthesiser on a plan worked on paper', () => {
       expect(plan.settings).toEqual({ N: 16, M: 3, D: 1 });
       expect(plan.rate).toBeCloseTo((160 / 3) * MHZ, 6);
       expect(plan.evaluation.worstSlack).toBeCloseTo((5 / 3) * MHZ, 6);
-      expect(plan.evaluation.limitedBy).toBe('zone edge');
+      expect(plan.evaluation.limitedBy).toEqual({ kind: 'zone edge' });
       expect(plan.pass).toBe(true);
       expect(plan.headroom!.downPpm).toBeCloseTo(62500, 6);
       expect(plan.headroom!.upPpm).toBeCloseTo(125000, 6);
-      expect(plan.headroom!.downLimitedBy).toBe('zone edge');
-      expect(plan.headroom!.upLimitedBy).toBe('rate limit');
+      expect(plan.headroom!.downLimitedBy).toEqual({ kind: 'zone edge' });
+      expect(plan.headroom!.upLimitedBy).toEqual({ kind: 'rate limit' });
     });
   }
 

@@ -4,7 +4,6 @@ import { hz, ppm, seconds } from '../../src/units/quantities.js';
 import type { PlanContext } from '../../src/solve/plan-context.js';
 import { evaluateRate } from '../../src/solve/evaluate-rate.js';
 import { driftHeadroom } from '../../src/solve/drift.js';
-import { RATE_LIMIT } from '../../src/solve/limited-by.js';
 import { feasibleSetOf, handWorkedContext, MHZ } from '../helpers/hand-worked-plan.js';
 import { bruteGuarded, bruteLeastDistance, brutePasses, verdictSpacing, wantedAlias, wholeInOneZone } from '../helpers/brute-force-plan.js';
 import { planArbitrary } from './random-plan.js';
@@ -21,17 +20,17 @@ describe('drift headroom on the plan worked on paper (test/solve/hand-worked.tes
   it('at 26 MHz: (1 − 25/26)·1e6 = 38 461.5 ppm down to the zone edge, (82/78 − 1)·1e6 = 51 282.1 ppm up to the spur', () => {
     const headroom = driftHeadroom(set, context.limits, hz(26 * MHZ))!;
     expect(headroom.downPpm).toBeCloseTo((1 - 25 / 26) * 1e6, 6);
-    expect(headroom.downLimitedBy).toBe('zone edge');
+    expect(headroom.downLimitedBy).toEqual({ kind: 'zone edge' });
     expect(headroom.upPpm).toBeCloseTo((82 / 78 - 1) * 1e6, 6);
-    expect(headroom.upLimitedBy).toBe('rate/4 spur');
+    expect(headroom.upLimitedBy).toEqual({ kind: 'interferer', label: 'rate/4 spur' });
   });
 
   it('at 113/3 MHz: (1 − 106.5/113)·1e6 ppm down to the tone, (126/113 − 1)·1e6 ppm up to the zone edge', () => {
     const headroom = driftHeadroom(set, context.limits, hz((113 / 3) * MHZ))!;
     expect(headroom.downPpm).toBeCloseTo((1 - 106.5 / 113) * 1e6, 6);
-    expect(headroom.downLimitedBy).toBe('board tone 10M');
+    expect(headroom.downLimitedBy).toEqual({ kind: 'interferer', label: 'board tone 10M' });
     expect(headroom.upPpm).toBeCloseTo((126 / 113 - 1) * 1e6, 6);
-    expect(headroom.upLimitedBy).toBe('zone edge');
+    expect(headroom.upLimitedBy).toEqual({ kind: 'zone edge' });
   });
 
   it('is null at a rate that already fails (30 MHz lies in the tone and spur blocked ranges)', () => {
@@ -53,10 +52,11 @@ describe('drift headroom ± 1 ppm on random plans (fast-check)', () => {
             const headroom = driftHeadroom(set, context.limits, hz(rate))!;
             expect(headroom).not.toBeNull();
             counts.rates++;
-            for (const [ppmAway, label, sign] of [
+            for (const [ppmAway, limit, sign] of [
               [headroom.downPpm, headroom.downLimitedBy, -1],
               [headroom.upPpm, headroom.upLimitedBy, 1],
             ] as const) {
+              const label = limit.kind === 'interferer' ? limit.label : limit.kind;
               // Inside by 1 ppm: passes, by the exact evaluator (tolerance 0) and by the independent brute force
               // (test/helpers/brute-force-plan.ts: the definition of aliasing; common practice, no source).
               const inside = rate * (1 + sign * (ppmAway - 1) * 1e-6);
@@ -66,10 +66,10 @@ describe('drift headroom ± 1 ppm on random plans (fast-check)', () => {
               const beyond = rate * (1 + sign * (ppmAway + 1) * 1e-6);
               const judged = evaluateRate(context, hz(beyond), ppm(0));
               counts.moves++;
-              if (label === RATE_LIMIT) {
+              if (limit.kind === 'rate limit') {
                 counts.rateLimit++;
                 expect(sign < 0 ? beyond < context.limits.minRate : beyond > context.limits.maxRate).toBe(true);
-              } else if (label === 'zone edge') {
+              } else if (limit.kind === 'zone edge') {
                 counts.zoneEdge++;
                 expect(judged.pass).toBe(false);
                 expect(judged.image === null || judged.zoneEdgeMargin < 0).toBe(true);

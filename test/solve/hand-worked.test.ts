@@ -135,6 +135,6 @@ describe('hand-worked plan: 21–25 MHz, tone at 10 MHz, rate/4 spur, 10–60 MH
     // The spur at 31/4 = 7.75 MHz lies inside [6, 10]: it would have to move 7.75 − 6 = 1.75 MHz (to the nearer edge) to clear it.
     expect(judged.checks[1]!.margin).toBeCloseTo(-1.75 * MHZ, 6);
     expect(judged.pass).toBe(false);
-    expect(judged.limitedBy).toBe('rate/4 spur');
+    expect(judged.limitedBy).toEqual({ kind: 'interferer', label: 'rate/4 spur' });
   });
 });

@@ -81,7 +81,7 @@ describe('bestShiftAndRate: the hand-worked case', () => {
     expect(Math.abs(best.promisedSlack! - 4.3 * MHz)).toBeLessThan(1);
     expect(best.evaluation.pass).toBe(true);
     expect(best.evaluation.zone).toBe(2);
-    expect(['zone edge', 'TONE 28.1M']).toContain(best.evaluation.limitedBy);
+    expect([{ kind: 'zone edge' }, { kind: 'interferer', label: 'TONE 28.1M' }]).toContainEqual(best.evaluation.limitedBy);
     const tone = best.evaluation.checks.find((c) => c.label === 'TONE 28.1M')!;
     expect(Math.abs(tone.margin - 4.8 * MHz)).toBeLessThan(1);
     expect(Math.abs(best.evaluation.zoneEdgeMargin - 4.3 * MHz)).toBeLessThan(1);
@@ -91,7 +91,7 @@ describe('bestShiftAndRate: the hand-worked case', () => {
     const nominal = search.atNoShift!;
     expect(nominal.shift).toBe(0);
     expect(nominal.origin).toBe('sample');
-    expect(nominal.evaluation.limitedBy).toBe('TONE 28.1M');
+    expect(nominal.evaluation.limitedBy).toEqual({ kind: 'interferer', label: 'TONE 28.1M' });
     expect(Math.abs(nominal.evaluation.worstSlack - 2.6 * MHz)).toBeLessThan(1);
     expect(Math.abs(nominal.rate - (92 / 3) * MHz)).toBeLessThan(1);
     expect(Math.abs(nominal.evaluation.zoneEdgeMargin - (17 / 3) * MHz)).toBeLessThan(1);
@@ -113,7 +113,7 @@ describe('seedShifts and the plane LP', () => {
 
   it('solves a plane LP whose optimum is negative (javascript-lp-solver 1.0.3 calls the plain model infeasible)', () => {
     // max t: t ≤ −1 + 0.5·x, x in [0, 1]: t* = −0.5 at x = 1 (worked by hand); y is free and idle.
-    const answer = maximisePlaneSlack([{ rate: 0.5, shift: 0, offset: -1 }], [], { rate: { low: 0, high: 1 }, shift: { low: 0, high: 1 } }, 1);
+    const answer = maximisePlaneSlack([{ rate: 0.5, shift: 0, offset: -1 }], [], { rate: { low: 0, high: 1 }, shift: { low: 0, high: 1 } }, hz(1));
     expect(answer).not.toBeNull();
     expect(answer!.worstSlack).toBeCloseTo(-0.5, 7);
     expect(answer!.rate).toBeCloseTo(1, 7);
@@ -122,7 +122,7 @@ describe('seedShifts and the plane LP', () => {
   it('solves the two-variable example of its doc comment: r − δ = 28.75, t* = 3.75 (worked by hand)', () => {
     // t ≤ r − δ − 25, t ≤ 32.5 − r + δ (MHz): equal at r − δ = 28.75, t = 3.75; the box leaves a line of optima.
     const box = { rate: { low: 20e6, high: 40e6 }, shift: { low: -2e6, high: 2e6 } };
-    const answer = maximisePlaneSlack([{ rate: 1, shift: -1, offset: -25e6 }, { rate: -1, shift: 1, offset: 32.5e6 }], [], box, 4e6)!;
+    const answer = maximisePlaneSlack([{ rate: 1, shift: -1, offset: -25e6 }, { rate: -1, shift: 1, offset: 32.5e6 }], [], box, hz(4e6))!;
     expect(Math.abs(answer.worstSlack - 3.75e6)).toBeLessThan(1);
     expect(Math.abs(answer.rate - answer.shift - 28.75e6)).toBeLessThan(1);
   });
@@ -153,7 +153,7 @@ describe('levels across the shift range (the filter stays put)', () => {
     const seen = new Set<boolean>();
     for (let i = 0; i <= 40; i++) {
       const shift = -2 * MHz + (4 * MHz * i) / 40;
-      const at = deriveInterferers(shiftedScenario(edge, shift));
+      const at = deriveInterferers(shiftedScenario(edge, hz(shift)));
       expect(at.map((x) => x.label)).toEqual(swept.map((x) => x.label));
       at.forEach((x, k) => {
         expect(swept[k]!.level).toBeGreaterThanOrEqual(x.level - 1e-9);

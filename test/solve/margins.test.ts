@@ -98,12 +98,12 @@ describe('aliased segments of an extent between rate/2 and rate wide', () => {
   // more than rate/2, yet it holds no whole half-zone, so it does not cover the first zone.
   // foldExtent reported [0, 0.5] for any extent at least rate/2 wide.
   it('[0.7, 1.3] at rate 1 folds onto [0, 0.3]; 70–130 MHz at 100 MHz onto 0–30 MHz', () => {
-    expect(foldExtent(0.7, 1.3, 1)).toEqual([{ low: 0, high: expect.closeTo(0.3, 15) }]);
-    expect(foldExtent(70e6, 130e6, 100e6)).toEqual([{ low: 0, high: 30e6 }]);
+    expect(foldExtent(hz(0.7), hz(1.3), hz(1))).toEqual([{ low: 0, high: expect.closeTo(0.3, 15) }]);
+    expect(foldExtent(hz(70e6), hz(130e6), hz(100e6))).toEqual([{ low: 0, high: 30e6 }]);
   });
 
   it('an extent holding a whole half-zone still covers the first zone: [0.4, 1.3] at rate 1', () => {
     // [0.5, 1] alone folds onto all of [0, 0.5].
-    expect(foldExtent(0.4, 1.3, 1)).toEqual([{ low: 0, high: 0.5 }]);
+    expect(foldExtent(hz(0.4), hz(1.3), hz(1))).toEqual([{ low: 0, high: 0.5 }]);
   });
 });

@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { hz } from '../../src/units/quantities.js';
 import { maximiseWorstSlack } from '../../src/solve/widest-margin-lp.js';
 
 // Worked by hand: on [171, 194.5] (MHz units) with slacks 4 (constant), r − 171
@@ -15,17 +16,17 @@ describe('widest-margin LP with a constant slack (lexicographic second stage)', 
   const range = { low: 171 * MHz, high: 194.5 * MHz };
 
   it('keeps the first-stage worst slack as its promise', () => {
-    const answer = maximiseWorstSlack(slacks, range, 20 * MHz);
+    const answer = maximiseWorstSlack(slacks, range, hz(20 * MHz));
     expect(answer?.worstSlack).toBeCloseTo(4 * MHz, -2);
   });
 
   it('balances the slacks that vary instead of returning an arbitrary tie', () => {
-    const answer = maximiseWorstSlack(slacks, range, 20 * MHz);
+    const answer = maximiseWorstSlack(slacks, range, hz(20 * MHz));
     expect(answer!.rate / MHz).toBeCloseTo(560 / 3, 4);
   });
 
   it('without a constant slack, the first stage alone decides (same balanced point)', () => {
-    const answer = maximiseWorstSlack(slacks.slice(1), range, 20 * MHz);
+    const answer = maximiseWorstSlack(slacks.slice(1), range, hz(20 * MHz));
     expect(answer!.rate / MHz).toBeCloseTo(560 / 3, 4);
     expect(answer!.worstSlack / MHz).toBeCloseTo(47 / 3, 4);
   });
@@ -44,7 +45,7 @@ describe('widest-margin LP when every slack is negative', () => {
         { slope: 1, offset: -10 * MHz },
       ],
       { low: 0, high: 1 * MHz },
-      1 * MHz,
+      hz(1 * MHz),
     );
     expect(answer).not.toBeNull();
     expect(answer!.rate / MHz).toBeCloseTo(1, 6);

@@ -13,6 +13,7 @@ import { maximisePlaneSlack, type PlaneSlack } from './plane-lp.js';
 import { DEFAULT_SEED_COUNT, seedShifts } from './seed-shifts.js';
 import { shiftPieces, type PieceInputs, type ShiftPiece } from './shift-piece.js';
 import { shiftedScenario, sweptScenario } from './shifted-scenario.js';
+import { limitText } from '../limited-by.js';
 
 /** An IF shift and a sampling rate, judged exactly. */
 export interface ShiftedRate {
@@ -92,7 +93,7 @@ export function bestShiftAndRate(scenario: Scenario, options: ShiftSearchOptions
     throw new RangeError(`an IF shift range with low ≤ high that keeps the band at or above 0 Hz, got ${range.low}–${range.high} Hz`);
   }
   const widest: Scenario = { ...scenario, goal: { kind: 'widest-margin' } };
-  const contextAt = (shift: number): PlanContext => contextFromScenario(shiftedScenario(widest, shift));
+  const contextAt = (shift: number): PlanContext => contextFromScenario(shiftedScenario(widest, hz(shift)));
   const base = contextAt(0);
   const inputs: PieceInputs = {
     band: base.band,
@@ -101,9 +102,9 @@ export function bestShiftAndRate(scenario: Scenario, options: ShiftSearchOptions
     interferers: base.interferers,
     blocking: blockingSomewhere(widest, range, base),
     shifts: range,
-    drift: base.tolerancePpm * 1e-6,
+    tolerancePpm: base.tolerancePpm,
   };
-  const unit = base.band.high - base.band.low;
+  const unit = hz(base.band.high - base.band.low);
   const shifts = seedShifts(range, options.seeds ?? DEFAULT_SEED_COUNT);
   const found: ShiftedRate[] = [];
   let atNoShift: ShiftedRate | null = null;
@@ -131,9 +132,9 @@ export function bestShiftAndRate(scenario: Scenario, options: ShiftSearchOptions
 }
 
 /** The nominal rate a feasible interval seeds its piece at: the middle of its drift-safe range (or of the interval). */
-function seedRate(interval: FeasibleInterval, tolerancePpm: Ppm): number {
+function seedRate(interval: FeasibleInterval, tolerancePpm: Ppm): Hz {
   const safe = driftSafeRange(interval, tolerancePpm);
-  return safe ? (safe.low + safe.high) / 2 : (interval.minRate + interval.maxRate) / 2;
+  return hz(safe ? (safe.low + safe.high) / 2 : (interval.minRate + interval.maxRate) / 2);
 }
 
 /**
@@ -143,7 +144,7 @@ function seedRate(interval: FeasibleInterval, tolerancePpm: Ppm): number {
  * a mismatch is a bug.
  */
 function blockingSomewhere(scenario: Scenario, range: Interval, base: PlanContext): boolean[] {
-  const swept = deriveInterferers(sweptScenario(scenario, range));
+  const swept = deriveInterferers(sweptScenario(scenario, { low: hz(range.low), high: hz(range.high) }));
   if (swept.length !== base.interferers.length || swept.some((s, i) => s.label !== base.interferers[i]!.label)) {
     throw new Error('the swept scenario derived a different list of interferers');
   }
@@ -155,7 +156,7 @@ function blockingSomewhere(scenario: Scenario, range: Interval, base: PlanContex
  * δ* (the LP's rounding may leave it a hair outside) and judges it exactly.
  * Null when the zone leaves no room at δ* (a window narrower than the drift).
  */
-function solvePiece(piece: ShiftPiece, contextAt: (shift: number) => PlanContext, tolerancePpm: Ppm, unit: number): ShiftedRate | null {
+function solvePiece(piece: ShiftPiece, contextAt: (shift: number) => PlanContext, tolerancePpm: Ppm, unit: Hz): ShiftedRate | null {
   const answer = maximisePlaneSlack(piece.bounds, piece.held, piece.box, unit);
   if (!answer) return null;
   const shift = Math.min(Math.max(answer.shift, piece.box.shift.low), piece.box.shift.high);
@@ -170,7 +171,7 @@ function solvePiece(piece: ShiftPiece, contextAt: (shift: number) => PlanContext
   if (evaluation.worstSlack < answer.worstSlack - allowance) {
     throw new Error(
       `IF-shift LP promised ${answer.worstSlack} Hz at shift ${shift} Hz, rate ${rate} Hz (zone ${piece.zone}); ` +
-        `the exact re-check found ${evaluation.worstSlack} Hz (${evaluation.limitedBy}), allowance ${allowance} Hz`,
+        `the exact re-check found ${evaluation.worstSlack} Hz (${limitText(evaluation.limitedBy)}), allowance ${allowance} Hz`,
     );
   }
   return { shift: hz(shift), rate: hz(rate), origin: 'piece', evaluation, promisedSlack: hz(answer.worstSlack) };

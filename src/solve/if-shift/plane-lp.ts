@@ -1,3 +1,4 @@
+import { hz, type Hz } from '../../units/quantities.js';
 import type { Interval } from '../../math/interval-set.js';
 import { lpSolver } from '../widest-margin-lp.js';
 
@@ -25,8 +26,8 @@ export interface PlaneAnswer {
 }
 
 /** The value of a slack at (r, δ), Hz. */
-export function slackAt(slack: PlaneSlack, rate: number, shift: number): number {
-  return slack.rate * rate + slack.shift * shift + slack.offset;
+export function slackAt(slack: PlaneSlack, rate: Hz, shift: Hz): Hz {
+  return hz(slack.rate * rate + slack.shift * shift + slack.offset);
 }
 
 /**
@@ -46,7 +47,7 @@ export function slackAt(slack: PlaneSlack, rate: number, shift: number): number 
  * @returns the point and t*, or null when the held slacks leave nothing in the box
  * @example maximisePlaneSlack([{ rate: 1, shift: -1, offset: -25e6 }, { rate: -1, shift: 1, offset: 32.5e6 }], [], box, 4e6) // r − δ = 28.75 MHz, t* = 3.75 MHz
  */
-export function maximisePlaneSlack(bounds: readonly PlaneSlack[], held: readonly PlaneSlack[], box: PlaneBox, unit: number): PlaneAnswer | null {
+export function maximisePlaneSlack(bounds: readonly PlaneSlack[], held: readonly PlaneSlack[], box: PlaneBox, unit: Hz): PlaneAnswer | null {
   const first = solveStage(bounds, held, box, unit);
   if (!first) return null;
   const rateWidth = box.rate.high - box.rate.low;
@@ -67,10 +68,10 @@ export function maximisePlaneSlack(bounds: readonly PlaneSlack[], held: readonly
  * a negative right-hand side infeasible (seen here: max t, t ≤ −1 + 0.5·x,
  * x ≤ 1 came back infeasible; a colleague met the same in the one-variable LP).
  */
-function solveStage(bounds: readonly PlaneSlack[], held: readonly PlaneSlack[], box: PlaneBox, unit: number): PlaneAnswer | null {
+function solveStage(bounds: readonly PlaneSlack[], held: readonly PlaneSlack[], box: PlaneBox, unit: Hz): PlaneAnswer | null {
   const rateWidth = box.rate.high - box.rate.low;
   const shiftWidth = box.shift.high - box.shift.low;
-  const corners = [box.rate.low, box.rate.high].flatMap((r) => [box.shift.low, box.shift.high].map((d) => [r, d] as const));
+  const corners = [box.rate.low, box.rate.high].flatMap((r) => [box.shift.low, box.shift.high].map((d) => [hz(r), hz(d)] as const));
   const least = Math.min(0, ...bounds.flatMap((s) => corners.map(([r, d]) => slackAt(s, r, d) / unit)));
   const lift = 1 - least;
   const constraints: Record<string, { max: number }> = { spanX: { max: 1 }, spanY: { max: 1 } };
@@ -78,7 +79,7 @@ function solveStage(bounds: readonly PlaneSlack[], held: readonly PlaneSlack[], 
   const x: Record<string, number> = { spanX: 1 };
   const y: Record<string, number> = { spanY: 1 };
   const add = (name: string, s: PlaneSlack, withT: boolean) => {
-    constraints[name] = { max: slackAt(s, box.rate.low, box.shift.low) / unit + (withT ? lift : 0) };
+    constraints[name] = { max: slackAt(s, hz(box.rate.low), hz(box.shift.low)) / unit + (withT ? lift : 0) };
     if (withT) t[name] = 1;
     x[name] = (-s.rate * rateWidth) / unit;
     y[name] = (-s.shift * shiftWidth) / unit;

@@ -1,3 +1,4 @@
+import { hz, type Hz } from '../../units/quantities.js';
 import type { Interval } from '../../math/interval-set.js';
 
 /** IF shifts at which the fixed-shift problem is solved to find pieces, by default. */
@@ -15,12 +16,12 @@ export const DEFAULT_SEED_COUNT = 17;
  * @throws RangeError for a count below 2
  * @example seedShifts({ low: -2e6, high: 2e6 }, 5) // [−2e6, −1e6, 0, 1e6, 2e6]
  */
-export function seedShifts(range: Interval, count: number = DEFAULT_SEED_COUNT): number[] {
+export function seedShifts(range: Interval, count: number = DEFAULT_SEED_COUNT): Hz[] {
   if (!(Number.isInteger(count) && count >= 2)) throw new RangeError(`at least 2 seed shifts, got ${count}`);
-  if (range.low === range.high) return [range.low];
+  if (range.low === range.high) return [hz(range.low)];
   const shifts = Array.from({ length: count }, (_, i) =>
     i === 0 ? range.low : i === count - 1 ? range.high : (range.low * (count - 1 - i) + range.high * i) / (count - 1),
   );
   if (range.low < 0 && 0 < range.high && !shifts.includes(0)) shifts.push(0);
-  return shifts.sort((a, b) => a - b);
+  return shifts.sort((a, b) => a - b).map(hz);
 }

@@ -3,6 +3,8 @@ import type { Interval } from '../../math/interval-set.js';
 import type { RateLimits } from '../../windows/rate-window.js';
 import { imageOffsets } from '../fold-images.js';
 import type { Interferer } from '../../interferers/interferer.js';
+import { driftFactors } from '../drift.js';
+import { hz, type Hz, type Ppm } from '../../units/quantities.js';
 import { slackAt, type PlaneBox, type PlaneSlack } from './plane-lp.js';
 
 /**
@@ -32,8 +34,8 @@ export interface PieceInputs {
   readonly blocking: readonly boolean[];
   /** The whole shift range, Hz. */
   readonly shifts: Interval;
-  /** ε = tolerance in ppm × 1e-6. */
-  readonly drift: number;
+  /** ± drift of the rate, ppm. */
+  readonly tolerancePpm: Ppm;
 }
 
 /**
@@ -68,7 +70,7 @@ export interface PieceInputs {
  * @returns the pieces whose box leaves a rate in the zone (possibly none)
  * @example shiftPieces(inputs, 2, { shift: 0, rate: 33e6 })[0]?.box.rate // the zone-2 rates over the whole shift range
  */
-export function shiftPieces(inputs: PieceInputs, zone: number, seed: { readonly shift: number; readonly rate: number }): ShiftPiece[] {
+export function shiftPieces(inputs: PieceInputs, zone: number, seed: { readonly shift: Hz; readonly rate: Hz }): ShiftPiece[] {
   const range = inputs.shifts;
   const dcShift = inputs.guard.low - inputs.band.low; // the shift at which the lower guard reaches DC
   const parts = range.low < dcShift && dcShift < range.high ? [{ low: range.low, high: dcShift }, { low: dcShift, high: range.high }] : [range];
@@ -78,11 +80,10 @@ export function shiftPieces(inputs: PieceInputs, zone: number, seed: { readonly 
   });
 }
 
-function pieceOver(inputs: PieceInputs, zone: number, seed: { readonly shift: number; readonly rate: number }, shifts: Interval, atDc: boolean): ShiftPiece | null {
-  const { band, guard, limits, drift } = inputs;
+function pieceOver(inputs: PieceInputs, zone: number, seed: { readonly shift: Hz; readonly rate: Hz }, shifts: Interval, atDc: boolean): ShiftPiece | null {
+  const { band, guard, limits, tolerancePpm } = inputs;
   const lowerGuardEdge = band.low - guard.low; // fL − gL: the guarded band's lower edge at δ = 0
-  const down = 1 - drift;
-  const up = 1 + drift;
+  const { down, up } = driftFactors(tolerancePpm);
   const guardedLow = (shift: number) => Math.max(0, lowerGuardEdge + shift);
   const guardedHigh = (shift: number) => band.high + guard.high + shift;
   const rate: Interval = {
@@ -106,7 +107,7 @@ function pieceOver(inputs: PieceInputs, zone: number, seed: { readonly shift: nu
     [rate.high, shifts.low],
     [rate.high, shifts.high],
   ] as const;
-  const least = (s: PlaneSlack) => Math.min(...corners.map(([r, d]) => slackAt(s, r, d)));
+  const least = (s: PlaneSlack) => Math.min(...corners.map(([r, d]) => slackAt(s, hz(r), hz(d))));
   inputs.interferers.forEach((interferer, index) => {
     if (!inputs.blocking[index]) return;
     const flip = interferer.rateMultiple < 0; // fold −(…) instead: aliases are unchanged

@@ -12,7 +12,7 @@ import type { Scenario } from '../../scenario/scenario.js';
  * @returns a new scenario; the input is not changed
  * @example shiftedScenario(s, hz(-2e6)).wanted // 137.5–142.5 MHz becomes 135.5–140.5 MHz
  */
-export function shiftedScenario(scenario: Scenario, shift: number): Scenario {
+export function shiftedScenario(scenario: Scenario, shift: Hz): Scenario {
   const move = <T extends { readonly low: Hz; readonly high: Hz }>(band: T): T => ({ ...band, low: (band.low + shift) as Hz, high: (band.high + shift) as Hz });
   return { ...scenario, wanted: move(scenario.wanted), neighbours: scenario.neighbours.map(move), ifShift: null };
 }
@@ -30,7 +30,7 @@ export function shiftedScenario(scenario: Scenario, shift: number): Scenario {
  * @returns a new scenario (ifShift null)
  * @example sweptScenario(s, { low: -2e6, high: 2e6 }).neighbours[0] // 143–148 MHz becomes 141–150 MHz
  */
-export function sweptScenario(scenario: Scenario, range: { readonly low: number; readonly high: number }): Scenario {
+export function sweptScenario(scenario: Scenario, range: { readonly low: Hz; readonly high: Hz }): Scenario {
   const widen = <T extends { readonly low: Hz; readonly high: Hz }>(band: T): T => ({ ...band, low: (band.low + range.low) as Hz, high: (band.high + range.high) as Hz });
   return { ...scenario, neighbours: scenario.neighbours.map(widen), ifShift: null };
 }
