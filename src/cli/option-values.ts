@@ -1,7 +1,7 @@
 import { InputError } from '../units/input-error.js';
 import { parseFrequency } from '../units/parse-frequency.js';
 import { hz, type Hz } from '../units/quantities.js';
-import type { Band, Guard } from '../math/band.js';
+import { guardBands, type Band, type Guard } from '../math/band.js';
 
 /** A frequency option that must be above zero. */
 export function positiveFrequency(text: string, option: string): Hz {
@@ -57,12 +57,12 @@ export function guardFromOptions(options: GuardOptions, band: Band): Guard {
       throw new InputError('--guard', 'either --guard, or --guard-low/--guard-high, not both', options.guard);
     }
     const both = guardWidth(options.guard, '--guard', width);
-    return { low: both, high: both };
+    return guardBands(both, both);
   }
-  return {
-    low: options.guardLow === undefined ? hz(0) : guardWidth(options.guardLow, '--guard-low', width),
-    high: options.guardHigh === undefined ? hz(0) : guardWidth(options.guardHigh, '--guard-high', width),
-  };
+  return guardBands(
+    options.guardLow === undefined ? hz(0) : guardWidth(options.guardLow, '--guard-low', width),
+    options.guardHigh === undefined ? hz(0) : guardWidth(options.guardHigh, '--guard-high', width),
+  );
 }
 
 function required(value: string | undefined, option: string): string {

@@ -1,8 +1,7 @@
 import type { ClockPart } from '../scenario/scenario.js';
 import { evaluateRate, type RateEvaluation } from '../solve/evaluate-rate.js';
 import { hz, type Ppm } from '../units/quantities.js';
-import { guardedBand, rateWindows } from '../windows/enumerate-windows.js';
-import { feasibleSet, type FeasibleInterval, type FeasibleSet } from '../solve/feasible-set.js';
+import { planRates, type FeasibleInterval, type FeasibleSet } from '../solve/feasible-set.js';
 import type { PlanContext } from '../solve/plan-context.js';
 import { driftHeadroom, driftReach, driftSafeRange } from '../solve/drift.js';
 import { linearSlacks, maximiseWorstSlack, type LinearSlack } from '../solve/widest-margin-lp.js';
@@ -179,8 +178,7 @@ function bestPassing(context: PlanContext, part: ClockPart, families: readonly R
  * rate passes exactly when its drift lies inside one of these intervals.
  */
 function driftFeasibleSet(context: PlanContext, tolerancePpm: Ppm): FeasibleSet {
-  const windows = rateWindows(guardedBand(context.band, context.guard.low, context.guard.high), driftReach(context.limits, tolerancePpm));
-  return feasibleSet(windows, context.interferers, context.band);
+  return planRates(context, driftReach(context.limits, tolerancePpm));
 }
 
 /** The feasible intervals wide enough for the part's drift, their linear slacks and LP bounds. */

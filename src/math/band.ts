@@ -7,10 +7,29 @@ export interface Band {
   readonly high: Hz;
 }
 
-/** Guard bands below and above a band, Hz: room for the anti-alias filter's transitions. */
+declare const guardBrand: unique symbol;
+
+/**
+ * Guard bands below and above a band, Hz: room for the anti-alias filter's
+ * transitions. Not a band: a guard is made by guardBands, so that a band is
+ * never passed where a guard is expected (the two have the same fields).
+ */
 export interface Guard {
   readonly low: Hz;
   readonly high: Hz;
+  readonly [guardBrand]: 'guard';
+}
+
+/**
+ * A guard of `low` below the band and `high` above it.
+ *
+ * @param low guard below the band, Hz, ≥ 0
+ * @param high guard above the band, Hz, ≥ 0
+ * @returns the guard
+ * @example guardBands(hz(2e6), hz(1e6)) // { low: 2000000, high: 1000000 }
+ */
+export function guardBands(low: Hz, high: Hz): Guard {
+  return { low, high } as Guard;
 }
 
 /** A band after sampling: its zone and its image inside [0, rate/2]. */

@@ -1,9 +1,8 @@
 import { hz } from '../units/quantities.js';
-import { guardedBand, rateWindows } from '../windows/enumerate-windows.js';
 import type { RateWindow } from '../windows/rate-window.js';
 import { bestRateIn, goalScore } from '../solve/best-rate.js';
 import { evaluateRate, type RateEvaluation } from '../solve/evaluate-rate.js';
-import { feasibleSet, type BlockedRange, type FeasibleInterval } from '../solve/feasible-set.js';
+import { planRates, type BlockedRange, type FeasibleInterval } from '../solve/feasible-set.js';
 import type { PlanContext } from '../solve/plan-context.js';
 import { planPart } from '../clocks/plan-part.js';
 import { driftHeadroom, type DriftHeadroom } from '../solve/drift.js';
@@ -52,9 +51,8 @@ export interface PlanResult {
  * @throws Error when a part's integer optimum fails its exact re-check (a bug)
  */
 export function solvePlan(context: PlanContext): PlanResult {
-  const windows = rateWindows(guardedBand(context.band, context.guard.low, context.guard.high), context.limits);
-  const set = feasibleSet(windows, context.interferers, context.band);
-  const { feasible, blocked } = set;
+  const set = planRates(context);
+  const { windows, feasible, blocked } = set;
   const candidates: Candidate[] = [];
   const parts: PartPlan[] = [];
   const unplannedParts: string[] = [];

@@ -37,7 +37,7 @@ export interface WindowsReport {
  * @param limits the rate range searched, Hz
  */
 export function windowsReport(band: Band, guard: Guard, limits: RateLimits): WindowsReport {
-  const guarded = guardedBand(band, guard.low, guard.high);
+  const guarded = guardedBand(band, guard);
   const windows = rateWindows(guarded, limits).map((w) => describeWindow(w, band));
   return {
     band,

@@ -1,3 +1,4 @@
+import { guardBands } from '../math/band.js';
 import * as z from 'zod';
 import { formatFrequency } from '../units/format-frequency.js';
 import { hz, type Hz } from '../units/quantities.js';
@@ -95,7 +96,7 @@ export const scenarioFileSchema = z
       name: file.name,
       description: file.description,
       wanted,
-      guard: { low: guardHz(file.guard.low, width), high: guardHz(file.guard.high, width) },
+      guard: guardBands(guardHz(file.guard.low, width), guardHz(file.guard.high, width)),
       converter,
       harmonicOrder: file.harmonicOrder,
       maxOrder: file.maxOrder,

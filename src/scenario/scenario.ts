@@ -1,5 +1,5 @@
 import type { Db, Hz, Ppm, Seconds } from '../units/quantities.js';
-import type { Band } from '../math/band.js';
+import type { Band, Guard } from '../math/band.js';
 
 /**
  * The validated scenario: one receiver variant, every frequency in Hz, every
@@ -14,7 +14,7 @@ export interface Scenario {
   /** The wanted IF band and the levels at which it is planned. */
   readonly wanted: WantedBand;
   /** Guard bands for the anti-alias filter's transitions, Hz. */
-  readonly guard: { readonly low: Hz; readonly high: Hz };
+  readonly guard: Guard;
   readonly converter: Converter;
   /** Highest harmonic order checked (every signal at the converter input), ≥ 2. */
   readonly harmonicOrder: number;

@@ -95,7 +95,7 @@ export function evaluateRate(context: PlanContext, rate: Hz, tolerancePpm: Ppm):
 
 /** Distance from the guarded band to the nearer edge of zone n at rate r, Hz. A lower guard stops at DC, as in guardedBand. */
 export function zoneEdgeMarginAt(band: Band, guard: Guard, zone: number, rate: Hz): Hz {
-  const guarded = guardedBand(band, guard.low, guard.high);
+  const guarded = guardedBand(band, guard);
   const below = guarded.low - ((zone - 1) * rate) / 2;
   const above = (zone * rate) / 2 - guarded.high;
   return hz(Math.min(below, above));

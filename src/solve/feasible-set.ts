@@ -2,9 +2,11 @@ import type { Hz } from '../units/quantities.js';
 import { hz } from '../units/quantities.js';
 import type { Band } from '../math/band.js';
 import { subtractOpen, type Interval } from '../math/interval-set.js';
-import type { RateWindow } from '../windows/rate-window.js';
+import type { RateLimits, RateWindow } from '../windows/rate-window.js';
+import { guardedBand, rateWindows } from '../windows/enumerate-windows.js';
 import { forbiddenRates } from './forbidden-rates.js';
 import type { Interferer } from '../interferers/interferer.js';
+import type { PlanContext } from './plan-context.js';
 
 /** A closed interval of rates where the band fits and nothing blocking lands near it. */
 export interface FeasibleInterval {
@@ -61,4 +63,36 @@ export function feasibleSet(windows: readonly RateWindow[], interferers: readonl
   }
   const byRate = <T extends { minRate: number }>(a: T, b: T) => a.minRate - b.minRate;
   return { feasible: feasible.sort(byRate), blocked: blocked.sort(byRate) };
+}
+
+/** A plan's legal windows and its exact feasible set in them. */
+export interface PlanRates extends FeasibleSet {
+  readonly windows: readonly RateWindow[];
+}
+
+/**
+ * The one chain from a plan to its rates: the band widened by its guards, the
+ * legal windows of that guarded band inside the rate limits, and the exact
+ * feasible set in those windows.
+ *
+ * @param plan the wanted band, guards, rate limits and interferers (a PlanContext)
+ * @param limits the rates searched, Hz (default: the plan's own limits)
+ * @returns the windows, the feasible intervals and the blocked ranges
+ * @example planRates(handWorked).feasible.length // 4: [20.4, 21], [25, 82/3], [35.5, 42], [50, 60] MHz
+ */
+export function planRates(plan: Pick<PlanContext, 'band' | 'guard' | 'limits' | 'interferers'>, limits: RateLimits = plan.limits): PlanRates {
+  const windows = planWindows(plan, limits);
+  return { windows, ...feasibleSet(windows, plan.interferers, plan.band) };
+}
+
+/**
+ * The first link of planRates alone: the legal windows of the plan's guarded band.
+ *
+ * @param plan the wanted band, guards and rate limits
+ * @param limits the rates searched, Hz (default: the plan's own limits)
+ * @returns the windows, ascending by rate
+ * @example planWindows(handWorked).map((w) => w.zone) // [3, 2, 1]
+ */
+export function planWindows(plan: Pick<PlanContext, 'band' | 'guard' | 'limits'>, limits: RateLimits = plan.limits): RateWindow[] {
+  return rateWindows(guardedBand(plan.band, plan.guard), limits);
 }

@@ -41,7 +41,7 @@ export function linearSlacks(band: Band, guard: Guard, zone: number, blocking: r
   const scales = [down, up];
   const middle = (range.low + range.high) / 2;
   const slacks: LinearSlack[] = [];
-  const guarded = guardedBand(band, guard.low, guard.high);
+  const guarded = guardedBand(band, guard);
   for (const k of scales) {
     slacks.push({ slope: (-(zone - 1) * k) / 2, offset: guarded.low });
     slacks.push({ slope: (zone * k) / 2, offset: -guarded.high });

@@ -1,5 +1,5 @@
 import { hz, type Hz } from '../units/quantities.js';
-import type { Band } from '../math/band.js';
+import type { Band, Guard } from '../math/band.js';
 import { floorTolerant, sameEdge } from '../math/edge-tolerance.js';
 import type { RateLimits, RateWindow } from './rate-window.js';
 
@@ -50,11 +50,12 @@ function clipped(zone: number, lowest: number, highest: number, limits: RateLimi
  * DC (the band is then low-pass and only zone 1 can hold it).
  *
  * @param band the wanted band, Hz
- * @param guardLow guard below the band, Hz
- * @param guardHigh guard above the band, Hz
+ * @param guard its guards, Hz
+ * @returns the guarded band, Hz
+ * @example guardedBand({ low: hz(60e6), high: hz(80e6) }, guardBands(hz(1e6), hz(3e6))) // { low: 59000000, high: 83000000 }
  */
-export function guardedBand(band: Band, guardLow: Hz, guardHigh: Hz): Band {
-  return { low: hz(Math.max(0, band.low - guardLow)), high: hz(band.high + guardHigh) };
+export function guardedBand(band: Band, guard: Guard): Band {
+  return { low: hz(Math.max(0, band.low - guard.low)), high: hz(band.high + guard.high) };
 }
 
 /** The lowest legal rate among the windows, Hz, or null when there is none. */

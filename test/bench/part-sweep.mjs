@@ -6,8 +6,7 @@
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import { readScenarioFile } from '../../dist/cli/read-scenario.js';
 import { contextFromScenario } from '../../dist/solve/context-from-scenario.js';
-import { guardedBand, rateWindows } from '../../dist/windows/enumerate-windows.js';
-import { feasibleSet } from '../../dist/solve/feasible-set.js';
+import { planRates } from '../../dist/solve/feasible-set.js';
 import { containingInterval } from '../../dist/solve/drift.js';
 
 const ROOT = fileURLToPath(new URL('../../', import.meta.url));
@@ -43,8 +42,7 @@ function sweep(feasible) {
 /** Runs the sweep (one warm-up pass, then the timed pass), prints the figures, returns whether it is within the limit. */
 export default async function partSweep() {
   const context = contextFromScenario(readScenarioFile(DEMO));
-  const windows = rateWindows(guardedBand(context.band, context.guard.low, context.guard.high), context.limits);
-  const { feasible } = feasibleSet(windows, context.interferers, context.band);
+  const { feasible } = planRates(context);
   sweep(feasible);
   const start = process.hrtime.bigint();
   const { judged, passing } = sweep(feasible);

@@ -1,3 +1,4 @@
+import { guardBands } from '../../src/math/band.js';
 import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -51,7 +52,7 @@ describe('ifzone solve --json: the contract', () => {
 
   it('lists the windows of the guarded band that the enumerator gives (Vaughan, Scott & White 1991 condition)', () => {
     const plan = JSON.parse(runBin('solve', BASE, '--json').stdout);
-    const expected = rateWindows(guardedBand({ low: hz(130e6), high: hz(150e6) }, hz(2e6), hz(2e6)), { minRate: hz(40e6), maxRate: hz(250e6) });
+    const expected = rateWindows(guardedBand({ low: hz(130e6), high: hz(150e6) }, guardBands(hz(2e6), hz(2e6))), { minRate: hz(40e6), maxRate: hz(250e6) });
     expect(plan.windows).toEqual(expected);
   });
 

@@ -3,8 +3,7 @@ import { readdirSync } from 'node:fs';
 import { hz, ppm } from '../../src/units/quantities.js';
 import { readScenarioFile } from '../../src/cli/read-scenario.js';
 import { contextFromScenario } from '../../src/solve/context-from-scenario.js';
-import { guardedBand, rateWindows } from '../../src/windows/enumerate-windows.js';
-import { feasibleSet } from '../../src/solve/feasible-set.js';
+import { planRates } from '../../src/solve/feasible-set.js';
 import { evaluateRate } from '../../src/solve/evaluate-rate.js';
 import { planPart, SEARCH_ALLOWANCE } from '../../src/clocks/plan-part.js';
 import { everySetting } from './part-fixtures.js';
@@ -20,7 +19,7 @@ const files = readdirSync('scenarios').filter((name) => /^heron-.*\.json$/.test(
 describe.each(files)('the parts of %s', (file) => {
   const scenario = readScenarioFile(`scenarios/${file}`);
   const context = contextFromScenario(scenario);
-  const set = feasibleSet(rateWindows(guardedBand(context.band, context.guard.low, context.guard.high), context.limits), context.interferers, context.band);
+  const set = planRates(context);
   const bandwidth = context.band.high - context.band.low;
 
   it.each(context.clocks.map((p) => [p.label, p] as const))('%s: the planner finds the best of every setting', (_label, part) => {

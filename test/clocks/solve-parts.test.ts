@@ -1,8 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { seconds } from '../../src/units/quantities.js';
 import { solvePlan } from '../../src/plan/solve-plan.js';
-import { guardedBand, rateWindows } from '../../src/windows/enumerate-windows.js';
-import { feasibleSet } from '../../src/solve/feasible-set.js';
+import { planRates } from '../../src/solve/feasible-set.js';
 import { planPart } from '../../src/clocks/plan-part.js';
 import { driftHeadroom } from '../../src/solve/drift.js';
 import { planReport } from '../../src/plan/plan-report.js';
@@ -21,7 +20,7 @@ describe('solvePlan puts every clock part forward at its best rate', () => {
     clocks: [xo, divided, syn, outside],
     clocking: { clockDividers: [1, 2, 3], bits: 12, apertureJitter: seconds(0.2e-12) },
   });
-  const set = feasibleSet(rateWindows(guardedBand(context.band, context.guard.low, context.guard.high), context.limits), context.interferers, context.band);
+  const set = planRates(context);
   const result = solvePlan(context);
 
   it('one candidate per part with a rate in range, as planPart plans it; the part outside the range listed as unplanned', () => {

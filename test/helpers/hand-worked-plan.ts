@@ -1,8 +1,8 @@
+import { guardBands } from '../../src/math/band.js';
 import { db, hz, ppm, seconds } from '../../src/units/quantities.js';
 import type { Interferer } from '../../src/interferers/interferer.js';
 import type { PlanContext } from '../../src/solve/plan-context.js';
-import { guardedBand, rateWindows } from '../../src/windows/enumerate-windows.js';
-import { feasibleSet, type FeasibleSet } from '../../src/solve/feasible-set.js';
+import { planRates, type FeasibleSet } from '../../src/solve/feasible-set.js';
 
 export const MHZ = 1e6;
 
@@ -35,7 +35,7 @@ export function handWorkedTone(label: string, rateMultiple: number, f: number): 
 export function handWorkedContext(overrides: Partial<PlanContext> = {}): PlanContext {
   return {
     band: { low: hz(21 * MHZ), high: hz(25 * MHZ) },
-    guard: { low: hz(0), high: hz(0) },
+    guard: guardBands(hz(0), hz(0)),
     limits: { minRate: hz(10 * MHZ), maxRate: hz(60 * MHZ) },
     interferers: [handWorkedTone('board tone 10M', 0, 10), handWorkedTone('rate/4 spur', 1 / 4, 0)],
     levelThreshold: db(-90),
@@ -49,5 +49,5 @@ export function handWorkedContext(overrides: Partial<PlanContext> = {}): PlanCon
 
 /** The exact feasible set of a plan, with its blocked ranges. */
 export function feasibleSetOf(context: PlanContext): FeasibleSet {
-  return feasibleSet(rateWindows(guardedBand(context.band, context.guard.low, context.guard.high), context.limits), context.interferers, context.band);
+  return planRates(context);
 }

@@ -1,3 +1,4 @@
+import { guardBands } from '../../src/math/band.js';
 import { db, hz, ppm, seconds } from '../../src/units/quantities.js';
 import type { Converter, Scenario } from '../../src/scenario/scenario.js';
 
@@ -38,7 +39,7 @@ export function scenarioFixture(overrides: Partial<Scenario> = {}): Scenario {
     name: 'Heron-test',
     description: 'Test fixture of the invented Heron receiver line',
     wanted: { low: hz(65e6), high: hz(75e6), weakestLevel: db(-60), strongestLevel: db(-1) },
-    guard: { low: hz(2e6), high: hz(2e6) },
+    guard: guardBands(hz(2e6), hz(2e6)),
     converter: converterFixture(),
     harmonicOrder: 5,
     boardSpurs: [],

@@ -1,3 +1,4 @@
+import { guardBands } from '../../src/math/band.js';
 import { describe, expect, it } from 'vitest';
 import { db, hz, ppm, seconds } from '../../src/units/quantities.js';
 import type { Scenario } from '../../src/scenario/scenario.js';
@@ -48,7 +49,7 @@ const handWorked: Scenario = {
   name: 'Heron-HW',
   description: 'hand-worked test scenario',
   wanted: { low: hz(40 * MHz), high: hz(50 * MHz), weakestLevel: db(-60), strongestLevel: db(-1) },
-  guard: { low: hz(1 * MHz), high: hz(1 * MHz) },
+  guard: guardBands(hz(1 * MHz), hz(1 * MHz)),
   converter: {
     label: 'Saltmarsh SR-12D',
     minRate: hz(20 * MHz),

@@ -1,3 +1,4 @@
+import { guardBands } from '../../src/math/band.js';
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { db, hz, ppm } from '../../src/units/quantities.js';
@@ -23,7 +24,7 @@ const MHz = 1e6;
 const scenario: Scenario = scenarioFixture({
   name: 'Heron-SM',
   wanted: { low: hz(40 * MHz), high: hz(50 * MHz), weakestLevel: db(-60), strongestLevel: db(-1) },
-  guard: { low: hz(1 * MHz), high: hz(1 * MHz) },
+  guard: guardBands(hz(1 * MHz), hz(1 * MHz)),
   converter: converterFixture({
     label: 'Saltmarsh SR-12D',
     maxRate: hz(300 * MHz),

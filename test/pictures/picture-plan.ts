@@ -1,3 +1,4 @@
+import { guardBands } from '../../src/math/band.js';
 import { db, hz, ppm } from '../../src/units/quantities.js';
 import { contextFromScenario } from '../../src/solve/context-from-scenario.js';
 import { solvePlan } from '../../src/plan/solve-plan.js';
@@ -41,7 +42,7 @@ export function heronLowPassScenario(): Scenario {
   return scenarioFixture({
     name: 'Heron-1 baseband',
     wanted: { low: hz(1e6), high: hz(10e6), weakestLevel: db(-60), strongestLevel: db(-1) },
-    guard: { low: hz(2e6), high: hz(2e6) },
+    guard: guardBands(hz(2e6), hz(2e6)),
     clocks: [directClock('XO-L 30.72M', 30.72e6)],
   });
 }
@@ -51,7 +52,7 @@ export function heronHighIfScenario(): Scenario {
   return scenarioFixture({
     name: 'Heron-9 high IF',
     wanted: { low: hz(1.40e9), high: hz(1.41e9), weakestLevel: db(-60), strongestLevel: db(-1) },
-    guard: { low: hz(1e6), high: hz(1e6) },
+    guard: guardBands(hz(1e6), hz(1e6)),
     converter: converterFixture({ minRate: hz(20e6), maxRate: hz(3e9), inputBandwidth: hz(3e9) }),
     clocks: [directClock('XO-H 245.76M', 245.76e6)],
   });

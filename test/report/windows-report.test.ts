@@ -1,3 +1,4 @@
+import { guardBands } from '../../src/math/band.js';
 import { describe, expect, it } from 'vitest';
 import { hz } from '../../src/units/quantities.js';
 import { windowsReport } from '../../src/report/windows-report.js';
@@ -6,7 +7,7 @@ import { foldFrequency } from '../../src/math/fold.js';
 
 const NO_LIMITS = { minRate: hz(0), maxRate: hz(Infinity) };
 const band = (low: number, high: number) => ({ low: hz(low), high: hz(high) });
-const guard = (low: number, high: number) => ({ low: hz(low), high: hz(high) });
+const guard = (low: number, high: number) => guardBands(hz(low), hz(high));
 
 describe('windowsReport', () => {
   // 60–80 MHz with 2 MHz guards: windows from Vaughan, Scott & White 1991 on the guarded 58–82 MHz.

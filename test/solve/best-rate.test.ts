@@ -1,3 +1,4 @@
+import { guardBands } from '../../src/math/band.js';
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { db, hz, ppm } from '../../src/units/quantities.js';
@@ -24,7 +25,7 @@ describe('a candidate at the end of its drift-safe range', () => {
   const tone = 8034808.58535275;
   const context: PlanContext = {
     band: { low: hz(21 * MHZ), high: hz(25 * MHZ) },
-    guard: { low: hz(0), high: hz(0) },
+    guard: guardBands(hz(0), hz(0)),
     limits: { minRate: hz(10 * MHZ), maxRate: hz(60 * MHZ) },
     interferers: [
       { label: 'tone', kind: 'spur', order: null, source: 'board tone', rateMultiple: 0, shiftMultiple: 0, low: hz(tone), high: hz(tone), level: db(-50), requiredMargin: hz(0.5 * MHZ), blocking: true },

@@ -1,8 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { hz, ppm } from '../../src/units/quantities.js';
-import { guardedBand, rateWindows } from '../../src/windows/enumerate-windows.js';
-import { feasibleSet } from '../../src/solve/feasible-set.js';
+import { planRates } from '../../src/solve/feasible-set.js';
 import { evaluateRate } from '../../src/solve/evaluate-rate.js';
 import { containingInterval } from '../../src/solve/drift.js';
 import { brutePasses } from '../helpers/brute-force-plan.js';
@@ -32,8 +31,8 @@ describe('the fast judge (binary search over the feasible intervals)', () => {
     fc.assert(
       fc.property(planArbitrary(), fc.integer({ min: 0, max: 1e6 }), fc.double({ min: 0, max: 1, noNaN: true }), (context, seed, t) => {
         const tolerance = 0.1 * 10000 ** t; // log-uniform 0.1–1000 ppm
-        const windows = rateWindows(guardedBand(context.band, context.guard.low, context.guard.high), context.limits);
-        const set = feasibleSet(windows, context.interferers, context.band);
+        const set = planRates(context);
+        const { windows } = set;
         const edges = exactEdges(windows, set);
         const epsilon = tolerance * 1e-6;
         for (const rate of sweepRates(context.limits.minRate, context.limits.maxRate, 40, seed)) {

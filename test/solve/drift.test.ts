@@ -1,8 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { hz, ppm } from '../../src/units/quantities.js';
-import { guardedBand, rateWindows } from '../../src/windows/enumerate-windows.js';
-import { feasibleSet, type FeasibleSet } from '../../src/solve/feasible-set.js';
+import { planRates, type FeasibleSet } from '../../src/solve/feasible-set.js';
 import { evaluateRate } from '../../src/solve/evaluate-rate.js';
 import { solvePlan } from '../../src/plan/solve-plan.js';
 import type { PlanContext } from '../../src/solve/plan-context.js';
@@ -47,8 +46,8 @@ describe('drift: pass/fail over ±tolerance against the brute force (random plan
         const tolerance = 0.5 * 4000 ** (t / 2 ** 30); // log-uniform 0.5–2000 ppm
         const context: PlanContext = { ...base, tolerancePpm: ppm(tolerance) };
         const epsilon = tolerance * 1e-6;
-        const windows = rateWindows(guardedBand(context.band, context.guard.low, context.guard.high), context.limits);
-        const set = feasibleSet(windows, context.interferers, context.band);
+        const set = planRates(context);
+        const { windows } = set;
         const edges = exactEdges(windows, set);
 
         const rates = sweepRates(context.limits.minRate, context.limits.maxRate, 30, seed);

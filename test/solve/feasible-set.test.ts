@@ -1,8 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { hz, ppm } from '../../src/units/quantities.js';
-import { guardedBand, rateWindows } from '../../src/windows/enumerate-windows.js';
-import { feasibleSet } from '../../src/solve/feasible-set.js';
+import { planRates } from '../../src/solve/feasible-set.js';
 import { evaluateRate } from '../../src/solve/evaluate-rate.js';
 import type { PlanContext } from '../../src/solve/plan-context.js';
 import { brutePasses } from '../helpers/brute-force-plan.js';
@@ -20,8 +19,8 @@ import { exactEdges, inFeasible, nearAnEdge, planArbitrary, sweepRates } from '.
 const RATES = 2000;
 
 function exactResult(context: PlanContext) {
-  const windows = rateWindows(guardedBand(context.band, context.guard.low, context.guard.high), context.limits);
-  const set = feasibleSet(windows, context.interferers, context.band);
+  const set = planRates(context);
+  const { windows } = set;
   return { windows, set, edges: exactEdges(windows, set) };
 }
 

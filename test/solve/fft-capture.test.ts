@@ -1,3 +1,4 @@
+import { guardBands } from '../../src/math/band.js';
 import { describe, expect, it } from 'vitest';
 import FFT from 'fft.js';
 import { db, hz, ppm } from '../../src/units/quantities.js';
@@ -44,7 +45,7 @@ function extent(label: string, kind: Interferer['kind'], order: number | null, l
 
 const context: PlanContext = {
   band: { low: hz(BAND.low), high: hz(BAND.high) },
-  guard: { low: hz(0.5 * MHZ), high: hz(0.5 * MHZ) },
+  guard: guardBands(hz(0.5 * MHZ), hz(0.5 * MHZ)),
   limits: { minRate: hz(20 * MHZ), maxRate: hz(50 * MHZ) },
   interferers: [
     extent('H2', 'harmonic', 2, 2 * BAND.low, 2 * BAND.high, true),

@@ -1,3 +1,4 @@
+import { guardBands } from '../../src/math/band.js';
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { db, hz, ppm, type Hz } from '../../src/units/quantities.js';
@@ -60,7 +61,7 @@ function movedBy(scenario: Scenario, shift: number): Scenario {
 const handWorked: Scenario = scenarioFixture({
   name: 'Heron-HW shift',
   wanted: { low: hz(21 * MHz), high: hz(25 * MHz), weakestLevel: db(-60), strongestLevel: db(-1) },
-  guard: { low: hz(0), high: hz(0) },
+  guard: guardBands(hz(0), hz(0)),
   converter: converterFixture({ minRate: hz(30 * MHz), maxRate: hz(40 * MHz), harmonics: new Map() }),
   harmonicOrder: 2,
   boardSpurs: [{ label: 'TONE 28.1M', low: hz(28.1 * MHz), high: hz(28.1 * MHz), level: db(-30), coupling: 'after-filter', harmonics: 1 }],
@@ -274,7 +275,7 @@ const planArbitrary: fc.Arbitrary<Scenario> = fc
     }
     return scenarioFixture({
       wanted,
-      guard: { low: hz(p.guardLow), high: hz(p.guardHigh) },
+      guard: guardBands(hz(p.guardLow), hz(p.guardHigh)),
       converter: converterFixture({
         minRate: hz(minRate),
         maxRate: hz(minRate * (1.05 + 1.5 * p.span)),

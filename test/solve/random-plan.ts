@@ -1,3 +1,4 @@
+import { guardBands } from '../../src/math/band.js';
 import fc from 'fast-check';
 import { db, hz, ppm } from '../../src/units/quantities.js';
 import type { Interferer, InterfererKind } from '../../src/interferers/interferer.js';
@@ -85,7 +86,7 @@ export function planArbitrary(tolerancePpm = 0): fc.Arbitrary<PlanContext> {
       return fc.tuple(...interferers).map(
         (list): PlanContext => ({
           band: { low: hz(band.low), high: hz(band.high) },
-          guard: { low: hz(p.guardLow), high: hz(p.guardHigh) },
+          guard: guardBands(hz(p.guardLow), hz(p.guardHigh)),
           limits: { minRate: hz(minRate), maxRate: hz(maxRate) },
           interferers: list,
           levelThreshold: db(-90),

@@ -1,8 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { hz, ppm } from '../../src/units/quantities.js';
-import { guardedBand, rateWindows } from '../../src/windows/enumerate-windows.js';
-import { feasibleSet } from '../../src/solve/feasible-set.js';
+import { planRates } from '../../src/solve/feasible-set.js';
 import { evaluateRate } from '../../src/solve/evaluate-rate.js';
 import { bestRateIn } from '../../src/solve/best-rate.js';
 import type { PlanContext } from '../../src/solve/plan-context.js';
@@ -47,8 +46,7 @@ describe('widest-margin LP against a dense sweep (random plans)', () => {
       fc.property(planArbitrary(), fc.constantFrom(0, 0, 5, 50, 500), fc.integer({ min: 0, max: 1e6 }), (base, tolerance, seed) => {
         const context: PlanContext = { ...base, goal: { kind: 'widest-margin' }, tolerancePpm: ppm(tolerance) };
         const epsilon = tolerance * 1e-6;
-        const windows = rateWindows(guardedBand(context.band, context.guard.low, context.guard.high), context.limits);
-        for (const interval of feasibleSet(windows, context.interferers, context.band).feasible) {
+        for (const interval of planRates(context).feasible) {
           // The drift-safe range, written out again: nominal rates whose whole drift stays inside.
           const low = interval.minRate / (1 - epsilon);
           const high = interval.maxRate / (1 + epsilon);

@@ -1,3 +1,4 @@
+import { guardBands } from '../../src/math/band.js';
 import { describe, expect, it } from 'vitest';
 import { hz, type Hz } from '../../src/units/quantities.js';
 import type { Band } from '../../src/math/band.js';
@@ -138,7 +139,7 @@ describe('rateWindows: the zero-width window at twice the width', () => {
             const guardLow = hz(gl * width);
             const guardHigh = hz(gh * width);
             const wanted = band((n - 1) * width + guardLow, n * width - guardHigh);
-            const guarded = guardedBand(wanted, guardLow, guardHigh);
+            const guarded = guardedBand(wanted, guardBands(guardLow, guardHigh));
             expectZeroWidthPoint(guarded, n, width, `unit ${unit}, k ${k}, n ${n}, guards ${gl}/${gh}`);
             checked++;
           }
@@ -192,7 +193,7 @@ describe('rateWindows: limits', () => {
 describe('guardedBand', () => {
   it('widens the band by its guards before the test', () => {
     // Vaughan, Scott & White 1991 apply guard bands by widening the band; 60–80 MHz with 2 MHz guards is 58–82 MHz.
-    const guarded = guardedBand(band(60e6, 80e6), hz(2e6), hz(2e6));
+    const guarded = guardedBand(band(60e6, 80e6), guardBands(hz(2e6), hz(2e6)));
     expect(guarded).toEqual({ low: 58e6, high: 82e6 });
     const windows = rateWindows(guarded);
     expect(windows.map((w) => w.zone)).toEqual([1, 2, 3]); // ⌊82/24⌋ = 3
@@ -205,12 +206,12 @@ describe('guardedBand', () => {
   });
 
   it('applies unequal guards on their own sides', () => {
-    expect(guardedBand(band(60e6, 80e6), hz(1e6), hz(3e6))).toEqual({ low: 59e6, high: 83e6 });
+    expect(guardedBand(band(60e6, 80e6), guardBands(hz(1e6), hz(3e6)))).toEqual({ low: 59e6, high: 83e6 });
   });
 
   it('stops a lower guard reaching below DC at DC, leaving only zone 1', () => {
     // A band reaching DC is low-pass: only Nyquist-rate sampling (fs ≥ 2·fH) holds it (common practice, no source).
-    const guarded = guardedBand(band(1e6, 5e6), hz(3e6), hz(1e6));
+    const guarded = guardedBand(band(1e6, 5e6), guardBands(hz(3e6), hz(1e6)));
     expect(guarded).toEqual({ low: 0, high: 6e6 });
     expect(rateWindows(guarded)).toEqual([{ zone: 1, minRate: 12e6, maxRate: Infinity, inverted: false }]);
   });

@@ -2,12 +2,11 @@ import { hz, type Hz, type Ppm } from '../../units/quantities.js';
 import type { Interval } from '../../math/interval-set.js';
 import type { Scenario } from '../../scenario/scenario.js';
 import { deriveInterferers } from '../../interferers/derive-interferers.js';
-import { guardedBand, rateWindows } from '../../windows/enumerate-windows.js';
 import { bestRateIn } from '../best-rate.js';
 import { driftSafeRange } from '../drift.js';
 import { contextFromScenario } from '../context-from-scenario.js';
 import { evaluateRate, type RateEvaluation } from '../evaluate-rate.js';
-import { feasibleSet, type FeasibleInterval } from '../feasible-set.js';
+import { planRates, planWindows, type FeasibleInterval } from '../feasible-set.js';
 import type { PlanContext } from '../plan-context.js';
 import { maximisePlaneSlack, type PlaneSlack } from './plane-lp.js';
 import { DEFAULT_SEED_COUNT, seedShifts } from './seed-shifts.js';
@@ -111,8 +110,7 @@ export function bestShiftAndRate(scenario: Scenario, options: ShiftSearchOptions
   const solved = new Set<string>();
   for (const shift of shifts) {
     const context = contextAt(shift);
-    const windows = rateWindows(guardedBand(context.band, context.guard.low, context.guard.high), context.limits);
-    for (const interval of feasibleSet(windows, context.interferers, context.band).feasible) {
+    for (const interval of planRates(context).feasible) {
       const sampled = bestRateIn(context, interval);
       if (sampled) {
         const candidate: ShiftedRate = { shift: hz(shift), rate: sampled.rate, origin: 'sample', evaluation: sampled, promisedSlack: null };
@@ -161,7 +159,7 @@ function solvePiece(piece: ShiftPiece, contextAt: (shift: number) => PlanContext
   if (!answer) return null;
   const shift = Math.min(Math.max(answer.shift, piece.box.shift.low), piece.box.shift.high);
   const context = contextAt(shift);
-  const windows = rateWindows(guardedBand(context.band, context.guard.low, context.guard.high), context.limits);
+  const windows = planWindows(context);
   const window = windows.find((w) => w.zone === piece.zone);
   const safe = window ? driftSafeRange(window, tolerancePpm) : null;
   if (!safe) return null;
