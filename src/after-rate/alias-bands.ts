@@ -47,7 +47,7 @@ export function aliasBands(channel: Band, rateLow: Hz, rateHigh: Hz, inputBandwi
       ['mirrored', j * rateLow - channel.high, j * rateHigh - channel.low],
     ];
     for (const [sense, low, high] of images) {
-      const magnitude = extentMagnitude(low, high);
+      const magnitude = extentMagnitude(hz(low), hz(high));
       if (magnitude.low >= inputBandwidth) continue;
       bands.push({ multiple: j, sense, low: hz(magnitude.low), high: hz(Math.min(magnitude.high, inputBandwidth)) });
     }

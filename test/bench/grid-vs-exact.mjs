@@ -7,8 +7,7 @@
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import { readScenarioFile } from '../../dist/cli/read-scenario.js';
 import { contextFromScenario } from '../../dist/solve/context-from-scenario.js';
-import { guardedBand, rateWindows } from '../../dist/windows/enumerate-windows.js';
-import { feasibleSet } from '../../dist/solve/feasible-set.js';
+import { planRates } from '../../dist/solve/feasible-set.js';
 import { compareWithExact, gridSweep, passingRuns } from './lib/grid-sweep.mjs';
 
 const ROOT = fileURLToPath(new URL('../../', import.meta.url));
@@ -43,10 +42,7 @@ export default async function gridVsExact() {
   for (const [name, file] of SCENARIOS) {
     const context = contextFromScenario(readScenarioFile(file));
     const blocking = context.interferers.filter((i) => i.blocking).length;
-    const exact = timeOf(() => {
-      const windows = rateWindows(guardedBand(context.band, context.guard.low, context.guard.high), context.limits);
-      return feasibleSet(windows, context.interferers, context.band).feasible;
-    });
+    const exact = timeOf(() => planRates(context).feasible);
     console.log(`${name}: ${context.interferers.length} interferers, ${blocking} blocking; rates ${mhz(context.limits.minRate)} – ${mhz(context.limits.maxRate)}`);
     console.log(`  exact feasible set: ${exact.result.length} intervals in ${exact.ms.toFixed(3)} ms (median)`);
     const problem = { band: context.band, guard: context.guard, minRate: context.limits.minRate, maxRate: context.limits.maxRate, interferers: context.interferers };
