@@ -1,3 +1,4 @@
+import { guardBands } from '../../src/math/band.js';
 import { describe, expect, it } from 'vitest';
 import { db, hz, ppm } from '../../src/units/quantities.js';
 import type { Scenario } from '../../src/scenario/scenario.js';
@@ -27,7 +28,7 @@ function agreementScenario(imageReference: number | null): Scenario {
   return scenarioFixture({
     name: 'Heron-L4 agreement',
     wanted: { low: hz(12 * MHZ), high: hz(16 * MHZ), weakestLevel: db(-70), strongestLevel: db(-12) },
-    guard: { low: hz(0), high: hz(0) },
+    guard: guardBands(hz(0), hz(0)),
     converter: converterFixture({
       minRate: hz(40 * MHZ),
       maxRate: hz(160 * MHZ),
@@ -82,10 +83,11 @@ describe('verify and solve agree: interleaving, an intercept and three close blo
     for (let i = 0; i <= 2000 && chosen === null; i++) {
       const rate = hz(40 * MHZ + (120 * MHZ * i) / 2000);
       const e = evaluateRate(context, rate, ppm(0));
-      if (e.pass || !e.image || !/^IM3 B\d\+B\d−B\d$/.test(e.limitedBy)) continue;
-      const interferer = context.interferers.find((x) => x.label === e.limitedBy)!;
+      const limit = e.limitedBy.kind === 'interferer' ? e.limitedBy.label : '';
+      if (e.pass || !e.image || !/^IM3 B\d\+B\d−B\d$/.test(limit)) continue;
+      const interferer = context.interferers.find((x) => x.label === limit)!;
       const where = alias(interferer.low, rate);
-      if (where > e.image.low + 0.3 * MHZ && where < e.image.high - 0.3 * MHZ && Math.abs(where - alias(centre, rate)) > 0.3 * MHZ) chosen = { rate, label: e.limitedBy };
+      if (where > e.image.low + 0.3 * MHZ && where < e.image.high - 0.3 * MHZ && Math.abs(where - alias(centre, rate)) > 0.3 * MHZ) chosen = { rate, label: limit };
     }
     expect(chosen).not.toBeNull();
     const result = verifyCapture(scenario, { rate: hz(chosen!.rate), wantedTones: 1 });

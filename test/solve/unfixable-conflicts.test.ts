@@ -1,3 +1,4 @@
+import { guardBands } from '../../src/math/band.js';
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { db, hz, ppm } from '../../src/units/quantities.js';
@@ -41,7 +42,7 @@ describe('folding never moves two frequencies further apart (fast-check)', () =>
 const band = { low: hz(60 * MHZ), high: hz(70 * MHZ) };
 const context = (interferers: Interferer[], ifShift: PlanContext['ifShift'] = null): PlanContext => ({
   band,
-  guard: { low: hz(0), high: hz(0) },
+  guard: guardBands(hz(0), hz(0)),
   limits: { minRate: hz(20 * MHZ), maxRate: hz(300 * MHZ) },
   interferers,
   levelThreshold: db(-100),
