@@ -3,6 +3,7 @@ import { escapeXml } from '../pictures/escape-xml.js';
 import { rateMapSvg } from '../pictures/rate-map.js';
 import { spectrumSvg } from '../pictures/spectrum.js';
 import { bandPositionSvg } from '../pictures/band-position.js';
+import { filterMaskSvg } from '../pictures/filter-mask.js';
 import type { PlanReport, ReportedCandidate } from '../plan/plan-report.js';
 import type { CompareReport } from '../plan/compare-report.js';
 import { htmlTable } from './html-table.js';
@@ -79,7 +80,7 @@ function comparisonSection(report: CompareReport): string {
 
 function planSection(report: PlanReport): string {
   const focus = report.candidates.find((c) => c.label === report.best) ?? report.candidates[0];
-  const pictures = [rateMapSvg(report), focus ? spectrumSvg(report, focus.label) : '', bandPositionSvg(report, focus?.label)].filter((svg) => svg !== '');
+  const pictures = [rateMapSvg(report), focus ? spectrumSvg(report, focus.label) : '', bandPositionSvg(report, focus?.label), focus ? filterMaskSvg(report, focus.label) : ''].filter((svg) => svg !== '');
   return [
     `<h2>${escapeXml(report.scenario)}</h2>`,
     inputsTables(report),

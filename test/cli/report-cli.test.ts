@@ -66,7 +66,7 @@ describe('ifzone report --html', () => {
     for (const caption of ['Legal windows', 'Feasible intervals', 'Candidates, best first', 'Alias bands up to the input bandwidth']) {
       expect(captions.filter((c) => c.startsWith(caption)).length).toBe(4);
     }
-    expect(await page.locator('figure svg').count()).toBe(12);
+    expect(await page.locator('figure svg').count()).toBe(16);
     const boxes = await page.locator('figure svg').evaluateAll((svgs) => svgs.map((s) => s.getBoundingClientRect().height));
     expect(Math.min(...boxes)).toBeGreaterThan(100);
     await page.close();

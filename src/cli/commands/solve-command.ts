@@ -22,7 +22,7 @@ export function addSolveCommand(program: Command, io: Io, settle: (code: ExitCod
     .option('--goal <goal>', 'widest-margin, lowest-rate, quarter-rate or decimation (overrides the scenario)')
     .option('--output-rate <freq>', 'output rate for the decimation goal, e.g. 30.72M')
     .option('--json', 'print JSON for programs')
-    .option('--svg <file>', 'also draw the rate map, the spectrum of the best candidate and the band-position chart')
+    .option('--svg <file>', 'also draw the rate map, the spectrum of the best candidate, the band-position chart and its anti-alias filter mask')
     .option('--force', 'let --svg replace an existing file')
     .action(async (file: string, options: SolveOptions) => {
       const { runSolve } = await import('./solve-action.js');
