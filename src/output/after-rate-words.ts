@@ -177,3 +177,18 @@ export function filterOrdersText(v: Pick<VariantVerdict, 'rate' | 'filterOrders'
   const { butterworth, chebyshev, elliptic } = v.filterOrders;
   return `${butterworth}/${chebyshev}/${elliptic}`;
 }
+
+/**
+ * A candidate's verdict in a word or three: "pass", "FAIL", "FAIL: mask"
+ * when only the anti-alias mask fails it (a stated out-of-band level the
+ * filter cannot hold back), "FAIL, mask too" when the mask fails besides.
+ *
+ * @example candidateVerdict(candidate) // 'FAIL: mask'
+ */
+export function candidateVerdict(candidate: ReportedCandidate): string {
+  if (candidate.pass) return 'pass';
+  const mask = candidate.afterRate?.mask;
+  if (!mask || mask.pass) return 'FAIL';
+  const restPasses = candidate.zone !== null && candidate.zoneEdgeMargin >= 0 && candidate.checks.every((c) => c.pass);
+  return restPasses ? 'FAIL: mask' : 'FAIL, mask too';
+}

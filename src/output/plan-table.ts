@@ -3,7 +3,7 @@ import type { PlanReport, ReportedCandidate, ReportedCheck } from '../plan/plan-
 import { plainTable } from './table.js';
 import { shiftSection } from './shift-table.js';
 import { afterRateSection } from './after-rate-table.js';
-import { maskShortfall } from './after-rate-words.js';
+import { candidateVerdict, maskShortfall } from './after-rate-words.js';
 
 const MOST_CANDIDATES_SHOWN = 12;
 const MOST_CHECKS_SHOWN = 30;
@@ -73,7 +73,7 @@ function candidatesSection(report: PlanReport): string {
     c.limitedBy,
     settingsText(c.settings),
     c.headroomPpm === null ? '–' : `−${trimmed(c.headroomPpm.down, 3)} / +${trimmed(c.headroomPpm.up, 3)}`,
-    c.pass ? 'pass' : 'FAIL',
+    candidateVerdict(c),
   ]);
   const more = report.candidates.length - shown.length;
   const table = plainTable(['#', 'candidate', 'rate', 'ppm', 'zone', 'inverted', 'centre / NCO', 'worst margin', 'limited by', 'from part', 'headroom ppm', 'verdict'], rows);

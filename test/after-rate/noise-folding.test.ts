@@ -68,6 +68,24 @@ describe('noise folding penalty', () => {
     expect(driverLimitedSnr(db(-150), folding)).toBeCloseTo(76.9897, 4);
   });
 
+  it('a table filter against the closed form of its power-law pieces', () => {
+    // Between two table points the attenuation is linear in dB over log-frequency, A(f) = a + s·ln(f/fa), so the power
+    // 10^(−A/10) = 10^(−a/10)·(f/fa)^(−k) with k = s·ln 10 / 10, and ∫ from f1 to f2 = 10^(−a/10)·fa^k·(f2^(1−k) − f1^(1−k))/(1 − k).
+    // Points (10 MHz, 60 dB), (50 MHz, 0 dB), (90 MHz, 0 dB), (400 MHz, 70 dB); channel 60–80 MHz in the flat part: 20 MHz.
+    const points = [[10e6, 60], [50e6, 0], [90e6, 0], [400e6, 70]] as const;
+    const table = { kind: 'table', points: points.map(([f, a]) => ({ frequency: hz(f), attenuation: db(a) })) } as const;
+    const piece = (fa: number, a: number, fb: number, b: number, f1: number, f2: number) => {
+      const k = ((b - a) / Math.log(fb / fa)) * (Math.LN10 / 10);
+      return 10 ** (-a / 10) * fa ** k * (f2 ** (1 - k) - f1 ** (1 - k)) / (1 - k);
+    };
+    const aliases = [{ low: hz(20e6), high: hz(40e6) }, { low: hz(100e6), high: hz(120e6) }];
+    const expectedAlias = piece(10e6, 60, 50e6, 0, 20e6, 40e6) + piece(90e6, 0, 400e6, 70, 100e6, 120e6);
+    const folding = noiseFolding(filterPowerResponse(table), { low: hz(60e6), high: hz(80e6) }, aliases);
+    expect(folding.channelBandwidth / 20e6).toBeCloseTo(1, 12);
+    expect(folding.aliasBandwidth / expectedAlias).toBeCloseTo(1, 8);
+    expect(folding.penaltyDb).toBeCloseTo(10 * Math.log10(1 + expectedAlias / 20e6), 8);
+  });
+
   it('refuses a filter that stops the whole channel', () => {
     expect(() => noiseFolding({ power: () => 0, cuts: [] }, channel, [])).toThrow(RangeError);
   });

@@ -60,6 +60,16 @@ describe('after-rate figures in the plan report', () => {
     expect(planTable(report)).toContain(`After the rate, at ${best!.label}`);
   });
 
+  it('no filter and an input bandwidth of 8 whole zones at 122.88 MHz: every candidate at that rate folds in 10·log10(8) dB (common practice)', () => {
+    // 8 · 61.44 MHz = 491.52 MHz; the channel 65–75 MHz sits whole in zone 2, so each of the 8 zones holds one whole image.
+    const base = withSettings({});
+    const scenario = { ...base, converter: { ...base.converter, inputBandwidth: hz(491.52e6) } };
+    const { report } = solved(scenario);
+    const at = report.candidates.filter((c) => c.rate === 122.88e6);
+    expect(at.length).toBeGreaterThan(0);
+    for (const c of at) expect(c.afterRate!.noise!.penaltyDb).toBeCloseTo(10 * Math.log10(8), 9);
+  });
+
   it('the driver lowers the channel SNR as noise powers add: 80 dB and 80 dB make 76.99 dB', () => {
     const noise = { channelBandwidth: hz(1), aliasBandwidth: hz(0), penaltyDb: db(0), accuracyDb: db(0), driverNoiseDensity: db(-80), driverSnrDb: db(80) };
     expect(channelSnrWithDriver(db(80), noise)).toBeCloseTo(80 - 10 * Math.log10(2), 9);
