@@ -61,7 +61,8 @@ export function designSentence(after: AfterRate): string {
   if (d.orders === null) return `Filter that would do (${mask}${side}): none, an alias band reaches into the channel.`;
   const { butterworth, chebyshev, elliptic } = d.orders;
   if (butterworth === 0) return `Filter that would do (${mask}${side}): no filter needed.`;
-  return `Filter that would do (${mask}${side}): Butterworth ${butterworth}, Chebyshev I ${chebyshev}, elliptic ${elliptic} (low-pass prototype orders; the band-pass has twice as many poles).`;
+  const kind = d.lowPass ? 'low-pass orders: the channel starts at 0 Hz' : 'low-pass prototype orders; the band-pass has twice as many poles';
+  return `Filter that would do (${mask}${side}): Butterworth ${butterworth}, Chebyshev I ${chebyshev}, elliptic ${elliptic} (${kind}).`;
 }
 
 /**

@@ -96,6 +96,13 @@ describe('band-pass orders from the channel and the nearest alias bands', () => 
     expect(lower.selectivityAbove).toBeNull();
   });
 
+  it('a channel from 0 Hz is a low-pass: 0–10 MHz, stop from 15 MHz, 1 dB / 60 dB → 19, 9, 6 (scipy.signal, analog low-pass)', () => {
+    // Reference: scipy 1.17.1, buttord / cheb1ord / ellipord(wp = 10e6, ws = 15e6, gpass = 1, gstop = 60, analog = True).
+    const lowPass = bandPassOrders({ low: hz(0), high: hz(10e6) }, hz(0), hz(15e6), db(1), db(60));
+    expect(lowPass.orders).toEqual({ butterworth: 19, chebyshev: 9, elliptic: 6 });
+    expect(lowPass).toMatchObject({ tightest: 'above', selectivity: 1.5, selectivityBelow: null });
+  });
+
   it('a stop band reaching into the passband cannot be met (orders null); no stop band needs no filter', () => {
     expect(bandPassOrders({ low: hz(100e6), high: hz(120e6) }, hz(101e6), hz(150e6), db(1), db(60)).orders).toBeNull();
     expect(bandPassOrders({ low: hz(100e6), high: hz(120e6) }, null, null, db(1), db(60))).toMatchObject({ orders: { butterworth: 0, chebyshev: 0, elliptic: 0 }, tightest: null });
