@@ -9,7 +9,7 @@ import type { CompareReport } from '../plan/compare-report.js';
 import { htmlTable } from './html-table.js';
 import { shiftParts } from './shift-table.js';
 import { afterRateHtml } from './after-rate-html.js';
-import { filterOrdersText } from './after-rate-words.js';
+import { candidateVerdict, filterOrdersText, maskShortfall } from './after-rate-words.js';
 
 const JOB = 'Sample-clock plan for an IF-sampling receiver: the rates at which the wanted channel sits whole in one Nyquist zone with its guard bands and nothing strong enough folds onto it.';
 
@@ -138,7 +138,7 @@ function candidatesTable(report: PlanReport): string {
     c.center === null ? '–' : formatFrequency(c.center),
     formatFrequency(c.worstMargin, 7),
     c.limitedBy,
-    verdictCell(c.pass),
+    c.pass ? verdictCell(true) : ([candidateVerdict(c), 'fail'] as const),
   ]);
   return htmlTable(['#', 'candidate', 'rate', 'tolerance', 'zone', 'inverted', 'centre / NCO', 'worst margin', 'limited by', 'verdict'], rows, 'Candidates, best first (over each rate\'s whole tolerance)');
 }
@@ -167,7 +167,10 @@ function shiftHtml(shift: NonNullable<PlanReport['ifShift']>): string {
 
 function verdictLine(report: PlanReport, focus: ReportedCandidate | undefined): string {
   if (!focus) return 'No candidate: no legal window inside the rate range.';
-  if (report.best === null) return `No candidate passes; the nearest is ${focus.label} at ${formatFrequency(focus.rate)}, limited by ${focus.limitedBy}.`;
+  if (report.best === null) {
+    const mask = candidateVerdict(focus) === 'FAIL: mask' ? maskShortfall(focus) : null;
+    return `No candidate passes; the nearest is ${focus.label} at ${formatFrequency(focus.rate)}, ${mask ?? `limited by ${focus.limitedBy}`}.`;
+  }
   return `Best: ${focus.label} at ${formatFrequency(focus.rate)}, zone ${focus.zone}${focus.inverted ? ' (inverted)' : ''}, worst margin ${formatFrequency(focus.worstMargin, 7)} (${focus.limitedBy}).`;
 }
 
