@@ -76,3 +76,16 @@ export function bandImage(band: Band, rate: Hz): BandImage | null {
   const shift = ((zone - 1) / 2) * rate;
   return { zone, inverted, low: clamp(band.low - shift), high: clamp(band.high - shift) };
 }
+
+/**
+ * Widens a band by its guard bands; a lower guard reaching below DC stops at
+ * DC (the band is then low-pass and only zone 1 can hold it).
+ *
+ * @param band the wanted band, Hz
+ * @param guard its guards, Hz
+ * @returns the guarded band, Hz
+ * @example guardedBand({ low: hz(60e6), high: hz(80e6) }, guardBands(hz(1e6), hz(3e6))) // { low: 59000000, high: 83000000 }
+ */
+export function guardedBand(band: Band, guard: Guard): Band {
+  return { low: hz(Math.max(0, band.low - guard.low)), high: hz(band.high + guard.high) };
+}

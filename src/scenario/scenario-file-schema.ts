@@ -14,6 +14,7 @@ import { clockPartSchema } from './clock-part-schema.js';
 import { ifShiftSchema } from './if-shift-schema.js';
 import { afterRateFileFields, afterRateSettings } from './after-rate-schema.js';
 import { maxOrderSchema } from './interferer-model-schema.js';
+import { refuseTooMuchWork } from './work-bounds.js';
 
 // A command reads one scenario or a few: zod's compiled fast path for objects
 // costs more to build (about 5 ms at start-up) than it saves on a few parses.
@@ -92,11 +93,13 @@ export const scenarioFileSchema = z
       ['clocks', file.clocks],
     ]);
     const width = hz(wanted.high - wanted.low);
+    const guard = guardBands(guardHz(file.guard.low, width), guardHz(file.guard.high, width));
+    refuseTooMuchWork(ctx, { ...file, guard });
     return {
       name: file.name,
       description: file.description,
       wanted,
-      guard: guardBands(guardHz(file.guard.low, width), guardHz(file.guard.high, width)),
+      guard,
       converter,
       harmonicOrder: file.harmonicOrder,
       maxOrder: file.maxOrder,

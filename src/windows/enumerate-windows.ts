@@ -1,6 +1,7 @@
 import { hz, type Hz } from '../units/quantities.js';
-import type { Band, Guard } from '../math/band.js';
-import { floorTolerant, sameEdge } from '../math/edge-tolerance.js';
+import type { Band } from '../math/band.js';
+import { sameEdge } from '../math/edge-tolerance.js';
+import { MOST_WINDOWS, zoneSpan } from '../math/zone-span.js';
 import type { RateLimits, RateWindow } from './rate-window.js';
 
 const NO_LIMITS: RateLimits = { minRate: hz(0), maxRate: hz(Infinity) };
@@ -9,7 +10,8 @@ const NO_LIMITS: RateLimits = { minRate: hz(0), maxRate: hz(Infinity) };
  * Every uniform sampling-rate window that holds a band whole in one Nyquist
  * zone (Vaughan, Scott & White, "The theory of bandpass sampling", 1991):
  * for each zone n = 1..⌊high/width⌋, 2·high/n ≤ rate ≤ 2·low/(n − 1), the
- * upper bound absent for n = 1. Each edge is computed from the inputs in one
+ * upper bound absent for n = 1. Only the zones that can meet the limits are
+ * visited (zoneSpan), so the work follows the answer, not high/width. Each edge is computed from the inputs in one
  * expression; a window whose edges cross by floating-point noise only (the
  * exact twice-the-width point) is kept with zero width.
  *
@@ -18,15 +20,20 @@ const NO_LIMITS: RateLimits = { minRate: hz(0), maxRate: hz(Infinity) };
  * @param limits rates outside [minRate, maxRate] are cut away
  * @returns windows in ascending zone order (descending rate), clipped to the
  *   limits; empty when none fits
- * @throws RangeError for a band without width (the zone count would be unbounded)
+ * @throws RangeError for a band without width (the zone count would be unbounded),
+ *   or when the limits hold more than MOST_WINDOWS windows (callers refuse
+ *   such a question up front with windowCount, naming what to narrow)
  * @example rateWindows({ low: 10e3, high: 14e3 }) // zones 1–3: [28k, ∞), [14k, 20k], [9.333k, 10k]
  */
 export function rateWindows(band: Band, limits: RateLimits = NO_LIMITS): RateWindow[] {
   const width = band.high - band.low;
   if (!(width > 0) || band.low < 0) throw new RangeError(`a band needs 0 ≤ low < high, got ${band.low}–${band.high} Hz`);
-  const highestZone = Math.max(1, floorTolerant(band.high / width));
+  const { first, last } = zoneSpan(band, limits.minRate, limits.maxRate);
+  if (last - first + 1 > MOST_WINDOWS) {
+    throw new RangeError(`the rate range holds ${last - first + 1} windows for this band, more than ${MOST_WINDOWS}; check windowCount first`);
+  }
   const windows: RateWindow[] = [];
-  for (let zone = 1; zone <= highestZone; zone++) {
+  for (let zone = first; zone <= last; zone++) {
     const lowest = (2 * band.high) / zone;
     const highest = zone === 1 ? Infinity : (2 * band.low) / (zone - 1);
     const window = clipped(zone, lowest, highest, limits);
@@ -45,21 +52,12 @@ function clipped(zone: number, lowest: number, highest: number, limits: RateLimi
   return { zone, minRate: hz(minRate), maxRate: hz(maxRate), inverted: zone % 2 === 0 };
 }
 
-/**
- * Widens a band by its guard bands; a lower guard reaching below DC stops at
- * DC (the band is then low-pass and only zone 1 can hold it).
- *
- * @param band the wanted band, Hz
- * @param guard its guards, Hz
- * @returns the guarded band, Hz
- * @example guardedBand({ low: hz(60e6), high: hz(80e6) }, guardBands(hz(1e6), hz(3e6))) // { low: 59000000, high: 83000000 }
- */
-export function guardedBand(band: Band, guard: Guard): Band {
-  return { low: hz(Math.max(0, band.low - guard.low)), high: hz(band.high + guard.high) };
-}
+/** Re-exported from math/band.ts, where the scenario checks reach it too. */
+export { guardedBand } from '../math/band.js';
 
 /** The lowest legal rate among the windows, Hz, or null when there is none. */
 export function lowestLegalRate(windows: readonly RateWindow[]): Hz | null {
   if (windows.length === 0) return null;
-  return hz(Math.min(...windows.map((w) => w.minRate)));
+  // A loop, not a spread: a spread of thousands of arguments overflows the call stack.
+  return hz(windows.reduce((lowest, w) => Math.min(lowest, w.minRate), Infinity));
 }

@@ -74,3 +74,31 @@ describe('counts and frequencies bounded', () => {
     expect(firstIssue({ boardSpurs: [{ label: 's', frequency: '1000G', level: -90 }] })).toBeNull();
   });
 });
+
+describe('work refused before it starts, saying what to narrow', () => {
+  it('a 5 kHz channel at 1 GHz with the converter from 1 kHz: the window count, at converter.minRate', () => {
+    const issue = firstIssue({
+      wanted: { center: '1G', width: '5k', low: null, high: null },
+      guard: 0,
+      filter: null,
+      converter: { minRate: '1k', inputBandwidth: '2G' },
+    });
+    // Zones up to 1 + 2·fL/minRate = 1 + 2·999997500/1000 ≈ 2,000,000 (Vaughan, Scott & White 1991).
+    expect(issue?.path).toBe('converter.minRate');
+    expect(issue?.expected).toContain('at most 1000 windows');
+    expect(issue?.expected).toContain('raise converter.minRate');
+  });
+
+  it('a blocking board spur at 1 THz folded over 2 MHz to 250 MHz: at the spur, naming the images', () => {
+    const issue = firstIssue({
+      wanted: { center: '1G', width: '50k', low: null, high: null },
+      guard: 0,
+      filter: null,
+      converter: { minRate: '2M', inputBandwidth: '2G' },
+      boardSpurs: [{ label: 'far', frequency: '1000G', level: -10 }],
+    });
+    // About 2·F/rLow = 2·1e12/2e6 = 1,000,000 images of the band, over the 200,000 allowed.
+    expect(issue?.path).toBe('boardSpurs[0].frequency');
+    expect(issue?.expected).toContain('at most 200000 images');
+  });
+});

@@ -3,6 +3,9 @@ import { hz } from '../../units/quantities.js';
 import { parseFrequency } from '../../units/parse-frequency.js';
 import { InputError } from '../../units/input-error.js';
 import { windowsReport } from '../../report/windows-report.js';
+import { guardedBand } from '../../math/band.js';
+import { MOST_WINDOWS, windowCount } from '../../math/zone-span.js';
+import { formatFrequency } from '../../units/format-frequency.js';
 import { windowsTable } from '../../output/windows-table.js';
 import { writeJson } from '../../output/json.js';
 import { EXIT, type ExitCode, type Io } from '../io.js';
@@ -35,6 +38,12 @@ export function addWindowsCommand(program: Command, io: Io, settle: (code: ExitC
       const minRate = options.minRate === undefined ? hz(0) : parseFrequency(options.minRate, '--min-rate');
       const maxRate = options.maxRate === undefined ? hz(Infinity) : parseFrequency(options.maxRate, '--max-rate');
       if (maxRate < minRate) throw new InputError('--max-rate', `a rate not below --min-rate (${options.minRate})`, options.maxRate ?? '');
+      const guarded = guardedBand(band, guard);
+      const count = windowCount(guarded, minRate, maxRate);
+      if (count > MOST_WINDOWS) {
+        const words = `a rate range holding at most ${MOST_WINDOWS} windows; raise --min-rate${options.maxRate === undefined ? ' or give --max-rate' : ' or lower --max-rate'}`;
+        throw new InputError('--min-rate', words, `${options.minRate ?? '0'}: the range holds about ${count} windows for this ${formatFrequency(guarded.high - guarded.low)} band`);
+      }
       const report = windowsReport(band, guard, { minRate, maxRate });
       if (options.json) writeJson(report, io.out);
       else io.out(windowsTable(report));

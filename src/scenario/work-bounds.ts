@@ -1,0 +1,142 @@
+import type * as z from 'zod';
+import { formatFrequency } from '../units/format-frequency.js';
+import type { Hz } from '../units/quantities.js';
+import { guardedBand, type Band, type Guard } from '../math/band.js';
+import { windowCount, zoneSpan } from '../math/zone-span.js';
+import { refuseAt } from './band-forms.js';
+import type { BoardSpur, Converter, Neighbour, WantedBand } from './scenario.js';
+
+/**
+ * Most rate windows a plan searches. Each window costs a search of every
+ * interferer's images; a thousand already take a few seconds on one core,
+ * and a real design has a few hundred zones at most in its converter's range.
+ */
+export const MOST_PLAN_WINDOWS = 1000;
+
+/**
+ * Most images of the wanted band the interferers can meet over the rate
+ * range (an upper estimate, see foldingWork). Measured at 20 to 40 µs per
+ * blocking image in the solver on a loaded machine (most products are too weak
+ * to block and cost far less), 200,000 images are seconds, not minutes.
+ */
+export const MOST_IMAGES = 200_000;
+
+/** What the work checks read from a scenario, already validated field by field. */
+export interface WorkInputs {
+  readonly wanted: WantedBand;
+  readonly guard: Guard;
+  readonly converter: Converter;
+  readonly harmonicOrder: number;
+  readonly boardSpurs: readonly BoardSpur[];
+  readonly neighbours: readonly Neighbour[];
+  readonly ifShift: { readonly low: Hz; readonly high: Hz } | null;
+}
+
+/** One source of folding work: how many interferers it makes, and the sum of their highest frequencies, Hz. */
+interface WorkSource {
+  readonly path: (string | number)[];
+  readonly words: string;
+  readonly reach: number;
+  readonly count: number;
+}
+
+/**
+ * Refuses, before any solving starts, a scenario whose plan would take
+ * unreasonable time or memory, saying what to narrow: a rate range holding
+ * more than MOST_PLAN_WINDOWS windows for the guarded band (at either end of
+ * the IF shift), or interferers folding onto more than MOST_IMAGES images of
+ * the wanted band over the rate range.
+ *
+ * @param ctx the zod context of the whole scenario (paths from its root)
+ * @param inputs the validated sections
+ * @example refuseTooMuchWork(ctx, { ...heron, converter: { ...converter, minRate: hz(1e3) } }) // pushes an issue at converter.minRate
+ */
+export function refuseTooMuchWork(ctx: z.RefinementCtx, inputs: WorkInputs): void {
+  const { converter } = inputs;
+  const bands = shiftedBands(inputs).map((band) => guardedBand(band, inputs.guard));
+  const windows = Math.max(...bands.map((band) => windowCount(band, converter.minRate, converter.maxRate)));
+  const range = `${formatFrequency(converter.minRate)} to ${formatFrequency(converter.maxRate)}`;
+  if (windows > MOST_PLAN_WINDOWS) {
+    const width = formatFrequency(bands[0]!.high - bands[0]!.low);
+    refuseAt(
+      ctx,
+      ['converter', 'minRate'],
+      `a rate range holding at most ${MOST_PLAN_WINDOWS} windows for the band; raise converter.minRate or lower converter.maxRate`,
+      `${range} holds about ${windows} windows for the ${width} guarded band`,
+      [['converter', 'maxRate'], ['wanted'], ['guard']],
+    );
+    return;
+  }
+  const { images, worst } = foldingWork(inputs, bands);
+  if (images > MOST_IMAGES && worst) {
+    refuseAt(
+      ctx,
+      worst.path,
+      `interferers that fold onto at most ${MOST_IMAGES} images of the wanted band over the rate range; raise converter.minRate or lower the highest frequencies`,
+      `about ${Math.round(images)} images over ${range}, most from ${worst.words}`,
+      [['converter', 'minRate'], ['converter', 'maxRate']],
+    );
+  }
+}
+
+/**
+ * An upper estimate of the images of the wanted band that the interferers
+ * can meet: an extent reaching frequency F meets about 2·F·(1/rLow − 1/rHigh)
+ * images (j·r ± band for every j up to F/r, both sides) plus a few per
+ * window, with rLow the lowest rate any window allows. Harmonics k·F of one
+ * source reach F·Σk in all.
+ */
+function foldingWork(inputs: WorkInputs, bands: readonly Band[]): { images: number; worst: WorkSource | null } {
+  const { converter } = inputs;
+  const lowestRate = Math.min(...bands.map((band) => Math.max(converter.minRate, (2 * band.high) / zoneSpan(band, converter.minRate, converter.maxRate).last)));
+  const perHertz = 2 * (1 / lowestRate - 1 / converter.maxRate);
+  const windows = Math.max(...bands.map((band) => windowCount(band, converter.minRate, converter.maxRate)));
+  if (windows === 0) return { images: 0, worst: null };
+  let images = 0;
+  let worst: WorkSource | null = null;
+  let worstImages = -1;
+  for (const source of workSources(inputs)) {
+    const here = source.reach * perHertz + 2 * windows * source.count;
+    images += here;
+    if (here > worstImages) [worst, worstImages] = [source, here];
+  }
+  return { images, worst };
+}
+
+/** The interferers' sources, each with the highest frequency its derived interferers reach. */
+function workSources(inputs: WorkInputs): WorkSource[] {
+  const lift = Math.max(0, inputs.ifShift?.high ?? 0);
+  const highestWanted = inputs.wanted.high + lift;
+  const highestNeighbour = Math.max(highestWanted, ...inputs.neighbours.map((n) => n.high + lift));
+  const order = inputs.harmonicOrder;
+  // Third- and second-order products of every ordered pair among the neighbours and the wanted band, each below twice the highest.
+  const products = 2 * (inputs.neighbours.length + 1) ** 2;
+  return [
+    { path: ['harmonicOrder'], words: `the wanted band's harmonics up to ${formatFrequency(order * highestWanted)}`, reach: highestWanted * (triangle(order) - 1), count: order - 1 },
+    ...inputs.boardSpurs.map((spur, i) => ({
+      path: ['boardSpurs', i, spur.high === spur.low ? 'frequency' : 'high'],
+      words: `boardSpurs[${i}] (${spur.label}) up to ${formatFrequency(spur.harmonics * spur.high)}`,
+      reach: spur.high * triangle(spur.harmonics),
+      count: spur.harmonics,
+    })),
+    ...inputs.neighbours.map((neighbour, i) => ({
+      path: ['neighbours', i, 'high'],
+      words: `neighbours[${i}] (${neighbour.label}) and its harmonics up to ${formatFrequency(3 * (neighbour.high + lift))}`,
+      reach: (neighbour.high + lift) * triangle(3),
+      count: 3,
+    })),
+    { path: ['neighbours'], words: 'the products of the neighbours and the wanted band', reach: products * 2 * highestNeighbour, count: products },
+  ];
+}
+
+/** 1 + 2 + … + n. */
+function triangle(n: number): number {
+  return (n * (n + 1)) / 2;
+}
+
+/** The wanted band, and moved to either end of the IF shift. */
+function shiftedBands(inputs: WorkInputs): Band[] {
+  const { wanted, ifShift } = inputs;
+  const at = (shift: number): Band => ({ low: (wanted.low + shift) as Hz, high: (wanted.high + shift) as Hz });
+  return ifShift ? [at(0), at(ifShift.low), at(ifShift.high)].filter((band) => band.low >= 0) : [at(0)];
+}
