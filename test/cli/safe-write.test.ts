@@ -88,7 +88,10 @@ describe('writeFileSafely', () => {
 
   it('leaves the old file and no temporary file when the rename fails', () => {
     const shim: SafeWriteFs = { ...fs, renameSync: () => { throw Object.assign(new Error('EIO: simulated'), { code: 'EIO' }); } };
-    expect(() => writeFileSafely(target, 'new content', { force: true, fs: shim })).toThrow(/simulated/);
+    // The refusal names the user's path and the system's reason, never the hidden temporary file.
+    const error = refusal(() => writeFileSafely(target, 'new content', { force: true, fs: shim }));
+    expect(error.where).toBe(target);
+    expect(error.received).toBe('an input/output error (EIO)');
     expect(fs.readFileSync(target).equals(old)).toBe(true);
     expect(listing()).toEqual(['plan.svg']);
   });

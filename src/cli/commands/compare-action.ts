@@ -3,7 +3,7 @@ import { compareCsv, compareTable } from '../../output/compare-table.js';
 import { toJson, writeJson } from '../../output/json.js';
 import { rateMapFigure } from '../../pictures/rate-map.js';
 import { stackFigures, svgDocument } from '../../pictures/svg-document.js';
-import { writeFileSafely } from '../safe-write.js';
+import { writeFilesSafely, type OutputFile } from '../safe-write.js';
 import { EXIT, type ExitCode, type Io } from '../io.js';
 import type { CompareOptions } from './compare-command.js';
 import { planVariants } from './plan-variants.js';
@@ -15,16 +15,21 @@ import { planVariants } from './plan-variants.js';
  */
 export function runCompare(files: readonly string[], options: CompareOptions, io: Io): ExitCode {
   if (options.json && options.csv) throw new InputError('--csv', 'either --json or --csv, not both', '--json --csv');
-  const { plans, comparison: report, inputs } = planVariants(files, io);
+  const outputs = [options.svg, options.output].filter((path): path is string => path !== undefined);
+  const force = options.force === true;
+  const { plans, comparison: report, inputs } = planVariants(files, io, { paths: outputs, force });
   // Standard output takes the JSON in pieces; a file gets it whole (the safe write swaps in complete files).
   const text = options.json && options.output === undefined ? null : options.json ? toJson(report) : options.csv ? compareCsv(report) : compareTable(report);
+  const written: OutputFile[] = [];
   if (options.svg !== undefined) {
     const maps = plans.map((plan) => rateMapFigure(plan));
-    writeFileSafely(options.svg, svgDocument(stackFigures(maps, `Clock parts on ${report.variants.join(', ')}`, 24)), { force: options.force === true, inputs });
+    written.push({ path: options.svg, content: svgDocument(stackFigures(maps, `Clock parts on ${report.variants.join(', ')}`, 24)) });
   }
+  if (options.output !== undefined && text !== null) written.push({ path: options.output, content: text });
+  // Every file or none: the picture and the table are committed together.
+  writeFilesSafely(written, { force, inputs });
   if (text === null) writeJson(report, io.out);
-  else if (options.output !== undefined) writeFileSafely(options.output, text, { force: options.force === true, inputs });
-  else io.out(text);
+  else if (options.output === undefined) io.out(text);
   const answered = plans.length > 1 ? report.family.length > 0 : report.parts.some((p) => p.passesAll);
   return answered ? EXIT.answered : EXIT.noAnswer;
 }

@@ -6,7 +6,7 @@ import { planVariants } from './plan-variants.js';
 
 /** Solves every variant and writes the review page; exit 0 when every variant has a passing candidate, 1 otherwise. */
 export function runReport(files: readonly string[], options: ReportOptions, io: Io, version: string): ExitCode {
-  const { plans, comparison: compared, inputs } = planVariants(files, io);
+  const { plans, comparison: compared, inputs } = planVariants(files, io, { paths: [options.html], force: options.force === true });
   const comparison = plans.length > 1 ? compared : null;
   const page = reviewPage({ plans, comparison, generated: new Date().toISOString().slice(0, 16).replace('T', ' ') + ' UTC', version });
   writeFileSafely(options.html, page, { force: options.force === true, inputs });

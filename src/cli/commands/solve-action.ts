@@ -4,7 +4,7 @@ import type { Goal, Scenario } from '../../scenario/scenario.js';
 import { planScenario } from '../../plan/plan-scenario.js';
 import { writeJson } from '../../output/json.js';
 import { readScenarioWithInputs } from '../read-scenario.js';
-import { writeFileSafely } from '../safe-write.js';
+import { checkOutputPaths, writeFileSafely } from '../safe-write.js';
 import { EXIT, type ExitCode, type Io } from '../io.js';
 import type { SolveOptions } from './solve-command.js';
 
@@ -12,6 +12,7 @@ import type { SolveOptions } from './solve-command.js';
 export async function runSolve(file: string, options: SolveOptions, io: Io): Promise<ExitCode> {
   const { scenario, inputs } = readScenarioWithInputs(file);
   const goal = goalFromOptions(options, scenario);
+  if (options.svg !== undefined) checkOutputPaths([options.svg], { force: options.force === true, inputs });
   const report = planScenario(scenario, { goal });
   // The tables and the pictures load only when asked for: start-up time matters.
   if (options.svg !== undefined) {

@@ -6,7 +6,7 @@ import { captureSvg } from '../../pictures/capture-picture.js';
 import { verifyTable } from '../../output/verify-table.js';
 import { writeJson } from '../../output/json.js';
 import { readScenarioWithInputs } from '../read-scenario.js';
-import { writeFileSafely } from '../safe-write.js';
+import { checkOutputPaths, writeFileSafely } from '../safe-write.js';
 import { positiveFrequency, wholeNumber } from '../option-values.js';
 import { EXIT, type ExitCode, type Io } from '../io.js';
 import type { VerifyOptions } from './verify-command.js';
@@ -42,6 +42,7 @@ export function runVerify(file: string, options: VerifyOptions, io: Io): ExitCod
   if (bandBins < BINS_PER_TONE * wantedTones) {
     throw new InputError('--samples', `a record long enough for ${wantedTones} tone(s) in the wanted band (${BINS_PER_TONE} bins each; the band spans ${bandBins.toFixed(1)})`, options.samples);
   }
+  if (options.svg !== undefined) checkOutputPaths([options.svg], { force: options.force === true, inputs });
   const { result, levels } = verifyCaptureWithSpectrum(scenario, { rate, samples, wantedTones });
   if (options.svg !== undefined) writeFileSafely(options.svg, captureSvg(result, levels), { force: options.force === true, inputs });
   if (options.json) writeJson(result, io.out);
