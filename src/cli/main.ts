@@ -1,5 +1,6 @@
 import { Command, CommanderError } from 'commander';
 import { InputError } from '../units/input-error.js';
+import { visibleText } from '../units/visible-text.js';
 import { EXIT, type ExitCode, type Io } from './io.js';
 import { addWindowsCommand } from './commands/windows-command.js';
 import { addAliasCommand } from './commands/alias-command.js';
@@ -18,9 +19,15 @@ const VERSION = '0.1.0';
  * the stack.
  *
  * @param args the arguments after the program name
- * @param io where output and errors are written
+ * @param given where output and errors are written (control characters in them are escaped first)
  */
-export async function runCli(args: readonly string[], io: Io): Promise<ExitCode> {
+export async function runCli(args: readonly string[], given: Io): Promise<ExitCode> {
+  // Text from scenario files (names, labels) reaches the terminal only with its control characters escaped.
+  const io: Io = {
+    ...given,
+    out: (text) => given.out(visibleText(text, true)),
+    err: (text) => given.err(visibleText(text, true)),
+  };
   const debug = args.includes('--debug');
   if (args.every((a) => a === '--debug')) {
     io.err('ifzone: no command given; run ifzone --help to list the commands\n');
