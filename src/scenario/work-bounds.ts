@@ -30,6 +30,7 @@ export interface WorkInputs {
   readonly boardSpurs: readonly BoardSpur[];
   readonly neighbours: readonly Neighbour[];
   readonly ifShift: { readonly low: Hz; readonly high: Hz } | null;
+  readonly requirements: { readonly margin: Hz };
 }
 
 /** One source of folding work: how many interferers it makes, and the sum of their highest frequencies, Hz. */
@@ -72,9 +73,9 @@ export function refuseTooMuchWork(ctx: z.RefinementCtx, inputs: WorkInputs): voi
     refuseAt(
       ctx,
       worst.path,
-      `interferers that fold onto at most ${MOST_IMAGES} images of the wanted band over the rate range; raise converter.minRate or lower the highest frequencies`,
+      `interferers that fold onto at most ${MOST_IMAGES} images of the wanted band over the rate range; raise converter.minRate, or lower the highest frequencies or requirements.margin`,
       `about ${Math.round(images)} images over ${range}, most from ${worst.words}`,
-      [['converter', 'minRate'], ['converter', 'maxRate']],
+      [['converter', 'minRate'], ['converter', 'maxRate'], ['requirements', 'margin']],
     );
   }
 }
@@ -84,7 +85,7 @@ export function refuseTooMuchWork(ctx: z.RefinementCtx, inputs: WorkInputs): voi
  * can meet: an extent reaching frequency F meets about 2·F·(1/rLow − 1/rHigh)
  * images (j·r ± band for every j up to F/r, both sides) plus a few per
  * window, with rLow the lowest rate any window allows. Harmonics k·F of one
- * source reach F·Σk in all.
+ * source reach F·Σk in all; the margin adds its width to each extent.
  */
 function foldingWork(inputs: WorkInputs, bands: readonly Band[]): { images: number; worst: WorkSource | null } {
   const { converter } = inputs;
@@ -96,7 +97,8 @@ function foldingWork(inputs: WorkInputs, bands: readonly Band[]): { images: numb
   let worst: WorkSource | null = null;
   let worstImages = -1;
   for (const source of workSources(inputs)) {
-    const here = source.reach * perHertz + 2 * windows * source.count;
+    // The margin widens every extent searched on both sides: a huge margin is as much work as a huge frequency.
+    const here = (source.reach + 2 * source.count * inputs.requirements.margin) * perHertz + 2 * windows * source.count;
     images += here;
     if (here > worstImages) [worst, worstImages] = [source, here];
   }
