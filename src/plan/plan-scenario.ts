@@ -16,6 +16,8 @@ export interface PlanOptions {
   readonly clocks?: readonly ClockPart[];
   /** The name the report carries (default: the scenario's). */
   readonly name?: string;
+  /** Told the name of each stage as it starts, for progress notes. */
+  readonly onStage?: (stage: string) => void;
 }
 
 /** The whole pipeline of one scenario: the solver's view of it, what the solver found, and the IF-shift search. */
@@ -58,8 +60,11 @@ export function planScenario(scenario: Scenario, options: PlanOptions = {}): Pla
  */
 export function solveScenario(scenario: Scenario, options: PlanOptions = {}): SolvedScenario {
   const planned = { ...scenario, goal: options.goal ?? scenario.goal, clocks: options.clocks ?? scenario.clocks };
+  options.onStage?.('deriving the interferers');
   const context = contextFromScenario(planned);
+  options.onStage?.('finding the feasible rates and planning the clock parts');
   const result = solvePlan(context);
+  if (planned.ifShift) options.onStage?.('searching the best IF shift and rate');
   const shift = planned.ifShift ? bestShiftAndRate(planned) : null;
   const report = planReport(options.name ?? scenario.name, context, result, shift, afterRateInputs(planned, planned.goal));
   return { context, result, shift, report };

@@ -91,5 +91,11 @@ function centred(center: Hz, width: Hz, ctx: z.RefinementCtx, zeroWidth: boolean
     refuseAt(ctx, ['width'], `a width of at most twice the centre (${formatFrequency(center)})`, formatFrequency(width), [['center']]);
     return null;
   }
-  return { low: hz(center - width / 2), high: hz(center + width / 2) };
+  const band = { low: hz(center - width / 2), high: hz(center + width / 2) };
+  if (!zeroWidth && !(band.high > band.low)) {
+    // Below the centre's last digit the edges round to one frequency (a width of 1e-300 Hz at 70 MHz).
+    refuseAt(ctx, ['width'], `a width the centre's precision can hold (edges that differ at ${formatFrequency(center)})`, formatFrequency(width), [['center']]);
+    return null;
+  }
+  return band;
 }

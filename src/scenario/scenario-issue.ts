@@ -1,7 +1,7 @@
 import { InputError } from '../units/input-error.js';
 
 /** What kind of refusal an issue is; the formatter words each kind. */
-export type ScenarioIssueKind = 'syntax' | 'unknown-key' | 'invalid' | 'unreadable' | 'cycle';
+export type ScenarioIssueKind = 'syntax' | 'unknown-key' | 'unknown-value' | 'invalid' | 'unreadable' | 'cycle';
 
 /**
  * One problem found in a scenario file, as data. Frequencies, paths and
@@ -17,7 +17,7 @@ export interface ScenarioIssue {
   readonly expected: string;
   /** What was found, as written (JSON text of the value), or a description such as `nothing`. */
   readonly received: string;
-  /** For an unknown key: the nearest known key, or null when none is near. */
+  /** For an unknown key or value: the nearest known one, or null when none is near. */
   readonly suggestion?: string | null;
   /** For `extends` problems: the files in order, ending at the offending one. */
   readonly chain?: readonly string[];
@@ -63,6 +63,9 @@ function oneLine(text: string): string {
 
 function wordsFor(issue: ScenarioIssue): string {
   const where = issueWhere(issue);
+  if (issue.kind === 'unknown-value') {
+    return `${where}: unknown value ${issue.received}; did you mean "${issue.suggestion ?? ''}"? (expected ${issue.expected})`;
+  }
   if (issue.kind === 'unknown-key') {
     return `${where}: unknown key; ${issue.suggestion ? `did you mean "${issue.suggestion}"?` : `expected ${issue.expected}`}`;
   }

@@ -80,6 +80,8 @@ function translated(issues: readonly ZodIssue[], setting: IssueSetting, prefix: 
       const branch = matchedBranch(issue.errors);
       if (branch) return translated(branch, setting, path);
     }
+    const misspelt = issue.code === 'invalid_value' ? unknownValue(issue, path, setting) : null;
+    if (misspelt) return [misspelt];
     const expected = issue.code === 'invalid_key' ? (issue.issues[0]?.message ?? issue.message) : issue.message;
     return [{ kind: 'invalid', file: setting.fileOf(path, ...relatedPaths(issue, path)), path: pathText(path), expected, received: receivedWords(issue) }];
   });
@@ -108,15 +110,31 @@ function badDiscriminator(issue: ZodIssue & { code: 'invalid_union' }, path: Doc
   const key = (issue as { discriminator?: string }).discriminator ?? 'kind';
   const options = (issue as { options?: readonly unknown[] }).options ?? [];
   const input = issue.input;
-  const value = typeof input === 'object' && input !== null && Object.hasOwn(input, key) ? (input as Record<string, unknown>)[key] : undefined;
+  const object = typeof input === 'object' && input !== null ? (input as Record<string, unknown>) : null;
+  const value = object && Object.hasOwn(object, key) ? object[key] : undefined;
   const where = path.at(-1) === key ? path : [...path, key];
+  // A misspelt discriminator key (`knid`) is the unknown key it is, not a missing `kind`.
+  const misspelt = value === undefined && object ? Object.keys(object).find((written) => written !== key && nearestKey(written, [key]) === key) : undefined;
+  if (misspelt !== undefined) return unknownKey(path.at(-1) === key ? path.slice(0, -1) : path, misspelt, setting);
+  const choices = options.map((option) => JSON.stringify(option)).join(', ');
+  const nearest = typeof value === 'string' ? nearestKey(value, options.filter((option): option is string => typeof option === 'string')) : null;
   return {
-    kind: 'invalid',
+    kind: nearest ? 'unknown-value' : 'invalid',
     file: setting.fileOf(where),
     path: pathText(where),
-    expected: `one of ${options.map((option) => JSON.stringify(option)).join(', ')}`,
+    expected: `one of ${choices}`,
     received: describeValue(value),
+    ...(nearest ? { suggestion: nearest } : {}),
   };
+}
+
+/** A text that is not one of the allowed words, with the nearest of them when one is near (`widest-margn`). */
+function unknownValue(issue: ZodIssue & { code: 'invalid_value' }, path: DocumentPath, setting: IssueSetting): ScenarioIssue | null {
+  const words = issue.values.filter((value): value is string => typeof value === 'string');
+  const nearest = typeof issue.input === 'string' && words.length === issue.values.length ? nearestKey(issue.input, words) : null;
+  if (!nearest) return null;
+  const expected = `one of ${words.map((word) => JSON.stringify(word)).join(', ')}`;
+  return { kind: 'unknown-value', file: setting.fileOf(path), path: pathText(path), expected, received: describeValue(issue.input), suggestion: nearest };
 }
 
 function unknownKey(path: DocumentPath, key: string, setting: IssueSetting): ScenarioIssue {

@@ -255,7 +255,7 @@ describe('fuzz: every command option', () => {
         fc.record({ goal: fc.constantFrom('widest-margin', 'lowest-rate', 'quarter-rate', 'decimation', 'fastest', ''), rate: OPTION_VALUE }).map((o) => ['solve', valid, '--goal', o.goal, '--output-rate', o.rate]),
         fc.record({ json: fc.boolean(), csv: fc.boolean() }).map((o) => ['compare', valid, ...(o.json ? ['--json'] : []), ...(o.csv ? ['--csv'] : [])]),
         fc.record({ rate: OPTION_VALUE, tones: OPTION_VALUE, samples: fc.constantFrom('1024', '2048', '1000', '0', 'x', '1048577', '') }).map((o) => ['verify', valid, '--rate', o.rate, '--tones', o.tones, '--samples', o.samples]),
-        fc.constantFrom(['report', valid, '--html', join(dir, 'page.html'), '--force'], ['report', valid, '--html', dir], ['init', '--from', valid], ['init', join(dir, 'no-such-dir', 'x.json')]),
+        fc.constantFrom<string[]>(['report', valid, '--html', join(dir, 'page.html'), '--force'], ['report', valid, '--html', dir], ['init', '--from', valid], ['init', join(dir, 'no-such-dir', 'x.json')]),
       );
       await fc.assert(
         fc.asyncProperty(command, async (args) => {

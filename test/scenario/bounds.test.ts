@@ -14,7 +14,7 @@ import { memoryFiles } from './memory-files.js';
  */
 const BASE = JSON.parse(readFileSync(new URL('../../scenarios/heron-base.json', import.meta.url), 'utf8')) as Record<string, unknown>;
 
-function firstIssue(variant: Record<string, unknown>): { path: string; expected: string } | null {
+function firstIssue(variant: Record<string, unknown>): { path: string; expected: string; kind?: string; suggestion?: string | null } | null {
   try {
     resolveScenario('v.json', memoryFiles({ 'v.json': { extends: 'b.json', ...variant }, 'b.json': BASE }));
     return null;
@@ -100,5 +100,36 @@ describe('work refused before it starts, saying what to narrow', () => {
     // About 2·F/rLow = 2·1e12/2e6 = 1,000,000 images of the band, over the 200,000 allowed.
     expect(issue?.path).toBe('boardSpurs[0].frequency');
     expect(issue?.expected).toContain('at most 200000 images');
+  });
+});
+
+describe('cases the fuzz suite found', () => {
+  it('a margin of 1 THz (ran 100 s) is refused as folding work, naming the margin', () => {
+    const issue = firstIssue({ requirements: { margin: 1e12 } });
+    expect(issue?.expected).toContain('requirements.margin');
+  });
+
+  it('a width below the centre\'s precision (2.2e-308 Hz at 140 MHz: edges round together) is refused at wanted.width', () => {
+    const issue = firstIssue({ wanted: { center: '140M', width: 2.2250738585072014e-308, low: null, high: null } });
+    expect(issue?.path).toBe('wanted.width');
+    expect(issue?.expected).toContain("a width the centre's precision can hold");
+  });
+});
+
+describe('misspelt words get the nearest one', () => {
+  it.each([
+    [{ filter: { kind: 'butterwort', order: 5, passLow: '128M', passHigh: '152M' } }, 'filter.kind', 'butterworth'],
+    [{ goal: 'widest-margn' }, 'goal', 'widest-margin'],
+    [{ goal: { kind: 'decimatoin', outputRate: '7.68M' } }, 'goal.kind', 'decimation'],
+  ])('%j', (variant, path, nearest) => {
+    const issue = firstIssue(variant) as { path: string; suggestion?: string; kind?: string } | null;
+    expect(issue?.path).toBe(path);
+    expect(issue?.kind).toBe('unknown-value');
+    expect(issue?.suggestion).toBe(nearest);
+  });
+
+  it('a misspelt kind key is an unknown key with "kind" suggested, not a missing kind', () => {
+    const issue = firstIssue({ filter: { knid: 'butterworth', order: 5, passLow: '128M', passHigh: '152M' } }) as { path: string; suggestion?: string; kind?: string } | null;
+    expect(issue).toMatchObject({ kind: 'unknown-key', path: 'filter.knid', suggestion: 'kind' });
   });
 });

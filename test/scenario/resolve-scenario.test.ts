@@ -176,7 +176,7 @@ const CASES: Record<string, Case> = {
   'missing key': { variant: { requirements: { rejection: null } }, path: 'requirements.rejection', words: 'a number (got null)' },
   'wanted level above full scale': { variant: { wanted: { weakestLevel: 3 } }, path: 'wanted.weakestLevel', words: 'at most 0' },
   'bad goal word': { variant: { goal: 'fastest' }, path: 'goal', words: 'one of "widest-margin", "lowest-rate", "quarter-rate" (got "fastest")' },
-  'bad goal kind': { variant: { goal: { kind: 'decimate', outputRate: '30.72M' } }, path: 'goal.kind', words: '"decimation" (got "decimate")' },
+  'bad goal kind': { variant: { goal: { kind: 'decimate', outputRate: '30.72M' } }, path: 'goal.kind', kind: 'unknown-value', words: 'unknown value "decimate"; did you mean "decimation"?' },
   'decimation without its rate': { variant: { goal: { kind: 'decimation' } }, path: 'goal.outputRate', words: 'got nothing' },
   'bad filter kind': { variant: { filter: { kind: 'elliptic' } }, path: 'filter.kind', words: 'one of "butterworth", "table" (got "elliptic")' },
   'filter order out of range': { variant: { filter: { order: 21 } }, path: 'filter.order', words: 'from 1 to 20' },
@@ -241,7 +241,7 @@ function CLOCK_CASES(): Record<string, Case> {
     'tolerance as text': { variant: part({ tolerance: '20 ppm' }), path: 'clocks[0].tolerance', words: 'a tolerance in ppm, or { "initial": ..., "temperature": ..., "ageing": ... }' },
     'bad jitter': { variant: part({ jitter: '90 f' }), path: 'clocks[0].jitter', words: 'a time with its unit, e.g. 90 fs (got "90 f")' },
     'note not text': { variant: part({ note: 3 }), path: 'clocks[0].note', words: 'expected text (got 3)' },
-    'bad derivation word': { variant: part({ derive: 'divided' }), path: 'clocks[0].derive', words: 'one of "direct", "divider" (got "divided")' },
+    'bad derivation word': { variant: part({ derive: 'divided' }), path: 'clocks[0].derive', kind: 'unknown-value', words: 'unknown value "divided"; did you mean "divider"? (expected one of "direct", "divider")' },
     'bad derivation kind': { variant: part({ derive: { kind: 'pll' } }), path: 'clocks[0].derive.kind', words: 'one of "direct", "divider", "synthesiser" (got "pll")' },
     'derivation of the wrong type': { variant: part({ derive: 4 }), path: 'clocks[0].derive', words: 'a derivation: "direct", "divider" or { "kind": "synthesiser"' },
     'unknown key in a synthesiser, with a suggestion': {

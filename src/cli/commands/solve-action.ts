@@ -5,7 +5,7 @@ import { planScenario } from '../../plan/plan-scenario.js';
 import { writeJson } from '../../output/json.js';
 import { readScenarioWithInputs } from '../read-scenario.js';
 import { checkOutputPaths, writeFileSafely } from '../safe-write.js';
-import { EXIT, type ExitCode, type Io } from '../io.js';
+import { EXIT, progressNotes, type ExitCode, type Io } from '../io.js';
 import type { SolveOptions } from './solve-command.js';
 
 /** Reads, solves and prints one scenario (with ifShift, also its best IF shift and rate; draws it with --svg); exit 0 when a candidate passes, 1 when none does. */
@@ -13,12 +13,15 @@ export async function runSolve(file: string, options: SolveOptions, io: Io): Pro
   const { scenario, inputs } = readScenarioWithInputs(file);
   const goal = goalFromOptions(options, scenario);
   if (options.svg !== undefined) checkOutputPaths([options.svg], { force: options.force === true, inputs });
-  const report = planScenario(scenario, { goal });
+  const progress = progressNotes(io);
+  const report = planScenario(scenario, { goal, onStage: progress.note });
   // The tables and the pictures load only when asked for: start-up time matters.
   if (options.svg !== undefined) {
+    progress.note('drawing the pictures');
     const { planPicturesSvg } = await import('../../pictures/plan-pictures.js');
     writeFileSafely(options.svg, planPicturesSvg(report), { force: options.force === true, inputs });
   }
+  progress.done();
   if (options.json) writeJson(report, io.out);
   else io.out((await import('../../output/plan-table.js')).planTable(report));
   return report.best === null || report.conflicts.length > 0 ? EXIT.noAnswer : EXIT.answered;

@@ -8,7 +8,7 @@ import { writeJson } from '../../output/json.js';
 import { readScenarioWithInputs } from '../read-scenario.js';
 import { checkOutputPaths, writeFileSafely } from '../safe-write.js';
 import { positiveFrequency, wholeNumber } from '../option-values.js';
-import { EXIT, type ExitCode, type Io } from '../io.js';
+import { EXIT, progressNotes, type ExitCode, type Io } from '../io.js';
 import type { VerifyOptions } from './verify-command.js';
 
 /** Bins of the wanted band each wanted tone needs, so that tones and their products can be placed apart. */
@@ -29,6 +29,7 @@ const MOST_TONES = 5;
  * @example runVerify('scenarios/heron-base.json', { rate: '184.32M', tones: '1', samples: '65536' }, io) // 0
  */
 export function runVerify(file: string, options: VerifyOptions, io: Io): ExitCode {
+  const progress = progressNotes(io);
   const { scenario, inputs } = readScenarioWithInputs(file);
   const rate = positiveFrequency(options.rate, '--rate');
   const { minRate, maxRate } = scenario.converter;
@@ -44,7 +45,9 @@ export function runVerify(file: string, options: VerifyOptions, io: Io): ExitCod
   }
   if (options.svg !== undefined) checkOutputPaths([options.svg], { force: options.force === true, inputs });
   const { result, levels } = verifyCaptureWithSpectrum(scenario, { rate, samples, wantedTones });
+  progress.note('drawing the capture');
   if (options.svg !== undefined) writeFileSafely(options.svg, captureSvg(result, levels), { force: options.force === true, inputs });
+  progress.done();
   if (options.json) writeJson(result, io.out);
   else io.out(verifyTable(result));
   return result.consistent ? EXIT.answered : EXIT.noAnswer;
