@@ -4,7 +4,7 @@ import type { Hz } from '../units/quantities.js';
 import { guardedBand, type Band, type Guard } from '../math/band.js';
 import { windowCount, zoneSpan } from '../math/zone-span.js';
 import { refuseAt } from './band-forms.js';
-import type { BoardSpur, Converter, Neighbour, WantedBand } from './scenario.js';
+import type { BoardSpur, Converter, KindMargins, Neighbour, WantedBand } from './scenario.js';
 
 /**
  * Most rate windows a plan searches. Each window costs a search of every
@@ -30,7 +30,9 @@ export interface WorkInputs {
   readonly boardSpurs: readonly BoardSpur[];
   readonly neighbours: readonly Neighbour[];
   readonly ifShift: { readonly low: Hz; readonly high: Hz } | null;
-  readonly requirements: { readonly margin: Hz };
+  readonly requirements: { readonly margin: Hz; readonly kindMargins?: KindMargins };
+  /** Highest total order of the mixing products among the signals. */
+  readonly maxOrder: number;
 }
 
 /** One source of folding work: how many interferers it makes, and the sum of their highest frequencies, Hz. */
@@ -93,12 +95,13 @@ function foldingWork(inputs: WorkInputs, bands: readonly Band[]): { images: numb
   const perHertz = 2 * (1 / lowestRate - 1 / converter.maxRate);
   const windows = Math.max(...bands.map((band) => windowCount(band, converter.minRate, converter.maxRate)));
   if (windows === 0) return { images: 0, worst: null };
+  const margin = largestMargin(inputs);
   let images = 0;
   let worst: WorkSource | null = null;
   let worstImages = -1;
   for (const source of workSources(inputs)) {
     // The margin widens every extent searched on both sides: a huge margin is as much work as a huge frequency.
-    const here = (source.reach + 2 * source.count * inputs.requirements.margin) * perHertz + 2 * windows * source.count;
+    const here = (source.reach + 2 * source.count * margin) * perHertz + 2 * windows * source.count;
     images += here;
     if (here > worstImages) [worst, worstImages] = [source, here];
   }
@@ -111,7 +114,8 @@ function workSources(inputs: WorkInputs): WorkSource[] {
   const highestWanted = inputs.wanted.high + lift;
   const highestNeighbour = Math.max(highestWanted, ...inputs.neighbours.map((n) => n.high + lift));
   const order = inputs.harmonicOrder;
-  // Third- and second-order products of every ordered pair among the neighbours and the wanted band, each below twice the highest.
+  // Mixing products among the neighbours and the wanted band, each below maxOrder times the highest: counted as
+  // two per ordered pair, since the generator prunes every product too weak to block before it is made.
   const products = 2 * (inputs.neighbours.length + 1) ** 2;
   return [
     { path: ['harmonicOrder'], words: `the wanted band's harmonics up to ${formatFrequency(order * highestWanted)}`, reach: highestWanted * (triangle(order) - 1), count: order - 1 },
@@ -127,8 +131,15 @@ function workSources(inputs: WorkInputs): WorkSource[] {
       reach: (neighbour.high + lift) * triangle(3),
       count: 3,
     })),
-    { path: ['neighbours'], words: 'the products of the neighbours and the wanted band', reach: products * 2 * highestNeighbour, count: products },
+    { path: ['neighbours'], words: 'the products of the neighbours and the wanted band', reach: products * inputs.maxOrder * highestNeighbour, count: products },
   ];
+}
+
+/** The widest margin any check may ask for, Hz: the scenario's, a kind's, or a spur's or neighbour's own. */
+function largestMargin(inputs: WorkInputs): number {
+  const own = [...inputs.boardSpurs, ...inputs.neighbours].map((signal) => signal.margin ?? 0);
+  const kinds = Object.values(inputs.requirements.kindMargins ?? {}).map((margin) => margin ?? 0);
+  return Math.max(inputs.requirements.margin, ...own, ...kinds);
 }
 
 /** 1 + 2 + … + n. */
