@@ -29,7 +29,8 @@ export const rateFractionSpurSchema = z
     fraction: z
       .string()
       .regex(FRACTION, { error: 'a fraction of the rate as "p/q", e.g. "1/3" or "3/8"' })
-      .refine((text) => Number(FRACTION.exec(text)![2]) >= 1, { error: 'a fraction with a denominator of 1 or more' })
+      // zod runs this check even when the pattern failed: a text that is no fraction is left to the pattern's refusal.
+      .refine((text) => Number(FRACTION.exec(text)?.[2] ?? 1) >= 1, { error: 'a fraction with a denominator of 1 or more' })
       .meta({ description: 'Where the spur sits, as a fraction p/q of the sample rate, e.g. "1/3", "3/8"' }),
     level: levelAtMostFullScale('Level, dBFS'),
   })

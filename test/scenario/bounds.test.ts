@@ -133,3 +133,11 @@ describe('misspelt words get the nearest one', () => {
     expect(issue).toMatchObject({ kind: 'unknown-key', path: 'filter.knid', suggestion: 'kind' });
   });
 });
+
+describe('a rate fraction that is no fraction', () => {
+  it('"5%" is refused at the field, not as an internal error (the denominator check ran on a failed pattern)', () => {
+    const issue = firstIssue({ converter: { rateSpurs: { fractions: [{ fraction: '5%', level: -90 }] } } });
+    expect(issue?.path).toBe('converter.rateSpurs.fractions[0].fraction');
+    expect(issue?.expected).toContain('a fraction of the rate as "p/q"');
+  });
+});
