@@ -53,24 +53,46 @@ export interface DerivedInterferers {
  * suffixed ` #2`, ...).
  *
  * @param scenario the validated scenario
+ * @param listing the same scenario with its signals where they decide what is listed and which way round a product is written (default: the scenario itself): the IF-shift search passes the neighbours swept over the shift range, so that every shift lists the same interferers in the same order
  * @returns the interferers (extents rateMultiple·r + [low, high] in Hz, levels in dBFS) and the summary
  * @throws RangeError for a malformed filter (see leastAttenuation)
  * @example deriveInterfererList(s).summary.pruned // products left out below the threshold
  */
-export function deriveInterfererList(scenario: Scenario): DerivedInterferers {
+export function deriveInterfererList(scenario: Scenario, listing: Scenario = scenario): DerivedInterferers {
   const threshold = levelThreshold(scenario);
   const signals = inputSignals(scenario);
+  const listingSignals = listing === scenario ? signals : inputSignals(listing);
   const reference = scenario.wanted.strongestLevel;
-  const products = mixingProducts({
-    signals,
-    law: (order) => orderLaw(scenario.converter, order, reference),
+  const request = {
+    law: (order: number) => orderLaw(scenario.converter, order, reference),
     maxOrder: scenario.maxOrder ?? DEFAULT_MAX_ORDER,
     harmonicOrder: scenario.harmonicOrder,
     threshold,
-  });
-  const spurs = scenario.boardSpurs.flatMap((spur, i) => boardSpurDrafts(spur, i, scenario));
-  const neighbours = scenario.neighbours.map((n, i) => neighbourDraft(n, i, scenario));
-  const wanted: InterfererDraft = {
+    listing: listingSignals,
+  };
+  const products = mixingProducts({ ...request, signals });
+  const sources = (s: Scenario, made: readonly InterfererDraft[]) => [wantedDraft(s), ...s.boardSpurs.flatMap((spur, i) => boardSpurDrafts(spur, i, s)), ...s.neighbours.map((n, i) => neighbourDraft(n, i, s)), ...made];
+  const own = sources(scenario, products.drafts);
+  const images = interleaveImages(own, scenario, listing === scenario ? own : sources(listing, mixingProducts({ ...request, signals: listingSignals }).drafts));
+  const drafts = [...own.slice(1), ...converterSpurDrafts(scenario), ...images.drafts];
+  return {
+    interferers: uniqueLabels(drafts).map((draft) => complete(draft, scenario)),
+    summary: {
+      maxOrder: request.maxOrder,
+      harmonicOrder: scenario.harmonicOrder,
+      products: products.drafts.length,
+      pruned: products.pruned,
+      strongestPruned: products.strongestPruned,
+      inBand: products.inBand,
+      prunedImages: images.pruned,
+      threshold,
+    },
+  };
+}
+
+/** The wanted band as an image source: at its strongest level, moving with the IF. */
+function wantedDraft(scenario: Scenario): InterfererDraft {
+  return {
     label: 'wanted',
     kind: 'neighbour',
     order: null,
@@ -81,21 +103,6 @@ export function deriveInterfererList(scenario: Scenario): DerivedInterferers {
     high: scenario.wanted.high,
     level: scenario.wanted.strongestLevel,
     mixing: [{ signal: 'wanted', index: 0, harmonic: 1, plus: 1, minus: 0 }],
-  };
-  const images = interleaveImages([wanted, ...spurs, ...neighbours, ...products.drafts], scenario);
-  const drafts = [...spurs, ...neighbours, ...products.drafts, ...converterSpurDrafts(scenario), ...images.drafts];
-  return {
-    interferers: uniqueLabels(drafts).map((draft) => complete(draft, scenario)),
-    summary: {
-      maxOrder: scenario.maxOrder ?? DEFAULT_MAX_ORDER,
-      harmonicOrder: scenario.harmonicOrder,
-      products: products.drafts.length,
-      pruned: products.pruned,
-      strongestPruned: products.strongestPruned,
-      inBand: products.inBand,
-      prunedImages: images.pruned,
-      threshold,
-    },
   };
 }
 

@@ -39,21 +39,24 @@ export interface ImageList {
  *
  * @param sources the drafts of the input signals and products (their `mixing` is kept, the image placed beside it)
  * @param scenario the validated scenario (interleave, threshold)
+ * @param listing the same sources as they decide which images are listed (default: `sources`; see mixingProducts)
  * @returns drafts labelled `IL image k/M−` / `IL image k/M+` for the wanted band, `IL image k/M− <source>` otherwise
  * @example interleaveImages([wantedDraft], s).drafts.map((d) => d.label) // ['IL image 1/2−', 'IL image 1/2+'] for a 2-way converter
  */
-export function interleaveImages(sources: readonly InterfererDraft[], scenario: Scenario): ImageList {
+export function interleaveImages(sources: readonly InterfererDraft[], scenario: Scenario, listing: readonly InterfererDraft[] = sources): ImageList {
   const interleave = scenario.converter.interleave;
   if (interleave === null) return { drafts: [], pruned: 0 };
   const m = interleave.ways;
   const drafts: InterfererDraft[] = [];
   let pruned = 0;
-  for (const source of sources) {
+  for (const [index, source] of sources.entries()) {
     if (source.rateMultiple !== 0) continue;
+    const decides = listing[index]!;
     const isWanted = source.mixing?.length === 1 && source.mixing[0]!.signal === 'wanted' && source.mixing[0]!.plus === 1 && source.mixing[0]!.minus === 0;
     const dbc = imageDbc(interleave, Math.max(Math.abs(source.low), Math.abs(source.high)));
     const level = db(source.level + dbc);
-    if (!isWanted && !isBlocking(level, scenario)) {
+    const listed = db(decides.level + imageDbc(interleave, Math.max(Math.abs(decides.low), Math.abs(decides.high))));
+    if (!isWanted && !isBlocking(listed, scenario)) {
       pruned += 2 * (m - 1);
       continue;
     }

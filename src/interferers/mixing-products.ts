@@ -16,6 +16,13 @@ export interface ProductRequest {
   readonly harmonicOrder: number;
   /** Products at or below this level are not listed (non-blocking), dBFS. */
   readonly threshold: Db;
+  /**
+   * The same signals, in the same order, as they decide what is listed and
+   * which way round each product is written; absent: `signals` themselves.
+   * The IF-shift search passes each signal at its strongest over the shift
+   * range, so that every shift lists the same products in the same order.
+   */
+  readonly listing?: readonly InputSignal[];
 }
 
 /** The products listed, and what was left out. */
@@ -59,8 +66,9 @@ export interface ProductList {
  */
 export function mixingProducts(request: ProductRequest): ProductList {
   const { signals, threshold } = request;
-  const order = signals.map((_, i) => i).sort((a, b) => signals[b]!.level - signals[a]!.level || a - b);
-  const sorted = order.map((i) => signals[i]!);
+  const listing = request.listing ?? signals;
+  const order = listing.map((_, i) => i).sort((a, b) => listing[b]!.level - listing[a]!.level || a - b);
+  const sorted = order.map((i) => listing[i]!);
   const isTone = sorted.map((s) => s.low === s.high);
   const drafts: InterfererDraft[] = [];
   let pruned = 0;
@@ -80,7 +88,7 @@ export function mixingProducts(request: ProductRequest): ProductList {
       // Past the mixing order, each signal's own n-th harmonic only.
       for (const [j, signal] of sorted.entries()) {
         const level = base - 20 * Math.log10(factorial(n)) + n * signal.level;
-        if (level > threshold) drafts.push(productDraft(law, [[order[j]!, n, 0]], signals));
+        if (level > threshold) drafts.push(productDraft(law, [[order[j]!, n, 0]], signals, listing));
         else prune(1, level);
       }
       continue;
@@ -92,7 +100,7 @@ export function mixingProducts(request: ProductRequest): ProductList {
         const level = productLevel(law, picks.map(([i, plus, minus]) => [sorted[i]!.level, plus, minus] as const));
         if (level <= threshold) prune(1, level);
         else if (picks.every(([i]) => wantedOnly[i]) && picks.reduce((net, [, plus, minus]) => net + plus - minus, 0) === 1) inBand++;
-        else drafts.push(productDraft(law, picks.map(([i, plus, minus]) => [order[i]!, plus, minus] as const), signals));
+        else drafts.push(productDraft(law, picks.map(([i, plus, minus]) => [order[i]!, plus, minus] as const), signals, listing));
         return;
       }
       for (let j = from; j < sorted.length; j++) {
@@ -167,18 +175,21 @@ function completionTables(sorted: readonly InputSignal[], isTone: readonly boole
  * @param law the law of its order
  * @param picks (signal index in `signals`, plus, minus) for each signal taken
  * @param signals the input signals, in scenario order
+ * @param listing the same signals as they decide which way round it is written (default: `signals`)
  */
-export function productDraft(law: OrderLaw, picks: ReadonlyArray<readonly [number, number, number]>, signals: readonly InputSignal[]): InterfererDraft {
+export function productDraft(law: OrderLaw, picks: ReadonlyArray<readonly [number, number, number]>, signals: readonly InputSignal[], listing: readonly InputSignal[] = signals): InterfererDraft {
   let low = 0;
   let high = 0;
   let shift = 0;
+  let centre = 0;
   for (const [i, plus, minus] of picks) {
     const s = signals[i]!;
     low += plus * s.low - minus * s.high;
     high += plus * s.high - minus * s.low;
     shift += (plus - minus) * s.shiftMultiple;
+    centre += ((plus - minus) * (listing[i]!.low + listing[i]!.high)) / 2;
   }
-  const flip = low + high < 0;
+  const flip = centre < 0;
   const terms = [...picks].sort((a, b) => a[0] - b[0]).map(([i, plus, minus]) => (flip ? ([i, minus, plus] as const) : ([i, plus, minus] as const)));
   const mixing: MixingTerm[] = terms.map(([i, plus, minus]) => ({ ...signals[i]!.ref, plus, minus }));
   const level = productLevel(law, picks.map(([i, plus, minus]) => [signals[i]!.level, plus, minus] as const));

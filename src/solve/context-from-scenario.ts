@@ -9,9 +9,10 @@ import type { PlanContext } from './plan-context.js';
  * clocking (dividers, bits, aperture jitter) and the goal.
  *
  * @param scenario the validated scenario
+ * @param listing the scenario that decides which interferers are listed (see deriveInterfererList; default: the scenario)
  */
-export function contextFromScenario(scenario: Scenario): PlanContext {
-  const derived = deriveInterfererList(scenario);
+export function contextFromScenario(scenario: Scenario, listing: Scenario = scenario): PlanContext {
+  const derived = deriveInterfererList(scenario, listing);
   return {
     band: { low: scenario.wanted.low, high: scenario.wanted.high },
     guard: scenario.guard,

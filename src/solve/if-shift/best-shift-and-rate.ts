@@ -1,5 +1,4 @@
 import { hz, type Hz, type Ppm } from '../../units/quantities.js';
-import type { Interval } from '../../math/interval-set.js';
 import type { Scenario } from '../../scenario/scenario.js';
 import { deriveInterferers } from '../../interferers/derive-interferers.js';
 import { bestRateIn } from '../best-rate.js';
@@ -92,14 +91,16 @@ export function bestShiftAndRate(scenario: Scenario, options: ShiftSearchOptions
     throw new RangeError(`an IF shift range with low ≤ high that keeps the band at or above 0 Hz, got ${range.low}–${range.high} Hz`);
   }
   const widest: Scenario = { ...scenario, goal: { kind: 'widest-margin' } };
-  const contextAt = (shift: number): PlanContext => contextFromScenario(shiftedScenario(widest, hz(shift)));
+  // Every shift lists the interferers that block somewhere in the range, in one order: the listing is decided on the swept scenario.
+  const swept = sweptScenario(widest, { low: hz(range.low), high: hz(range.high) });
+  const contextAt = (shift: number): PlanContext => contextFromScenario(shiftedScenario(widest, hz(shift)), swept);
   const base = contextAt(0);
   const inputs: PieceInputs = {
     band: base.band,
     guard: base.guard,
     limits: base.limits,
     interferers: base.interferers,
-    blocking: blockingSomewhere(widest, range, base),
+    blocking: blockingSomewhere(swept, base),
     shifts: range,
     tolerancePpm: base.tolerancePpm,
   };
@@ -137,12 +138,13 @@ function seedRate(interval: FeasibleInterval, tolerancePpm: Ppm): Hz {
 
 /**
  * Per interferer of the δ = 0 plan, whether it blocks at some shift of the
- * range: its level in the swept scenario (see sweptScenario). The derivation
- * lists the same interferers in the same order whatever the frequencies;
- * a mismatch is a bug.
+ * range: its level in the swept scenario (see sweptScenario). With the swept
+ * scenario deciding the listing, every shift lists the same interferers in
+ * the same order (products and images pruned by their strongest level over
+ * the range, each written one way round); a mismatch is a bug.
  */
-function blockingSomewhere(scenario: Scenario, range: Interval, base: PlanContext): boolean[] {
-  const swept = deriveInterferers(sweptScenario(scenario, { low: hz(range.low), high: hz(range.high) }));
+function blockingSomewhere(sweptOver: Scenario, base: PlanContext): boolean[] {
+  const swept = deriveInterferers(sweptOver);
   if (swept.length !== base.interferers.length || swept.some((s, i) => s.label !== base.interferers[i]!.label)) {
     throw new Error('the swept scenario derived a different list of interferers');
   }
