@@ -1,7 +1,5 @@
 import { hz, type Hz } from '../units/quantities.js';
-
-/** Widest NCO accumulator handled: every tuning word stays an exact integer in a double. */
-export const MOST_NCO_BITS = 48;
+import { MOST_NCO_BITS } from '../scenario/scenario.js';
 
 /** What the down-converter's NCO is loaded with, and what it gives. */
 export interface NcoSetting {

@@ -119,7 +119,13 @@ function signedHz(value: number): string {
   return value >= 0 ? `+${formatFrequency(value, 4)}` : `−${formatFrequency(-value, 4)}`;
 }
 
-/** A frequency range for people, one frequency when low = high. */
+/**
+ * A frequency range for people, one frequency when low = high.
+ *
+ * @param low, high Hz
+ * @param significant digits kept (default 10)
+ * @example range(217.63631e6, 239.64369e6, 7) // '217.6363 MHz – 239.6437 MHz'
+ */
 export function range(low: number, high: number, significant = 10): string {
   return low === high ? formatFrequency(low, significant) : `${formatFrequency(low, significant)} – ${formatFrequency(high, significant)}`;
 }

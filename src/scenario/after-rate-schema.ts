@@ -1,10 +1,7 @@
 import { z } from 'zod';
 import { db, type Db } from '../units/quantities.js';
-import type { AfterRateSettings } from './scenario.js';
+import { MOST_NCO_BITS, type AfterRateSettings } from './scenario.js';
 import { level, positiveFrequency, wholeNumber } from './scenario-fields.js';
-
-/** Widest NCO accumulator accepted, bits: every tuning word stays an exact integer in a double. */
-const MOST_NCO_BITS = 48;
 
 /** What the anti-alias filter must reject, and the passband ripple its order is sized for. */
 const filterMaskSchema = z.strictObject({
@@ -46,7 +43,14 @@ export const afterRateFileFields = {
   downConverter: downConverterSchema.meta({ description: 'The digital down-converter: NCO width, output rate and usable band (optional)' }).prefault({}),
 };
 
-/** The file's after-rate fields as the model's settings. */
+/**
+ * The file's after-rate fields, as zod has read them, gathered into the
+ * model's settings.
+ *
+ * @param file the parsed file's filterMask, driverNoiseDensity and downConverter
+ * @returns the settings the after-rate stage reads
+ * @example afterRateSettings({ filterMask: { outOfBandLevel: null, passbandRipple: db(1) }, driverNoiseDensity: null, downConverter: { ncoBits: 32, outputRate: null, usableFraction: 0.8 } }).downConverter.ncoBits // 32
+ */
 export function afterRateSettings(file: {
   readonly filterMask: { readonly outOfBandLevel: Db | null; readonly passbandRipple: Db };
   readonly driverNoiseDensity: Db | null;

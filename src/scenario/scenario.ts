@@ -38,6 +38,9 @@ export interface Scenario {
   readonly afterRate: AfterRateSettings;
 }
 
+/** Widest NCO accumulator a scenario may state, bits: every tuning word then stays an exact integer in a double. */
+export const MOST_NCO_BITS = 48;
+
 /** Settings for the anti-alias mask, noise folding and down-converter figures of a chosen rate. */
 export interface AfterRateSettings {
   /** Strongest signal outside the channel at the filter input, dBFS; null: not stated (full scale assumed, reported only). */
