@@ -59,7 +59,8 @@ const UNDER_FLOOR_EXACT = 64;
  * the tones or products that stand for it (checkFamily), each line judged
  * (judgeLine); measured peaks that no line explains are listed, and those
  * above the threshold contradict the plan; so does any peak above the
- * threshold within the margin of the wanted image.
+ * threshold inside the wanted image, or within the margin of it that the
+ * interferer it stands for must keep (its own, its kind's or the scenario's).
  *
  * @param scenario the validated scenario
  * @param settings rate, record length, wanted tones, tolerance
@@ -173,6 +174,13 @@ export function verifyCaptureWithSpectrum(scenario: Scenario, settings: CaptureS
   const image = plan.image ? [[plan.image.low, plan.image.high] as const] : foldExtent(scenario.wanted.low, scenario.wanted.high, rate).map((s) => [hz(s.low), hz(s.high)] as const);
   const distance = (f: number) => Math.min(...image.map(([low, high]) => (f < low ? low - f : f > high ? f - high : 0)));
   const matched = new Set(predictions.flatMap((p) => (p.measured ? [p.measured.bin] : [])));
+  // A peak the plan names keeps that interferer's own margin (the least, when several lines sit there); any other the scenario's.
+  const requiredOf = new Map(checks.map((c) => [c.label, c.requiredMargin] as const));
+  const marginAt = (bin: number) => {
+    const own = predictions.flatMap((p) => (p.measured?.bin === bin ? [requiredOf.get(p.check) ?? scenario.requirements.margin] : []));
+    return own.length > 0 ? Math.min(...own) : scenario.requirements.margin;
+  };
+  const strictlyInside = (f: number) => image.some(([low, high]) => f > low && f < high);
   const unlisted: PeakRow[] = [];
   const intrusions: PeakRow[] = [];
   for (const bin of peaks) {
@@ -189,7 +197,7 @@ export function verifyCaptureWithSpectrum(scenario: Scenario, settings: CaptureS
           : null;
       unlisted.push(row);
     }
-    if (level > threshold && row.distance < scenario.requirements.margin) intrusions.push(row);
+    if (level > threshold && (row.distance < marginAt(bin) || strictlyInside(bin * binWidth))) intrusions.push(row);
   }
 
   const contradictions = [
@@ -198,7 +206,7 @@ export function verifyCaptureWithSpectrum(scenario: Scenario, settings: CaptureS
       .filter((u) => u.level > threshold && !(u.explainedBy ?? '').startsWith('window overlap'))
       .map((u) => `${formatFrequency(u.frequency, 7)} at ${u.level.toFixed(1)} dBFS, above the threshold ${threshold.toFixed(1)} dBFS: ${u.explainedBy ?? 'unexplained'}; missed by the plan`),
     ...intrusions.map((u) => {
-      const where = u.distance === 0 ? 'lies inside the wanted image' : `lies ${formatFrequency(u.distance, 4)} from the wanted image, inside the ${formatFrequency(scenario.requirements.margin)} margin`;
+      const where = u.distance === 0 ? 'lies inside the wanted image' : `lies ${formatFrequency(u.distance, 4)} from the wanted image, inside the ${formatFrequency(marginAt(u.bin))} margin`;
       return `${formatFrequency(u.frequency, 7)} at ${u.level.toFixed(1)} dBFS (${u.explainedBy ?? lineName(predictions, u.bin)}) ${where}: the rate is not clean`;
     }),
   ];
@@ -304,7 +312,7 @@ function comparedText(wantedTones: number, tolerance: number, floor: number, thr
     'Band sources are represented by their tones: their products (sums of wanted tones for the harmonics, 2·a − b for third-order and a ± b for second-order intermodulation, k·R/M + f for interleaving images) were placed by whole-cycle arithmetic, checked against the plan\'s aliased segments, and measured.',
     ...(wantedTones === 1 ? ['With one wanted tone the differences inside the wanted band make no line: a tone less itself is DC.'] : []),
     `Positions must agree within one bin. Levels are judged ${tolerance} dB either way where the plan's level is the level the capture put there (stated spurs, neighbours, and with one wanted tone its harmonics and images); where the plan's level is a band's worst case or an extrapolation (neighbour harmonics, intermodulation, several wanted tones), the measurement must not exceed it by more than ${tolerance} dB when above the threshold.`,
-    `Peaks above ${floor.toFixed(1)} dBFS count; any above the threshold ${threshold.toFixed(1)} dBFS that no line of the plan explains, or that lands within the margin of the wanted image, contradicts the plan.`,
+    `Peaks above ${floor.toFixed(1)} dBFS count; any above the threshold ${threshold.toFixed(1)} dBFS that no line of the plan explains, or that lands inside the wanted image or within the margin its interferer must keep from it, contradicts the plan.`,
   ];
   if (!complete) lines.push('The list of the model\'s products was cut short at its budget: an unexplained peak may be a product of high order the list does not name.');
   if (floor > threshold) lines.push(`The floor is above the threshold: spurs between ${threshold.toFixed(1)} and ${floor.toFixed(1)} dBFS are not seen.`);

@@ -75,6 +75,19 @@ describe('verify and solve agree: interleaving, an intercept and three close blo
     }
   }
 
+  it('a neighbour that needs no margin (its own margin 0) 0.3 MHz beside the band: the plan passes and the capture agrees, judging its peak by its own margin', () => {
+    const base = agreementScenario(null);
+    const scenario: Scenario = { ...base, neighbours: [...base.neighbours, { label: 'ADJ', low: hz(16.3 * MHZ), high: hz(16.3 * MHZ), level: db(-40), margin: hz(0) }] };
+    const rate = passingRates(scenario)[0]!;
+    const result = verifyCapture(scenario, { rate, wantedTones: 1 });
+    expect(result.plan.pass).toBe(true);
+    const adj = result.predictions.find((p) => p.check === 'ADJ')!;
+    expect(adj.status).toBe('agrees');
+    // 0.3 MHz from the image: inside the scenario's 0.5 MHz, outside ADJ's own 0.
+    expect(result.intrusions).toEqual([]);
+    expect(result.consistent, result.contradictions.join('\n')).toBe(true);
+  });
+
   it('at a rate the plan blocks with a triple beat of the blockers, the capture shows that product inside the wanted image', () => {
     const scenario = agreementScenario(null);
     const context = contextFromScenario(scenario);
