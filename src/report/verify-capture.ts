@@ -231,7 +231,7 @@ export function verifyCaptureWithSpectrum(scenario: Scenario, settings: CaptureS
     contradictions,
     consistent: contradictions.length === 0,
     modelComplete: model.complete,
-    compared: comparedText(wantedTones, tolerance, floor, threshold, model.complete),
+    compared: comparedText(wantedTones, tolerance, floor, threshold, model.complete, mismatch !== null),
     caution: `${PAPER_DESIGN_CAUTION} A simulated capture is still a paper check: it is built from the same stated figures as the plan, so confirm the plan by measurement on hardware.`,
   };
   return { result, levels: spectrum.levels };
@@ -304,12 +304,13 @@ function toneRow(tone: CaptureTone, samples: number): ToneRow {
   return { label: tone.label, role, nominal: tone.nominal, frequency: tone.frequency, move: tone.move, bin: foldCycles(tone.cycles, samples), level: tone.level };
 }
 
-function comparedText(wantedTones: number, tolerance: number, floor: number, threshold: number, complete: boolean): string {
+function comparedText(wantedTones: number, tolerance: number, floor: number, threshold: number, complete: boolean, interleaved: boolean): string {
   const wanted = wantedTones === 1 ? 'one tone at the strongest wanted level' : `${wantedTones} tones, each 20·log10(${wantedTones}) dB below the strongest wanted level`;
   const lines = [
     `The plan at this rate (no drift) against a simulated capture. The wanted band is represented by ${wanted}, each band neighbour by one tone at its centre at its level after the filter.`,
     'Tone sources (board spurs and their harmonics, tone neighbours, rate-tied converter spurs) were moved to the nearest whole number of cycles in the record (moves listed) and the plan was re-derived there; for each, the plan\'s aliased position is compared with the measured peak.',
-    'Band sources are represented by their tones: their products (sums of wanted tones for the harmonics, 2·a − b for third-order and a ± b for second-order intermodulation, k·R/M + f for interleaving images) were placed by whole-cycle arithmetic, checked against the plan\'s aliased segments, and measured.',
+    'Band sources are represented by their tones: each mixing product the plan lists was formed from its recipe (every choice of the signals\' tones with the listed plus and minus counts, e.g. 3·W1, W1 + W2 − B1) by whole-cycle arithmetic, checked against the plan\'s aliased segments, and measured.',
+    ...(interleaved ? ['The interleaving images were not added as tones: the capture samples with M cores whose gain (or, with a reference frequency, timing) differs by just enough to make the stated image level, so every input tone and product has its images at k·R/M ± f.'] : []),
     ...(wantedTones === 1 ? ['With one wanted tone the differences inside the wanted band make no line: a tone less itself is DC.'] : []),
     `Positions must agree within one bin. Levels are judged ${tolerance} dB either way where the plan's level is the level the capture put there (stated spurs, neighbours, and with one wanted tone its harmonics and images); where the plan's level is a band's worst case or an extrapolation (neighbour harmonics, intermodulation, several wanted tones), the measurement must not exceed it by more than ${tolerance} dB when above the threshold.`,
     `Peaks above ${floor.toFixed(1)} dBFS count; any above the threshold ${threshold.toFixed(1)} dBFS that no line of the plan explains, or that lands inside the wanted image or within the margin its interferer must keep from it, contradicts the plan.`,
