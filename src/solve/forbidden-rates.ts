@@ -1,7 +1,7 @@
 import type { Hz } from '../units/quantities.js';
 import type { Band } from '../math/band.js';
 import { mergeIntervals, type Interval } from '../math/interval-set.js';
-import { closeRates, nearbyImages, normalisedExtent } from './fold-images.js';
+import { closeRates, nearbyImages, normalisedExtent, type NormalisedExtent } from './fold-images.js';
 import type { Interferer } from '../interferers/interferer.js';
 
 /**
@@ -19,8 +19,24 @@ import type { Interferer } from '../interferers/interferer.js';
  *   also removes an edge they cover)
  */
 export function forbiddenRates(interferer: Interferer, band: Band, minRate: Hz, maxRate: Hz): Interval[] {
-  const extent = normalisedExtent(interferer);
-  const reach = interferer.requiredMargin;
+  return closeImageRates(normalisedExtent(interferer), interferer.requiredMargin, band, minRate, maxRate);
+}
+
+/**
+ * The rates inside [minRate, maxRate] at which an extent comes closer than
+ * `reach` to the band's alias: one open interval per image j·r ± band
+ * (`closeRates`), merged. The algebra of `forbiddenRates`, for any extent:
+ * another channel's band is one too (rate multiple 0, the inter-channel
+ * spacing as its reach).
+ *
+ * @param extent the extent, rate multiple ≥ 0 (see normalisedExtent)
+ * @param reach the least distance kept, Hz, ≥ 0
+ * @param band the band whose images are taken, Hz
+ * @param minRate, maxRate the range searched, Hz, 0 < minRate ≤ maxRate < ∞
+ * @returns disjoint open intervals, ascending, that meet the range
+ * @example closeImageRates({ rateMultiple: 0, low: 3, high: 5 }, hz(0), { low: hz(10), high: hz(14) }, hz(14), hz(20)) // [{ low: 13, high: 19 }]: r − [10, 14] meets 3–5 for 13 < r < 19
+ */
+export function closeImageRates(extent: NormalisedExtent, reach: Hz, band: Band, minRate: Hz, maxRate: Hz): Interval[] {
   const found: Interval[] = [];
   for (const term of nearbyImages(extent, band, reach, minRate, maxRate)) {
     const close = closeRates(extent, band, term, reach);
