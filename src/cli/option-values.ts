@@ -65,6 +65,24 @@ export function guardFromOptions(options: GuardOptions, band: Band): Guard {
   );
 }
 
+/**
+ * A band written LOW:HIGH, each side a frequency as engineers write it.
+ *
+ * @param text the option's value, e.g. `1574.397M:1576.443M`
+ * @param option the option's name, for the error
+ * @returns the band, Hz
+ * @throws InputError when either side is missing or not a frequency, or HIGH is not above LOW
+ * @example bandFromPair('60M:80M', '--band') // { low: 60000000, high: 80000000 }
+ */
+export function bandFromPair(text: string, option: string): Band {
+  const sides = text.split(':');
+  if (sides.length !== 2) throw new InputError(option, 'a band written LOW:HIGH, e.g. 60M:80M', text);
+  const low = parseFrequency(sides[0]!, option);
+  const high = parseFrequency(sides[1]!, option);
+  if (!(high > low)) throw new InputError(option, `a band whose upper edge is above its lower edge (${sides[0]!.trim()})`, text);
+  return { low, high };
+}
+
 function required(value: string | undefined, option: string): string {
   if (value === undefined) throw new InputError(option, `${option} with a frequency`, 'nothing');
   return value;
