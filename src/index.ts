@@ -25,6 +25,8 @@ export { PAPER_DESIGN_CAUTION } from './plan/caution.js';
 // The pieces: windows, folding, drift.
 export { rateWindows, guardedBand, lowestLegalRate } from './windows/enumerate-windows.js';
 export type { RateWindow, RateLimits } from './windows/rate-window.js';
+export { commonWindows, type CommonWindow } from './windows/common-windows.js';
+export { jointFeasibleSet, type JointFeasibleSet, type JointInterval, type BandCollision } from './solve/joint-feasible-set.js';
 export { foldFrequency, nyquistZone, lookalikes, type Fold } from './math/fold.js';
 export { bandImage, wantedZone, type Band, type BandImage, type Guard } from './math/band.js';
 export { foldExtent } from './math/fold-extent.js';
@@ -32,6 +34,7 @@ export { driftRange } from './solve/drift.js';
 
 // The other commands' results.
 export { windowsReport, type WindowsReport } from './report/windows-report.js';
+export { jointWindowsReport, type JointWindowsReport } from './report/joint-windows-report.js';
 export { aliasReport, type AliasReport } from './report/alias-report.js';
 export { verifyCapture, type CaptureSettings } from './report/verify-capture.js';
 export type { VerifyResult } from './report/verify-result.js';

@@ -5,6 +5,10 @@ import { commonWindows } from '../../src/windows/common-windows.js';
 import { jointFeasibleSet } from '../../src/solve/joint-feasible-set.js';
 import { subtractOpenKeepingPoints } from '../../src/math/interval-set.js';
 import { bruteBandsValid, bruteBandsValidWithin } from '../helpers/brute-force-bands.js';
+import { closeImageRates } from '../../src/solve/forbidden-rates.js';
+import { jointWindowsReport } from '../../src/report/joint-windows-report.js';
+import { bandFromPair } from '../../src/cli/option-values.js';
+import { guardBands } from '../../src/math/band.js';
 
 const band = (low: number, high: number): Band => ({ low: hz(low), high: hz(high) });
 const NO_LIMITS = { minRate: hz(0), maxRate: hz(Infinity) };
@@ -12,6 +16,24 @@ const limits = (minRate: number, maxRate: number) => ({ minRate: hz(minRate), ma
 const rows = (set: ReturnType<typeof jointFeasibleSet>) => set.feasible.map((f) => [f.minRate, f.maxRate, f.zones]);
 /** A relative step far above the edge tolerance (1e-12) and far below any gap in these cases. */
 const HAIR = 1e-9;
+
+describe('the doc-comment examples', () => {
+  it('commonWindows, jointFeasibleSet, closeImageRates, jointWindowsReport and bandFromPair give what their comments say', () => {
+    // Vaughan, Scott & White 1991 per band: 10–14 kHz holds at [28, ∞), [14, 20]; 15–16 kHz at [32, ∞), [16, 30].
+    expect(commonWindows([band(10e3, 14e3), band(15e3, 16e3)], limits(20e3, 40e3)).map((w) => [w.minRate, w.maxRate, w.zones])).toEqual([
+      [20e3, 20e3, [2, 2]],
+      [28e3, 30e3, [1, 2]],
+      [32e3, 40e3, [1, 1]],
+    ]);
+    expect(jointFeasibleSet([band(10e3, 14e3), band(15e3, 16e3)], hz(0), limits(20e3, 40e3)).lowestRate).toBe(20e3);
+    // r − [10, 14] overlaps 3–5 when r − 14 < 5 and r − 10 > 3 (Akos et al. 1999 condition).
+    expect(closeImageRates({ rateMultiple: 0, low: 3, high: 5 }, hz(0), band(10, 14), hz(14), hz(20))).toEqual([{ low: 13, high: 19 }]);
+    const none = guardBands(hz(0), hz(0));
+    const report = jointWindowsReport([{ band: band(10e3, 14e3), guard: none }, { band: band(15e3, 16e3), guard: none }], hz(0), NO_LIMITS);
+    expect([report.minimumRate, report.minimumIsSingleRate]).toEqual([10e3, true]);
+    expect(bandFromPair('60M:80M', '--band')).toEqual({ low: 60e6, high: 80e6 });
+  });
+});
 
 describe('subtractOpenKeepingPoints', () => {
   it('keeps the point between two open intervals that meet, and an edge an open interval stops at', () => {
