@@ -98,6 +98,7 @@ describe('ifzone windows with several --band', () => {
     ['not a frequency', ['--band', '10k:abc', '--band', '15k:16k'], ['--band', 'abc']],
     ['mixed with --low/--high', ['--band', '10k:14k', '--band', '15k:16k', '--low', '1k', '--high', '2k'], ['--band', '--low']],
     ['spacing with one band', ['--band', '10k:14k', '--spacing', '1k'], ['--spacing']],
+    ['a range of more windows than one question may hold', ['--band', '10k:14k', '--band', '1G:1.000001G'], ['--min-rate', 'windows']],
     ['negative spacing', ['--band', '10k:14k', '--band', '15k:16k', '--spacing', '-1k'], ['--spacing', '-1k']],
   ])('refuses %s with one line and exit 2', (_, args, named) => expectRefusal(runBin('windows', ...args), ...named));
 });
