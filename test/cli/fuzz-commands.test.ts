@@ -50,8 +50,7 @@ const BASE: Record<string, unknown> = {
     { label: 'synthesised', frequency: '10M', tolerance: 2, derive: { kind: 'synthesiser', n: [80, 120], m: [1, 2], d: 1, vco: { low: '800M', high: '1.2G' } } },
   ],
   goal: { kind: 'decimation', outputRate: '7.68M' },
-  // ifShift is left out for now: with a zero-width neighbour (a tone) the IF-shift search ends in an internal
-  // error ("the swept scenario derived a different list of interferers"), a defect of that search found here.
+  ifShift: { low: '-1M', high: '1M' },
 };
 /** Enough for a few thousand runs on a loaded 2-core machine. */
 const SUITE_TIMEOUT_MS = 120_000;
@@ -229,10 +228,10 @@ describe('fuzz: every scenario field through ifzone solve', () => {
           const run = await keepsTheContract(['solve', file], [file]);
           outcomes[run.code] = (outcomes[run.code] ?? 0) + 1;
         }),
-        { numRuns: 2500, seed: 140014 },
+        { numRuns: 2000, seed: 140014 },
       );
       // The generator reaches both sides of the contract: answers and refusals.
-      expect(outcomes[2]).toBeGreaterThan(500);
+      expect(outcomes[2]).toBeGreaterThan(400);
       expect((outcomes[0] ?? 0) + (outcomes[1] ?? 0)).toBeGreaterThan(100);
     },
     SUITE_TIMEOUT_MS,
