@@ -17,18 +17,18 @@ interface WindowsOptions extends BandOptions, GuardOptions {
   minRate?: string;
   maxRate?: string;
   json?: boolean;
-  band: string[];
+  band?: string[];
   spacing?: string;
 }
 
 /** Collects a repeated option's values in the order given. */
-const collect = (value: string, previous: string[]) => [...previous, value];
+const collect = (value: string, previous: string[] = []) => [...previous, value];
 
 /** `ifzone windows`: every legal sampling-rate window of a band. */
 export function addWindowsCommand(program: Command, io: Io, settle: (code: ExitCode) => void): void {
   program
     .command('windows')
-    .description('list every legal band-pass sampling-rate window for a band')
+    .description('list every legal band-pass sampling-rate window for a band, or the rates valid for several bands together')
     .option('--low <freq>', 'lower band edge, e.g. 60M')
     .option('--high <freq>', 'upper band edge, e.g. 80 MHz')
     .option('--center <freq>', 'band centre (with --width)')
@@ -38,7 +38,7 @@ export function addWindowsCommand(program: Command, io: Io, settle: (code: ExitC
     .option('--guard-high <freq>', 'guard band above the band')
     .option('--min-rate <freq>', 'lowest rate to consider')
     .option('--max-rate <freq>', 'highest rate to consider')
-    .option('--band <low:high>', 'a band as LOW:HIGH, e.g. 1574.4M:1576.4M; give it again for each band sampled with it', collect, [])
+    .option('--band <low:high>', 'a band as LOW:HIGH, e.g. 1574.4M:1576.4M; give it again for each band sampled with it', collect)
     .option('--spacing <freq>', 'with several --band: least distance kept between two bands\' aliases (default 0)')
     .option('--json', 'print JSON for programs')
     .action((options: WindowsOptions) => {
@@ -77,14 +77,15 @@ export function addWindowsCommand(program: Command, io: Io, settle: (code: ExitC
 
 /** The bands asked for: every --band, or the one band of --low/--high or --center/--width; never both forms. */
 function bandsFromOptions(options: WindowsOptions): Band[] {
-  if (options.band.length === 0) {
+  const given = options.band ?? [];
+  if (given.length === 0) {
     if (options.spacing !== undefined) throw new InputError('--spacing', 'two or more --band options with --spacing', 'one band');
     return [bandFromOptions(options)];
   }
   const single = [options.low, options.high, options.center, options.width].some((v) => v !== undefined);
   if (single) throw new InputError('--band', 'either --band options, or --low/--high or --center/--width, not both', 'both');
-  if (options.band.length === 1 && options.spacing !== undefined) {
+  if (given.length === 1 && options.spacing !== undefined) {
     throw new InputError('--spacing', 'two or more --band options with --spacing', 'one band');
   }
-  return options.band.map((text) => bandFromPair(text, '--band'));
+  return given.map((text) => bandFromPair(text, '--band'));
 }
