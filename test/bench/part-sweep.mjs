@@ -1,4 +1,4 @@
-// Part sweep benchmark (issue 4): 1,000 reference frequencies spread over
+// Part sweep benchmark: 1,000 reference frequencies spread over
 // 9–60 MHz × every synthesiser setting N 1..128, M 1..16 (D = 1), each rate
 // f·N/M judged over the demo scenario's checks with the fast judge (its whole
 // drift range inside one exact feasible interval). The context and the

@@ -5,7 +5,7 @@ import { runCli } from '../../src/cli/main.js';
 /**
  * End to end through the real bin/ifzone (a separate node process on dist/),
  * plus a few in-process runs of runCli. The JSON field names, exit statuses
- * and the one-line error convention are the contract of issue 2; the numbers
+ * and the one-line error convention are the contract the README states; the numbers
  * are checked against the sources named beside them.
  */
 beforeAll(() => ensureBuilt(), 120_000);
@@ -128,7 +128,7 @@ describe('ifzone alias --json', () => {
   });
 
   it('folds several frequencies in one call', () => {
-    // REFERENCES.md folding rule: 70 MHz at 100 MHz → 30 MHz (zone 2), 140 MHz → 40 MHz (zone 3), 20 kHz at 44.1 kHz in zone 1.
+    // Folding rule (common practice, no source): 70 MHz at 100 MHz → 30 MHz (zone 2), 140 MHz → 40 MHz (zone 3), 20 kHz at 44.1 kHz in zone 1.
     const tones = json(runBin('alias', '--rate', '100M', '70M', '140 MHz', '--json')).tones;
     expect(tones.map((t) => [t.frequency, t.alias, t.zone, t.inverted])).toEqual([
       [70e6, 30e6, 2, true],

@@ -7,7 +7,7 @@ import { ensureBuilt, ROOT, runBin } from '../helpers/run-bin.js';
 
 /**
  * `ifzone compare` end to end through the real bin/ifzone: the JSON contract
- * of issue 4, the family answer, CSV, safe writes and exit statuses. The
+ * (README), the family answer, CSV, safe writes and exit statuses. The
  * Heron family is invented data; these tests check plumbing and consistency
  * (every "pass" must agree with `ifzone solve` on the same variant).
  */

@@ -1,15 +1,12 @@
-import { guardBands } from '../../src/math/band.js';
 import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { ensureBuilt, ROOT, runBin } from '../helpers/run-bin.js';
-import { rateWindows, guardedBand } from '../../src/windows/enumerate-windows.js';
-import { hz } from '../../src/units/quantities.js';
 
 /**
- * `ifzone solve` end to end through the real bin/ifzone: the JSON contract of
- * issue 3, the exit statuses and the "nothing passes" explanation. The demo
+ * `ifzone solve` end to end through the real bin/ifzone: the JSON contract
+ * (README), the exit statuses and the "nothing passes" explanation. The demo
  * family is invented data: these tests check plumbing and contracts, while
  * the reference values live in the core tests.
  */
@@ -50,10 +47,24 @@ describe('ifzone solve --json: the contract', () => {
     expect(plan.caution).toMatch(/paper design/);
   });
 
-  it('lists the windows of the guarded band that the enumerator gives (Vaughan, Scott & White 1991 condition)', () => {
+  it('lists the windows of the guarded band by the published condition (Vaughan, Scott & White 1991)', () => {
     const plan = JSON.parse(runBin('solve', BASE, '--json').stdout);
-    const expected = rateWindows(guardedBand({ low: hz(130e6), high: hz(150e6) }, guardBands(hz(2e6), hz(2e6))), { minRate: hz(40e6), maxRate: hz(250e6) });
-    expect(plan.windows).toEqual(expected);
+    // Written out here, not taken from the enumerator: 130–150 MHz widened by its 2 MHz guards is fL = 128, fH = 152 MHz,
+    // B = 24 MHz; zone n (1 ≤ n ≤ ⌊fH/B⌋ = 6) holds it for 2·fH/n ≤ fs ≤ 2·fL/(n − 1), cut to the converter's 40–250 MHz.
+    const [fL, fH, minRate, maxRate] = [128e6, 152e6, 40e6, 250e6];
+    const expected: { zone: number; minRate: number; maxRate: number; inverted: boolean }[] = [];
+    for (let n = 1; n <= Math.floor(fH / (fH - fL)); n++) {
+      const low = Math.max((2 * fH) / n, minRate);
+      const high = Math.min(n === 1 ? Infinity : (2 * fL) / (n - 1), maxRate);
+      if (low <= high) expected.push({ zone: n, minRate: low, maxRate: high, inverted: n % 2 === 0 });
+    }
+    expect(expected.map((w) => w.zone)).toEqual([2, 3, 4, 5, 6]); // zone 1 needs fs ≥ 304 MHz; zone 7 is past ⌊fH/B⌋
+    expect(plan.windows.map((w: { zone: number }) => w.zone)).toEqual(expected.map((w) => w.zone));
+    plan.windows.forEach((w: { zone: number; minRate: number; maxRate: number; inverted: boolean }, i: number) => {
+      expect(w.inverted).toBe(expected[i]!.inverted);
+      expect(w.minRate / expected[i]!.minRate).toBeCloseTo(1, 12);
+      expect(w.maxRate / expected[i]!.maxRate).toBeCloseTo(1, 12);
+    });
   });
 
   it('keeps every feasible interval inside a window and every passing candidate inside a feasible interval', () => {

@@ -6,7 +6,7 @@ const MHZ = 1e6;
 
 /**
  * The assembly of a part's SNR figures from the standard formulas (as in IEEE
- * Std 1241-2010 on ADC terms; check values in /work/shared/REFERENCES.md):
+ * Std 1241-2010 on ADC terms; check values recomputed from the formulas):
  * jitter −20·log10(2π·f·σ) (100 MHz and 1 ps: 64.0 dB), quantisation
  * 6.02·N + 1.76 (12 bits: 74.0 dB), independent sources in quadrature and
  * noise powers adding (common practice, no source), processing gain

@@ -5,8 +5,8 @@ import { foldFrequency, lookalikes, nyquistZone } from '../../src/math/fold.js';
 import { bandImage } from '../../src/math/band.js';
 
 /**
- * The folding rule of /work/shared/REFERENCES.md, written out independently:
- * f shows at |f − fs·round(f/fs)|.
+ * The folding rule, a fact of the trade (common practice, no source), written
+ * out independently: f shows at |f − fs·round(f/fs)|, in zone ⌈2f/fs⌉.
  */
 const referenceAlias = (f: number, fs: number) => Math.abs(f - fs * Math.round(f / fs));
 
@@ -38,7 +38,7 @@ describe('foldFrequency and lookalikes: facts of the trade', () => {
   });
 
   it('lookalikes are exactly the frequencies that fold onto the same alias', () => {
-    // REFERENCES.md folding rule: every k·fs ± alias folds to the alias.
+    // Folding rule (common practice, no source): every k·fs ± alias folds to the alias.
     for (const [f, fs] of [
       [70e6, 100e6],
       [10.7e6, 12.288e6],
@@ -57,7 +57,7 @@ describe('foldFrequency and lookalikes: facts of the trade', () => {
 
 describe('foldFrequency: agrees with the reference folding rule', () => {
   it('for random frequencies and rates', () => {
-    // REFERENCES.md: alias |f − fs·round(f/fs)| in [0, fs/2], zone ⌈2f/fs⌉, even zones inverted.
+    // Folding rule (common practice, no source): alias |f − fs·round(f/fs)| in [0, fs/2], zone ⌈2f/fs⌉, even zones inverted.
     fc.assert(
       fc.property(fc.double({ min: 1e3, max: 1e10, noNaN: true }), fc.double({ min: 1e3, max: 1e9, noNaN: true }), (f, fs) => {
         const fold = foldFrequency(hz(f), hz(fs));
@@ -112,7 +112,7 @@ describe('zone boundaries', () => {
 
 describe('bandImage', () => {
   it('60–80 MHz at 100 MHz lands mirrored at 20–40 MHz in zone 2', () => {
-    // REFERENCES.md folding rule: 100 − 80 = 20 and 100 − 60 = 40; zone 2 is inverted.
+    // Folding rule (common practice, no source): 100 − 80 = 20 and 100 − 60 = 40; zone 2 is inverted.
     expect(bandImage({ low: hz(60e6), high: hz(80e6) }, hz(100e6))).toEqual({ zone: 2, inverted: true, low: 20e6, high: 40e6 });
   });
 
@@ -125,7 +125,7 @@ describe('bandImage', () => {
   });
 
   it('agrees with folding each edge', () => {
-    // The image edges are the folds of the band edges (REFERENCES.md folding rule).
+    // The image edges are the folds of the band edges (folding rule; common practice, no source).
     const band = { low: hz(17.5e6), high: hz(22.5e6) };
     for (const rate of [16e6, 30e6, 11.5e6, 50e6]) {
       const image = bandImage(band, hz(rate))!;

@@ -40,7 +40,7 @@ describe('allowedWedges', () => {
   });
 
   it('reproduces the worked case 10–14 kHz: 28 kHz and up, 14–20 kHz, 9.333–10 kHz', () => {
-    // Band 10–14 kHz: B = 4 kHz, fH/B = 3.5 (REFERENCES.md, recomputed from the paper's condition).
+    // Band 10–14 kHz: B = 4 kHz, fH/B = 3.5 (Vaughan, Scott & White 1991 worked case, recomputed from the paper's condition).
     const wedges = allowedWedges(5, 10);
     const B = 4e3;
     const cut = (zone: number) => sectionAt(wedges[zone - 1]!.points, 3.5)!.map((y) => y * B);

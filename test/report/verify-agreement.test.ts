@@ -50,7 +50,7 @@ describe('verify and solve agree: interleaving, an intercept and three close blo
     const scenario = agreementScenario(reference);
     const rates = passingRates(scenario);
 
-    it(`${name}: the solver finds a rate, and lists products of every kind the issue names`, () => {
+    it(`${name}: the solver finds a rate, and lists products of every kind: third-order differences, sums and triple beats, interleaving images, second-order differences`, () => {
       expect(rates.length).toBeGreaterThan(0);
       const labels = contextFromScenario(scenario).interferers.map((i) => i.label);
       for (const label of ['IM3 2·B1−B2', 'IM3 B1+B2−B3', 'IM3 2·B1+B2', 'IL image 1/4− B1', 'IM2 B2−B1']) expect(labels).toContain(label);

@@ -17,7 +17,7 @@ describe('windowsReport', () => {
     const zone2 = report.windows.find((w) => w.zone === 2)!;
     expect(zone2.width).toBe(34e6); // 116 − 82 MHz
     expect(zone2.center).toBe(99e6);
-    // ppm as in REFERENCES.md (a 100 MHz clock at ±20 ppm lies within ±2 kHz): drifting the centre by
+    // ppm as crystal tolerances are quoted (common practice: a 100 MHz clock at ±20 ppm lies within ±2 kHz): drifting the centre by
     // ±tolerance reaches the window edges exactly.
     expect(zone2.center! * (1 + zone2.tolerancePpm! * 1e-6)).toBeCloseTo(116e6, 3);
     expect(zone2.center! * (1 - zone2.tolerancePpm! * 1e-6)).toBeCloseTo(82e6, 3);
@@ -25,7 +25,7 @@ describe('windowsReport', () => {
   });
 
   it('puts the wanted band where folding it at the centre rate puts it', () => {
-    // REFERENCES.md folding rule: at 99 MHz, 60 MHz → 39 MHz and 80 MHz → 19 MHz, mirrored (zone 2).
+    // Folding rule (common practice, no source): at 99 MHz, 60 MHz → 39 MHz and 80 MHz → 19 MHz, mirrored (zone 2).
     const zone2 = report.windows.find((w) => w.zone === 2)!;
     expect(zone2.image).toEqual({ zone: 2, inverted: true, low: 19e6, high: 39e6 });
     for (const w of report.windows.filter((x) => x.center !== null)) {

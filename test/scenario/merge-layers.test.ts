@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { fileOfPath, fileOfPaths, mergeLayers, type Layer } from '../../src/scenario/merge-layers.js';
 
-/** The merge rule of issue 3: objects merge key by key, lists (and anything else) replace; `extends` chains. */
+/** The merge rule the README states: objects merge key by key, lists (and anything else) replace; `extends` chains. */
 const base: Layer = { file: 'base.json', document: { a: { x: 1, y: 2 }, list: [1, 2, 3], filter: { kind: 'k1', p: 1 }, s: 'base' } };
 const mid: Layer = { file: 'mid.json', document: { a: { y: 20, z: 30 }, list: [9], filter: { kind: 'k2', q: 2 } } };
 const top: Layer = { file: 'top.json', document: { a: { x: 100 }, s: null } };

@@ -15,7 +15,7 @@ function refusal(written: string | number, where = '--low'): InputError {
   throw new Error(`${JSON.stringify(written)} was accepted`);
 }
 
-describe('parseFrequency: every notation of issue 2', () => {
+describe('parseFrequency: every notation the README lists (SI prefixes; common practice)', () => {
   // SI prefixes are exact powers of ten and case-sensitive: k = 10³, M = 10⁶, G = 10⁹
   // (BIPM, The International System of Units (SI Brochure), prefixes table; from memory).
   const notations: Array<[string, number]> = [

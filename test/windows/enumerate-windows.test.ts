@@ -21,7 +21,7 @@ function paperWindow(fL: number, fH: number, n: number): [number, number] {
 
 describe('rateWindows: the published condition (Vaughan, Scott & White 1991)', () => {
   it('10–14 kHz: ≥ 28 kHz in zone 1, 14–20 kHz in zone 2 (inverted), 9.333–10 kHz in zone 3', () => {
-    // Worked case of /work/shared/REFERENCES.md, recomputed from the formula.
+    // The paper's worked case, recomputed from its condition.
     const windows = rateWindows(band(10e3, 14e3));
     expect(windows.map((w) => w.zone)).toEqual([1, 2, 3]); // ⌊14/4⌋ = 3 zones
     expect(windows[0]).toEqual({ zone: 1, minRate: 28e3, maxRate: Infinity, inverted: false });

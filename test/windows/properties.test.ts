@@ -11,8 +11,8 @@ import type { RateWindow } from '../../src/windows/rate-window.js';
  * the definition of band-pass sampling, not from the enumerator: a rate is
  * legal exactly when no zone boundary k·rate/2 falls strictly inside the band
  * (Vaughan, Scott & White, "The theory of bandpass sampling", IEEE Trans.
- * Signal Processing 39(9), 1991), and folding follows the rule of
- * /work/shared/REFERENCES.md.
+ * Signal Processing 39(9), 1991), and folding follows the common rule
+ * |f − fs·round(f/fs)| (common practice, no source).
  */
 
 /** Random bands from a few hertz to GHz, up to ~200 zones deep. */
