@@ -28,7 +28,7 @@ export type { RateWindow, RateLimits } from './windows/rate-window.js';
 export { commonWindows, type CommonWindow } from './windows/common-windows.js';
 export { jointFeasibleSet, type JointFeasibleSet, type JointInterval, type BandCollision } from './solve/joint-feasible-set.js';
 export { foldFrequency, nyquistZone, lookalikes, type Fold } from './math/fold.js';
-export { bandImage, wantedZone, type Band, type BandImage, type Guard } from './math/band.js';
+export { bandImage, wantedZone, guardBands, type Band, type BandImage, type Guard } from './math/band.js';
 export { foldExtent } from './math/fold-extent.js';
 export { driftRange } from './solve/drift.js';
 

@@ -32,7 +32,7 @@ export interface AfterRateInputs {
  * @param scenario the validated scenario
  * @param goal the goal in force (a command-line goal may replace the scenario's): its output rate stands in for an unstated one
  * @returns the inputs
- * @example afterRateInputs(scenario, scenario.goal).threshold // weakest wanted level − rejection, dBFS
+ * @example afterRateInputs(s).threshold // -100 (weakest wanted level −60 dBFS less the 40 dB rejection)
  */
 export function afterRateInputs(scenario: Scenario, goal: Goal = scenario.goal): AfterRateInputs {
   const stated = scenario.afterRate.downConverter.outputRate;
@@ -92,7 +92,7 @@ export interface AfterRate {
  * @param center the channel's aliased centre, Hz (the NCO frequency); null when the channel straddles a zone edge
  * @param inverted whether the channel arrives mirrored; null with center
  * @returns the figures
- * @example afterRate(afterRateInputs(scenario), hz(122.88e6), ppm(20), hz(17.12e6), false).design.orders // { butterworth, chebyshev, elliptic }
+ * @example Object.keys(afterRate(afterRateInputs(heronBase), hz(184.32e6), ppm(20), hz(10e6), false)) // ['mask', 'design', 'noise', 'downConverter']
  */
 export function afterRate(inputs: AfterRateInputs, rate: Hz, tolerancePpm: Ppm, center: Hz | null, inverted: boolean | null): AfterRate {
   const { band, margin, settings } = inputs;
@@ -135,7 +135,7 @@ function downConverterSettings(inputs: AfterRateInputs, rate: Hz, center: Hz | n
  * @param channelSnrDb the SNR from jitter, quantisation and processing gain, dB; null when not known
  * @param noise the rate's noise figures
  * @returns the lowered SNR, dB; null when either figure is missing
- * @example channelSnrWithDriver(db(80), { driverSnrDb: db(80), ... }) // 76.99
+ * @example channelSnrWithDriver(null, null) // null
  */
 export function channelSnrWithDriver(channelSnrDb: Db | null, noise: RateNoise | null): Db | null {
   if (channelSnrDb === null || noise === null || noise.driverSnrDb === null) return null;

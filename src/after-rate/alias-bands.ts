@@ -32,8 +32,7 @@ export interface AliasBand {
  * @param inputBandwidth the converter's analog input bandwidth, Hz: bands from it up are dropped, a band across it is cut there
  * @returns the alias bands ascending by their lower edge
  * @throws RangeError unless 0 < rateLow ≤ rateHigh (finite) and channel.low ≤ channel.high
- * @example aliasBands({ low: hz(21e6), high: hz(25e6) }, hz(40e6), hz(40e6), hz(100e6))
- *   // 15–19 MHz (40 − ch), 55–59 (80 − ch), 61–65 (40 + ch), 95–99 MHz (120 − ch)
+ * @example aliasBands({ low: hz(21e6), high: hz(25e6) }, hz(40e6), hz(40e6), hz(100e6)).map((b) => [b.low, b.high]) // [[15e6, 19e6], [55e6, 59e6], [61e6, 65e6], [95e6, 99e6]]
  */
 export function aliasBands(channel: Band, rateLow: Hz, rateHigh: Hz, inputBandwidth: Hz): AliasBand[] {
   if (!(rateLow > 0 && rateHigh >= rateLow && Number.isFinite(rateHigh))) throw new RangeError(`alias bands need 0 < rateLow ≤ rateHigh, found [${rateLow}, ${rateHigh}] Hz`);
@@ -63,7 +62,7 @@ export function aliasBands(channel: Band, rateLow: Hz, rateHigh: Hz, inputBandwi
  * @param bands alias bands (any order)
  * @param channel the passband, Hz
  * @returns the nearest band each side, or null where there is none
- * @example nearestAliasBands(bands, { low: hz(21e6), high: hz(25e6) }) // below 15–19 MHz, above 55–59 MHz (for the bands of the aliasBands example)
+ * @example nearestAliasBands(aliasBands({ low: hz(21e6), high: hz(25e6) }, hz(40e6), hz(40e6), hz(100e6)), { low: hz(21e6), high: hz(25e6) }).above.low // 55e6
  */
 export function nearestAliasBands(bands: readonly AliasBand[], channel: Band): { below: AliasBand | null; above: AliasBand | null } {
   const centre = (channel.low + channel.high) / 2;

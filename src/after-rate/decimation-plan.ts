@@ -35,7 +35,7 @@ export const NOT_AN_INTEGER = 'not an integer: needs a fractional resampler';
  * @param usableFraction the part of the output band the digital filter's transition leaves, in (0, 1]
  * @param ncoError the NCO's residual error, Hz (its sign does not matter)
  * @returns the plan
- * @example decimationPlan(hz(122.88e6), hz(7.68e6), hz(5e6), 0.8, hz(0)) // factor 16, 4 half-band stages, remainder 1, usable 6.144 MHz, fits
+ * @example decimationPlan(hz(122.88e6), hz(7.68e6), hz(5e6), 0.8, hz(0)) // { factor: 16, halfBandStages: 4, remainder: 1, usableBandwidth: 6144000, fits: true }
  */
 export function decimationPlan(rate: Hz, outputRate: Hz, channelWidth: Hz, usableFraction: number, ncoError: Hz): DecimationPlan {
   const usableBandwidth = hz(usableFraction * outputRate);

@@ -30,7 +30,7 @@ export interface NcoSetting {
  * @param inverted whether the channel arrives mirrored
  * @returns the word, the frequency it gives and the error
  * @throws RangeError for bits outside 1–48, a rate ≤ 0 or a target outside [0, rate/2]
- * @example ncoSetting(hz(10e6), hz(100e6), 8, false) // word 26 (25.6 rounded), actual 10.15625 MHz, error +156.25 kHz
+ * @example ncoSetting(hz(10e6), hz(100e6), 8, false) // { word: 26, actual: 10156250, error: 156250 }
  */
 export function ncoSetting(target: Hz, rate: Hz, bits: number, inverted: boolean): NcoSetting {
   if (!(Number.isInteger(bits) && bits >= 1 && bits <= MOST_NCO_BITS)) throw new RangeError(`NCO width must be a whole number of bits from 1 to ${MOST_NCO_BITS}, found ${bits}`);

@@ -34,7 +34,7 @@ export interface NoiseFolding {
  * @param aliases the channel's alias bands (unwidened), Hz
  * @returns the penalty and its parts
  * @throws RangeError when the filter stops the channel completely (no noise bandwidth to compare with)
- * @example noiseFolding(filterPowerResponse(null), { low: hz(10e6), high: hz(20e6) }, [{ low: hz(30e6), high: hz(40e6) }]).penaltyDb // 3.0103 (two equal parts)
+ * @example noiseFolding(filterPowerResponse(null), { low: hz(10e6), high: hz(20e6) }, [{ low: hz(30e6), high: hz(40e6) }]).penaltyDb // 3.01 (the channel and one image, no filter: 10·log10(2))
  */
 export function noiseFolding(response: PowerResponse, channel: Band, aliases: readonly Band[]): NoiseFolding {
   const width = channel.high - channel.low;
@@ -63,7 +63,7 @@ export function noiseFolding(response: PowerResponse, channel: Band, aliases: re
  * @param noiseDensity N0, dBFS/Hz
  * @param folding the noise folding at the rate
  * @returns −(N0 + 10·log10(channelBandwidth + aliasBandwidth)), dB
- * @example driverLimitedSnr(db(-150), { channelBandwidth: hz(1e6), aliasBandwidth: hz(0), ... }) // 90
+ * @example driverLimitedSnr(db(-150), noiseFolding(filterPowerResponse(null), { low: hz(10e6), high: hz(20e6) }, []) ) // 80.0 (−150 dBFS/Hz over 10 MHz: 150 − 70)
  */
 export function driverLimitedSnr(noiseDensity: Db, folding: NoiseFolding): Db {
   return db(-(noiseDensity + 10 * Math.log10(folding.channelBandwidth + folding.aliasBandwidth)));

@@ -19,7 +19,7 @@ export interface LevelSpectrum {
  * @param samples the record, length N
  * @param window its window, same length
  * @returns levels in dBFS (−Infinity for an empty bin) and their median
- * @example levelSpectrum(Float64Array.from({ length: 64 }, (_, n) => 0.5 * Math.cos((2 * Math.PI * 5 * n) / 64)), blackmanHarris(64)).levels[5] // −6.02
+ * @example levelSpectrum(Float64Array.from({ length: 64 }, (_, n) => 0.5 * Math.cos((2 * Math.PI * 5 * n) / 64)), blackmanHarris(64)).levels[5] // -6.02
  */
 export function levelSpectrum(samples: Float64Array, window: SpectralWindow): LevelSpectrum {
   const n = samples.length;

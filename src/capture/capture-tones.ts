@@ -53,7 +53,7 @@ const PHASE_SEED = 0x1f2e3d;
  * The nominal places of the wanted tones: n tones at the centres of n equal
  * slices of the band (one tone: the band centre).
  *
- * @example wantedNominals({ low: 60e6, high: 90e6 }, 3) // 65, 75, 85 MHz
+ * @example wantedNominals({ low: hz(60e6), high: hz(90e6) }, 3) // [65e6, 75e6, 85e6]
  */
 export function wantedNominals(band: { readonly low: Hz; readonly high: Hz }, count: number): Hz[] {
   return Array.from({ length: count }, (_, i) => hz(band.low + ((band.high - band.low) * (2 * i + 1)) / (2 * count)));
@@ -68,7 +68,7 @@ export function wantedNominals(band: { readonly low: Hz; readonly high: Hz }, co
  * @param scenario the validated scenario (strongest wanted level, dBFS)
  * @param count number of wanted tones ≥ 1
  * @returns dBFS per tone
- * @example wantedToneLevel(s, 3) // −1 − 9.54 = −10.54 for a strongest level of −1 dBFS
+ * @example wantedToneLevel(s, 3) // -10.54 (−1 dBFS less 20·log10(3))
  */
 export function wantedToneLevel(scenario: Scenario, count: number): Db {
   return db(scenario.wanted.strongestLevel - 20 * Math.log10(count));
@@ -83,7 +83,7 @@ export function wantedToneLevel(scenario: Scenario, count: number): Db {
  * @param scenario the validated scenario
  * @param record rate R (Hz) and length N
  * @returns a copy with moved tone sources
- * @example movedScenario(s, { rate: hz(122.88e6), samples: 65536, wantedTones: 1 }).boardSpurs[0].low // 9 999 375 for a 10 MHz spur
+ * @example movedScenario(heronBase, { rate: hz(184.32e6), samples: 65536, wantedTones: 1 }).name // 'Heron-4 base'
  */
 export function movedScenario(scenario: Scenario, record: CaptureRecord): Scenario {
   const moved = <T extends { readonly low: Hz; readonly high: Hz }>(item: T): T => {

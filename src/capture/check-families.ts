@@ -32,7 +32,7 @@ const same = (a: number, b: number) => a === b || sameEdge(a, b);
  * @param samples record length N
  * @param claimed after-converter tones already standing for an earlier interferer, so that two identical spurs take one tone each; updated
  * @returns the family, or 'not simulated'
- * @example checkFamily({ kind: 'harmonic', mixing: [{ signal: 'wanted', index: 0, harmonic: 1, plus: 3, minus: 0 }], … }, tones, 65536, new Set()) // { kind: 'mixing', terms: [...] }
+ * @example checkFamily(captureInterferers[0], tones, 65536, new Set()).kind // 'mixing'
  */
 export function checkFamily(interferer: Interferer, tones: readonly CaptureTone[], samples: number, claimed: Set<number>): LineFamily {
   if (interferer.mixing) {

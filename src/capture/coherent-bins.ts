@@ -22,7 +22,7 @@ export function nearestCycles(frequency: number, rate: number, samples: number):
 /**
  * The frequency of c whole cycles in the record, c·R/N, Hz.
  *
- * @example cyclesFrequency(5333, hz(122.88e6), 65536) // 9 999 375 Hz
+ * @example cyclesFrequency(5333, hz(122.88e6), 65536) // 9999375 Hz
  */
 export function cyclesFrequency(cycles: number, rate: number, samples: number): Hz {
   return hz((cycles * rate) / samples);

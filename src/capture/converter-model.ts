@@ -14,7 +14,7 @@ import { fitPolynomial } from './converter-polynomial.js';
  *
  * @param scenario the validated scenario
  * @returns a[0..K]
- * @example converterCoefficients(s).length // max(harmonicOrder, maxOrder) + 1
+ * @example converterCoefficients(s).length // 6 (orders 0 to harmonicOrder 5)
  */
 export function converterCoefficients(scenario: Scenario): number[] {
   const reference = scenario.wanted.strongestLevel;

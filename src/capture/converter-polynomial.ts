@@ -51,7 +51,7 @@ export function binomial(n: number, k: number): number {
  * @param coefficients a[0..K]
  * @param amplitude A, full scale = 1
  * @param order m ≥ 1
- * @example singleToneHarmonic([0, 1, 0.1], 0.5, 2) // 0.1·0.25/2 = 0.0125
+ * @example singleToneHarmonic([0, 1, 0.1], 0.5, 2) // 0.0125 (0.1·0.25/2)
  */
 export function singleToneHarmonic(coefficients: Coefficients, amplitude: number, order: number): number {
   let sum = 0;
@@ -90,7 +90,7 @@ export function fitPolynomial(targets: ReadonlyMap<number, number>, amplitude: n
  *
  * @param samples the record, overwritten
  * @param coefficients a[0..K]
- * @example applyPolynomial(Float64Array.of(1, -1), [0, 1, 0.5]) // [1, −1]: 0.5·x² is the constant 0.5, removed
+ * @example (() => { const x = Float64Array.of(1, -1); applyPolynomial(x, [0, 1, 0.5]); return x; })() // [1, -1] (0.5·x² is the constant 0.5, removed)
  */
 export function applyPolynomial(samples: Float64Array, coefficients: Coefficients): void {
   const order = coefficients.length - 1;

@@ -35,7 +35,7 @@ export interface InputIndex {
  *
  * @param tones the capture's tones
  * @returns their indices in order, and each index's position among the inputs
- * @example inputIndex(tones).inputs // [0, 1, 2, …] for tones whose inputs come first
+ * @example inputIndex(tones).inputs[0] // 0
  */
 export function inputIndex(tones: readonly CaptureTone[]): InputIndex {
   const inputs = tones.flatMap((t, i) => (t.input ? [i] : []));
@@ -59,7 +59,7 @@ export function inputIndex(tones: readonly CaptureTone[]): InputIndex {
  * @param index the input index of those tones
  * @param samples record length N (for the image offsets k·N/M)
  * @returns the lines, possibly several for one component
- * @example familyLines({ kind: 'mixing', terms: [{ signal: 'neighbour', index: 0, harmonic: 1, plus: 2, minus: 0 }] }, tones, index, 65536)[0].what // '2·ADJ'
+ * @example familyLines(checkFamily(captureInterferers[0], tones, 65536, new Set()), tones, index, 65536).length > 0 // true
  */
 export function familyLines(family: LineFamily, tones: readonly CaptureTone[], index: InputIndex, samples: number): LineDraft[] {
   switch (family.kind) {
@@ -149,7 +149,7 @@ export function normalisedNet(net: readonly number[]): number[] {
  * @param index the input index
  * @param tones the capture's tones (for labels)
  * @returns the product in words
- * @example productName([2, -1], index, tones) // '2·W1 − ADJ'
+ * @example productName([2], index, tones) // '2·W1'
  */
 export function productName(net: readonly number[], index: InputIndex, tones: readonly CaptureTone[]): string {
   const terms = net.flatMap((n, p) => (n === 0 ? [] : [[n, tones[index.inputs[p]!]!.label] as const]));

@@ -22,7 +22,7 @@ export function isPowerOfTwo(n: number): boolean {
  * @param re real parts, length N (a power of two); overwritten by Re X[k]
  * @param im imaginary parts, length N; overwritten by Im X[k]
  * @throws RangeError when the lengths differ or are not a power of two
- * @example const re = Float64Array.of(1, 0, 0, 0), im = new Float64Array(4); fftInPlace(re, im) // re = [1, 1, 1, 1]
+ * @example (() => { const re = Float64Array.of(1, 0, 0, 0), im = new Float64Array(4); fftInPlace(re, im); return re; })() // [1, 1, 1, 1]
  */
 export function fftInPlace(re: Float64Array, im: Float64Array): void {
   const n = re.length;

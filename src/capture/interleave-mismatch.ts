@@ -50,7 +50,7 @@ export function coreMismatch(interleave: Interleave): CoreMismatch {
  *
  * @param samples the record
  * @param gains 1 + g_m for m = 0..M−1
- * @example applyCoreGains(Float64Array.of(1, 1, 1, 1), [1.5, 0.5]) // [1.5, 0.5, 1.5, 0.5]
+ * @example (() => { const x = Float64Array.of(1, 1, 1, 1); applyCoreGains(x, [1.5, 0.5]); return x; })() // [1.5, 0.5, 1.5, 0.5]
  */
 export function applyCoreGains(samples: Float64Array, gains: readonly number[]): void {
   const m = gains.length;

@@ -36,7 +36,7 @@ function factorial(n: number): number {
  * @param amplitudes Aᵢ of the input tones, full scale = 1
  * @param net nᵢ per tone, not all zero
  * @returns the amplitude (sign: relative to the phase Σ nᵢ·φᵢ)
- * @example productAmplitude([0, 1, 0, 0.04], [0.5, 0.5], [2, -1]) // 0.75·0.04·0.125 = 0.00375
+ * @example productAmplitude([0, 1, 0, 0.04], [0.5, 0.5], [2, -1]) // 0.00375 (0.75·0.04·0.125)
  */
 export function productAmplitude(coefficients: Coefficients, amplitudes: readonly number[], net: readonly number[]): number {
   const r = net.reduce((sum, n) => sum + Math.abs(n), 0);
@@ -79,7 +79,7 @@ export function productAmplitude(coefficients: Coefficients, amplitudes: readonl
  * @param coefficients a[0..K] (a[1] = 1)
  * @param peak P, the largest input value, ≥ 0
  * @returns H[r] = sup|y^(r)| / 2^(r−1) for r = 0..K+1 (H[0] = 0, H[K+1] = 0)
- * @example orderSupremums([0, 1, 0, 0.04], 1)[3] // 0.04·3!/4 = 0.06
+ * @example orderSupremums([0, 1, 0, 0.04], 1)[3] // 0.06 (0.04·3!/4)
  */
 export function orderSupremums(coefficients: Coefficients, peak: number): number[] {
   const highest = coefficients.length - 1;
@@ -105,7 +105,7 @@ export function orderSupremums(coefficients: Coefficients, peak: number): number
  * for every product of order r or more, as a search that fixes tones one by
  * one needs (adding a tone can only raise the order).
  *
- * @example orderBounds([0, 1, 0, 0.04], 1)[1] // max(H1, H2, H3)
+ * @example orderBounds([0, 1, 0, 0.04], 1)[1] // 1.12
  */
 export function orderBounds(coefficients: Coefficients, peak: number): number[] {
   const own = orderSupremums(coefficients, peak);

@@ -49,7 +49,7 @@ export interface ModelComponents {
  * @param cutoff least amplitude kept
  * @param cores the mismatched cores of an interleaved converter and the rate R (Hz): the images of every product are components too; null for one core
  * @returns the components, and whether the product search ran to its end
- * @example modelComponents(tones, index, a, 65536, 1e-8).components.find((c) => c.name === '2·W1') // the 2nd harmonic of W1
+ * @example modelComponents(tones, index, converterCoefficients(heronBase), 65536, 1e-8).components.some((c) => c.name === '2·W1') // true
  */
 export function modelComponents(tones: readonly CaptureTone[], index: InputIndex, coefficients: Coefficients, samples: number, cutoff: number, cores: { readonly mismatch: CoreMismatch; readonly rate: number } | null = null): ModelComponents {
   const mismatch = cores?.mismatch ?? null;

@@ -14,7 +14,7 @@
  * @param noiseBandwidthBins the window's B
  * @param dithered whether one step of uniform dither was added
  * @returns dBFS
- * @example expectedNoiseLevel(14, 65536, 2.0044, true) // ≈ −125.2
+ * @example expectedNoiseLevel(14, 65536, 2.0044, true) // -125.2
  */
 export function expectedNoiseLevel(bits: number, samples: number, noiseBandwidthBins: number, dithered: boolean): number {
   const step = 2 ** (1 - bits);

@@ -15,7 +15,7 @@
  * @param bits resolution, 1..32
  * @param dither a uniform generator on [0, 1), or null for none
  * @returns the number of samples clipped
- * @example quantise(Float64Array.of(0.3, 2), 2, null) // record [0.5, 0.5], 1 clipped
+ * @example (() => { const x = Float64Array.of(0.3, 2); const clipped = quantise(x, 2, null); return [...x, clipped]; })() // [0.5, 0.5, 1] (the record, then the samples clipped)
  */
 export function quantise(samples: Float64Array, bits: number, dither: (() => number) | null): number {
   const step = 2 ** (1 - bits);

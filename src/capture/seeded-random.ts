@@ -5,7 +5,7 @@
  *
  * @param seed any 32-bit integer
  * @returns a function giving the next number in [0, 1)
- * @example const next = seededUniform(1); next() // the same value on every run
+ * @example const next = seededUniform(1); next() // 0.6270739405881613 (on every run)
  */
 export function seededUniform(seed: number): () => number {
   let state = seed >>> 0;

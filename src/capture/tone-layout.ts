@@ -42,7 +42,7 @@ export interface ComponentTemplate {
  * @param record rate, length, wanted tone count
  * @param components the plan's lines and wanted tones (watched) and the model's strong products
  * @returns the offsets, whole cycles
- * @example chooseLayout(s, record, components).wanted // [32]: W1 moved 32 cycles to clear a product
+ * @example chooseLayout(heronBase, { rate: hz(184.32e6), samples: 65536, wantedTones: 1 }, []).wanted.length // 1
  */
 export function chooseLayout(scenario: Scenario, record: CaptureRecord, components: readonly ComponentTemplate[]): ToneLayout {
   const { rate, samples } = record;
@@ -93,7 +93,7 @@ export function chooseLayout(scenario: Scenario, record: CaptureRecord, componen
  * @param inputs the indices of the input tones, in order
  * @param samples record length N
  * @returns the number of close pairs
- * @example crowding(components, cycles, inputs, 65536) // 0 when every watched line is 7 bins clear
+ * @example crowding([], [], [], 65536) // 0 (nothing to keep apart)
  */
 export function crowding(components: readonly ComponentTemplate[], cycles: readonly number[], inputs: readonly number[], samples: number): number {
   const placed = components.map((c) => {

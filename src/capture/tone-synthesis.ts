@@ -38,7 +38,7 @@ export function phaseTable(samples: number): PhaseTable {
  * @param samples the record (length N), added to
  * @param tones the tones; cycles may be any integer (they fold as sampling folds them)
  * @param table phaseTable(N), when one is at hand
- * @example addTones(new Float64Array(4), [{ cycles: 1, amplitude: 1, phase: 0 }]) // [1, 0, −1, 0]
+ * @example (() => { const x = new Float64Array(4); addTones(x, [{ cycles: 1, amplitude: 1, phase: 0 }], phaseTable(4)); return x.map((v) => Math.round(v)); })() // [1, 0, -1, 0]
  */
 export function addTones(samples: Float64Array, tones: readonly SampledTone[], table: PhaseTable = phaseTable(samples.length)): void {
   const n = samples.length;
@@ -67,7 +67,7 @@ export function addTones(samples: Float64Array, tones: readonly SampledTone[], t
  * @param rate R, Hz
  * @param skews τ_m of each core, s
  * @param table phaseTable(N), when one is at hand
- * @example addSkewedTones(new Float64Array(4), [{ cycles: 1, amplitude: 1, phase: 0 }], 4, [0, 0]) // [1, 0, −1, 0]
+ * @example (() => { const x = new Float64Array(4); addSkewedTones(x, [{ cycles: 1, amplitude: 1, phase: 0 }], 4, [0, 0]); return x.map((v) => Math.round(v)); })() // [1, 0, -1, 0]
  */
 export function addSkewedTones(samples: Float64Array, tones: readonly SampledTone[], rate: number, skews: readonly number[], table: PhaseTable = phaseTable(samples.length)): void {
   const n = samples.length;

@@ -72,7 +72,7 @@ export function checkOutputPaths(paths: readonly string[], options: SafeWriteOpt
  * @param content text, written as UTF-8
  * @param options force, the command's input files, an fs shim
  * @throws InputError as checkOutputPaths, or when writing fails (naming the path and the system's reason)
- * @example writeFileSafely('plan.svg', svg, { force: false, inputs: ['heron.json'] })
+ * @example writeFileSafely(join(tmp, 'plan.svg'), '<svg/>', { force: false, inputs: ['heron.json'] }) // undefined
  */
 export function writeFileSafely(path: string, content: string, options: SafeWriteOptions = {}): void {
   writeFilesSafely([{ path, content }], options);

@@ -17,7 +17,7 @@ import type { ClockSnr } from './part-plan.js';
  *   (then no jitter figure, and the combined SNR is the quantisation limit alone)
  * @param apertureJitter the converter's rms aperture jitter, s (0 when not stated)
  * @param bits the converter's resolution
- * @example clockSnr({ low: 90e6, high: 100e6 }, 122.88e6, 1e-12, 0, 12) // jitter 64.0, quantisation 74.0, combined 63.6 dB
+ * @example clockSnr({ low: hz(90e6), high: hz(100e6) }, hz(122.88e6), seconds(1e-12), seconds(0), 12) // { jitterSnrDb: 64.0, quantisationSnrDb: 74.0, combinedSnrDb: 63.6 }
  */
 export function clockSnr(band: Band, rate: Hz, partJitter: Seconds | null, apertureJitter: Seconds, bits: number): ClockSnr {
   const jitterSnrDb = partJitter === null ? null : jitterLimitedSnr(band.high, totalJitter([partJitter, apertureJitter]));

@@ -80,7 +80,7 @@ export function modelSlack(slacks: readonly LinearSlack[], rate: Hz): Hz {
  * @returns the best N, its worst linear slack, and the MILP's promise and allowance
  * @throws Error when the MILP is infeasible, returns a fractional N, or its
  *   answer misses its promise or the best N by more than the allowance
- * @example bestIntegerN(slacks, { first: 40, last: 400, rateAt: (N) => (10e6 * N) / 3 }, 20e6)
+ * @example bestIntegerN([{ slope: 1, offset: -5 }, { slope: -1, offset: 9 }], { first: 0, last: 10, rateAt: (N) => hz(N) }, hz(1)).N // 7
  */
 export function bestIntegerN(slacks: readonly LinearSlack[], line: IntegerLine, unit: Hz, enumerateUpTo = ENUMERATE_UP_TO): IntegerAnswer {
   if (line.last < line.first) throw new Error(`empty N range ${line.first}..${line.last}`);

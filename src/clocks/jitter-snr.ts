@@ -50,7 +50,7 @@ export function combinedSnr(limits: readonly Db[]): Db {
  *
  * @param rate sampling rate, Hz
  * @param bandwidth channel width, Hz
- * @example processingGain(hz(122.88e6), hz(20e6)) // 4.88 dB
+ * @example processingGain(hz(122.88e6), hz(20e6)) // 4.87 dB
  */
 export function processingGain(rate: Hz, bandwidth: Hz): Db {
   return db(10 * Math.log10(rate / (2 * bandwidth)));

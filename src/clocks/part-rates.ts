@@ -28,7 +28,7 @@ export interface RateFamily {
  * @param frequency the part's frequency, Hz
  * @param settings N, M, D
  * @returns f·N/(M·D), Hz
- * @example rateOf(hz(10e6), { N: 48, M: 2, D: 2 }) // 120 MHz
+ * @example rateOf(hz(10e6), { N: 48, M: 2, D: 2 }) // 120e6 Hz
  */
 export function rateOf(frequency: Hz, settings: RateSettings): Hz {
   return hz((frequency * settings.N) / (settings.M * settings.D));
@@ -49,7 +49,7 @@ export function vcoOf(frequency: Hz, N: number, M: number): Hz {
  * @param dividers the converter's clock dividers (used by divider parts)
  * @returns families in the order M ascending, then D ascending
  * @throws Error on a non-integer or non-positive range or divider
- * @example rateFamilies(crystal, [1, 2, 4]) // [{M:1,D:1,nMin:1,nMax:1}, {M:1,D:2,...}, {M:1,D:4,...}]
+ * @example rateFamilies(s.clocks[0], [1, 2, 4]).map((f) => f.D) // [1] (a direct part: the converter's dividers are for divider parts)
  */
 export function rateFamilies(part: ClockPart, dividers: readonly number[]): RateFamily[] {
   const derivation = part.derivation;
@@ -122,7 +122,7 @@ export function nRangeFor(frequency: Hz, family: RateFamily, low: Hz, high: Hz):
  * @param part the clock part
  * @param dividers the converter's clock dividers
  * @param low, high the rate range, Hz
- * @example partRates(crystal122M88, [1, 2], 40e6, 250e6) // 122.88 MHz (D 1), 61.44 MHz (D 2)
+ * @example partRates(s.clocks[0], [1, 2], hz(40e6), hz(250e6)).map((r) => r.rate) // [122.88e6] (a direct part)
  */
 export function partRates(part: ClockPart, dividers: readonly number[], low: Hz, high: Hz): PartRate[] {
   const rates: PartRate[] = [];

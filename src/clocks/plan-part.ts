@@ -68,7 +68,7 @@ interface Judged {
  * @param options search tuning
  * @returns the part's plan, or null when none of its rates keeps its whole drift inside the converter's rate range
  * @throws Error when an integer answer fails its exact re-check (a bug, not an input error)
- * @example planPart(context, set, xo122M88).settings // { N: 1, M: 1, D: 1 }
+ * @example planPart(sContext, planRates(sContext), s.clocks[0]).settings // { N: 1, M: 1, D: 1 }
  */
 export function planPart(plan: PlanContext, set: FeasibleSet, part: ClockPart, options: PlanPartOptions = {}): PartPlan | null {
   // The part's drift must stay inside the converter's rate range too: its nominal rates are searched in that range

@@ -40,7 +40,7 @@ export function butterworthOmega(filter: ButterworthBandPass, frequency: Hz): nu
  * @param filter order and passband edges, Hz
  * @param frequency Hz (sign ignored)
  * @returns attenuation in dB, in [0, 300]
- * @example butterworthAttenuation({ order: 5, passLow: hz(30e6), passHigh: hz(80e6) }, hz(120e6)) // 30.10 (Ω = 2)
+ * @example butterworthAttenuation({ order: 5, passLow: hz(30e6), passHigh: hz(80e6) }, hz(120e6)) // 30.11 (Ω = 2.05)
  */
 export function butterworthAttenuation(filter: ButterworthBandPass, frequency: Hz): Db {
   const f = Math.abs(frequency);
@@ -67,7 +67,7 @@ export function butterworthAttenuation(filter: ButterworthBandPass, frequency: H
  * @param low lower end of the extent, Hz
  * @param high upper end, Hz (≥ low)
  * @returns least attenuation in dB
- * @example butterworthLeastAttenuation({ order: 5, passLow: hz(30e6), passHigh: hz(80e6) }, hz(120e6), hz(130e6)) // 30.10
+ * @example butterworthLeastAttenuation({ order: 5, passLow: hz(30e6), passHigh: hz(80e6) }, hz(120e6), hz(130e6)) // 30.11
  */
 export function butterworthLeastAttenuation(filter: ButterworthBandPass, low: Hz, high: Hz): Db {
   const [near, far] = magnitudeRange(low, high);

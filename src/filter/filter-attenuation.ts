@@ -11,7 +11,7 @@ import { sortedTable, tableAttenuation, tableLeastAttenuation } from './table-at
  * @param frequency Hz (sign ignored: the filter is real)
  * @returns attenuation in dB; a Butterworth is capped at 300 dB (DC)
  * @throws RangeError for a malformed Butterworth (see checkButterworth) or table (see sortedTable)
- * @example filterAttenuation({ kind: 'butterworth', order: 5, passLow: hz(30e6), passHigh: hz(80e6) }, hz(120e6)) // 30.10
+ * @example filterAttenuation({ kind: 'butterworth', order: 5, passLow: hz(30e6), passHigh: hz(80e6) }, hz(120e6)) // 30.11
  */
 export function filterAttenuation(filter: AntiAliasFilter | null, frequency: Hz): Db {
   if (filter === null) return db(0);
@@ -32,7 +32,7 @@ export function filterAttenuation(filter: AntiAliasFilter | null, frequency: Hz)
  * @param high upper end, Hz (≥ low); a negative extent counts as its magnitudes
  * @returns least attenuation in dB
  * @throws RangeError when high < low, or for a malformed filter (see checkButterworth, sortedTable)
- * @example leastAttenuation({ kind: 'butterworth', order: 5, passLow: hz(30e6), passHigh: hz(80e6) }, hz(10e6), hz(20e6)) // 30.10 (at 20 MHz, Ω = −2)
+ * @example leastAttenuation({ kind: 'butterworth', order: 5, passLow: hz(30e6), passHigh: hz(80e6) }, hz(10e6), hz(20e6)) // 30.11 (at 20 MHz, Ω = −2.05)
  */
 export function leastAttenuation(filter: AntiAliasFilter | null, low: Hz, high: Hz): Db {
   if (!(high >= low)) throw new RangeError(`extent needs low ≤ high, found [${low}, ${high}]`);

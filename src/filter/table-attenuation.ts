@@ -15,7 +15,7 @@ export interface AttenuationPoint {
  * @throws RangeError when the table is empty, a frequency is not a finite
  *   number > 0 (it must sit on a log axis), two points share a frequency, or
  *   an attenuation is not a finite number ≥ 0
- * @example sortedTable([{ frequency: hz(2e6), attenuation: db(40) }, { frequency: hz(1e6), attenuation: db(0) }]) // 1 MHz first
+ * @example sortedTable([{ frequency: hz(2e6), attenuation: db(40) }, { frequency: hz(1e6), attenuation: db(0) }])[0].frequency // 1e6
  */
 export function sortedTable(points: ReadonlyArray<AttenuationPoint>): AttenuationPoint[] {
   if (points.length === 0) throw new RangeError('an attenuation table needs at least one point');
@@ -66,7 +66,7 @@ export function tableAttenuation(points: ReadonlyArray<AttenuationPoint>, freque
  * @param low lower end of the extent, Hz
  * @param high upper end, Hz (≥ low)
  * @returns least attenuation in dB
- * @example tableLeastAttenuation(points, hz(5e6), hz(50e6)) // min of both ends and the points between
+ * @example tableLeastAttenuation([{ frequency: hz(1e6), attenuation: db(0) }, { frequency: hz(100e6), attenuation: db(40) }], hz(10e6), hz(50e6)) // 20 (at 10 MHz, the lower end)
  */
 export function tableLeastAttenuation(points: ReadonlyArray<AttenuationPoint>, low: Hz, high: Hz): Db {
   const [near, far] = magnitudeRange(low, high);

@@ -12,7 +12,7 @@ import { dbText, ordinal } from './words.js';
  * @param spur the board spur (level in dBFS)
  * @param h harmonic order ≥ 1 (1: the fundamental)
  * @returns dBFS
- * @example spurHarmonicLevel({ level: db(-50), ... }, 2) // −56.02
+ * @example spurHarmonicLevel({ label: 'REF', low: hz(10e6), high: hz(10e6), level: db(-50), coupling: 'after-filter', harmonics: 2, ownMargin: null }, 2) // -56.02
  */
 export function spurHarmonicLevel(spur: BoardSpur, h: number): number {
   return spur.level - 20 * Math.log10(h);
@@ -28,7 +28,7 @@ export function spurHarmonicLevel(spur: BoardSpur, h: number): number {
  * @param index its place among the scenario's board spurs
  * @param scenario the validated scenario (filter)
  * @returns drafts labelled `<label>`, `<label> H2`, ...
- * @example boardSpurDrafts({ label: 'REF 10M', low: hz(10e6), high: hz(10e6), level: db(-30), coupling: 'after-filter', harmonics: 2, margin: null }, 0, s) // REF 10M, REF 10M H2
+ * @example boardSpurDrafts({ label: 'REF 10M', low: hz(10e6), high: hz(10e6), level: db(-30), coupling: 'after-filter', harmonics: 2, ownMargin: null }, s).map((d) => d.label) // ['REF 10M', 'REF 10M H2']
  */
 export function boardSpurDrafts(spur: BoardSpur, index: number, scenario: Scenario): InterfererDraft[] {
   const drafts: InterfererDraft[] = [];

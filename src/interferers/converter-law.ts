@@ -43,7 +43,7 @@ export interface OrderLaw {
  * @param order n ≥ 2
  * @param referenceLevel Lref, dBFS (the strongest wanted level, at which harmonic figures are quoted)
  * @returns the law
- * @example orderLaw(c, 3, -1)!.gain // −80 − 2·(−1) = −78 for HD3 −80 dBc and no intercept
+ * @example orderLaw(s.converter, 3, -1).gain // -78 (HD3 −80 dBc at −1 dBFS, no intercept)
  */
 export function orderLaw(converter: Converter, order: number, referenceLevel: number): OrderLaw | null {
   const intercept = converter.intercepts?.get(order) ?? (order === 3 ? converter.intercept3 ?? undefined : undefined);
@@ -82,7 +82,7 @@ export function factorial(n: number): number {
  *
  * @param picks each signal's (plus, minus) counts
  * @returns dB
- * @example countDb([[1, 0], [1, 0], [0, 1]]) // 20·log10(6) = 15.56
+ * @example countDb([[1, 0], [1, 0], [0, 1]]) // 15.56 (20·log10(6))
  */
 export function countDb(picks: ReadonlyArray<readonly [number, number]>): number {
   let order = 0;
@@ -100,7 +100,7 @@ export function countDb(picks: ReadonlyArray<readonly [number, number]>): number
  * @param law the order's law
  * @param picks each signal's level (dBFS) with its (plus, minus) counts
  * @returns dBFS
- * @example productLevel({ order: 3, gain: db(-78), note: '' }, [[-1, 2, 0], [-1, 0, 1]]) // −78 + 9.54 − 3 = −71.46
+ * @example productLevel({ order: 3, gain: db(-78), note: '' }, [[-1, 2, 0], [-1, 0, 1]]) // -71.46 (−78 + 9.54 − 3)
  */
 export function productLevel(law: OrderLaw, picks: ReadonlyArray<readonly [number, number, number]>): Db {
   const drive = picks.reduce((sum, [level, plus, minus]) => sum + (plus + minus) * level, 0);

@@ -27,7 +27,7 @@ export function rateFractionLabel(numerator: number, denominator: number): strin
  *
  * @param scenario the validated scenario
  * @returns drafts labelled `DC`, `rate/2`, `rate/4`, `rate/3`, `3·rate/8`, `IL offset k/M`
- * @example converterSpurDrafts(s).map((d) => d.label) // ['DC', 'rate/3', 'IL offset 1/2'] for a 2-way converter stating a DC spur and one at 1/3
+ * @example converterSpurDrafts(heronBase).map((d) => d.label) // ['DC', 'rate/2', 'rate/4']
  */
 export function converterSpurDrafts(scenario: Scenario): InterfererDraft[] {
   const { converter } = scenario;

@@ -56,7 +56,7 @@ export interface DerivedInterferers {
  * @param listing the same scenario with its signals where they decide what is listed and which way round a product is written (default: the scenario itself): the IF-shift search passes the neighbours swept over the shift range, so that every shift lists the same interferers in the same order
  * @returns the interferers (extents rateMultiple·r + [low, high] in Hz, levels in dBFS) and the summary
  * @throws RangeError for a malformed filter (see leastAttenuation)
- * @example deriveInterfererList(s).summary.pruned // products left out below the threshold
+ * @example deriveInterfererList(s).summary.pruned // 0
  */
 export function deriveInterfererList(scenario: Scenario, listing: Scenario = scenario): DerivedInterferers {
   const threshold = levelThreshold(scenario);
@@ -112,7 +112,7 @@ function wantedDraft(scenario: Scenario): InterfererDraft {
  * @param scenario the validated scenario
  * @returns interferers, extents rateMultiple·r + [low, high] in Hz, levels in dBFS
  * @throws RangeError for a malformed filter (see leastAttenuation)
- * @example deriveInterferers(s).find((i) => i.label === 'H2 wanted') // 2·[low, high], strongestLevel + HD2
+ * @example deriveInterferers(s).find((i) => i.label === 'H2 wanted') // { low: 130e6, high: 150e6, level: -76 }
  */
 export function deriveInterferers(scenario: Scenario): Interferer[] {
   return deriveInterfererList(scenario).interferers;

@@ -20,7 +20,7 @@ export interface HarmonicFigure {
  * @param converter the scenario's converter
  * @param order harmonic order k ≥ 2
  * @returns the figure, or null when the converter states no harmonic figure
- * @example harmonicFigure(c, 4) // { dbc: −80, stated: false, ... } for figures {2: −70, 3: −80}
+ * @example harmonicFigure(s.converter, 4) // { stated: false }
  */
 export function harmonicFigure(converter: Converter, order: number): HarmonicFigure | null {
   const stated = converter.harmonics.get(order);

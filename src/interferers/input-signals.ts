@@ -26,7 +26,7 @@ export interface InputSignal {
  *
  * @param scenario the validated scenario
  * @returns the signals; labels are the scenario's (`wanted`, a neighbour's, `REF`, `REF H2`)
- * @example inputSignals(s)[0] // { ref: { signal: 'wanted', index: 0, harmonic: 1 }, label: 'wanted', level: strongestLevel, … }
+ * @example inputSignals(s)[0] // { label: 'wanted', low: 65e6, high: 75e6, level: -1 }
  */
 export function inputSignals(scenario: Scenario): InputSignal[] {
   const { wanted } = scenario;

@@ -16,7 +16,7 @@ export type InterfererDraft = Omit<Interferer, 'requiredMargin' | 'blocking'> & 
  * @param draft the draft (kind, ownMargin)
  * @param scenario the validated scenario
  * @returns Hz
- * @example requiredMarginOf({ kind: 'neighbour', ownMargin: hz(0), … }, s) // 0
+ * @example requiredMarginOf({ kind: 'neighbour', ownMargin: hz(0) }, s) // 0 (its own margin wins over the scenario's)
  */
 export function requiredMarginOf(draft: InterfererDraft, scenario: Scenario): Hz {
   return draft.ownMargin ?? scenario.requirements.kindMargins?.[draft.kind] ?? scenario.requirements.margin;
@@ -28,7 +28,7 @@ export function requiredMarginOf(draft: InterfererDraft, scenario: Scenario): Hz
  * @param draft label, kind, order, source, extent (Hz) and level (dBFS)
  * @param scenario the validated scenario
  * @returns the interferer
- * @example complete({ label: 'DC', kind: 'converter', order: null, source: '…', rateMultiple: 0, shiftMultiple: 0, low: hz(0), high: hz(0), level: db(-80) }, s)
+ * @example complete({ label: 'DC', kind: 'converter', order: null, source: '…', rateMultiple: 0, shiftMultiple: 0, low: hz(0), high: hz(0), level: db(-80) }, s) // { requiredMargin: 1e6, blocking: true }
  */
 export function complete(draft: InterfererDraft, scenario: Scenario): Interferer {
   const { ownMargin: _own, ...rest } = draft;

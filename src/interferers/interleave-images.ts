@@ -41,7 +41,7 @@ export interface ImageList {
  * @param scenario the validated scenario (interleave, threshold)
  * @param listing the same sources as they decide which images are listed (default: `sources`; see mixingProducts)
  * @returns drafts labelled `IL image k/M−` / `IL image k/M+` for the wanted band, `IL image k/M− <source>` otherwise
- * @example interleaveImages([wantedDraft], s).drafts.map((d) => d.label) // ['IL image 1/2−', 'IL image 1/2+'] for a 2-way converter
+ * @example interleaveImages([], s).drafts.length // 0
  */
 export function interleaveImages(sources: readonly InterfererDraft[], scenario: Scenario, listing: readonly InterfererDraft[] = sources): ImageList {
   const interleave = scenario.converter.interleave;

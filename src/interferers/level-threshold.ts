@@ -7,7 +7,7 @@ import type { Scenario } from '../scenario/scenario.js';
  *
  * @param scenario the validated scenario
  * @returns threshold in dBFS
- * @example levelThreshold(s) // −100 for weakestLevel −60 dBFS, rejection 40 dB
+ * @example levelThreshold(s) // -100 (weakestLevel −60 dBFS, rejection 40 dB)
  */
 export function levelThreshold(scenario: Scenario): Db {
   return db(scenario.wanted.weakestLevel - scenario.requirements.rejection);
@@ -20,7 +20,7 @@ export function levelThreshold(scenario: Scenario): Db {
  * @param level interferer level at the converter, dBFS
  * @param scenario the validated scenario
  * @returns true when level > levelThreshold(scenario)
- * @example isBlocking(db(-100), s) // false when the threshold is −100 dBFS
+ * @example isBlocking(db(-100), s) // false (the threshold is −100 dBFS)
  */
 export function isBlocking(level: Db, scenario: Scenario): boolean {
   return level > levelThreshold(scenario);

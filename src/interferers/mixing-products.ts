@@ -62,7 +62,7 @@ export interface ProductList {
  *
  * @param request signals, laws, orders and threshold
  * @returns drafts of kind `harmonic` (one signal, all +) or `intermod`, labelled `H3 wanted`, `ADJ H2`, `IM3 2·A−B`, `IM3 A+B−C`, `IM2 wanted difference`
- * @example mixingProducts({ signals: [wanted, adj], law, maxOrder: 3, harmonicOrder: 3, threshold: db(-100) }).drafts.map((d) => d.label) // ['H2 wanted', 'IM2 wanted difference', 'IM2 ADJ−wanted', …]
+ * @example mixingProducts({ signals: inputSignals(s), law: (order) => orderLaw(s.converter, order, -1), maxOrder: 3, harmonicOrder: 3, threshold: db(-100) }).drafts.length > 0 // true
  */
 export function mixingProducts(request: ProductRequest): ProductList {
   const { signals, threshold } = request;

@@ -11,7 +11,7 @@ import { dbText } from './words.js';
  * @param neighbour the neighbour band (Hz) and its input level (dBFS)
  * @param scenario the validated scenario (filter)
  * @returns dBFS after the filter
- * @example neighbourLevel({ label: 'ADJ-UP', low: hz(120e6), high: hz(130e6), level: db(10) }, s) // 10 − 30.10 with a 5th-order 30–80 MHz Butterworth
+ * @example neighbourLevel({ label: 'ADJ-UP', low: hz(120e6), high: hz(130e6), level: db(10), ownMargin: null }, s) // 10 (no filter in the fixture)
  */
 export function neighbourLevel(neighbour: Neighbour, scenario: Scenario): Db {
   return level(neighbour.level - leastAttenuation(scenario.filter, neighbour.low, neighbour.high));
@@ -26,7 +26,7 @@ export function neighbourLevel(neighbour: Neighbour, scenario: Scenario): Db {
  * @param index its place among the scenario's neighbours
  * @param scenario the validated scenario
  * @returns the draft labelled `<label>`
- * @example neighbourDraft(adjUp, 0, s).level // 10 − 30.10 with a 5th-order 30–80 MHz Butterworth
+ * @example neighbourDraft({ label: 'ADJ-UP', low: hz(120e6), high: hz(130e6), level: db(-10), ownMargin: null }, 0, s).label // 'ADJ-UP'
  */
 export function neighbourDraft(neighbour: Neighbour, index: number, scenario: Scenario): InterfererDraft {
   const loss = leastAttenuation(scenario.filter, neighbour.low, neighbour.high);

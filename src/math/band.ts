@@ -59,7 +59,7 @@ export function wantedZone(band: Band, rate: Hz): number {
  *
  * @param band the band, Hz
  * @param rate sampling rate, Hz
- * @example bandImage({ low: 60e6, high: 80e6 }, 100e6) // zone 2, inverted, 20–40 MHz
+ * @example bandImage({ low: hz(60e6), high: hz(80e6) }, hz(100e6)) // { zone: 2, inverted: true, low: 20e6, high: 40e6 }
  */
 export function bandImage(band: Band, rate: Hz): BandImage | null {
   const zone = wantedZone(band, rate);

@@ -33,7 +33,7 @@ export function mergeIntervals(intervals: readonly Interval[]): Interval[] {
  * @param closed the interval kept from, low ≤ high
  * @param open removed open intervals (low, high), any order
  * @returns disjoint closed pieces in ascending order
- * @example subtractOpen({low: 0, high: 10}, [{low: 2, high: 4}]) // [{0, 2}, {4, 10}]
+ * @example subtractOpen({low: 0, high: 10}, [{low: 2, high: 4}]) // [{low: 0, high: 2}, {low: 4, high: 10}]
  */
 export function subtractOpen(closed: Interval, open: readonly Interval[]): Interval[] {
   const pieces: Interval[] = [];

@@ -14,7 +14,7 @@ const TIGHTEST_SHOWN = 4;
  * @param candidate a reported candidate with its after-rate figures
  * @param detail list every alias band instead of the tightest few
  * @returns text, no trailing newline; '' when the candidate has no after-rate figures
- * @example afterRateSection(report.candidates[0]!) // 'After the rate, at VCXO-C 184.32M (184.32 MHz):\n...'
+ * @example afterRateSection(report.candidates[0]) // 'After the rate, at VCXO-C 184.32M (184.32 MHz):\n...'
  */
 export function afterRateSection(candidate: ReportedCandidate, detail = false): string {
   const after = candidate.afterRate;

@@ -28,7 +28,7 @@ export function toJson(report: unknown): string {
  *
  * @param report any JSON-shaped value (no cycles)
  * @param write receives the text in order
- * @example writeJson([1, Infinity], (t) => process.stdout.write(t)) // writes '[\n  1,\n  null\n]\n'
+ * @example (() => { const out = []; writeJson([1, Infinity], (t) => out.push(t)); return out.join(''); })() // '[\n  1,\n  null\n]\n'
  */
 export function writeJson(report: unknown, write: TextSink): void {
   let buffer: string[] = [];

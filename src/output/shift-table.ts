@@ -9,7 +9,7 @@ import { plainTable } from './table.js';
  *
  * @param shift the report's ifShift section
  * @returns text, no trailing newline
- * @example shiftSection(report.ifShift!) // 'Best IF shift and rate (the IF may move −2 MHz … +2 MHz …'
+ * @example shiftSection(narrowReport.ifShift) // 'Best IF shift and rate (the IF may move ...'
  */
 export function shiftSection(shift: ShiftReport): string {
   const { title, head, rows, searched } = shiftParts(shift);
@@ -30,7 +30,7 @@ export interface ShiftParts {
  *
  * @param shift the report's ifShift section
  * @returns title, heads, rows and the search summary, as text
- * @example shiftParts(report.ifShift!).head[1] // 'IF shift'
+ * @example shiftParts(narrowReport.ifShift).head[1] // 'IF shift'
  */
 export function shiftParts(shift: ShiftReport): ShiftParts {
   const title =

@@ -84,7 +84,7 @@ export function bandPositionFigure(report: PlanReport, candidateLabel?: string):
  * @param report the solved plan
  * @param candidateLabel mark only this candidate, or all when absent
  * @returns SVG text, 900 px wide
- * @example bandPositionSvg(report).includes('fs/B')
+ * @example bandPositionSvg(report).includes('fs/B') // true
  */
 export function bandPositionSvg(report: PlanReport, candidateLabel?: string): string {
   return svgDocument(bandPositionFigure(report, candidateLabel));

@@ -45,7 +45,7 @@ export function linearTicks(low: number, high: number, count: number): Ticks {
  *
  * @param low, high the range to cover, low ≤ high, finite
  * @param count wanted number of intervals (≥ 1)
- * @example coveringTicks(-186, 0, 10).values // [-200, -180, ..., 0]
+ * @example coveringTicks(-186, 0, 10).values // [-200, -180, -160, -140, -120, -100, -80, -60, -40, -20, 0]
  */
 export function coveringTicks(low: number, high: number, count: number): Ticks {
   return ticksBetween(low, high, count, (q) => Math.floor(q + 1e-9), (q) => Math.ceil(q - 1e-9), 1);

@@ -17,7 +17,7 @@ import { stackFigures, svgDocument } from './svg-document.js';
  *   passing one, else the first (the spectrum is left out when there is none)
  * @returns SVG text, 960 px wide
  * @throws InputError when candidateLabel names no candidate
- * @example planPicturesSvg(report) // rate map, spectrum at report.best, band-position chart, filter mask at report.best
+ * @example planPicturesSvg(report) // '<svg ...' (rate map, spectrum at report.best, band-position chart, filter mask at report.best)
  */
 export function planPicturesSvg(report: PlanReport, candidateLabel?: string): string {
   const label = candidateLabel ?? report.best ?? report.candidates[0]?.label;

@@ -111,7 +111,7 @@ export function rateMapFigure(report: PlanReport): Figure {
  *
  * @param report the solved plan
  * @returns SVG text, 960 px wide
- * @example rateMapSvg(report).includes('zone 2 (inv)')
+ * @example rateMapSvg(report).includes('zone 2 (inv)') // true
  */
 export function rateMapSvg(report: PlanReport): string {
   return svgDocument(rateMapFigure(report));

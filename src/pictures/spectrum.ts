@@ -125,7 +125,7 @@ export function spectrumFigure(report: PlanReport, candidateLabel: string): Figu
  * @param candidateLabel a label from report.candidates
  * @returns SVG text, 960 px wide
  * @throws InputError when no candidate has that label
- * @example spectrumSvg(report, report.best ?? report.candidates[0].label)
+ * @example spectrumSvg(report, report.best ?? report.candidates[0].label) // '<svg ...'
  */
 export function spectrumSvg(report: PlanReport, candidateLabel: string): string {
   return svgDocument(spectrumFigure(report, candidateLabel));

@@ -37,7 +37,7 @@ export function element(name: string, attributes: Attributes, content?: string):
  * @param x, y anchor point, px
  * @param text the words shown
  * @param attributes more attributes (text-anchor, font-size, ...)
- * @example textElement(10, 20, 'zone 2 (inv)', { 'text-anchor': 'end' })
+ * @example textElement(10, 20, 'zone 2 (inv)', { 'text-anchor': 'end' }) // '<text x="10" y="20" text-anchor="end">zone 2 (inv)</text>'
  */
 export function textElement(x: number, y: number, text: string, attributes: Attributes = {}): string {
   return element('text', { x, y, ...attributes }, escapeXml(text));

@@ -23,7 +23,7 @@ export interface Wedge {
  * @param yMax top edge of the chart, fs/B, > 2
  * @returns wedges for every n < xMax (zone xMax would be the single point
  *   (xMax, 2)), ascending n
- * @example allowedWedges(3, 8)[1] // zone 2: (2, 2), (3, 3), (3, 4)
+ * @example allowedWedges(3, 8)[1] // { zone: 2, inverted: true, points: [[2, 2], [3, 3], [3, 4]] }
  */
 export function allowedWedges(xMax: number, yMax: number): Wedge[] {
   const wedges: Wedge[] = [];

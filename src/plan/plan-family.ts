@@ -27,7 +27,7 @@ export interface FamilyPlan {
  * @param onVariant called before each variant is planned (index from 0, count, name)
  * @returns the plans and the comparison
  * @throws Error as planScenario
- * @example planFamily([{ scenario: heronBase, source: 'heron-base.json' }]).comparison.variants // ['Heron base']
+ * @example planFamily([{ scenario: heronBase, source: 'heron-base.json' }]).comparison.variants // ['Heron-4 base']
  */
 export function planFamily(
   variants: readonly FamilyVariant[],

@@ -42,7 +42,7 @@ export interface SolvedScenario {
  * @param options goal, clock parts or name instead of the scenario's
  * @returns the report the table, JSON, SVG and HTML writers read
  * @throws Error when an optimum fails its exact re-check (a bug, never a property of the plan)
- * @example planScenario(heronBase).best // 'Z3.1' (the label of the best passing candidate)
+ * @example planScenario(heronBase).best // 'VCXO-C 184.32M' (the label of the best passing candidate)
  */
 export function planScenario(scenario: Scenario, options: PlanOptions = {}): PlanReport {
   return solveScenario(scenario, options).report;
@@ -56,7 +56,7 @@ export function planScenario(scenario: Scenario, options: PlanOptions = {}): Pla
  * @param options as planScenario
  * @returns the context, the solver's result, the IF-shift search and the report
  * @throws Error as planScenario
- * @example solveScenario(heronBase).result.parts.length // the number of clock parts with a rate in range
+ * @example solveScenario(heronBase).result.parts.length // 7 (the clock parts with a rate in range)
  */
 export function solveScenario(scenario: Scenario, options: PlanOptions = {}): SolvedScenario {
   const planned = { ...scenario, goal: options.goal ?? scenario.goal, clocks: options.clocks ?? scenario.clocks };

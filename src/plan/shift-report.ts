@@ -45,7 +45,7 @@ export interface ShiftReport {
  * @param band the nominal wanted band, Hz
  * @param search what bestShiftAndRate found
  * @returns the JSON section `ifShift`
- * @example shiftReport(band, search).best?.center // 142 MHz for a 140 MHz IF moved +2 MHz
+ * @example shiftReport(heronNarrow.wanted, bestShiftAndRate(heronNarrow)).best.shift // 1e6
  */
 export function shiftReport(band: Band, search: ShiftSearch): ShiftReport {
   const reported = (pair: ShiftedRate | null) => (pair ? reportedShift(band, pair) : null);

@@ -61,7 +61,7 @@ export interface Measurement {
  * @param setting the line, its check and how it is judged
  * @param measurement the spectrum and levels
  * @returns the row for the result
- * @example judgeLine(setting, measurement).status // 'agrees' for a peak on the plan's alias within 1 dB of its level
+ * @example verifyCapture(heronBase, { rate: hz(184.32e6), samples: 16384, wantedTones: 1 }).predictions.some((p) => p.status === 'agrees') // true (judgeLine's verdicts)
  */
 export function judgeLine(setting: LineSetting, measurement: Measurement): PredictionRow {
   const { check, line, samples, binWidth } = setting;

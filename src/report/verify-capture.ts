@@ -66,7 +66,7 @@ const UNDER_FLOOR_EXACT = 64;
  * @param settings rate, record length, wanted tones, tolerance
  * @returns the result; consistent is false when the capture contradicts the plan
  * @throws RangeError for a record that is not a power of two ≥ 1024, or no wanted tone
- * @example verifyCapture(heronBase, { rate: hz(184.32e6), wantedTones: 1 }).consistent // true at a rate the solver passes
+ * @example verifyCapture(heronBase, { rate: hz(184.32e6), wantedTones: 1 }).consistent // true (at a rate the solver passes)
  */
 export function verifyCapture(scenario: Scenario, settings: CaptureSettings): VerifyResult {
   return verifyCaptureWithSpectrum(scenario, settings).result;

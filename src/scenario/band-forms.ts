@@ -43,7 +43,7 @@ export function refuseAt(
  * @param zeroWidth whether low = high is allowed (a tone-like blocker); the
  *   wanted band must have width
  * @returns the band, or null after pushing at least one issue
- * @example bandFromForm({ center: hz(140e6), width: hz(20e6) }, EDGES_OR_CENTRE, ctx, false) // { low: 130e6, high: 150e6 }
+ * @example resolveScenario(join(root, 'scenarios', 'heron-base.json'), (p) => readFileSync(p, 'utf8')).wanted // { low: 130e6, high: 150e6 } (its centre and width form, through bandFromForm)
  */
 export function bandFromForm(
   written: Partial<Record<BandKey, Hz | null>>,

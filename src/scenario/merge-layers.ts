@@ -44,7 +44,7 @@ function mergeObjects(base: Readonly<Record<string, unknown>>, over: Readonly<Re
  * @param layers the chain, most derived first
  * @param path the path in the merged document
  * @returns the file's name
- * @example fileOfPath(layers, ['converter', 'bits']) // 'heron-lowif.json' when that variant sets bits
+ * @example fileOfPath([{ file: 'v.json', document: { converter: { bits: 12 } } }, { file: 'base.json', document: { converter: { bits: 14 } } }], ['converter', 'bits']) // 'v.json' (the variant, which sets bits)
  */
 export function fileOfPath(layers: readonly Layer[], path: DocumentPath): string {
   return layers[supplierIndex(layers, path)]?.file ?? '';
@@ -57,7 +57,7 @@ export function fileOfPath(layers: readonly Layer[], path: DocumentPath): string
  * @param layers the chain, most derived first
  * @param paths paths in the merged document
  * @returns the file's name
- * @example fileOfPaths(layers, ['converter', 'maxRate'], ['converter', 'minRate']) // the variant, when it set minRate
+ * @example fileOfPaths([{ file: 'v.json', document: { converter: { minRate: 2 } } }, { file: 'base.json', document: { converter: { maxRate: 1 } } }], [['converter', 'maxRate'], ['converter', 'minRate']]) // 'v.json' (the variant, which set minRate)
  */
 export function fileOfPaths(layers: readonly Layer[], paths: readonly DocumentPath[]): string {
   const index = Math.min(...paths.map((path) => supplierIndex(layers, path)));

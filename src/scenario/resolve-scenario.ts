@@ -27,7 +27,7 @@ const MAX_NESTING = 32;
  * @returns the validated scenario: every frequency in Hz, defaults filled
  * @throws ScenarioError (an InputError) listing every issue found, each
  *   naming its file and path; a missing file or a cycle shows the chain
- * @example resolveScenario('scenarios/heron-narrow.json', (p) => readFileSync(p, 'utf8')).wanted // { low: 135e6, high: 145e6, ... }
+ * @example resolveScenario(join(root, 'scenarios', 'heron-narrow.json'), (p) => readFileSync(p, 'utf8')).wanted // { low: 137.5e6, high: 142.5e6 }
  */
 export function resolveScenario(path: string, readText: ReadText): Scenario {
   return validateLayers(readChain(path, readText));
@@ -41,7 +41,7 @@ export function resolveScenario(path: string, readText: ReadText): Scenario {
  * @param file the name used in issues
  * @returns the validated scenario
  * @throws ScenarioError listing every issue found
- * @example scenarioFromDocument(JSON.parse(text), 'heron-base.json').name // 'Heron-4 base'
+ * @example scenarioFromDocument(JSON.parse(readFileSync(join(root, 'scenarios', 'heron-base.json'), 'utf8')), 'heron-base.json').name // 'Heron-4 base'
  */
 export function scenarioFromDocument(document: unknown, file: string): Scenario {
   const layer = layerOf(document, file);

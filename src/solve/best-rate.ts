@@ -19,6 +19,7 @@ const MOST_RATIOS_TRIED = 200;
  * @returns the evaluation, or null when the goal has no rate in this
  *   interval (decimation with no integer ratio inside it)
  * @throws Error when the LP's promise fails the exact re-check
+ * @example bestRateIn(handWorked, { zone: 2, inverted: true, minRate: hz(25e6), maxRate: hz(82e6 / 3) }).rate // 26e6 (the widest worst margin, 1 MHz)
  */
 export function bestRateIn(context: PlanContext, interval: FeasibleInterval): RateEvaluation | null {
   const range = driftSafeRange(interval, context.tolerancePpm);
@@ -67,7 +68,11 @@ function bestRatio(context: PlanContext, interval: FeasibleInterval, range: Inte
   return ratios.map((n) => judge(n * outputRate)).reduce((best, next) => (next.worstSlack > best.worstSlack ? next : best));
 }
 
-/** Higher is better for the goal; ties are broken by the worst slack. */
+/**
+ * Higher is better for the goal; ties are broken by the worst slack.
+ *
+ * @example goalScore(handWorked, evaluateRate(handWorked, hz(26e6), ppm(0))) // 1e6 (widest margin: the worst slack)
+ */
 export function goalScore(context: PlanContext, evaluation: RateEvaluation): number {
   switch (context.goal.kind) {
     case 'lowest-rate':

@@ -10,6 +10,7 @@ import type { PlanContext } from './plan-context.js';
  *
  * @param scenario the validated scenario
  * @param listing the scenario that decides which interferers are listed (see deriveInterfererList; default: the scenario)
+ * @example contextFromScenario(s) // { band: { low: 65e6, high: 75e6 }, limits: { minRate: 20e6, maxRate: 250e6 }, levelThreshold: -100 }
  */
 export function contextFromScenario(scenario: Scenario, listing: Scenario = scenario): PlanContext {
   const derived = deriveInterfererList(scenario, listing);

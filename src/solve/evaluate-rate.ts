@@ -61,6 +61,7 @@ export interface RateEvaluation {
  * @param context the plan
  * @param rate nominal sampling rate, Hz
  * @param tolerancePpm ± drift of that rate, ppm
+ * @example evaluateRate(handWorked, hz(26e6), ppm(0)) // { pass: true, zone: 2, worstSlack: 1e6, limitedBy: { kind: 'zone edge' } }
  */
 export function evaluateRate(context: PlanContext, rate: Hz, tolerancePpm: Ppm): RateEvaluation {
   const drift = driftRange(rate, tolerancePpm);
@@ -93,7 +94,11 @@ export function evaluateRate(context: PlanContext, rate: Hz, tolerancePpm: Ppm):
   };
 }
 
-/** Distance from the guarded band to the nearer edge of zone n at rate r, Hz. A lower guard stops at DC, as in guardedBand. */
+/**
+ * Distance from the guarded band to the nearer edge of zone n at rate r, Hz. A lower guard stops at DC, as in guardedBand.
+ *
+ * @example zoneEdgeMarginAt(handWorked.band, handWorked.guard, 2, hz(26e6)) // 1e6 (25 MHz is 1 MHz below the top of zone 2, [13, 26] MHz)
+ */
 export function zoneEdgeMarginAt(band: Band, guard: Guard, zone: number, rate: Hz): Hz {
   const guarded = guardedBand(band, guard);
   const below = guarded.low - ((zone - 1) * rate) / 2;
@@ -124,6 +129,7 @@ function checkInterferer(context: PlanContext, interferer: Interferer, rate: Hz,
  * The least signed margin of an interferer to the wanted band over a range of
  * rates: the minimum over every nearby image, each image's margin being
  * piecewise linear with known breakpoints.
+ * @example leastMargin(handWorked.interferers[0], handWorked.band, { low: hz(26e6), high: hz(26e6) }) // 5e6
  */
 export function leastMargin(interferer: Interferer, band: Band, range: { readonly low: Hz; readonly high: Hz }): Hz {
   const extent = normalisedExtent(interferer);

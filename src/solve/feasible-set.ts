@@ -39,6 +39,7 @@ export interface FeasibleSet {
  * @param interferers all interferers; only blocking ones remove rates
  * @param band the wanted band (unguarded), Hz
  * @returns feasible intervals ascending by rate, and the blocked ranges
+ * @example feasibleSet(planWindows(handWorked), handWorked.interferers, handWorked.band).feasible.map((f) => f.minRate) // [20.4e6, 25e6, 35.5e6, 50e6]
  */
 export function feasibleSet(windows: readonly RateWindow[], interferers: readonly Interferer[], band: Band): FeasibleSet {
   const feasible: FeasibleInterval[] = [];
@@ -78,7 +79,7 @@ export interface PlanRates extends FeasibleSet {
  * @param plan the wanted band, guards, rate limits and interferers (a PlanContext)
  * @param limits the rates searched, Hz (default: the plan's own limits)
  * @returns the windows, the feasible intervals and the blocked ranges
- * @example planRates(handWorked).feasible.length // 4: [20.4, 21], [25, 82/3], [35.5, 42], [50, 60] MHz
+ * @example planRates(handWorked).feasible.length // 4 ([20.4, 21], [25, 82/3], [35.5, 42], [50, 60] MHz)
  */
 export function planRates(plan: Pick<PlanContext, 'band' | 'guard' | 'limits' | 'interferers'>, limits: RateLimits = plan.limits): PlanRates {
   const windows = planWindows(plan, limits);
@@ -91,7 +92,7 @@ export function planRates(plan: Pick<PlanContext, 'band' | 'guard' | 'limits' | 
  * @param plan the wanted band, guards and rate limits
  * @param limits the rates searched, Hz (default: the plan's own limits)
  * @returns the windows, ascending by rate
- * @example planWindows(handWorked).map((w) => w.zone) // [3, 2, 1]
+ * @example planWindows(handWorked).map((w) => w.zone) // [1, 2, 3, 4, 5]
  */
 export function planWindows(plan: Pick<PlanContext, 'band' | 'guard' | 'limits'>, limits: RateLimits = plan.limits): RateWindow[] {
   return rateWindows(guardedBand(plan.band, plan.guard), limits);

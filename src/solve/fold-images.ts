@@ -28,7 +28,11 @@ export interface NormalisedExtent {
   readonly high: number;
 }
 
-/** Flips a·r + [l, h] with a < 0 to −(…) so that a ≥ 0; aliases are unchanged. */
+/**
+ * Flips a·r + [l, h] with a < 0 to −(…) so that a ≥ 0; aliases are unchanged.
+ *
+ * @example normalisedExtent(handWorked.interferers[0]) // { rateMultiple: 0, low: 10e6, high: 10e6 }
+ */
 export function normalisedExtent(interferer: Pick<Interferer, 'rateMultiple' | 'low' | 'high'>): NormalisedExtent {
   const { rateMultiple, low, high } = interferer;
   return rateMultiple < 0 ? { rateMultiple: -rateMultiple, low: -high, high: -low } : { rateMultiple, low, high };
@@ -39,6 +43,7 @@ export function normalisedExtent(interferer: Pick<Interferer, 'rateMultiple' | '
  * [c·r + near, c·r + far] relative to the moving extent origin a·r.
  * Returns the offsets of the image's lower and upper edges (s = +1:
  * [low, high]; s = −1: [−high, −low]).
+ * @example imageOffsets(handWorked.band, -1) // { low: -25e6, high: -21e6 }
  */
 export function imageOffsets(band: Band, side: 1 | -1): Interval {
   return side === 1 ? { low: band.low, high: band.high } : { low: -band.high, high: -band.low };
@@ -53,6 +58,7 @@ export function imageOffsets(band: Band, side: 1 | -1): Interval {
  * @param band the wanted band, Hz
  * @param reach margin, Hz, ≥ 0
  * @param minRate, maxRate the rate range, Hz, 0 < minRate ≤ maxRate < ∞
+ * @example nearbyImages(normalisedExtent(handWorked.interferers[0]), handWorked.band, hz(0.5e6), hz(25e6), hz(42e6)).length // 5
  */
 export function nearbyImages(extent: NormalisedExtent, band: Band, reach: Hz, minRate: Hz, maxRate: Hz): BandImageTerm[] {
   const terms: BandImageTerm[] = [];
@@ -73,6 +79,7 @@ export function nearbyImages(extent: NormalisedExtent, band: Band, reach: Hz, mi
  * The open set of rates at which the extent comes closer than `reach` to this
  * image: c·r ∈ (l − imageHigh − reach, h − imageLow + reach). Empty, one
  * interval, or all rates (slope 0 with the extent inside the reach).
+ * @example closeRates(normalisedExtent(handWorked.interferers[0]), handWorked.band, { j: -1, side: 1, slope: -1 }, hz(0.5e6)) // { low: 10.5e6, high: 15.5e6 }
  */
 export function closeRates(extent: NormalisedExtent, band: Band, term: BandImageTerm, reach: Hz): Interval | null {
   const image = imageOffsets(band, term.side);
@@ -91,7 +98,7 @@ export function closeRates(extent: NormalisedExtent, band: Band, term: BandImage
  * max(imageLow − high, low − imageHigh) = |centre offset| − (sum of the half
  * widths), so a deeper intrusion is always a more negative margin.
  *
- * @example imageMargin({ rateMultiple: 0, low: 72e6, high: 72e6 }, { low: 70e6, high: 80e6 }, { j: 0, side: 1, slope: 0 }, 100e6) // −2e6: 2 MHz inside
+ * @example imageMargin({ rateMultiple: 0, low: 72e6, high: 72e6 }, { low: 70e6, high: 80e6 }, { j: 0, side: 1, slope: 0 }, 100e6) // -2e6 (2 MHz inside)
  */
 export function imageMargin(extent: NormalisedExtent, band: Band, term: BandImageTerm, rate: Hz): Hz {
   const image = imageOffsets(band, term.side);
@@ -103,6 +110,7 @@ export function imageMargin(extent: NormalisedExtent, band: Band, term: BandImag
  * The rate at which `imageMargin` changes slope: where the centres of the
  * extent and the image meet (the margin is |c·r − k| − const, V-shaped).
  * Between breakpoints the margin is linear in the rate.
+ * @example marginBreakpoints(normalisedExtent(handWorked.interferers[0]), handWorked.band, { j: -1, side: 1, slope: -1 }) // [13e6] (where −r + 23 MHz meets the tone at 10 MHz)
  */
 export function marginBreakpoints(extent: NormalisedExtent, band: Band, term: BandImageTerm): Hz[] {
   if (term.slope === 0) return [];

@@ -17,6 +17,7 @@ import type { Interferer } from '../interferers/interferer.js';
  * @returns disjoint open intervals, ascending, that meet the range (their
  *   ends may lie outside it, so that subtracting them from a closed window
  *   also removes an edge they cover)
+ * @example forbiddenRates(handWorked.interferers[0], handWorked.band, hz(25e6), hz(42e6)) // [{ low: 30.5e6, high: 35.5e6 }]
  */
 export function forbiddenRates(interferer: Interferer, band: Band, minRate: Hz, maxRate: Hz): Interval[] {
   return closeImageRates(normalisedExtent(interferer), interferer.requiredMargin, band, minRate, maxRate);

@@ -34,7 +34,7 @@ export interface Conflict {
  *
  * @param context the plan (interferers, band, level threshold, ifShift)
  * @returns the conflicts, in the order of the interferers
- * @example unfixableConflicts(context)[0]?.sentence // 'ADJ-UP (neighbour) lies 0.2 MHz from the wanted band …'
+ * @example unfixableConflicts(sContext) // []
  */
 export function unfixableConflicts(context: PlanContext): Conflict[] {
   const shifts = context.ifShift ? [context.ifShift.low, context.ifShift.high] : [0];

@@ -34,7 +34,7 @@ export interface LinearSlack {
  * @param range the nominal rates allowed (drift ends inside the interval), Hz
  * @param tolerancePpm ± drift of the rate, ppm
  * @returns the slacks, t ≤ slope·r + offset, Hz
- * @example linearSlacks(band, guard, 2, [], { low: 30e6, high: 40e6 }, ppm(0)).length // 4: two zone edges at each drift end
+ * @example linearSlacks(handWorked.band, handWorked.guard, 2, [], { low: 30e6, high: 40e6 }, ppm(0)).length // 4 (two zone edges at each drift end)
  */
 export function linearSlacks(band: Band, guard: Guard, zone: number, blocking: readonly Interferer[], range: Interval, tolerancePpm: Ppm): LinearSlack[] {
   const { down, up } = driftFactors(tolerancePpm);
@@ -86,6 +86,7 @@ export interface LpAnswer {
  * @param unit scale for t, Hz (e.g. the wanted bandwidth)
  * @returns the chosen rate and the worst slack t* it keeps, or null when the
  *   LP is infeasible
+ * @example maximiseWorstSlack([{ slope: 1, offset: -5 }, { slope: -1, offset: 9 }], { low: 0, high: 10 }, hz(1)) // { rate: 7, worstSlack: 2 } (where r − 5 = 9 − r)
  */
 export function maximiseWorstSlack(slacks: readonly LinearSlack[], range: Interval, unit: Hz): LpAnswer | null {
   const first = solveStage(slacks, [], range, unit);

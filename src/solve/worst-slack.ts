@@ -17,7 +17,7 @@ import type { Interferer } from '../interferers/interferer.js';
  * @param rate nominal rate, Hz
  * @param tolerancePpm ± drift, ppm
  * @returns the least slack, Hz (negative: a check fails)
- * @example worstSlackAt(handWorked, blocking, hz(26e6), ppm(0)) // equals evaluateRate(handWorked, hz(26e6), ppm(0)).worstSlack
+ * @example worstSlackAt(handWorked, blocking, hz(26e6), ppm(0)) // 1e6 (as evaluateRate(handWorked, hz(26e6), ppm(0)).worstSlack)
  */
 export function worstSlackAt(context: PlanContext, blocking: readonly Interferer[], rate: Hz, tolerancePpm: Ppm): Hz {
   const drift = driftRange(rate, tolerancePpm);

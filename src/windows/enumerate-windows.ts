@@ -23,7 +23,7 @@ const NO_LIMITS: RateLimits = { minRate: hz(0), maxRate: hz(Infinity) };
  * @throws RangeError for a band without width (the zone count would be unbounded),
  *   or when the limits hold more than MOST_WINDOWS windows (callers refuse
  *   such a question up front with windowCount, naming what to narrow)
- * @example rateWindows({ low: 10e3, high: 14e3 }) // zones 1–3: [28k, ∞), [14k, 20k], [9.333k, 10k]
+ * @example rateWindows({ low: hz(10e3), high: hz(14e3) }) // [{ zone: 1, minRate: 28e3, maxRate: Infinity }, { zone: 2, minRate: 14e3, maxRate: 20e3 }, { zone: 3, minRate: 9333.333, maxRate: 10e3 }]
  */
 export function rateWindows(band: Band, limits: RateLimits = NO_LIMITS): RateWindow[] {
   const width = band.high - band.low;

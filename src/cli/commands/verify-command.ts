@@ -19,7 +19,7 @@ export interface VerifyOptions {
  * @param program the ifzone program
  * @param io where the command writes
  * @param settle receives the exit status
- * @example addVerifyCommand(program, io, settle) // then: ifzone verify scenarios/heron-base.json --rate 184.32M
+ * @example addVerifyCommand(new Command(), io, () => undefined) // undefined (then: ifzone verify scenarios/heron-base.json --rate 184.32M)
  */
 export function addVerifyCommand(program: Command, io: Io, settle: (code: ExitCode) => void): void {
   program

@@ -25,7 +25,11 @@ export interface PlaneAnswer {
   readonly worstSlack: number;
 }
 
-/** The value of a slack at (r, δ), Hz. */
+/**
+ * The value of a slack at (r, δ), Hz.
+ *
+ * @example slackAt({ rate: 1, shift: -1, offset: -25e6 }, hz(30e6), hz(1e6)) // 4e6
+ */
 export function slackAt(slack: PlaneSlack, rate: Hz, shift: Hz): Hz {
   return hz(slack.rate * rate + slack.shift * shift + slack.offset);
 }
@@ -45,7 +49,7 @@ export function slackAt(slack: PlaneSlack, rate: Hz, shift: Hz): Hz {
  * @param box rates and shifts, Hz (either may have zero width)
  * @param unit scale for t, Hz (e.g. the wanted bandwidth)
  * @returns the point and t*, or null when the held slacks leave nothing in the box
- * @example maximisePlaneSlack([{ rate: 1, shift: -1, offset: -25e6 }, { rate: -1, shift: 1, offset: 32.5e6 }], [], box, 4e6) // r − δ = 28.75 MHz, t* = 3.75 MHz
+ * @example maximisePlaneSlack([{ rate: 1, shift: -1, offset: -25e6 }, { rate: -1, shift: 1, offset: 32.5e6 }], [], { rate: { low: 25e6, high: 35e6 }, shift: { low: -2e6, high: 2e6 } }, hz(4e6)).worstSlack // 3.75e6 (r − δ = 28.75 MHz)
  */
 export function maximisePlaneSlack(bounds: readonly PlaneSlack[], held: readonly PlaneSlack[], box: PlaneBox, unit: Hz): PlaneAnswer | null {
   const first = solveStage(bounds, held, box, unit);

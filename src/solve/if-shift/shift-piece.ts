@@ -68,7 +68,7 @@ export interface PieceInputs {
  * @param zone n ≥ 1
  * @param seed δ0 and r0, Hz: where each image's side is read
  * @returns the pieces whose box leaves a rate in the zone (possibly none)
- * @example shiftPieces(inputs, 2, { shift: 0, rate: 33e6 })[0]?.box.rate // the zone-2 rates over the whole shift range
+ * @example shiftPieces({ band: heronNarrow.wanted, guard: heronNarrow.guard, limits: { minRate: hz(40e6), maxRate: hz(250e6) }, interferers: [], blocking: [], shifts: { low: -2e6, high: 2e6 }, tolerancePpm: ppm(0) }, 2, { shift: hz(0), rate: hz(200e6) }).length // 1
  */
 export function shiftPieces(inputs: PieceInputs, zone: number, seed: { readonly shift: Hz; readonly rate: Hz }): ShiftPiece[] {
   const range = inputs.shifts;

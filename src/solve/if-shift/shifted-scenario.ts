@@ -10,7 +10,7 @@ import type { Scenario } from '../../scenario/scenario.js';
  * @param scenario the validated scenario
  * @param shift δ, Hz (any sign)
  * @returns a new scenario; the input is not changed
- * @example shiftedScenario(s, hz(-2e6)).wanted // 137.5–142.5 MHz becomes 135.5–140.5 MHz
+ * @example shiftedScenario(s, hz(-2e6)).wanted // { low: 63e6, high: 73e6 }
  */
 export function shiftedScenario(scenario: Scenario, shift: Hz): Scenario {
   const move = <T extends { readonly low: Hz; readonly high: Hz }>(band: T): T => ({ ...band, low: (band.low + shift) as Hz, high: (band.high + shift) as Hz });
@@ -28,7 +28,7 @@ export function shiftedScenario(scenario: Scenario, shift: Hz): Scenario {
  * @param scenario the validated scenario
  * @param range the shift range, Hz, low ≤ high
  * @returns a new scenario (ifShift null)
- * @example sweptScenario(s, { low: -2e6, high: 2e6 }).neighbours[0] // 143–148 MHz becomes 141–150 MHz
+ * @example sweptScenario(heronNarrow, { low: hz(-2e6), high: hz(2e6) }).neighbours[0] // { low: 141e6, high: 150e6 } (143–148 MHz swept ±2 MHz)
  */
 export function sweptScenario(scenario: Scenario, range: { readonly low: Hz; readonly high: Hz }): Scenario {
   const widen = <T extends { readonly low: Hz; readonly high: Hz }>(band: T): T => ({ ...band, low: (band.low + range.low) as Hz, high: (band.high + range.high) as Hz });
