@@ -69,8 +69,12 @@ describe('doc examples under src/', () => {
   }
 });
 
-/** Evaluates an expression, or statements `a; b; expression` whose last is the result, with the names in scope. */
-function evaluate(code: string, names: Record<string, unknown>): unknown {
+/**
+ * Evaluates an expression, or statements `a; b; expression` whose last is the
+ * result, with the names in scope. TypeScript's non-null `x!` is read as `x`.
+ */
+function evaluate(typed: string, names: Record<string, unknown>): unknown {
+  const code = typed.replace(/([\w)\]])!(?=[.[),\s]|$)/g, '$1');
   const keys = Object.keys(names).filter((k) => /^[A-Za-z_$][\w$]*$/.test(k));
   const run = (body: string) => new Function(...keys, body)(...keys.map((k) => names[k]));
   const statements = /^const \w+ = [^;]*;\s/.test(code) ? code.split(/;\s+/) : [code];
