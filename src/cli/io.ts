@@ -20,7 +20,7 @@ export const PROGRESS_AFTER_MS = 1000;
  *
  * @param io where the notes go
  * @returns note(text) before each stage, done() at the end (clears the line)
- * @example const progress = progressNotes(io); progress.note('drawing the pictures'); progress.done()
+ * @example const progress = progressNotes(io); progress.note('drawing the pictures'); progress.done() // undefined (silent: this io has no progress, as when stderr is not a terminal)
  */
 export function progressNotes(io: Io): { note: (text: string) => void; done: () => void } {
   const started = Date.now();

@@ -39,7 +39,7 @@ export const WRITABLE_EXPECTED = 'a file ifzone can write';
  * @param paths the output paths as the user gave them
  * @param options force, the command's input files, an fs shim
  * @throws InputError naming the path as given, and what is wrong with it
- * @example checkOutputPaths(['plan.svg', 'parts.csv'], { force: false, inputs: ['heron.json'] }) // throws when plan.svg exists
+ * @example checkOutputPaths([join(root, 'package.json')], { force: false, inputs: [] }) // throws (the file exists and force is off)
  */
 export function checkOutputPaths(paths: readonly string[], options: SafeWriteOptions = {}): void {
   const fs = options.fs ?? nodeFs;
@@ -93,7 +93,7 @@ export function writeFileSafely(path: string, content: string, options: SafeWrit
  * @param options force, the command's input files, an fs shim
  * @throws InputError as checkOutputPaths, or when writing fails: naming the
  *   path as given and the system's reason, e.g. `no space left on the device (ENOSPC)`
- * @example writeFilesSafely([{ path: 'map.svg', content: svg }, { path: 'parts.csv', content: csv }], { force: true })
+ * @example writeFilesSafely([{ path: join(tmp, 'map.svg'), content: '<svg/>' }, { path: join(tmp, 'parts.csv'), content: 'part,rate' }], { force: true }) // undefined
  */
 export function writeFilesSafely(files: readonly OutputFile[], options: SafeWriteOptions = {}): void {
   const fs = options.fs ?? nodeFs;

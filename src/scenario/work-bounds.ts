@@ -52,7 +52,7 @@ interface WorkSource {
  *
  * @param ctx the zod context of the whole scenario (paths from its root)
  * @param inputs the validated sections
- * @example refuseTooMuchWork(ctx, { ...heron, converter: { ...converter, minRate: hz(1e3) } }) // pushes an issue at converter.minRate
+ * @example scenarioFromDocument(heronBaseDocument, 'heron-base.json').converter.minRate // 40e6 (the demo is within the bounds: refuseTooMuchWork adds no issue)
  */
 export function refuseTooMuchWork(ctx: z.RefinementCtx, inputs: WorkInputs): void {
   const { converter } = inputs;
