@@ -9,7 +9,7 @@ import { packLabels, textWidth } from './label-packing.js';
 import { boxSwatch, legendRows } from './legend.js';
 import { coveringTicks, linearTicks } from './nice-ticks.js';
 import { FILL } from './patterns.js';
-import { linearScale } from './scale.js';
+import { linearScale, type Scale } from './scale.js';
 import { element, textElement } from './svg-element.js';
 import { withMinus } from './typography.js';
 import { svgDocument, type Figure } from './svg-document.js';
@@ -41,31 +41,10 @@ export function spectrumFigure(report: PlanReport, candidateLabel: string): Figu
   const candidate = findCandidate(report, candidateLabel);
   const half = candidate.rate / 2;
   const checks = candidate.checks;
-  const threshold = checks.length > 0 ? checks[0]!.level + checks[0]!.levelMargin : null;
-  const levels = [...checks.map((c) => c.level).filter(Number.isFinite), ...(threshold === null ? [] : [threshold])];
-  // The level axis runs from 0 dBFS (or the strongest level) down past the weakest, at least to −100 dBFS,
-  // but no further than 60 dB below the blocking threshold: products far below it (a third-order product of
-  // two filtered blockers can compute to −250 dBFS) only squash the levels that matter; they are drawn as
-  // stubs on the floor and keep their figures in the table below.
-  const floor = threshold === null ? -Infinity : threshold - 60;
-  const levelTicks = coveringTicks(Math.max(Math.min(-100, ...levels) - 5, floor), Math.max(0, ...levels), 8);
-  const bottom = levelTicks.values[0]!;
-  const top = levelTicks.values[levelTicks.values.length - 1]!;
+  const { threshold, levelTicks, bottom, top } = levelAxis(checks);
   const plotX: readonly [number, number] = [LEFT, WIDTH - RIGHT];
   const x = linearScale([0, half], plotX);
-
-  // Labels above the plot: failing first, then blocking by slack, then the strongest of the rest.
-  const order = checks.map((c, i) => ({ c, key: i + 1 })).sort((a, b) => priority(a.c) - priority(b.c) || slack(a.c) - slack(b.c) || b.c.level - a.c.level);
-  const placed = packLabels(
-    order.flatMap(({ c, key }) => {
-      const widest = [...c.alias].sort((p, q) => q[1] - q[0] - (p[1] - p[0]))[0];
-      if (!widest) return [];
-      return [{ x: x.at((widest[0] + widest[1]) / 2), text: withMinus(`${key} ${c.label}, ${trimmed(c.level, 3)} dBFS, ${formatFrequency(c.margin, 3)}`), short: String(key), item: { c, key, at: (widest[0] + widest[1]) / 2 } }];
-    }),
-    LABEL_ROWS,
-    plotX,
-    SMALL,
-  );
+  const placed = checkLabels(checks, x, plotX);
   const rows = placed.reduce((n, p) => Math.max(n, p.row + 1), 0);
   const plotTop = 64 + rows * LABEL_ROW + 6;
   const plotBottom = plotTop + PLOT_HEIGHT;
@@ -78,26 +57,76 @@ export function spectrumFigure(report: PlanReport, candidateLabel: string): Figu
   const drawOrder = checks.map((c, i) => ({ c, key: i + 1 })).sort((a, b) => b.c.level - a.c.level);
   for (const { c } of drawOrder) parts.push(bars(c, x, y, bottom));
   parts.push(wanted.outline);
-  if (threshold !== null) {
-    const text = withMinus(`blocking threshold ${trimmed(threshold, 4)} dBFS`);
-    const w = textWidth(text, SMALL) + 6;
-    parts.push(element('line', { x1: LEFT, y1: y.at(threshold), x2: WIDTH - RIGHT, y2: y.at(threshold), stroke: '#000', 'stroke-width': 1, 'stroke-dasharray': '8 3 2 3' }));
-    parts.push(element('rect', { x: WIDTH - RIGHT - 2 - w, y: y.at(threshold) + 2, width: w, height: 12, fill: '#fff', opacity: 0.9 }));
-    parts.push(textElement(WIDTH - RIGHT - 2 - w / 2, y.at(threshold) + 11, text, { 'text-anchor': 'middle', 'font-size': SMALL }));
-  }
+  if (threshold !== null) parts.push(thresholdLine(threshold, y));
   parts.push(marks(candidate, x, plotTop, plotBottom));
-  for (const p of placed) {
-    const baseline = 64 + (p.row + 1) * LABEL_ROW - 2;
-    const barTop = y.at(Math.max(Math.min(p.item.c.level, top), bottom));
-    const at = x.at(p.item.at);
-    parts.push(element('line', { x1: at, y1: baseline + 2, x2: at, y2: barTop, stroke: '#555', 'stroke-width': 0.5, 'stroke-dasharray': '1 2' }));
-    parts.push(textElement(p.x, baseline, p.text, { 'text-anchor': 'middle', 'font-size': SMALL, 'font-weight': p.item.c.pass ? undefined : 'bold' }));
-  }
+  parts.push(labelLeaders(placed, x, y, bottom, top));
   parts.push(verticalAxis(y, levelTicks.values.map((v) => ({ value: v, label: trimmed(v, 6) })), LEFT, 'level (dBFS)', WIDTH - RIGHT));
   const unit = frequencyUnit(half);
   const freqTicks = linearTicks(0, half, 8).values.map((v) => ({ value: v, label: inUnit(v, unit) }));
   parts.push(horizontalAxis(x, freqTicks, plotBottom, `frequency after sampling (${unit.unit})`));
-  let cursor = plotBottom + 56;
+  const below = legendAndTable(checks, plotBottom + 56);
+  parts.push(below.markup);
+  return { width: WIDTH, height: Math.ceil(below.bottom + 12), title: `Spectrum after sampling at ${candidate.label}: ${report.scenario}`, body: parts.join('') };
+}
+
+/**
+ * The level axis: from 0 dBFS (or the strongest level) down past the weakest,
+ * at least to −100 dBFS, but no further than 60 dB below the blocking
+ * threshold: products far below it (a third-order product of two filtered
+ * blockers can compute to −250 dBFS) only squash the levels that matter; they
+ * are drawn as stubs on the floor and keep their figures in the table below.
+ */
+function levelAxis(checks: ReportedCandidate['checks']): { threshold: number | null; levelTicks: ReturnType<typeof coveringTicks>; bottom: number; top: number } {
+  const threshold = checks.length > 0 ? checks[0]!.level + checks[0]!.levelMargin : null;
+  const levels = [...checks.map((c) => c.level).filter(Number.isFinite), ...(threshold === null ? [] : [threshold])];
+  const floor = threshold === null ? -Infinity : threshold - 60;
+  const levelTicks = coveringTicks(Math.max(Math.min(-100, ...levels) - 5, floor), Math.max(0, ...levels), 8);
+  return { threshold, levelTicks, bottom: levelTicks.values[0]!, top: levelTicks.values[levelTicks.values.length - 1]! };
+}
+
+/** Labels above the plot, packed in rows: failing first, then blocking by slack, then the strongest of the rest. */
+function checkLabels(checks: ReportedCandidate['checks'], x: Scale, plotX: readonly [number, number]) {
+  const order = checks.map((c, i) => ({ c, key: i + 1 })).sort((a, b) => priority(a.c) - priority(b.c) || slack(a.c) - slack(b.c) || b.c.level - a.c.level);
+  return packLabels(
+    order.flatMap(({ c, key }) => {
+      const widest = [...c.alias].sort((p, q) => q[1] - q[0] - (p[1] - p[0]))[0];
+      if (!widest) return [];
+      return [{ x: x.at((widest[0] + widest[1]) / 2), text: withMinus(`${key} ${c.label}, ${trimmed(c.level, 3)} dBFS, ${formatFrequency(c.margin, 3)}`), short: String(key), item: { c, key, at: (widest[0] + widest[1]) / 2 } }];
+    }),
+    LABEL_ROWS,
+    plotX,
+    SMALL,
+  );
+}
+
+/** The blocking threshold: a dash-dot line across the plot, named at its right end. */
+function thresholdLine(threshold: number, y: Scale): string {
+  const text = withMinus(`blocking threshold ${trimmed(threshold, 4)} dBFS`);
+  const w = textWidth(text, SMALL) + 6;
+  return (
+    element('line', { x1: LEFT, y1: y.at(threshold), x2: WIDTH - RIGHT, y2: y.at(threshold), stroke: '#000', 'stroke-width': 1, 'stroke-dasharray': '8 3 2 3' }) +
+    element('rect', { x: WIDTH - RIGHT - 2 - w, y: y.at(threshold) + 2, width: w, height: 12, fill: '#fff', opacity: 0.9 }) +
+    textElement(WIDTH - RIGHT - 2 - w / 2, y.at(threshold) + 11, text, { 'text-anchor': 'middle', 'font-size': SMALL })
+  );
+}
+
+/** Each placed label in its row, with a dotted leader down to the top of its bar (failing checks in bold). */
+function labelLeaders(placed: ReturnType<typeof checkLabels>, x: Scale, y: Scale, bottom: number, top: number): string {
+  return placed
+    .map((p) => {
+      const baseline = 64 + (p.row + 1) * LABEL_ROW - 2;
+      const barTop = y.at(Math.max(Math.min(p.item.c.level, top), bottom));
+      const at = x.at(p.item.at);
+      return (
+        element('line', { x1: at, y1: baseline + 2, x2: at, y2: barTop, stroke: '#555', 'stroke-width': 0.5, 'stroke-dasharray': '1 2' }) +
+        textElement(p.x, baseline, p.text, { 'text-anchor': 'middle', 'font-size': SMALL, 'font-weight': p.item.c.pass ? undefined : 'bold' })
+      );
+    })
+    .join('');
+}
+
+/** The legend and the table of checks under the plot, from `top`; returns the markup and where it ends. */
+function legendAndTable(checks: ReportedCandidate['checks'], top: number): { markup: string; bottom: number } {
   const legend = legendRows(
     [
       { swatch: boxSwatch(FILL.wanted), text: 'wanted image' },
@@ -107,15 +136,12 @@ export function spectrumFigure(report: PlanReport, candidateLabel: string): Figu
       { swatch: boxSwatch('none', true), text: 'below the threshold (does not block)' },
     ],
     24,
-    cursor,
+    top,
     WIDTH - RIGHT,
   );
-  parts.push(legend.markup);
-  cursor += legend.height + 10;
-  const table = checkTable(checks, 24, cursor);
-  parts.push(table.markup);
-  cursor += table.height;
-  return { width: WIDTH, height: Math.ceil(cursor + 12), title: `Spectrum after sampling at ${candidate.label}: ${report.scenario}`, body: parts.join('') };
+  const tableTop = top + legend.height + 10;
+  const table = checkTable(checks, 24, tableTop);
+  return { markup: legend.markup + table.markup, bottom: tableTop + table.height };
 }
 
 /**

@@ -2,7 +2,8 @@ import { db, hz, ppm, type Db, type Hz } from '../units/quantities.js';
 import { formatFrequency } from '../units/format-frequency.js';
 import type { Scenario } from '../scenario/scenario.js';
 import { contextFromScenario } from '../solve/context-from-scenario.js';
-import { evaluateRate } from '../solve/evaluate-rate.js';
+import { evaluateRate, type CheckResult } from '../solve/evaluate-rate.js';
+import type { Interferer } from '../interferers/interferer.js';
 import { levelThreshold } from '../interferers/level-threshold.js';
 import { foldExtent } from '../math/fold-extent.js';
 import { PAPER_DESIGN_CAUTION } from '../plan/caution.js';
@@ -11,18 +12,14 @@ import { limitText } from '../solve/limited-by.js';
 import { binDistance, foldCycles } from '../capture/coherent-bins.js';
 import { captureTones, movedScenario, type CaptureRecord, type CaptureTone } from '../capture/capture-tones.js';
 import { checkFamily, type LineFamily } from '../capture/check-families.js';
-import { applyPolynomial } from '../capture/converter-polynomial.js';
 import { converterCoefficients } from '../capture/converter-model.js';
-import { familyLines, inputIndex } from '../capture/family-lines.js';
-import { applyCoreGains, coreMismatch, type CoreMismatch } from '../capture/interleave-mismatch.js';
+import { familyLines, inputIndex, type InputIndex } from '../capture/family-lines.js';
+import { coreMismatch, type CoreMismatch } from '../capture/interleave-mismatch.js';
+import { simulateCapture, type SimulatedConverter } from '../capture/simulate-capture.js';
 import { FIND_ABOVE_FLOOR, judgeLine, SEARCH_BINS, type Measurement } from './judge-line.js';
 import { enumerateProducts, orderSupremums, productAmplitude, productBound } from '../capture/mixing-products.js';
 import { expectedNoiseLevel } from '../capture/noise-level.js';
 import { imageKey, modelComponents, type ModelComponent } from '../capture/model-components.js';
-import { quantise } from '../capture/quantiser.js';
-import { seededUniform } from '../capture/seeded-random.js';
-import { findPeaks, levelSpectrum } from '../capture/capture-spectrum.js';
-import { addSkewedTones, addTones, phaseTable } from '../capture/tone-synthesis.js';
 import { chooseLayout, type ComponentTemplate } from '../capture/tone-layout.js';
 import { blackmanHarris } from '../capture/window.js';
 import { CONTRADICTING, type PeakRow, type PredictionRow, type ToneRow, type UnderFloor, type VerifyResult } from './verify-result.js';
@@ -39,11 +36,8 @@ export interface CaptureSettings {
   readonly tolerance?: Db;
 }
 
-/** Peaks count this far above the median bin, dB: noise bins (exponentially distributed power) pass it about once in 3·10⁹. */
-export const FLOOR_ABOVE_MEDIAN = 15;
 /** Products weaker than the median bin by this much are left out of the model's list, dB. */
 const CUTOFF_BELOW_MEDIAN = 30;
-const DITHER_SEED = 0x5eed;
 /** Up to this many lines in one check, the strongest of those under the floor is computed exactly for the summary; beyond, only counted. */
 const UNDER_FLOOR_EXACT = 64;
 
@@ -96,100 +90,152 @@ export function verifyCaptureWithSpectrum(scenario: Scenario, settings: CaptureS
   if (!(Number.isInteger(wantedTones) && wantedTones >= 1)) throw new RangeError(`at least one wanted tone, got ${wantedTones}`);
   const { rate } = settings;
   const record: CaptureRecord = { rate, samples, wantedTones };
-  const binWidth = rate / samples;
   const mismatch = scenario.converter.interleave ? coreMismatch(scenario.converter.interleave) : null;
 
   // The plan as written, and re-derived at the frequencies the record can hold.
   const plan = planAtRate(scenario, rate, ppm(0));
-  const moved = movedScenario(scenario, record);
-  const movedContext = contextFromScenario(moved);
+  const movedContext = contextFromScenario(movedScenario(scenario, record));
   const checks = evaluateRate(movedContext, rate, ppm(0)).checks;
   const claimed = new Set<number>();
   const firstTones = captureTones(scenario, record, { wanted: [], neighbours: [] });
   const families = movedContext.interferers.map((i) => checkFamily(i, firstTones, samples, claimed));
-  const coefficients = converterCoefficients(scenario);
+  const converter = { bits: scenario.converter.bits, coefficients: converterCoefficients(scenario), mismatch };
   const window = blackmanHarris(samples);
   const expectedNoise = expectedNoiseLevel(scenario.converter.bits, samples, window.noiseBandwidthBins, true);
-  const tones = captureTones(scenario, record, chooseLayout(scenario, record, layoutComponents(firstTones, families, coefficients, mismatch, record, expectedNoise)));
+  const tones = captureTones(scenario, record, chooseLayout(scenario, record, layoutComponents(firstTones, families, converter.coefficients, mismatch, record, expectedNoise)));
 
-  // The capture.
-  const capture = new Float64Array(samples);
-  const table = phaseTable(samples);
-  // The input signals, sampled by M cores at their own instants (a timing mismatch), through the polynomial, each core at its own gain.
-  if (mismatch && mismatch.skews.some((tau) => tau !== 0)) addSkewedTones(capture, tones.filter((t) => t.input), rate, mismatch.skews, table);
-  else addTones(capture, tones.filter((t) => t.input), table);
-  applyPolynomial(capture, coefficients);
-  if (mismatch) applyCoreGains(capture, mismatch.gains);
-  const clippedSamples = quantise(capture, scenario.converter.bits, seededUniform(DITHER_SEED));
-  addTones(capture, tones.filter((t) => !t.input), table);
-  const spectrum = levelSpectrum(capture, window);
-  const floor = spectrum.medianLevel + FLOOR_ABOVE_MEDIAN;
-  const peaks = findPeaks(spectrum.levels, floor);
-
-  // The model's components, and each line of the plan judged.
+  // The capture, the model's components, each line of the plan judged, and the peaks no line accounts for.
+  const capture = simulateCapture(tones, samples, rate, converter, window);
   const index = inputIndex(tones);
-  const amplitudes = index.inputs.map((i) => tones[i]!.amplitude);
-  const model = modelComponents(tones, index, coefficients, samples, 10 ** (Math.max(spectrum.medianLevel - CUTOFF_BELOW_MEDIAN, -240) / 20), mismatch ? { mismatch, rate } : null);
-  const components = model.components;
+  const cutoff = 10 ** (Math.max(capture.spectrum.medianLevel - CUTOFF_BELOW_MEDIAN, -240) / 20);
+  const model = modelComponents(tones, index, converter.coefficients, samples, cutoff, mismatch ? { mismatch, rate } : null);
   const threshold = levelThreshold(scenario);
   const edgeKeys = new Set(tones.flatMap((t, i) => (!t.input && (t.cycles === 0 || foldCycles(t.cycles, samples) === samples / 2) ? [`t:${i}`] : [])));
-  const measurement: Measurement = { levels: spectrum.levels, peaks, floor, threshold, tolerance, components, edgeKeys };
-  const predictions: PredictionRow[] = [];
-  const underFloor: UnderFloor[] = [];
-  const notSimulated: string[] = [];
-  const lineKeys = new Set<string>();
+  const measurement: Measurement = { levels: capture.spectrum.levels, peaks: capture.peaks, floor: capture.floor, threshold, tolerance, components: model.components, edgeKeys };
+  const judged = judgeChecks({ checks, interferers: movedContext.interferers, families, tones, index, converter, record }, measurement);
+  const image = plan.image ? [[plan.image.low, plan.image.high] as const] : foldExtent(scenario.wanted.low, scenario.wanted.high, rate).map((s) => [hz(s.low), hz(s.high)] as const);
+  const marginAt = peakMargins(judged.predictions, checks, scenario.requirements.margin);
+  const peaks = sortPeaks(measurement, judged, image, record, marginAt);
+  const contradictions = contradictionWords(judged.predictions, peaks, threshold, marginAt);
+  const result: VerifyResult = {
+    scenario: scenario.name,
+    rate,
+    samples,
+    binWidth: hz(rate / samples),
+    window: { name: window.name, coherentGain: window.coherentGain, noiseBandwidthBins: window.noiseBandwidthBins },
+    wantedTones,
+    converter: { bits: scenario.converter.bits, coefficients: converter.coefficients, dither: 'uniform, one step peak to peak, fixed seed', clippedSamples: capture.clippedSamples },
+    levels: { threshold, noiseMedian: db(capture.spectrum.medianLevel), floor: db(capture.floor), tolerance },
+    margin: scenario.requirements.margin,
+    wantedImage: image,
+    tones: tones.map((t) => toneRow(t, samples)),
+    predictions: judged.predictions,
+    underFloor: judged.underFloor,
+    unlisted: peaks.unlisted,
+    intrusions: peaks.intrusions,
+    plan: { pass: plan.pass, limitedBy: limitText(plan.limitedBy), limitedByKind: plan.limitedBy.kind, worstMargin: plan.worstMargin },
+    notSimulated: judged.notSimulated,
+    contradictions,
+    consistent: contradictions.length === 0,
+    modelComplete: model.complete,
+    compared: comparedText(wantedTones, tolerance, capture.floor, threshold, model.complete, mismatch !== null),
+    caution: `${PAPER_DESIGN_CAUTION} A simulated capture is still a paper check: it is built from the same stated figures as the plan, so confirm the plan by measurement on hardware.`,
+  };
+  return { result, levels: capture.spectrum.levels };
+}
+
+/** What the lines of the plan are drawn from: the checks at the moved scenario, their families, the record's tones and the converter. */
+interface PlanLines {
+  readonly checks: readonly CheckResult[];
+  readonly interferers: readonly Interferer[];
+  readonly families: readonly LineFamily[];
+  readonly tones: readonly CaptureTone[];
+  readonly index: InputIndex;
+  readonly converter: SimulatedConverter;
+  readonly record: CaptureRecord;
+}
+
+/** Each check's lines judged against the capture, the lines under the floor summarised per check, and the checks nothing stands for. */
+interface JudgedChecks {
+  readonly predictions: PredictionRow[];
+  readonly underFloor: UnderFloor[];
+  readonly notSimulated: string[];
+  /** The model components that some line of the plan names. */
+  readonly lineKeys: ReadonlySet<string>;
+}
+
+function judgeChecks(lines: PlanLines, measurement: Measurement): JudgedChecks {
+  const { tones, index, converter, record } = lines;
+  const { coefficients, mismatch } = converter;
+  const { rate, samples } = record;
+  const amplitudes = index.inputs.map((i) => tones[i]!.amplitude);
   const bounds = orderSupremums(coefficients, amplitudes.reduce((sum, a) => sum + a, 0));
-  const lookedFor = 10 ** ((floor + FIND_ABOVE_FLOOR) / 20);
-  checks.forEach((check, i) => {
-    const interferer = movedContext.interferers[i]!;
-    const family = families[i]!;
-    const lines = familyLines(family, tones, index, samples);
+  const lookedFor = 10 ** ((measurement.floor + FIND_ABOVE_FLOOR) / 20);
+  const judged: JudgedChecks = { predictions: [], underFloor: [], notSimulated: [], lineKeys: new Set<string>() };
+  lines.checks.forEach((check, i) => {
+    const interferer = lines.interferers[i]!;
+    const family = lines.families[i]!;
+    const drafts = familyLines(family, tones, index, samples);
     // A family whose every product is DC (the band's own differences with one wanted tone: a tone less itself) is simulated, with nothing to see.
     const simulated = family.kind === 'mixing' || family.kind === 'interleave image';
-    if (lines.length === 0 && !simulated) notSimulated.push(check.label);
+    if (drafts.length === 0 && !simulated) judged.notSimulated.push(check.label);
     let under = { lines: 0, strongest: -Infinity };
-    for (const line of lines) {
-      lineKeys.add(line.component);
+    for (const line of drafts) {
+      (judged.lineKeys as Set<string>).add(line.component);
       // An image is its source product times the image factor at the source's frequency.
       const factor = line.sourceCycles === undefined || !mismatch ? 1 : mismatch.imageFactor((line.sourceCycles * rate) / samples);
       const exact = (net: readonly number[]) => factor * Math.abs(productAmplitude(coefficients, amplitudes, net));
       // The cheap bound first: most products of many tones at high orders are far under the floor.
       const amplitude = line.net === null ? tones[line.tone!]!.amplitude : factor * productBound(bounds, amplitudes, line.net) < lookedFor ? null : exact(line.net);
       if (amplitude === null || amplitude < lookedFor) {
-        const strongest = lines.length <= UNDER_FLOOR_EXACT ? 20 * Math.log10(amplitude ?? exact(line.net!)) : -Infinity;
+        const strongest = drafts.length <= UNDER_FLOOR_EXACT ? 20 * Math.log10(amplitude ?? exact(line.net!)) : -Infinity;
         under = { lines: under.lines + 1, strongest: Math.max(under.strongest, strongest) };
         continue;
       }
-      predictions.push(
-        judgeLine(
-          { check, line, width: interferer.low === interferer.high ? 'tone' : 'band', basis: levelBasis(family, wantedTones, mismatch), amplitude, samples, binWidth, bin: foldCycles(line.cycles, samples) },
-          measurement,
-        ),
-      );
+      const width = interferer.low === interferer.high ? 'tone' : 'band';
+      const basis = levelBasis(family, record.wantedTones, mismatch);
+      judged.predictions.push(judgeLine({ check, line, width, basis, amplitude, samples, binWidth: rate / samples, bin: foldCycles(line.cycles, samples) }, measurement));
     }
-    if (under.lines > 0) underFloor.push({ check: check.label, lines: under.lines, strongest: Number.isFinite(under.strongest) ? db(under.strongest) : null });
+    if (under.lines > 0) judged.underFloor.push({ check: check.label, lines: under.lines, strongest: Number.isFinite(under.strongest) ? db(under.strongest) : null });
   });
+  return judged;
+}
 
-  // Peaks no line accounts for, and peaks that crowd the wanted image.
-  const image = plan.image ? [[plan.image.low, plan.image.high] as const] : foldExtent(scenario.wanted.low, scenario.wanted.high, rate).map((s) => [hz(s.low), hz(s.high)] as const);
-  const distance = (f: number) => Math.min(...image.map(([low, high]) => (f < low ? low - f : f > high ? f - high : 0)));
-  const matched = new Set(predictions.flatMap((p) => (p.measured ? [p.measured.bin] : [])));
-  // A peak the plan names keeps that interferer's own margin (the least, when several lines sit there); any other the scenario's.
+/**
+ * The margin a peak must keep from the wanted image, by bin: a peak the plan
+ * names keeps that interferer's own required margin (the least, when several
+ * lines sit there); any other the scenario's.
+ */
+function peakMargins(predictions: readonly PredictionRow[], checks: readonly CheckResult[], scenarioMargin: Hz): (bin: number) => Hz {
   const requiredOf = new Map(checks.map((c) => [c.label, c.requiredMargin] as const));
-  const marginAt = (bin: number) => {
-    const own = predictions.flatMap((p) => (p.measured?.bin === bin ? [requiredOf.get(p.check) ?? scenario.requirements.margin] : []));
-    return own.length > 0 ? Math.min(...own) : scenario.requirements.margin;
+  return (bin) => {
+    const own = predictions.flatMap((p) => (p.measured?.bin === bin ? [requiredOf.get(p.check) ?? scenarioMargin] : []));
+    return own.length > 0 ? hz(Math.min(...own)) : scenarioMargin;
   };
+}
+
+/** Peaks no line accounts for, and peaks above the threshold inside the wanted image or within their margin of it. */
+function sortPeaks(
+  measurement: Measurement,
+  judged: JudgedChecks,
+  image: ReadonlyArray<readonly [Hz, Hz]>,
+  record: CaptureRecord,
+  marginAt: (bin: number) => Hz,
+): { unlisted: PeakRow[]; intrusions: PeakRow[] } {
+  const { samples } = record;
+  const binWidth = record.rate / samples;
+  const distance = (f: number) => Math.min(...image.map(([low, high]) => (f < low ? low - f : f > high ? f - high : 0)));
+  const matched = new Set(judged.predictions.flatMap((p) => (p.measured ? [p.measured.bin] : [])));
   const strictlyInside = (f: number) => image.some(([low, high]) => f > low && f < high);
   const unlisted: PeakRow[] = [];
   const intrusions: PeakRow[] = [];
-  for (const bin of peaks) {
-    const level = db(spectrum.levels[bin]!);
-    const owner = strongestWithin(components, bin, 1, samples);
+  for (const bin of measurement.peaks) {
+    const level = db(measurement.levels[bin]!);
+    const owner = strongestWithin(measurement.components, bin, 1, samples);
     if (owner?.wanted) continue;
     const row = { frequency: hz(bin * binWidth), bin, level, explainedBy: null as string | null, distance: hz(distance(bin * binWidth)) };
-    if (!matched.has(bin) && !(owner && lineKeys.has(owner.key))) {
-      const beside = strongestWithin(components, bin, SEARCH_BINS, samples);
+    if (!matched.has(bin) && !(owner && judged.lineKeys.has(owner.key))) {
+      const beside = strongestWithin(measurement.components, bin, SEARCH_BINS, samples);
       row.explainedBy = owner
         ? `${owner.name} (order ${owner.order}), a product the plan does not list`
         : beside && beside.amplitude >= 10 ** (level / 20)
@@ -197,44 +243,28 @@ export function verifyCaptureWithSpectrum(scenario: Scenario, settings: CaptureS
           : null;
       unlisted.push(row);
     }
-    if (level > threshold && (row.distance < marginAt(bin) || strictlyInside(bin * binWidth))) intrusions.push(row);
+    if (level > measurement.threshold && (row.distance < marginAt(bin) || strictlyInside(bin * binWidth))) intrusions.push(row);
   }
+  return { unlisted, intrusions };
+}
 
-  const contradictions = [
+/** Each reason the capture contradicts the plan, in words. */
+function contradictionWords(
+  predictions: readonly PredictionRow[],
+  peaks: { unlisted: readonly PeakRow[]; intrusions: readonly PeakRow[] },
+  threshold: number,
+  marginAt: (bin: number) => Hz,
+): string[] {
+  return [
     ...predictions.filter((p) => CONTRADICTING.has(p.status)).map((p) => `${p.check} (${p.line}): ${p.status}: ${p.note}`),
-    ...unlisted
+    ...peaks.unlisted
       .filter((u) => u.level > threshold && !(u.explainedBy ?? '').startsWith('window overlap'))
       .map((u) => `${formatFrequency(u.frequency, 7)} at ${u.level.toFixed(1)} dBFS, above the threshold ${threshold.toFixed(1)} dBFS: ${u.explainedBy ?? 'unexplained'}; missed by the plan`),
-    ...intrusions.map((u) => {
+    ...peaks.intrusions.map((u) => {
       const where = u.distance === 0 ? 'lies inside the wanted image' : `lies ${formatFrequency(u.distance, 4)} from the wanted image, inside the ${formatFrequency(marginAt(u.bin))} margin`;
       return `${formatFrequency(u.frequency, 7)} at ${u.level.toFixed(1)} dBFS (${u.explainedBy ?? lineName(predictions, u.bin)}) ${where}: the rate is not clean`;
     }),
   ];
-  const result: VerifyResult = {
-    scenario: scenario.name,
-    rate,
-    samples,
-    binWidth: hz(binWidth),
-    window: { name: window.name, coherentGain: window.coherentGain, noiseBandwidthBins: window.noiseBandwidthBins },
-    wantedTones,
-    converter: { bits: scenario.converter.bits, coefficients, dither: 'uniform, one step peak to peak, fixed seed', clippedSamples },
-    levels: { threshold, noiseMedian: db(spectrum.medianLevel), floor: db(floor), tolerance },
-    margin: scenario.requirements.margin,
-    wantedImage: image,
-    tones: tones.map((t) => toneRow(t, samples)),
-    predictions,
-    underFloor,
-    unlisted,
-    intrusions,
-    plan: { pass: plan.pass, limitedBy: limitText(plan.limitedBy), limitedByKind: plan.limitedBy.kind, worstMargin: plan.worstMargin },
-    notSimulated,
-    contradictions,
-    consistent: contradictions.length === 0,
-    modelComplete: model.complete,
-    compared: comparedText(wantedTones, tolerance, floor, threshold, model.complete, mismatch !== null),
-    caution: `${PAPER_DESIGN_CAUTION} A simulated capture is still a paper check: it is built from the same stated figures as the plan, so confirm the plan by measurement on hardware.`,
-  };
-  return { result, levels: spectrum.levels };
 }
 
 /**
