@@ -72,7 +72,7 @@ export function meetsOpen(range: Interval, open: readonly Interval[]): boolean {
  * @param closed the interval kept from, low ≤ high
  * @param open removed open intervals (low, high), any order
  * @returns disjoint closed pieces in ascending order, a point as {low: p, high: p}
- * @example subtractOpenKeepingPoints({low: 0, high: 10}, [{low: 2, high: 4}, {low: 4, high: 6}]) // [{0, 2}, {4, 4}, {6, 10}]
+ * @example subtractOpenKeepingPoints({low: 0, high: 10}, [{low: 2, high: 4}, {low: 4, high: 6}]) // [{low: 0, high: 2}, {low: 4, high: 4}, {low: 6, high: 10}]
  */
 export function subtractOpenKeepingPoints(closed: Interval, open: readonly Interval[]): Interval[] {
   const pieces: Interval[] = [];

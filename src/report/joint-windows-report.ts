@@ -48,7 +48,7 @@ export interface JointWindowsReport {
  * @param spacing least distance between two guarded bands' aliases, Hz, ≥ 0
  * @param limits the rate range searched, Hz
  * @returns the report
- * @example jointWindowsReport([{ band: { low: hz(10e3), high: hz(14e3) }, guard: guardBands(hz(0), hz(0)) }, { band: { low: hz(15e3), high: hz(16e3) }, guard: guardBands(hz(0), hz(0)) }], hz(0), { minRate: hz(0), maxRate: hz(Infinity) }).minimumRate // 10000, a single rate
+ * @example jointWindowsReport([{ band: { low: hz(10e3), high: hz(14e3) }, guard: guardBands(hz(0), hz(0)) }, { band: { low: hz(15e3), high: hz(16e3) }, guard: guardBands(hz(0), hz(0)) }], hz(0), { minRate: hz(0), maxRate: hz(Infinity) }).minimumRate // 10000 (a single rate)
  */
 export function jointWindowsReport(bands: readonly { band: Band; guard: Guard }[], spacing: Hz, limits: RateLimits): JointWindowsReport {
   const held = bands.map(({ band, guard }) => ({ band, guard, guardedBand: guardedBand(band, guard) }));

@@ -35,7 +35,7 @@ export function forbiddenRates(interferer: Interferer, band: Band, minRate: Hz, 
  * @param band the band whose images are taken, Hz
  * @param minRate, maxRate the range searched, Hz, 0 < minRate ≤ maxRate < ∞
  * @returns disjoint open intervals, ascending, that meet the range
- * @example closeImageRates({ rateMultiple: 0, low: 3, high: 5 }, hz(0), { low: hz(10), high: hz(14) }, hz(14), hz(20)) // [{ low: 13, high: 19 }]: r − [10, 14] meets 3–5 for 13 < r < 19
+ * @example closeImageRates({ rateMultiple: 0, low: 3, high: 5 }, hz(0), { low: hz(10), high: hz(14) }, hz(14), hz(20)) // [{ low: 13, high: 19 }] (r − [10, 14] meets 3–5 for 13 < r < 19)
  */
 export function closeImageRates(extent: NormalisedExtent, reach: Hz, band: Band, minRate: Hz, maxRate: Hz): Interval[] {
   const found: Interval[] = [];

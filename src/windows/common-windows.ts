@@ -28,7 +28,7 @@ export interface CommonWindow {
  * @returns the common windows ascending by rate; empty when there is none
  * @throws RangeError for a band without width
  * @example commonWindows([{ low: 10e3, high: 14e3 }, { low: 15e3, high: 16e3 }], { minRate: 20e3, maxRate: 40e3 })
- *   // [{ 20000, 20000, zones [2, 2] }, { 28000, 30000, zones [1, 2] }, { 32000, 40000, zones [1, 1] }]
+ *   // [{ minRate: 20000, maxRate: 20000, zones: [2, 2] }, { minRate: 28000, maxRate: 30000, zones: [1, 2] }, { minRate: 32000, maxRate: 40000, zones: [1, 1] }]
  */
 export function commonWindows(bands: readonly Band[], limits: RateLimits): CommonWindow[] {
   let common: CommonWindow[] = [{ minRate: limits.minRate, maxRate: limits.maxRate, zones: [] }];
