@@ -1,3 +1,4 @@
+import type { Hz } from '../units/quantities.js';
 import type { Band } from './band.js';
 import { floorTolerant } from './edge-tolerance.js';
 
@@ -26,9 +27,9 @@ export interface ZoneSpan {
  * @param minRate lowest rate, Hz, ≥ 0
  * @param maxRate highest rate, Hz (may be Infinity)
  * @returns the zone span; its size (last − first + 1) is the work of enumerating it
- * @example zoneSpan({ low: 10e3, high: 14e3 }, 0, Infinity) // { first: 1, last: 3 }
+ * @example zoneSpan({ low: hz(10e3), high: hz(14e3) }, hz(0), hz(Infinity)) // { first: 1, last: 3 }
  */
-export function zoneSpan(band: Band, minRate: number, maxRate: number): ZoneSpan {
+export function zoneSpan(band: Band, minRate: Hz, maxRate: Hz): ZoneSpan {
   const highestZone = Math.max(1, floorTolerant(band.high / (band.high - band.low)));
   const first = Math.max(1, Math.floor((2 * band.high) / maxRate) - 1);
   const last = minRate > 0 ? Math.min(highestZone, Math.floor(1 + (2 * band.low) / minRate) + 1) : highestZone;
@@ -38,9 +39,9 @@ export function zoneSpan(band: Band, minRate: number, maxRate: number): ZoneSpan
 /**
  * How many windows a rate range holds for a band, at most (see zoneSpan).
  *
- * @example windowCount({ low: 10e3, high: 14e3 }, 0, Infinity) // 3
+ * @example windowCount({ low: hz(10e3), high: hz(14e3) }, hz(0), hz(Infinity)) // 3
  */
-export function windowCount(band: Band, minRate: number, maxRate: number): number {
+export function windowCount(band: Band, minRate: Hz, maxRate: Hz): number {
   const { first, last } = zoneSpan(band, minRate, maxRate);
   return Math.max(0, last - first + 1);
 }
