@@ -17,6 +17,14 @@ import { ifzone, refusalLine, scratchDirectory } from '../helpers/run-in-process
  */
 const dir = scratchDirectory('safe-write-hostile');
 const base = new URL('../../scenarios/heron-base.json', import.meta.url).pathname;
+/** A character device node in the scratch folder (root can make one; others skip the case). */
+function scratchDevice(): string {
+  const node = join(dir, 'null-device.svg');
+  if (!fs.existsSync(node)) execFileSync('mknod', ['-m', '666', node, 'c', '1', '3']);
+  return node;
+}
+const canMakeDevices = spawnSync('mknod', ['--version']).status === 0 && process.getuid?.() === 0;
+
 const listing = () => fs.readdirSync(dir).sort();
 
 function refusal(action: () => void): InputError {
@@ -30,8 +38,18 @@ function refusal(action: () => void): InputError {
 }
 
 describe('--force replaces only a regular file', () => {
+  // A device node of our own in the scratch folder (the same device as /dev/null), never the system's
+  // /dev/null: a regression here would otherwise replace the machine's /dev/null with a regular file.
+  it.skipIf(!canMakeDevices)('refuses a character device, and leaves it as it was', () => {
+    const path = scratchDevice();
+    const error = refusal(() => writeFileSafely(path, 'x', { force: true }));
+    expect(error.where).toBe(path);
+    expect(error.expected).toBe('a regular file to replace');
+    expect(error.received).toBe('a character device');
+    expect(fs.statSync(path).isCharacterDevice()).toBe(true);
+  });
+
   it.each([
-    ['a character device', () => '/dev/null', 'a character device'],
     ['a directory', () => fs.mkdtempSync(join(dir, 'folder-')), 'a directory'],
     [
       'a FIFO',
