@@ -128,7 +128,7 @@ function bestOfEvery(context: PlanContext, part: ClockPart): Judged {
   for (const { rate, settings } of partRates(part, context.clocking.clockDividers, context.limits.minRate, context.limits.maxRate)) {
     if (seen.has(rate)) continue;
     seen.add(rate);
-    const evaluation = evaluateRate(context, rate, part.tolerancePpm);
+    const evaluation = evaluateRate(context, rate, part.tolerancePpm, 'blocking');
     if (better(context, evaluation, best?.evaluation)) best = { settings, evaluation };
   }
   return best!;
@@ -160,7 +160,7 @@ function bestPassing(context: PlanContext, part: ClockPart, families: readonly R
       const rateAt = (N: number) => rateOf(part.frequency, { N, M: family.M, D: family.D });
       const answer = bestIntegerN(piece.slacks, { first: span.min, last: span.max, rateAt }, unit, enumerateUpTo);
       const settings = { N: answer.N, M: family.M, D: family.D };
-      const evaluation = evaluateRate(context, rateAt(answer.N), part.tolerancePpm);
+      const evaluation = evaluateRate(context, rateAt(answer.N), part.tolerancePpm, 'blocking');
       recheck(part, piece, evaluation, answer.worstSlack);
       if (better(context, evaluation, best?.evaluation)) best = { settings, evaluation };
       // Within the allowance of this piece's bound, and so of every later piece's: nothing left can do better.
@@ -279,7 +279,7 @@ function nearestFailing(context: PlanContext, set: FeasibleSet, part: ClockPart,
     }
   }
   if (!best) throw new Error(`${part.label}: no rate inside the converter's range`);
-  const evaluation = evaluateRate(context, rateOf(part.frequency, best.settings), part.tolerancePpm);
+  const evaluation = evaluateRate(context, rateOf(part.frequency, best.settings), part.tolerancePpm, 'blocking');
   if (evaluation.worstSlack !== best.slack) {
     throw new Error(`${part.label} at ${evaluation.rate} Hz: the screen found a worst slack of ${best.slack} Hz, the exact evaluator ${evaluation.worstSlack} Hz`);
   }

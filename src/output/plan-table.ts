@@ -97,7 +97,9 @@ function checksSection(candidate: ReportedCandidate): string {
   const inversion = candidate.conjugate ? '; spectrum inverted: conjugate the complex output (or tune the NCO to the negative frequency)' : '';
   const title = `Checks at ${candidate.label} (${formatFrequency(candidate.rate)}): zone edge margin ${formatFrequency(candidate.zoneEdgeMargin, 7)}` +
     (candidate.nco === null ? '' : `; NCO ${formatFrequency(candidate.nco)}${inversion}`) + ':';
-  return title + '\n' + plainTable(['check', 'kind', 'input at this rate', 'aliased to', 'margin', 'level dBFS', 'level margin dB', 'blocks', 'verdict'], rows) + (more > 0 ? `\n(+${more} more in --json)` : '');
+  const omitted = candidate.checksOmitted;
+  const rest = more > 0 ? `\n(+${more} more in --json${omitted > 0 ? `, ${omitted} more with --json --all-checks` : ''})` : omitted > 0 ? `\n(+${omitted} more with --json --all-checks)` : '';
+  return title + '\n' + plainTable(['check', 'kind', 'input at this rate', 'aliased to', 'margin', 'level dBFS', 'level margin dB', 'blocks', 'verdict'], rows) + rest;
 }
 
 function checkRow(check: ReportedCheck): string[] {

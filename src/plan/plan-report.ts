@@ -4,7 +4,7 @@ import { extentMagnitude } from '../math/fold-extent.js';
 import type { Goal } from '../scenario/scenario.js';
 import type { Interferer } from '../interferers/interferer.js';
 import type { PlanContext } from '../solve/plan-context.js';
-import type { Candidate, PlanResult } from './solve-plan.js';
+import { withFullChecks, type Candidate, type PlanResult } from './solve-plan.js';
 import type { CheckResult, RateEvaluation } from '../solve/evaluate-rate.js';
 import type { ShiftSearch } from '../solve/if-shift/best-shift-and-rate.js';
 import { limitText, type LimitKind } from '../solve/limited-by.js';
@@ -13,6 +13,7 @@ import { shiftReport, type ShiftReport } from './shift-report.js';
 import { afterRate, channelSnrWithDriver, type AfterRate, type AfterRateInputs } from '../after-rate/after-rate.js';
 import { unfixableConflicts, type Conflict } from '../solve/unfixable-conflicts.js';
 import type { DerivationSummary } from '../interferers/derive-interferers.js';
+import { listedChecks, listedInterferers, type ChecksListed, type Listing } from './listing.js';
 
 /** An interferer as reported: the solver's own record (extent rateMultiple·r + shiftMultiple·δ + [low, high], level, blocking). */
 export type ReportedInterferer = Interferer;
@@ -67,11 +68,23 @@ export interface ReportedCandidate {
   readonly jitterSnrDb: Db | null;
   /** Combined jitter and quantisation SNR plus the processing gain to the channel, dB; null when not from a part. */
   readonly channelSnrDb: Db | null;
+  /** The checks listed (see checksListed), in the plan's order of interferers. */
   readonly checks: readonly ReportedCheck[];
   /** The filter mask, filter orders, noise folding and down-converter settings at this rate; null when the report was built without them. */
   readonly afterRate: AfterRate | null;
   /** channelSnrDb lowered by the driver's noise folded into the channel, dB; null without both. */
   readonly channelSnrWithDriverDb: Db | null;
+  /**
+   * What `checks` holds: "all" (every interferer, the first-ranked candidate
+   * and, with every check asked for, all of them); "nearest" (the same, cut
+   * to the blocking checks and the non-blocking ones nearest to blocking, a
+   * thousand in all, when the plan has more interferers); "limiting" (a
+   * candidate judged on the blocking interferers only: the check that limits
+   * it, none when the zone edge does).
+   */
+  readonly checksListed: ChecksListed;
+  /** How many interferers have no check listed here. */
+  readonly checksOmitted: number;
 }
 
 /** The solved plan for people and programs alike: the `solve` JSON contract. */
@@ -81,7 +94,12 @@ export interface PlanReport {
   readonly guard: Guard;
   readonly search: { readonly minRate: Hz; readonly maxRate: Hz };
   readonly goal: Goal;
+  /** Every interferer, or past a thousand the blocking ones and the strongest others (see interferersListed). */
   readonly interferers: readonly ReportedInterferer[];
+  /** "all", or "nearest": the blocking interferers and the strongest of the others, a thousand in all. */
+  readonly interferersListed: 'all' | 'nearest';
+  /** How many interferers were derived but are not listed. */
+  readonly interferersOmitted: number;
   readonly windows: PlanResult['windows'];
   readonly feasible: readonly ReportedFeasible[];
   readonly blocked: PlanResult['blocked'];
@@ -110,10 +128,28 @@ export interface PlanReport {
  * @param shift what bestShiftAndRate found, when the scenario has ifShift
  * @param after the scenario's after-rate inputs (afterRateInputs): each candidate then carries its filter mask, filter
  *   orders, noise folding and down-converter settings, and a stated out-of-band level the filter cannot hold back fails it
+ * @param listing bounded (default: at most a thousand interferers and checks
+ *   per candidate) or all
+ * @returns the `solve` report
+ * @example planReport('Heron-4 base', context, solvePlan(context)).candidates[0].checksListed // 'all'
  */
-export function planReport(name: string, context: PlanContext, result: PlanResult, shift: ShiftSearch | null = null, after: AfterRateInputs | null = null): PlanReport {
+export function planReport(
+  name: string,
+  context: PlanContext,
+  result: PlanResult,
+  shift: ShiftSearch | null = null,
+  after: AfterRateInputs | null = null,
+  listing: Listing = 'bounded',
+): PlanReport {
+  const listed = listedInterferers(context.interferers, listing);
+  const byLabel = new Map(context.interferers.map((i) => [i.label, i]));
+  const report = (c: Candidate) => reportedCandidate(context, byLabel, c, after, listing);
   // A candidate the mask fails moves behind the passing ones (stable: the solver's order is kept otherwise).
-  const candidates = result.candidates.map((c) => reportedCandidate(context, c, after)).sort((a, b) => Number(b.pass) - Number(a.pass));
+  const ordered = result.candidates.map((c) => ({ c, reported: report(c) })).sort((a, b) => Number(b.reported.pass) - Number(a.reported.pass));
+  // The first one is the one shown in full: judged on every interferer if the mask moved another ahead.
+  const first = ordered[0];
+  if (first && first.c.evaluation.checkScope !== 'all') first.reported = report(withFullChecks(context, [first.c])[0]!);
+  const candidates = ordered.map((o) => o.reported);
   const passing = candidates.find((c) => c.pass);
   return {
     scenario: name,
@@ -121,7 +157,9 @@ export function planReport(name: string, context: PlanContext, result: PlanResul
     guard: context.guard,
     search: { minRate: context.limits.minRate, maxRate: context.limits.maxRate },
     goal: context.goal,
-    interferers: context.interferers,
+    interferers: listed.interferers,
+    interferersListed: listed.listed,
+    interferersOmitted: context.interferers.length - listed.interferers.length,
     windows: result.windows,
     feasible: result.feasible.map((f) => {
       const width = hz(f.maxRate - f.minRate);
@@ -139,10 +177,11 @@ export function planReport(name: string, context: PlanContext, result: PlanResul
   };
 }
 
-function reportedCandidate(context: PlanContext, candidate: Candidate, after: AfterRateInputs | null): ReportedCandidate {
+function reportedCandidate(context: PlanContext, byLabel: ReadonlyMap<string, Interferer>, candidate: Candidate, after: AfterRateInputs | null, listing: Listing): ReportedCandidate {
   const e: RateEvaluation = candidate.evaluation;
   const atRate = after === null ? null : afterRate(after, e.rate, e.tolerancePpm, e.center, e.inverted);
   const channelSnrDb = candidate.snr ? candidate.snr.channelSnrDb : null;
+  const listed = listedChecks(e.checks, e.checkScope === 'all', e.limitedBy, listing);
   return {
     label: candidate.label,
     origin: candidate.origin,
@@ -166,8 +205,8 @@ function reportedCandidate(context: PlanContext, candidate: Candidate, after: Af
     headroomLimitedByKind: candidate.headroom ? { down: candidate.headroom.downLimitedBy.kind, up: candidate.headroom.upLimitedBy.kind } : null,
     jitterSnrDb: candidate.snr ? candidate.snr.jitterSnrDb : null,
     channelSnrDb,
-    checks: e.checks.map((check, index) => {
-      const interferer = context.interferers[index]!;
+    checks: listed.checks.map((check) => {
+      const interferer = byLabel.get(check.label)!;
       const offset = interferer.rateMultiple * e.rate;
       const magnitude = extentMagnitude(hz(offset + interferer.low), hz(offset + interferer.high));
       const input = [hz(magnitude.low), hz(magnitude.high)] as const;
@@ -175,5 +214,7 @@ function reportedCandidate(context: PlanContext, candidate: Candidate, after: Af
     }),
     afterRate: atRate,
     channelSnrWithDriverDb: channelSnrWithDriver(channelSnrDb, atRate?.noise ?? null),
+    checksListed: listed.listed,
+    checksOmitted: context.interferers.length - listed.checks.length,
   };
 }

@@ -45,10 +45,15 @@ export interface PlanResult {
  * Solves a plan: the legal windows inside the converter's rate range, minus
  * every blocking interferer's forbidden rates, then each clock part at its
  * best rate (planPart: direct, divided or synthesised) and the best rate of
- * each feasible interval, judged exactly and ranked.
+ * each feasible interval, judged exactly and ranked. Candidates are judged
+ * and ranked on the blocking interferers only (the others cannot change a
+ * verdict or a worst slack); the first-ranked one, which the tables, pictures
+ * and page show in full, is judged again on every interferer.
  *
  * @param context the plan, with a finite rate range
+ * @returns windows, feasible set, blocked ranges, ranked candidates, part plans
  * @throws Error when a part's integer optimum fails its exact re-check (a bug)
+ * @example solvePlan(context).candidates[0].evaluation.checkScope // 'all'
  */
 export function solvePlan(context: PlanContext): PlanResult {
   const set = planRates(context);
@@ -75,12 +80,29 @@ export function solvePlan(context: PlanContext): PlanResult {
   }
   if (feasible.length === 0) {
     for (const window of windows) {
-      const evaluation = evaluateRate(context, hz((window.minRate + window.maxRate) / 2), context.tolerancePpm);
+      const evaluation = evaluateRate(context, hz((window.minRate + window.maxRate) / 2), context.tolerancePpm, 'blocking');
       candidates.push({ label: `W${window.zone}`, origin: 'window', ...unpartnered(evaluation) });
     }
   }
   const scored = candidates.map((c) => ({ ...c, score: goalScore(context, c.evaluation) }));
   scored.sort((a, b) => Number(b.evaluation.pass) - Number(a.evaluation.pass) || b.score - a.score || b.evaluation.worstSlack - a.evaluation.worstSlack);
-  return { windows, feasible, blocked, candidates: scored, parts, unplannedParts };
+  return { windows, feasible, blocked, candidates: withFullChecks(context, scored, 1), parts, unplannedParts };
+}
+
+/**
+ * The candidates with the first `count` (default all) judged again on every
+ * interferer, non-blocking ones included: the same verdict, worst slack and
+ * limitedBy, with every check listed.
+ *
+ * @param context the plan the candidates were judged on
+ * @param candidates ranked candidates
+ * @param count how many, from the first, to judge in full
+ * @returns the same candidates in the same order
+ * @example withFullChecks(context, result.candidates).every((c) => c.evaluation.checkScope === 'all') // true
+ */
+export function withFullChecks(context: PlanContext, candidates: readonly Candidate[], count = candidates.length): Candidate[] {
+  return candidates.map((c, i) =>
+    i >= count || c.evaluation.checkScope === 'all' ? c : { ...c, evaluation: evaluateRate(context, c.evaluation.rate, c.evaluation.tolerancePpm, 'all') },
+  );
 }
 

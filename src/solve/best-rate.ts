@@ -23,7 +23,7 @@ const MOST_RATIOS_TRIED = 200;
  */
 export function bestRateIn(context: PlanContext, interval: FeasibleInterval): RateEvaluation | null {
   const range = driftSafeRange(interval, context.tolerancePpm);
-  const judge = (rate: number) => evaluateRate(context, hz(rate), context.tolerancePpm);
+  const judge = (rate: number) => evaluateRate(context, hz(rate), context.tolerancePpm, 'blocking');
   if (!range) return judge((interval.minRate + interval.maxRate) / 2);
   switch (context.goal.kind) {
     case 'lowest-rate':

@@ -30,6 +30,14 @@ export interface CheckResult {
   readonly pass: boolean;
 }
 
+/**
+ * Which interferers an evaluation judges: every one, or the blocking ones
+ * only. The blocking ones alone decide pass, worst slack and limitedBy (a
+ * check that cannot block always passes), so ranking needs no more; the
+ * others are judged for the candidates shown in full.
+ */
+export type CheckScope = 'all' | 'blocking';
+
 /** A rate judged exactly. */
 export interface RateEvaluation {
   readonly rate: Hz;
@@ -42,7 +50,10 @@ export interface RateEvaluation {
   readonly image: { readonly low: Hz; readonly high: Hz } | null;
   /** Least distance from the guarded band to a fold edge over the drift range, Hz (negative: crosses). */
   readonly zoneEdgeMargin: Hz;
+  /** One per interferer judged, in the plan's order. */
   readonly checks: readonly CheckResult[];
+  /** Which interferers `checks` covers. */
+  readonly checkScope: CheckScope;
   /** The check with the least slack (margin − required): a blocking interferer or the zone edge. */
   readonly limitedBy: Limit;
   /** That check's margin, Hz. */
@@ -58,18 +69,26 @@ export interface RateEvaluation {
  * the least over the drift range, found at its ends and at the rates where a
  * margin changes slope (it is linear between them).
  *
+ * With scope 'blocking' only the blocking interferers are judged: the
+ * verdict, worst margin, worst slack and limitedBy are the same, the work is
+ * proportional to the blocking interferers, and `checks` lists only those.
+ *
  * @param context the plan
  * @param rate nominal sampling rate, Hz
  * @param tolerancePpm ± drift of that rate, ppm
+ * @param scope every interferer (default), or the blocking ones only
+ * @returns zone, inversion, image, the checks, worst margin and slack, limitedBy and pass
  * @example evaluateRate(handWorked, hz(26e6), ppm(0)) // { pass: true, zone: 2, worstSlack: 1e6, limitedBy: { kind: 'zone edge' } }
+ * @example evaluateRate(handWorked, hz(26e6), ppm(0), 'blocking') // { pass: true, zone: 2, worstSlack: 1e6, checkScope: 'blocking' }
  */
-export function evaluateRate(context: PlanContext, rate: Hz, tolerancePpm: Ppm): RateEvaluation {
+export function evaluateRate(context: PlanContext, rate: Hz, tolerancePpm: Ppm, scope: CheckScope = 'all'): RateEvaluation {
   const drift = driftRange(rate, tolerancePpm);
   const image = bandImage(context.band, rate);
   const zone = image?.zone ?? wantedZone(context.band, rate);
   const zoneEdgeMargin = hz(Math.min(zoneEdgeMarginAt(context.band, context.guard, zone, drift.low), zoneEdgeMarginAt(context.band, context.guard, zone, drift.high)));
   const zonePass = image !== null && zoneEdgeMargin >= -EDGE_TOLERANCE * rate;
-  const checks = context.interferers.map((i) => checkInterferer(context, i, rate, drift));
+  const judged = scope === 'all' ? context.interferers : blockingInterferers(context.interferers);
+  const checks = judged.map((i) => checkInterferer(context, i, rate, drift));
   let limitedBy: Limit = ZONE_EDGE;
   let worstMargin: number = zoneEdgeMargin;
   let worstSlack: number = zoneEdgeMargin;
@@ -87,11 +106,31 @@ export function evaluateRate(context: PlanContext, rate: Hz, tolerancePpm: Ppm):
     image: image ? { low: image.low, high: image.high } : null,
     zoneEdgeMargin,
     checks,
+    checkScope: scope,
     limitedBy,
     worstMargin: hz(worstMargin),
     worstSlack: hz(worstSlack),
     pass: zonePass && checks.every((c) => c.pass),
   };
+}
+
+const blockingOf = new WeakMap<readonly Interferer[], readonly Interferer[]>();
+
+/**
+ * The blocking interferers of a plan's list, in its order; filtered once per
+ * list (kept while the list lives), since every candidate asks.
+ *
+ * @param interferers a plan's interferers
+ * @returns those with blocking set
+ * @example blockingInterferers(handWorked.interferers).length // 2
+ */
+export function blockingInterferers(interferers: readonly Interferer[]): readonly Interferer[] {
+  let blocking = blockingOf.get(interferers);
+  if (!blocking) {
+    blocking = interferers.filter((i) => i.blocking);
+    blockingOf.set(interferers, blocking);
+  }
+  return blocking;
 }
 
 /**

@@ -39,11 +39,22 @@ describe('ifzone solve --json: the contract', () => {
     expect(new Set(labels).size).toBe(labels.length);
     for (const f of plan.feasible) expect(Object.keys(f)).toEqual(expect.arrayContaining(['zone', 'inverted', 'minRate', 'maxRate']));
     expect(plan.candidates.length).toBeGreaterThan(0);
-    for (const c of plan.candidates) {
-      expect(Object.keys(c)).toEqual(expect.arrayContaining(['label', 'rate', 'tolerancePpm', 'zone', 'inverted', 'center', 'nco', 'worstMargin', 'pass', 'checks']));
-      expect(c.checks.map((k: { label: string }) => k.label)).toEqual(labels);
+    expect(plan.interferersListed).toBe('all');
+    expect(plan.interferersOmitted).toBe(0);
+    plan.candidates.forEach((c: { checks: { label: string }[]; checksListed: string; checksOmitted: number; limitedBy: string }, index: number) => {
+      expect(Object.keys(c)).toEqual(expect.arrayContaining(['label', 'rate', 'tolerancePpm', 'zone', 'inverted', 'center', 'nco', 'worstMargin', 'pass', 'checks', 'checksListed', 'checksOmitted']));
       for (const k of c.checks) expect(Object.keys(k)).toEqual(expect.arrayContaining(['label', 'kind', 'alias', 'margin', 'level', 'levelMargin', 'pass']));
-    }
+      if (index === 0) {
+        // The first-ranked candidate is shown in full: every interferer's check.
+        expect(c.checksListed).toBe('all');
+        expect(c.checks.map((k) => k.label)).toEqual(labels);
+      } else {
+        // The others were judged on the blocking interferers: their limiting check (none when the zone edge limits).
+        expect(c.checksListed).toBe('limiting');
+        expect(c.checks.map((k) => k.label)).toEqual(labels.includes(c.limitedBy) ? [c.limitedBy] : []);
+      }
+      expect(c.checksOmitted).toBe(labels.length - c.checks.length);
+    });
     expect(plan.caution).toMatch(/paper design/);
   });
 
@@ -76,6 +87,43 @@ describe('ifzone solve --json: the contract', () => {
       const drift = c.rate * c.tolerancePpm * 1e-6;
       expect(plan.feasible.some((f: { minRate: number; maxRate: number }) => c.rate - drift >= f.minRate && c.rate + drift <= f.maxRate)).toBe(true);
     }
+  });
+});
+
+describe('ifzone solve --all-checks', () => {
+  it('lists every check of every candidate, with the same verdicts and margins as the default run', () => {
+    const plain = JSON.parse(runBin('solve', BASE, '--json').stdout);
+    const run = runBin('solve', BASE, '--json', '--all-checks');
+    expect(run.status).toBe(0);
+    const full = JSON.parse(run.stdout);
+    const labels = full.interferers.map((i: { label: string }) => i.label);
+    expect(full.candidates.length).toBe(plain.candidates.length);
+    full.candidates.forEach((c: { checks: { label: string }[]; checksListed: string; checksOmitted: number }, index: number) => {
+      expect(c.checksListed).toBe('all');
+      expect(c.checksOmitted).toBe(0);
+      expect(c.checks.map((k) => k.label)).toEqual(labels);
+      const { checks: _full, checksListed: _a, checksOmitted: _b, ...summary } = c as Record<string, unknown>;
+      const { checks: _plain, checksListed: _c, checksOmitted: _d, ...plainSummary } = plain.candidates[index];
+      expect(summary).toEqual(plainSummary);
+    });
+  });
+
+  it('refuses, exit 2 and one line naming the option, when candidates × interferers pass the limit', () => {
+    // 150 strong neighbours (thousands of intermodulation products) and 40 clock parts on a direct-RF plan.
+    const neighbours = Array.from({ length: 150 }, (_, k) => ({ label: `N${k}`, center: `${1700 + k * 12.5}M`, width: '2M', level: -10 - (k % 10) }))
+      .filter((n) => Math.abs(parseFloat(n.center) - 2440) > 25);
+    const clocks = Array.from({ length: 40 }, (_, k) => ({ label: `XO${k}`, frequency: `${1000 + k * 50.125}M`, tolerance: 20 }));
+    const path = join(dir, 'crowded.json');
+    writeFileSync(path, JSON.stringify({ extends: join(ROOT, 'test/bench/direct-rf.json'), name: 'crowded', neighbours, clocks }));
+    const plain = JSON.parse(runBin('solve', path, '--json').stdout);
+    const interferers = plain.interferers.length + plain.interferersOmitted;
+    // The case must be past the limit for the refusal to mean anything.
+    expect(plain.candidates.length * interferers).toBeGreaterThan(500_000);
+    expect(plain.interferersListed).toBe('nearest');
+    const run = runBin('solve', path, '--json', '--all-checks');
+    expect(run.status).toBe(2);
+    expect(run.stdout).toBe('');
+    expect(run.stderr).toMatch(/^ifzone: --all-checks: at most 500,000 checks in one run; leave out --all-checks[^\n]*\n$/);
   });
 });
 

@@ -1,8 +1,10 @@
 import { guardBands } from '../../src/math/band.js';
 import { describe, expect, it } from 'vitest';
+import fc from 'fast-check';
 import { db, hz, ppm } from '../../src/units/quantities.js';
 import { planRates } from '../../src/solve/feasible-set.js';
-import { evaluateRate } from '../../src/solve/evaluate-rate.js';
+import { blockingInterferers, evaluateRate } from '../../src/solve/evaluate-rate.js';
+import { planArbitrary } from './random-plan.js';
 import type { PlanContext } from '../../src/solve/plan-context.js';
 import { brutePasses } from '../helpers/brute-force-plan.js';
 import { PLAIN_CLOCKING } from '../helpers/hand-worked-plan.js';
@@ -40,5 +42,27 @@ describe('evaluateRate: a lower guard reaching below DC', () => {
   it('still fails below the zone-1 edge 2·5 MHz = 10 MHz', () => {
     expect(brutePasses(context, 9.9 * MHZ)).toBe(false);
     expect(evaluateRate(context, hz(9.9 * MHZ), ppm(0)).pass).toBe(false);
+  });
+});
+
+describe('evaluateRate on the blocking interferers only', () => {
+  it('gives the verdict, margins and limiting check of the full evaluation, and the blocking checks (the doc example first)', () => {
+    fc.assert(
+      fc.property(planArbitrary(20), fc.integer({ min: 0, max: 2 ** 30 }), (context, u) => {
+        const rate = hz(context.limits.minRate + ((context.limits.maxRate - context.limits.minRate) * u) / 2 ** 30);
+        const blockingOnly = evaluateRate(context, rate, ppm(20), 'blocking');
+        expect(blockingOnly.checks.every((c) => c.blocking)).toBe(true);
+        expect(blockingInterferers(context.interferers).every((i) => i.blocking)).toBe(true);
+        // The reference is the evaluation over every interferer (itself checked against the brute force above).
+        const full = evaluateRate(context, rate, ppm(20));
+        expect(full.checkScope).toBe('all');
+        expect(blockingOnly.checkScope).toBe('blocking');
+        const { checks: everyCheck, checkScope: _all, ...summary } = full;
+        const { checks: blockingChecks, checkScope: _blocking, ...blockingSummary } = blockingOnly;
+        expect(blockingSummary).toEqual(summary);
+        expect(blockingChecks).toEqual(everyCheck.filter((c) => c.blocking));
+      }),
+      { numRuns: 300 },
+    );
   });
 });

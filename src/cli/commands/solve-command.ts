@@ -5,6 +5,7 @@ export interface SolveOptions {
   goal?: string;
   outputRate?: string;
   json?: boolean;
+  allChecks?: boolean;
   svg?: string;
   force?: boolean;
 }
@@ -22,6 +23,7 @@ export function addSolveCommand(program: Command, io: Io, settle: (code: ExitCod
     .option('--goal <goal>', 'widest-margin, lowest-rate, quarter-rate or decimation (overrides the scenario)')
     .option('--output-rate <freq>', 'output rate for the decimation goal, e.g. 30.72M')
     .option('--json', 'print JSON for programs')
+    .option('--all-checks', 'judge every candidate on every interferer and list them all (default: the first candidate in full, the others on the blocking interferers)')
     .option('--svg <file>', 'also draw the rate map, the spectrum of the best candidate, the band-position chart and its anti-alias filter mask')
     .option('--force', 'let --svg replace an existing file')
     .action(async (file: string, options: SolveOptions) => {
