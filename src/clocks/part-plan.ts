@@ -35,6 +35,12 @@ export interface PartPlan {
   readonly pass: boolean;
   /** How the rate was chosen among the part's rates (how far the answer is proven best). */
   readonly search: PartSearch;
+  /**
+   * Rates judged exactly (evaluateRate) or screened (worstSlackAt) on the
+   * way, the answer's final judgement included; a sampled search keeps this
+   * within its budget plus one.
+   */
+  readonly ratesJudged: number;
 }
 
 /**

@@ -1,5 +1,5 @@
 import type { ClockPart } from '../scenario/scenario.js';
-import { evaluateRate, type RateEvaluation } from '../solve/evaluate-rate.js';
+import { blockingInterferers, evaluateRate, type RateEvaluation } from '../solve/evaluate-rate.js';
 import { hz, type Ppm } from '../units/quantities.js';
 import { planRates, type FeasibleInterval, type FeasibleSet } from '../solve/feasible-set.js';
 import type { PlanContext } from '../solve/plan-context.js';
@@ -42,10 +42,11 @@ export const SEARCH_ALLOWANCE = 1e-6;
  */
 const MODEL_AGREEMENT = 1e-9;
 
-/** Settings of a rate with the rate's exact evaluation. */
+/** Settings of a rate with the rate's exact evaluation, and how many rates the search judged or screened to find it. */
 interface Judged {
   readonly settings: RateSettings;
   readonly evaluation: RateEvaluation;
+  readonly ratesJudged: number;
 }
 
 /**
@@ -109,11 +110,12 @@ export function planPart(plan: PlanContext, set: FeasibleSet, part: ClockPart, o
     snr: clockSnr(context.band, rate, part.jitter, context.clocking.apertureJitter, context.clocking.bits),
     pass: chosen.evaluation.pass,
     search,
+    ratesJudged: chosen.ratesJudged,
   };
 }
 
 /** Ties within this fraction of the bandwidth keep the earlier (simpler) settings. */
-const TIE = 1e-9;
+export const TIE = 1e-9;
 
 function better(context: PlanContext, a: RateEvaluation, b: RateEvaluation | undefined): boolean {
   if (!b) return true;
@@ -129,9 +131,9 @@ function bestOfEvery(context: PlanContext, part: ClockPart): Judged {
     if (seen.has(rate)) continue;
     seen.add(rate);
     const evaluation = evaluateRate(context, rate, part.tolerancePpm, 'blocking');
-    if (better(context, evaluation, best?.evaluation)) best = { settings, evaluation };
+    if (better(context, evaluation, best?.evaluation)) best = { settings, evaluation, ratesJudged: 0 };
   }
-  return best!;
+  return { ...best!, ratesJudged: seen.size };
 }
 
 interface Piece {
@@ -148,6 +150,7 @@ function bestPassing(context: PlanContext, part: ClockPart, families: readonly R
   const pieces = feasiblePieces(context, driftFeasibleSet(context, part.tolerancePpm), part).sort((a, b) => b.bound - a.bound);
   const allowance = SEARCH_ALLOWANCE * unit;
   let best: Judged | undefined;
+  let judged = 0;
   for (const piece of pieces) {
     if (best && piece.bound + allowance <= best.evaluation.worstSlack) break;
     const lines = new Set<string>();
@@ -161,13 +164,14 @@ function bestPassing(context: PlanContext, part: ClockPart, families: readonly R
       const answer = bestIntegerN(piece.slacks, { first: span.min, last: span.max, rateAt }, unit, enumerateUpTo);
       const settings = { N: answer.N, M: family.M, D: family.D };
       const evaluation = evaluateRate(context, rateAt(answer.N), part.tolerancePpm, 'blocking');
+      judged++;
       recheck(part, piece, evaluation, answer.worstSlack);
-      if (better(context, evaluation, best?.evaluation)) best = { settings, evaluation };
+      if (better(context, evaluation, best?.evaluation)) best = { settings, evaluation, ratesJudged: 0 };
       // Within the allowance of this piece's bound, and so of every later piece's: nothing left can do better.
-      if (best && best.evaluation.worstSlack >= piece.bound - allowance) return best;
+      if (best && best.evaluation.worstSlack >= piece.bound - allowance) return { ...best, ratesJudged: judged };
     }
   }
-  return best ?? null;
+  return best ? { ...best, ratesJudged: judged } : null;
 }
 
 /**
@@ -220,58 +224,77 @@ const CLIMBED = 8;
 
 /**
  * When nothing passes: the rate with the largest worst slack, screened with
- * worstSlackAt, then judged by evaluateRate. Either every rate is screened;
- * or, when there are more than the budget, a sample: every k-th N of each
- * family (half the budget), the N next to anchor rates (the edges of the
- * feasible intervals and blocked ranges, the converter's limits, the rates
- * that centre the band in each zone), and the best few of those climbed to
- * better neighbours. A sample is not proven best.
+ * worstSlackAt, then judged by evaluateRate. Either every rate is screened
+ * (at most the budget); or, when there are more, a sample that keeps to the
+ * budget of screened rates: every k-th N of each family (half the budget),
+ * the N next to anchor rates (the converter's limits, the rates that centre
+ * the band in each zone, the edges of the feasible intervals and blocked
+ * ranges; a quarter of the budget, anchors thinned evenly when there are
+ * more), and the best few of those climbed to better neighbours with what
+ * is left. A sample is not proven best. A rate that cannot beat the ones
+ * kept is screened only until it is known to fall short.
  */
 function nearestFailing(context: PlanContext, set: FeasibleSet, part: ClockPart, families: readonly RateFamily[], every: boolean, budget: number): Judged {
-  const blocking = context.interferers.filter((i) => i.blocking);
+  const blocking = blockingInterferers(context.interferers);
   const { minRate, maxRate } = context.limits;
   const tie = TIE * (context.band.high - context.band.low);
-  const slackOf = (settings: RateSettings) => worstSlackAt(context, blocking, rateOf(part.frequency, settings), part.tolerancePpm);
+  let screened = 0;
+  const slackOf = (settings: RateSettings, floor: number) => {
+    screened++;
+    return worstSlackAt(context, blocking, rateOf(part.frequency, settings), part.tolerancePpm, floor);
+  };
   let best: { settings: RateSettings; slack: number } | undefined;
-  const consider = (settings: RateSettings, slack: number = slackOf(settings)) => {
+  // The CLIMBED largest slacks screened so far, ascending: a rate below the smallest cannot start a climb or win.
+  const kept: number[] = [];
+  const floorNow = () => Math.max(best ? best.slack + tie : -Infinity, kept.length < CLIMBED ? -Infinity : kept[0]!);
+  const consider = (settings: RateSettings, slack: number) => {
     if (!best || slack > best.slack + tie) best = { settings, slack };
+    if (kept.length < CLIMBED || slack > kept[0]!) {
+      kept.splice(kept.findIndex((k) => k >= slack) === -1 ? kept.length : kept.findIndex((k) => k >= slack), 0, slack);
+      if (kept.length > CLIMBED) kept.shift();
+    }
     return slack;
   };
   if (every) {
-    for (const { settings } of partRates(part, context.clocking.clockDividers, minRate, maxRate)) consider(settings);
+    for (const { settings } of partRates(part, context.clocking.clockDividers, minRate, maxRate)) consider(settings, slackOf(settings, best ? best.slack + tie : -Infinity));
   } else {
     const spans = families.flatMap((family) => {
       const span = nRangeFor(part.frequency, family, minRate, maxRate);
       return span ? [{ family, span }] : [];
     });
     const total = spans.reduce((sum, { span }) => sum + span.max - span.min + 1, 0);
-    const stride = Math.max(1, Math.ceil(total / Math.max(1, budget / 2)));
-    const anchors = anchorRates(context, set);
+    // Half the budget for the stride, up to three quarters with the anchors, the rest for climbing.
+    const strideBudget = Math.floor(budget / 2);
+    const anchorBudget = Math.floor((3 * budget) / 4);
+    const stride = Math.max(1, Math.ceil(total / Math.max(1, strideBudget - spans.length)));
+    const anchors = anchorRates(context, set, Math.floor(budget / 4 / (2 * spans.length)));
     const sampled: { family: RateFamily; min: number; max: number; N: number; slack: number }[] = [];
     for (const { family, span } of spans) {
       const K = family.M * family.D;
       const tried = new Set<number>();
-      const at = (N: number) => {
-        if (N < span.min || N > span.max || tried.has(N)) return;
+      const at = (N: number, cap: number) => {
+        if (N < span.min || N > span.max || tried.has(N) || screened >= cap) return;
         tried.add(N);
-        const slack = consider({ N, M: family.M, D: family.D });
+        const settings = { N, M: family.M, D: family.D };
+        const slack = consider(settings, slackOf(settings, floorNow()));
         sampled.push({ family, min: span.min, max: span.max, N, slack });
       };
-      for (let N = span.min; N <= span.max; N += stride) at(N);
+      for (let N = span.min; N <= span.max && screened < strideBudget; N += stride) at(N, strideBudget);
       for (const anchor of anchors) {
         const near = (anchor * K) / part.frequency;
-        at(Math.floor(near));
-        at(Math.ceil(near));
+        at(Math.floor(near), anchorBudget);
+        at(Math.ceil(near), anchorBudget);
       }
     }
+    // Only the CLIMBED largest slacks are exact (the others stopped below them), and only those are climbed.
     sampled.sort((a, b) => b.slack - a.slack);
     for (const start of sampled.slice(0, CLIMBED)) {
       const { family } = start;
       const settingsAt = (N: number) => ({ N, M: family.M, D: family.D });
       let { N, slack } = start;
-      for (;;) {
-        const up = N < start.max ? slackOf(settingsAt(N + 1)) : -Infinity;
-        const down = N > start.min ? slackOf(settingsAt(N - 1)) : -Infinity;
+      while (screened + 2 <= budget) {
+        const up = N < start.max ? slackOf(settingsAt(N + 1), slack) : -Infinity;
+        const down = N > start.min ? slackOf(settingsAt(N - 1), slack) : -Infinity;
         if (Math.max(up, down) <= slack) break;
         [N, slack] = up >= down ? [N + 1, up] : [N - 1, down];
       }
@@ -283,7 +306,7 @@ function nearestFailing(context: PlanContext, set: FeasibleSet, part: ClockPart,
   if (evaluation.worstSlack !== best.slack) {
     throw new Error(`${part.label} at ${evaluation.rate} Hz: the screen found a worst slack of ${best.slack} Hz, the exact evaluator ${evaluation.worstSlack} Hz`);
   }
-  return { settings: best.settings, evaluation };
+  return { settings: best.settings, evaluation, ratesJudged: screened + 1 };
 }
 
 /** The nominal rates whose whole drift stays inside the limits; an empty range (min > max) when the drift is wider. */
@@ -292,16 +315,28 @@ function driftInsideLimits(limits: PlanContext['limits'], tolerancePpm: Ppm): Pl
   return range ? { minRate: hz(range.low), maxRate: hz(range.high) } : { minRate: limits.maxRate, maxRate: limits.minRate };
 }
 
-function anchorRates(context: PlanContext, set: FeasibleSet): number[] {
+/**
+ * Rates worth screening near when nothing passes, at most `most`: the
+ * converter's limits and the rates that centre the band in each zone first,
+ * then the feasible intervals' edges and middles and the blocked ranges'
+ * edges, thinned evenly when they are more than the rest of the room.
+ */
+function anchorRates(context: PlanContext, set: FeasibleSet, most: number): number[] {
   const { minRate, maxRate } = context.limits;
-  const anchors: number[] = [minRate, maxRate];
-  for (const f of set.feasible) anchors.push(f.minRate, f.maxRate, (f.minRate + f.maxRate) / 2);
-  for (const b of set.blocked) anchors.push(b.minRate, b.maxRate);
+  const first: number[] = [minRate, maxRate];
   // The band's centre c sits mid-zone n at rate 4c/(2n − 1).
   const centre = (context.band.low + context.band.high) / 2;
   for (let n = 1; (4 * centre) / (2 * n - 1) >= minRate; n++) {
     const rate = (4 * centre) / (2 * n - 1);
-    if (rate <= maxRate) anchors.push(rate);
+    if (rate <= maxRate) first.push(rate);
   }
-  return anchors;
+  const edges: number[] = [];
+  for (const f of set.feasible) edges.push(f.minRate, f.maxRate, (f.minRate + f.maxRate) / 2);
+  for (const b of set.blocked) edges.push(b.minRate, b.maxRate);
+  const chosen = first.slice(0, Math.max(0, most));
+  const room = Math.max(0, most - chosen.length);
+  if (edges.length <= room) return [...chosen, ...edges];
+  // Every (edges / room)-th edge, from indices computed once each (no accumulated step).
+  for (let k = 0; k < room; k++) chosen.push(edges[Math.floor((k * edges.length) / room)]!);
+  return chosen;
 }

@@ -68,6 +68,12 @@ export interface ReportedCandidate {
   readonly jitterSnrDb: Db | null;
   /** Combined jitter and quantisation SNR plus the processing gain to the channel, dB; null when not from a part. */
   readonly channelSnrDb: Db | null;
+  /**
+   * For a clock part: how its rate was found ("every rate" judged; "intervals": the best of every feasible
+   * interval's integer optimum; "sampled": nothing passes and a sample within a budget was screened, not proven
+   * the nearest) and how many rates that judged or screened. Null for a rate not from a part.
+   */
+  readonly partSearch: Candidate['partSearch'];
   /** The checks listed (see checksListed), in the plan's order of interferers. */
   readonly checks: readonly ReportedCheck[];
   /** The filter mask, filter orders, noise folding and down-converter settings at this rate; null when the report was built without them. */
@@ -205,6 +211,7 @@ function reportedCandidate(context: PlanContext, byLabel: ReadonlyMap<string, In
     headroomLimitedByKind: candidate.headroom ? { down: candidate.headroom.downLimitedBy.kind, up: candidate.headroom.upLimitedBy.kind } : null,
     jitterSnrDb: candidate.snr ? candidate.snr.jitterSnrDb : null,
     channelSnrDb,
+    partSearch: candidate.partSearch,
     checks: listed.checks.map((check) => {
       const interferer = byLabel.get(check.label)!;
       const offset = interferer.rateMultiple * e.rate;

@@ -6,7 +6,7 @@ import { planRates, type BlockedRange, type FeasibleInterval } from '../solve/fe
 import type { PlanContext } from '../solve/plan-context.js';
 import { planPart } from '../clocks/plan-part.js';
 import { driftHeadroom, type DriftHeadroom } from '../solve/drift.js';
-import type { ClockSnr, PartPlan, RateSettings } from '../clocks/part-plan.js';
+import type { ClockSnr, PartPlan, PartSearch, RateSettings } from '../clocks/part-plan.js';
 
 /** A rate put forward: a listed clock, or the best rate of a feasible interval. */
 export interface Candidate {
@@ -26,6 +26,8 @@ export interface Candidate {
   readonly headroom: DriftHeadroom | null;
   /** The SNR the part allows; null for a rate not from a part. */
   readonly snr: ClockSnr | null;
+  /** How the part's rate was found and how many rates that judged; null for a rate not from a part. */
+  readonly partSearch: { readonly method: PartSearch; readonly ratesJudged: number } | null;
 }
 
 /** The solved plan: windows, exact feasible set and ranked candidates. */
@@ -68,9 +70,18 @@ export function solvePlan(context: PlanContext): PlanResult {
       continue;
     }
     parts.push(plan);
-    candidates.push({ label: part.label, origin: 'clock', evaluation: plan.evaluation, score: 0, settings: plan.settings, headroom: plan.headroom, snr: plan.snr });
+    candidates.push({
+      label: part.label,
+      origin: 'clock',
+      evaluation: plan.evaluation,
+      score: 0,
+      settings: plan.settings,
+      headroom: plan.headroom,
+      snr: plan.snr,
+      partSearch: { method: plan.search, ratesJudged: plan.ratesJudged },
+    });
   }
-  const unpartnered = (evaluation: RateEvaluation) => ({ evaluation, score: 0, settings: null, headroom: driftHeadroom(set, context.limits, evaluation.rate), snr: null });
+  const unpartnered = (evaluation: RateEvaluation) => ({ evaluation, score: 0, settings: null, headroom: driftHeadroom(set, context.limits, evaluation.rate), snr: null, partSearch: null });
   const perZone = new Map<number, number>();
   for (const interval of feasible) {
     const index = (perZone.get(interval.zone) ?? 0) + 1;

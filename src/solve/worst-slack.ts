@@ -12,18 +12,28 @@ import type { Interferer } from '../interferers/interferer.js';
  * building the per-check report: a screen for sweeps over many failing rates.
  * The winner of a screen is judged again by evaluateRate.
  *
+ * A screen that only needs to know whether a rate beats a slack already
+ * found passes it as `floor`: the first check that falls below it ends the
+ * work, and the value returned is then some slack below the floor (an upper
+ * bound of the worst slack), not the worst slack itself.
+ *
  * @param context the plan
  * @param blocking the plan's blocking interferers (filtered once by the caller)
  * @param rate nominal rate, Hz
  * @param tolerancePpm ± drift, ppm
- * @returns the least slack, Hz (negative: a check fails)
+ * @param floor stop once the slack is known to be below this, Hz (default: never stop)
+ * @returns the least slack, Hz (negative: a check fails); exact when at or above the floor
  * @example worstSlackAt(handWorked, blocking, hz(26e6), ppm(0)) // 1e6 (as evaluateRate(handWorked, hz(26e6), ppm(0)).worstSlack)
+ * @example worstSlackAt(handWorked, blocking, hz(26e6), ppm(0), hz(5e6)) // 1e6 (below the floor: the first check under it ends the screen)
  */
-export function worstSlackAt(context: PlanContext, blocking: readonly Interferer[], rate: Hz, tolerancePpm: Ppm): Hz {
+export function worstSlackAt(context: PlanContext, blocking: readonly Interferer[], rate: Hz, tolerancePpm: Ppm, floor = -Infinity): Hz {
   const drift = driftRange(rate, tolerancePpm);
   const { band, guard } = context;
   const zone = wantedZone(band, rate);
   let worst = Math.min(zoneEdgeMarginAt(band, guard, zone, drift.low), zoneEdgeMarginAt(band, guard, zone, drift.high));
-  for (const interferer of blocking) worst = Math.min(worst, leastMargin(interferer, band, drift) - interferer.requiredMargin);
+  for (let i = 0; i < blocking.length && worst >= floor; i++) {
+    const interferer = blocking[i]!;
+    worst = Math.min(worst, leastMargin(interferer, band, drift) - interferer.requiredMargin);
+  }
   return hz(worst);
 }

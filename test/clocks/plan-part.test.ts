@@ -3,7 +3,7 @@ import fc from 'fast-check';
 import { hz, ppm, seconds } from '../../src/units/quantities.js';
 import type { PlanContext } from '../../src/solve/plan-context.js';
 import { evaluateRate } from '../../src/solve/evaluate-rate.js';
-import { planPart, SEARCH_ALLOWANCE, type PlanPartOptions } from '../../src/clocks/plan-part.js';
+import { planPart, SEARCH_ALLOWANCE, TIE, type PlanPartOptions } from '../../src/clocks/plan-part.js';
 import { feasibleSetOf, handWorkedContext } from '../helpers/hand-worked-plan.js';
 import { brutePasses } from '../helpers/brute-force-plan.js';
 import { planArbitrary } from '../solve/random-plan.js';
@@ -119,7 +119,7 @@ describe('every search path against exhaustive enumeration of every (N, M, D), r
             const listed = settings.find((s) => s.N === plan.settings.N && s.M === plan.settings.M && s.D === plan.settings.D);
             expect(listed, `${where} is one of the part's settings`).toBeDefined();
             expect(plan.rate).toBe(listed!.rate);
-            expect(plan.evaluation).toEqual(evaluateRate(context, plan.rate, ppm(tolerance)));
+            expect(plan.evaluation).toEqual(evaluateRate(context, plan.rate, ppm(tolerance), 'blocking'));
             expect(plan.pass, where).toBe(anyPasses);
             if (anyPasses) {
               expect(plan.evaluation.worstSlack, where).toBeLessThanOrEqual(bestPassing);
@@ -128,7 +128,9 @@ describe('every search path against exhaustive enumeration of every (N, M, D), r
               expect(brutePasses(context, plan.rate * (1 - tolerance * 1e-6)), where).toBe(true);
               expect(brutePasses(context, plan.rate * (1 + tolerance * 1e-6)), where).toBe(true);
             } else {
-              expect(plan.evaluation.worstSlack, where).toBeCloseTo(bestAny, 6);
+              // The best failing rate, or an earlier one within the tie allowance (simpler settings win ties).
+              expect(plan.evaluation.worstSlack, where).toBeLessThanOrEqual(bestAny);
+              expect(plan.evaluation.worstSlack, where).toBeGreaterThanOrEqual(bestAny - TIE * bandwidth);
               expect(plan.search).toBe('every rate');
             }
           }
@@ -158,7 +160,9 @@ describe('the sampled search when nothing passes and there are too many rates to
         expect(plan.search).toBe('sampled');
         expect(plan.pass).toBe(false);
         expect(settings.some((s) => s.N === plan.settings.N && s.M === plan.settings.M && s.D === plan.settings.D)).toBe(true);
-        expect(plan.evaluation).toEqual(evaluateRate(context, plan.rate, ppm(50)));
+        expect(plan.evaluation).toEqual(evaluateRate(context, plan.rate, ppm(50), 'blocking'));
+        // The sample keeps to its budget of 100 screened rates, plus the final judgement.
+        expect(plan.ratesJudged).toBeLessThanOrEqual(101);
         const best = Math.max(...judged.map((e) => e.worstSlack));
         expect(plan.evaluation.worstSlack).toBeLessThanOrEqual(best);
         gaps.push((best - plan.evaluation.worstSlack) / (context.band.high - context.band.low));

@@ -28,7 +28,12 @@ describe('solvePlan puts every clock part forward at its best rate', () => {
     expect(clocks.map((c) => c.label).sort()).toEqual(['SYN-H 10M', 'XO-26 26M', 'XO-D 120M']);
     for (const c of clocks) {
       const plan = planPart(context, set, context.clocks.find((p) => p.label === c.label)!)!;
-      expect(c.evaluation).toEqual(plan.evaluation);
+      // The first-ranked candidate is judged again on every interferer: the same rate, verdict and margins.
+      const { checks: _c, checkScope: _s, ...judged } = c.evaluation;
+      const { checks: _p, checkScope: _t, ...planned } = plan.evaluation;
+      expect(judged).toEqual(planned);
+      expect(c.evaluation.checkScope).toBe(c === result.candidates[0] ? 'all' : 'blocking');
+      expect(c.partSearch).toEqual({ method: plan.search, ratesJudged: plan.ratesJudged });
       expect(c.settings).toEqual(plan.settings);
       expect(c.headroom).toEqual(plan.headroom);
       expect(c.snr).toEqual(plan.snr);

@@ -24,6 +24,6 @@ export interface Run {
 
 /** Runs `node bin/ifzone ...args` as a separate process and collects what it wrote. */
 export function runBin(...args: string[]): Run {
-  const result = spawnSync(process.execPath, ['bin/ifzone', ...args], { cwd: ROOT, encoding: 'utf8' });
+  const result = spawnSync(process.execPath, ['bin/ifzone', ...args], { cwd: ROOT, encoding: 'utf8', maxBuffer: 1 << 28 });
   return { status: result.status, stdout: result.stdout, stderr: result.stderr };
 }
