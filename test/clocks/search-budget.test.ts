@@ -7,12 +7,13 @@ import { planPart } from '../../src/clocks/plan-part.js';
 import { feasibleSetOf } from '../helpers/hand-worked-plan.js';
 import { planArbitrary } from '../solve/random-plan.js';
 import { everySetting, part, synthesiser } from './part-fixtures.js';
+import type * as WorstSlack from '../../src/solve/worst-slack.js';
 
 // Every rate the sampled search screens goes through worstSlackAt: count the calls
 // from outside the search, instead of trusting the count it reports.
 const screens = vi.hoisted(() => ({ count: 0 }));
 vi.mock('../../src/solve/worst-slack.js', async (original) => {
-  const module = await original<typeof import('../../src/solve/worst-slack.js')>();
+  const module = await original<typeof WorstSlack>();
   return {
     ...module,
     worstSlackAt: (...args: Parameters<typeof module.worstSlackAt>) => {
