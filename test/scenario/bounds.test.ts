@@ -50,7 +50,8 @@ describe('counts and frequencies bounded', () => {
   const many = (count: number, make: (i: number) => unknown) => Array.from({ length: count }, (_, i) => make(i));
 
   it.each([
-    ['33 neighbours', { neighbours: many(33, (i) => ({ label: `n${i}`, center: `${100 + i}M`, width: '100k', level: -30 })) }, 'neighbours', 'at most 32'],
+    ['257 neighbours', { neighbours: many(257, (i) => ({ label: `n${i}`, center: `${100 + i}M`, width: '100k', level: -30 })) }, 'neighbours', 'at most 256'],
+    ['1,025 clock parts', { clocks: many(1025, (i) => ({ label: `c${i}`, frequency: `${100 + i}M`, tolerance: 20 })) }, 'clocks', 'at most 1024'],
     ['65 board spurs', { boardSpurs: many(65, (i) => ({ label: `s${i}`, frequency: `${i + 1}M`, level: -90 })) }, 'boardSpurs', 'at most 64'],
     ['a spur at 1e18 Hz', { boardSpurs: [{ label: 's', frequency: 1e18, level: -90 }] }, 'boardSpurs[0].frequency', 'at most 1 THz'],
     ['a spur at 1e308 Hz', { boardSpurs: [{ label: 's', frequency: '1e308', level: -90 }] }, 'boardSpurs[0].frequency', 'at most 1 THz'],
@@ -68,8 +69,9 @@ describe('counts and frequencies bounded', () => {
     expect(issue?.expected).toContain(words);
   });
 
-  it('takes the limits themselves: 32 neighbours, 64 spurs, 1 THz', () => {
-    expect(firstIssue({ neighbours: many(32, (i) => ({ label: `n${i}`, center: `${100 + i}M`, width: '100k', level: -30 })) })).toBeNull();
+  it('takes the limits themselves: 256 neighbours, 64 spurs, 1,024 clock parts, 1 THz', () => {
+    expect(firstIssue({ neighbours: many(256, (i) => ({ label: `n${i}`, center: `${100 + i}M`, width: '100k', level: -30 })) })).toBeNull();
+    expect(firstIssue({ clocks: many(1024, (i) => ({ label: `c${i}`, frequency: `${100 + i}M`, tolerance: 20 })) })).toBeNull();
     expect(firstIssue({ boardSpurs: many(64, (i) => ({ label: `s${i}`, frequency: `${i + 1}M`, level: -90 })) })).toBeNull();
     expect(firstIssue({ boardSpurs: [{ label: 's', frequency: '1000G', level: -90 }] })).toBeNull();
   });
