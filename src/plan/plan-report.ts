@@ -91,6 +91,12 @@ export interface ReportedCandidate {
   readonly checksListed: ChecksListed;
   /** How many interferers have no check listed here. */
   readonly checksOmitted: number;
+  /**
+   * How many of the anti-alias mask's alias bands `afterRate.mask.bands` leaves
+   * out: 0 for a candidate shown in full; for the others (checksListed
+   * "limiting") only the worst band is listed, as in `afterRate.mask.worst`.
+   */
+  readonly maskBandsOmitted: number;
 }
 
 /** The solved plan for people and programs alike: the `solve` JSON contract. */
@@ -188,6 +194,9 @@ function reportedCandidate(context: PlanContext, byLabel: ReadonlyMap<string, In
   const atRate = after === null ? null : afterRate(after, e.rate, e.tolerancePpm, e.center, e.inverted);
   const channelSnrDb = candidate.snr ? candidate.snr.channelSnrDb : null;
   const listed = listedChecks(e.checks, e.checkScope === 'all', e.limitedBy, listing);
+  // A candidate not shown in full lists its mask's worst alias band only: with a thousand parts the bands alone are megabytes.
+  const inFull = e.checkScope === 'all' || listing === 'all';
+  const shownAfter = atRate === null || inFull ? atRate : { ...atRate, mask: { ...atRate.mask, bands: atRate.mask.worst === null ? [] : [atRate.mask.worst] } };
   return {
     label: candidate.label,
     origin: candidate.origin,
@@ -219,9 +228,10 @@ function reportedCandidate(context: PlanContext, byLabel: ReadonlyMap<string, In
       const input = [hz(magnitude.low), hz(magnitude.high)] as const;
       return { ...check, input };
     }),
-    afterRate: atRate,
+    afterRate: shownAfter,
     channelSnrWithDriverDb: channelSnrWithDriver(channelSnrDb, atRate?.noise ?? null),
     checksListed: listed.listed,
     checksOmitted: context.interferers.length - listed.checks.length,
+    maskBandsOmitted: atRate === null || shownAfter === null ? 0 : atRate.mask.bands.length - shownAfter.mask.bands.length,
   };
 }

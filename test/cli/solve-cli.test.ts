@@ -54,6 +54,11 @@ describe('ifzone solve --json: the contract', () => {
         expect(c.checks.map((k) => k.label)).toEqual(labels.includes(c.limitedBy) ? [c.limitedBy] : []);
       }
       expect(c.checksOmitted).toBe(labels.length - c.checks.length);
+      // The mask's alias bands: all for the candidate shown in full, the worst one for the others.
+      const after = (c as unknown as { afterRate: { mask: { bands: unknown[]; worst: unknown } } | null; maskBandsOmitted: number }).afterRate;
+      const omitted = (c as unknown as { maskBandsOmitted: number }).maskBandsOmitted;
+      if (index === 0) expect(omitted).toBe(0);
+      else if (after !== null) expect(after.mask.bands).toEqual(after.mask.worst === null ? [] : [after.mask.worst]);
     });
     expect(plan.caution).toMatch(/paper design/);
   });
