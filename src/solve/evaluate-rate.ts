@@ -3,7 +3,7 @@ import { bandImage, wantedZone, type Band, type Guard } from '../math/band.js';
 import { foldExtent } from '../math/fold-extent.js';
 import { EDGE_TOLERANCE } from '../math/edge-tolerance.js';
 import { meetsOpen } from '../math/interval-set.js';
-import { imageMargin, marginBreakpoints, nearbyImages, normalisedExtent } from './fold-images.js';
+import { breakpointAt, firstNearbyImage, imageOffsetHigh, imageOffsetLow, lastNearbyImage, marginAt, normalisedExtent } from './fold-images.js';
 import { forbiddenRates } from './forbidden-rates.js';
 import { guardedBand } from '../windows/enumerate-windows.js';
 import type { Interferer, InterfererKind } from '../interferers/interferer.js';
@@ -171,11 +171,21 @@ function checkInterferer(context: PlanContext, interferer: Interferer, rate: Hz,
  * @example leastMargin(handWorked.interferers[0], handWorked.band, { low: hz(26e6), high: hz(26e6) }) // 5e6
  */
 export function leastMargin(interferer: Interferer, band: Band, range: { readonly low: Hz; readonly high: Hz }): Hz {
+  // Allocation-free: the screens call this for every blocking interferer at every rate they try.
   const extent = normalisedExtent(interferer);
+  const { low, high, rateMultiple } = extent;
   let least = Infinity;
-  for (const term of nearbyImages(extent, band, hz(0), range.low, range.high)) {
-    const rates = [range.low, range.high, ...marginBreakpoints(extent, band, term).filter((r) => r > range.low && r < range.high)];
-    for (const r of rates) least = Math.min(least, imageMargin(extent, band, term, r));
+  for (let side = 1; side >= -1; side -= 2) {
+    const imageLow = imageOffsetLow(band, side);
+    const imageHigh = imageOffsetHigh(band, side);
+    const last = lastNearbyImage(rateMultiple, high - imageLow, range.low, range.high);
+    for (let j = firstNearbyImage(rateMultiple, low - imageHigh, range.low, range.high); j <= last; j++) {
+      const slope = j - rateMultiple;
+      least = Math.min(least, marginAt(low, high, imageLow, imageHigh, slope * range.low), marginAt(low, high, imageLow, imageHigh, slope * range.high));
+      if (slope === 0) continue;
+      const bend = breakpointAt(low, high, imageLow, imageHigh, slope);
+      if (bend > range.low && bend < range.high) least = Math.min(least, marginAt(low, high, imageLow, imageHigh, slope * bend));
+    }
   }
   return hz(least);
 }

@@ -46,7 +46,25 @@ export function normalisedExtent(interferer: Pick<Interferer, 'rateMultiple' | '
  * @example imageOffsets(handWorked.band, -1) // { low: -25e6, high: -21e6 }
  */
 export function imageOffsets(band: Band, side: 1 | -1): Interval {
-  return side === 1 ? { low: band.low, high: band.high } : { low: -band.high, high: -band.low };
+  return { low: imageOffsetLow(band, side), high: imageOffsetHigh(band, side) };
+}
+
+/**
+ * imageOffsets' lower offset on plain numbers (no allocation, for inner loops).
+ *
+ * @example imageOffsetLow({ low: 21e6, high: 25e6 }, -1) // -25e6
+ */
+export function imageOffsetLow(band: Band, side: number): number {
+  return side === 1 ? band.low : -band.high;
+}
+
+/**
+ * imageOffsets' upper offset on plain numbers.
+ *
+ * @example imageOffsetHigh({ low: 21e6, high: 25e6 }, -1) // -21e6
+ */
+export function imageOffsetHigh(band: Band, side: number): number {
+  return side === 1 ? band.high : -band.low;
 }
 
 /**
@@ -64,15 +82,40 @@ export function nearbyImages(extent: NormalisedExtent, band: Band, reach: Hz, mi
   const terms: BandImageTerm[] = [];
   for (const side of [1, -1] as const) {
     const image = imageOffsets(band, side);
-    const lowest = extent.low - image.high - reach;
-    const highest = extent.high - image.low + reach;
-    const cLow = Math.min(lowest / minRate, lowest / maxRate);
-    const cHigh = Math.max(highest / minRate, highest / maxRate);
-    const jFirst = Math.ceil(extent.rateMultiple + cLow) - 1;
-    const jLast = Math.floor(extent.rateMultiple + cHigh) + 1;
-    for (let j = jFirst; j <= jLast; j++) terms.push({ j, side, slope: j - extent.rateMultiple });
+    const jLast = lastNearbyImage(extent.rateMultiple, extent.high - image.low + reach, minRate, maxRate);
+    for (let j = firstNearbyImage(extent.rateMultiple, extent.low - image.high - reach, minRate, maxRate); j <= jLast; j++) {
+      terms.push({ j, side, slope: j - extent.rateMultiple });
+    }
   }
   return terms;
+}
+
+/**
+ * nearbyImages' first j on plain numbers (no allocation, for inner loops):
+ * c·r ≥ lowest over the range gives j ≥ a + min(lowest/minRate, lowest/maxRate),
+ * one image of slack against rounding.
+ *
+ * @param rateMultiple a ≥ 0
+ * @param lowest l − imageHigh − reach, Hz
+ * @param minRate, maxRate the rate range, Hz
+ * @returns the first image index j
+ * @example firstNearbyImage(0, -15e6, 10e6, 60e6) // -2
+ */
+export function firstNearbyImage(rateMultiple: number, lowest: number, minRate: number, maxRate: number): number {
+  return Math.ceil(rateMultiple + Math.min(lowest / minRate, lowest / maxRate)) - 1;
+}
+
+/**
+ * nearbyImages' last j on plain numbers: c·r ≤ highest over the range.
+ *
+ * @param rateMultiple a ≥ 0
+ * @param highest h − imageLow + reach, Hz
+ * @param minRate, maxRate the rate range, Hz
+ * @returns the last image index j
+ * @example lastNearbyImage(0, 35e6, 10e6, 60e6) // 4
+ */
+export function lastNearbyImage(rateMultiple: number, highest: number, minRate: number, maxRate: number): number {
+  return Math.floor(rateMultiple + Math.max(highest / minRate, highest / maxRate)) + 1;
 }
 
 /**
@@ -102,8 +145,21 @@ export function closeRates(extent: NormalisedExtent, band: Band, term: BandImage
  */
 export function imageMargin(extent: NormalisedExtent, band: Band, term: BandImageTerm, rate: Hz): Hz {
   const image = imageOffsets(band, term.side);
-  const shift = term.slope * rate;
-  return hz(Math.max(shift + image.low - extent.high, extent.low - (shift + image.high)));
+  return hz(marginAt(extent.low, extent.high, image.low, image.high, term.slope * rate));
+}
+
+/**
+ * imageMargin on plain numbers (no allocation, for inner loops): the extent
+ * [low, high] against the image [shift + imageLow, shift + imageHigh].
+ *
+ * @param low, high the extent's edges relative to a·r, Hz
+ * @param imageLow, imageHigh the image's offsets (imageOffsets), Hz
+ * @param shift c·r, Hz
+ * @returns the signed margin, Hz
+ * @example marginAt(72e6, 72e6, 70e6, 80e6, 0) // −2e6
+ */
+export function marginAt(low: number, high: number, imageLow: number, imageHigh: number, shift: number): number {
+  return Math.max(shift + imageLow - high, low - (shift + imageHigh));
 }
 
 /**
@@ -115,5 +171,18 @@ export function imageMargin(extent: NormalisedExtent, band: Band, term: BandImag
 export function marginBreakpoints(extent: NormalisedExtent, band: Band, term: BandImageTerm): Hz[] {
   if (term.slope === 0) return [];
   const image = imageOffsets(band, term.side);
-  return [hz((extent.low + extent.high - image.low - image.high) / (2 * term.slope))];
+  return [hz(breakpointAt(extent.low, extent.high, image.low, image.high, term.slope))];
+}
+
+/**
+ * marginBreakpoints on plain numbers, for a slope c ≠ 0.
+ *
+ * @param low, high the extent's edges relative to a·r, Hz
+ * @param imageLow, imageHigh the image's offsets, Hz
+ * @param slope c = j − a, not 0
+ * @returns the rate where the centres meet, Hz
+ * @example breakpointAt(10e6, 10e6, 21e6, 25e6, 1) // -13e6 (no positive rate: the margin is linear for every r > 0)
+ */
+export function breakpointAt(low: number, high: number, imageLow: number, imageHigh: number, slope: number): number {
+  return (low + high - imageLow - imageHigh) / (2 * slope);
 }

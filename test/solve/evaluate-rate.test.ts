@@ -3,7 +3,8 @@ import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { db, hz, ppm } from '../../src/units/quantities.js';
 import { planRates } from '../../src/solve/feasible-set.js';
-import { blockingInterferers, evaluateRate } from '../../src/solve/evaluate-rate.js';
+import { blockingInterferers, evaluateRate, leastMargin } from '../../src/solve/evaluate-rate.js';
+import { imageMargin, marginBreakpoints, nearbyImages, normalisedExtent } from '../../src/solve/fold-images.js';
 import { planArbitrary } from './random-plan.js';
 import type { PlanContext } from '../../src/solve/plan-context.js';
 import { brutePasses } from '../helpers/brute-force-plan.js';
@@ -61,6 +62,29 @@ describe('evaluateRate on the blocking interferers only', () => {
         const { checks: blockingChecks, checkScope: _blocking, ...blockingSummary } = blockingOnly;
         expect(blockingSummary).toEqual(summary);
         expect(blockingChecks).toEqual(everyCheck.filter((c) => c.blocking));
+      }),
+      { numRuns: 300 },
+    );
+  });
+});
+
+describe('leastMargin without allocation', () => {
+  it('equals the least image margin over the nearby images at the range ends and the breakpoints inside, bit for bit', () => {
+    // The reference walks the image terms as objects (nearbyImages, imageMargin, marginBreakpoints);
+    // both are checked against the brute-force folding in margins.test.ts.
+    fc.assert(
+      fc.property(planArbitrary(), fc.integer({ min: 0, max: 2 ** 30 }), fc.integer({ min: 0, max: 200 }), (context, u, ppmWide) => {
+        const rate = context.limits.minRate + ((context.limits.maxRate - context.limits.minRate) * u) / 2 ** 30;
+        const range = { low: hz(rate * (1 - ppmWide * 1e-6)), high: hz(rate * (1 + ppmWide * 1e-6)) };
+        for (const interferer of context.interferers) {
+          const extent = normalisedExtent(interferer);
+          let expected = Infinity;
+          for (const term of nearbyImages(extent, context.band, hz(0), range.low, range.high)) {
+            const inside = marginBreakpoints(extent, context.band, term).filter((r) => r > range.low && r < range.high);
+            for (const r of [range.low, range.high, ...inside]) expected = Math.min(expected, imageMargin(extent, context.band, term, hz(r)));
+          }
+          expect(leastMargin(interferer, context.band, range)).toBe(expected);
+        }
       }),
       { numRuns: 300 },
     );

@@ -168,7 +168,8 @@ describe('levels across the shift range (the filter stays put)', () => {
   it('still returns an exactly re-checked pair', () => {
     const search = bestShiftAndRate(edge);
     const best = search.best!;
-    const again = evaluateRate(contextFromScenario(movedBy(edge, best.shift)), best.rate, edge.requirements.tolerancePpm);
+    // Judged again over the same interferers (a sampled rate is judged on the blocking ones only).
+    const again = evaluateRate(contextFromScenario(movedBy(edge, best.shift)), best.rate, edge.requirements.tolerancePpm, best.evaluation.checkScope);
     expect(again).toEqual(best.evaluation);
   });
 });
@@ -345,7 +346,7 @@ describe('bestShiftAndRate against a brute-force (δ, r) grid (random plans, fas
         if (best) {
           if (best.origin === 'piece') counts.fromPieces++;
           // The exact re-check, done again here on the scenario moved by δ*.
-          const again = evaluateRate(contextFromScenario(movedBy(scenario, best.shift)), best.rate as Hz, scenario.requirements.tolerancePpm);
+          const again = evaluateRate(contextFromScenario(movedBy(scenario, best.shift)), best.rate as Hz, scenario.requirements.tolerancePpm, best.evaluation.checkScope);
           expect(again).toEqual(best.evaluation);
           // The brute force at the answer reads the least over a subset of the drift: never below the exact value.
           const { moved, blocking } = judged(best.shift);
