@@ -3,7 +3,7 @@ import { bandImage, wantedZone, type Band, type Guard } from '../math/band.js';
 import { foldExtent } from '../math/fold-extent.js';
 import { EDGE_TOLERANCE } from '../math/edge-tolerance.js';
 import { meetsOpen } from '../math/interval-set.js';
-import { breakpointAt, firstNearbyImage, imageOffsetHigh, imageOffsetLow, lastNearbyImage, marginAt, normalisedExtent } from './fold-images.js';
+import { breakpointAt, firstNearbyImage, imageOffsetHigh, imageOffsetLow, lastNearbyImage, marginAt, normalisedHigh, normalisedLow, normalisedMultiple } from './fold-images.js';
 import { forbiddenRates } from './forbidden-rates.js';
 import { guardedBand } from '../windows/enumerate-windows.js';
 import type { Interferer, InterfererKind } from '../interferers/interferer.js';
@@ -172,8 +172,9 @@ function checkInterferer(context: PlanContext, interferer: Interferer, rate: Hz,
  */
 export function leastMargin(interferer: Interferer, band: Band, range: { readonly low: Hz; readonly high: Hz }): Hz {
   // Allocation-free: the screens call this for every blocking interferer at every rate they try.
-  const extent = normalisedExtent(interferer);
-  const { low, high, rateMultiple } = extent;
+  const rateMultiple = normalisedMultiple(interferer);
+  const low = normalisedLow(interferer);
+  const high = normalisedHigh(interferer);
   let least = Infinity;
   for (let side = 1; side >= -1; side -= 2) {
     const imageLow = imageOffsetLow(band, side);

@@ -34,8 +34,36 @@ export interface NormalisedExtent {
  * @example normalisedExtent(handWorked.interferers[0]) // { rateMultiple: 0, low: 10e6, high: 10e6 }
  */
 export function normalisedExtent(interferer: Pick<Interferer, 'rateMultiple' | 'low' | 'high'>): NormalisedExtent {
-  const { rateMultiple, low, high } = interferer;
-  return rateMultiple < 0 ? { rateMultiple: -rateMultiple, low: -high, high: -low } : { rateMultiple, low, high };
+  return { rateMultiple: normalisedMultiple(interferer), low: normalisedLow(interferer), high: normalisedHigh(interferer) };
+}
+
+type Extent = Pick<Interferer, 'rateMultiple' | 'low' | 'high'>;
+
+/**
+ * normalisedExtent's rate multiple on plain numbers (no allocation, for inner loops).
+ *
+ * @example normalisedMultiple({ rateMultiple: -0.25, low: 1e6, high: 2e6 }) // 0.25
+ */
+export function normalisedMultiple(extent: Extent): number {
+  return extent.rateMultiple < 0 ? -extent.rateMultiple : extent.rateMultiple;
+}
+
+/**
+ * normalisedExtent's lower edge on plain numbers.
+ *
+ * @example normalisedLow({ rateMultiple: -0.25, low: 1e6, high: 2e6 }) // -2e6
+ */
+export function normalisedLow(extent: Extent): number {
+  return extent.rateMultiple < 0 ? -extent.high : extent.low;
+}
+
+/**
+ * normalisedExtent's upper edge on plain numbers.
+ *
+ * @example normalisedHigh({ rateMultiple: -0.25, low: 1e6, high: 2e6 }) // -1e6
+ */
+export function normalisedHigh(extent: Extent): number {
+  return extent.rateMultiple < 0 ? -extent.low : extent.high;
 }
 
 /**

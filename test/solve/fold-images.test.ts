@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { hz } from '../../src/units/quantities.js';
-import { breakpointAt, firstNearbyImage, imageOffsetHigh, imageOffsetLow, lastNearbyImage, marginAt } from '../../src/solve/fold-images.js';
+import { breakpointAt, firstNearbyImage, imageOffsetHigh, imageOffsetLow, lastNearbyImage, marginAt, normalisedHigh, normalisedLow, normalisedMultiple } from '../../src/solve/fold-images.js';
 
 /**
  * The plain-number forms of the image algebra, on values worked by hand from
@@ -31,5 +31,13 @@ describe('image algebra on plain numbers (the doc examples)', () => {
     expect(breakpointAt(10e6, 10e6, 21e6, 25e6, 1)).toBe(-13e6);
     // The mirrored image at slope 2: (10 + 10 + 25 + 21)/(2·2) = 16.5 MHz.
     expect(breakpointAt(10e6, 10e6, -25e6, -21e6, 2)).toBe(16.5e6);
+  });
+
+  it('a negative extent −0.25·r + [1, 2] MHz folds as its magnitude 0.25·r + [−2, −1] MHz', () => {
+    const extent = { rateMultiple: -0.25, low: hz(1e6), high: hz(2e6) };
+    expect(normalisedMultiple(extent)).toBe(0.25);
+    expect(normalisedLow(extent)).toBe(-2e6);
+    expect(normalisedHigh(extent)).toBe(-1e6);
+    expect(normalisedLow({ ...extent, rateMultiple: 0.5 })).toBe(1e6);
   });
 });
