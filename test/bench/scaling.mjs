@@ -71,7 +71,7 @@ function series(title, sizes, variant) {
     console.log(`${String(n).padStart(7)} ${m.ms.toFixed(0).padStart(10)} ${m.peakRssMb.toFixed(0).padStart(9)} ${(m.outBytes / MB).toFixed(2).padStart(9)} ${String(m.exit).padStart(5)}${note}`);
   }
   // Fitted where the work outweighs start-up: sizes of 10 and above.
-  const fitted = rows.filter((r) => !r.m.failed && r.n >= 10);
+  const fitted = rows.filter((r) => !r.m.failed && (r.m.exit === 0 || r.m.exit === 1) && r.n >= 10);
   if (fitted.length >= 2) {
     const time = growthExponent(fitted.map((r) => ({ x: r.n, y: r.m.ms })));
     const memory = growthExponent(fitted.map((r) => ({ x: r.n, y: r.m.peakRssMb })));
@@ -83,6 +83,10 @@ function series(title, sizes, variant) {
 function withinTargets(name, m) {
   if (!m || m.failed) {
     console.log(`${name}: ${m ? m.failed : 'not reached'} — LIMIT MISSED`);
+    return false;
+  }
+  if (m.exit !== 0 && m.exit !== 1) {
+    console.log(`${name}: exit ${m.exit} (${m.error}) — LIMIT MISSED`);
     return false;
   }
   const ok = m.ms <= LIMIT_MS && m.peakRssMb <= LIMIT_MB && m.outBytes < LIMIT_JSON_MB * MB;

@@ -118,12 +118,11 @@ describe('ifzone solve --all-checks', () => {
   });
 
   it('refuses, exit 2 and one line naming the option, when candidates × interferers pass the limit', () => {
-    // 250 strong neighbours (their products above the threshold number in the thousands) and 600 clock parts on a direct-RF plan.
-    const neighbours = Array.from({ length: 250 }, (_, k) => ({ label: `N${k}`, center: `${1700 + k * 7.5}M`, width: '2M', level: -5 - (k % 10) }))
-      .filter((n) => Math.abs(parseFloat(n.center) - 2440) > 25);
-    const clocks = Array.from({ length: 600 }, (_, k) => ({ label: `XO${k}`, frequency: `${1000 + (k * 2000) / 600}M`, tolerance: 20 }));
+    // 64 low board spurs with 20 harmonics each (about 1,300 interferers, little folding work) and 450 clock parts on a direct-RF plan.
+    const boardSpurs = Array.from({ length: 64 }, (_, k) => ({ label: `S${k}`, frequency: `${1 + k * 0.37}M`, level: -60, harmonics: 20 }));
+    const clocks = Array.from({ length: 450 }, (_, k) => ({ label: `XO${k}`, frequency: `${1000 + (k * 2000) / 450}M`, tolerance: 20 }));
     const path = join(dir, 'crowded.json');
-    writeFileSync(path, JSON.stringify({ extends: join(ROOT, 'test/bench/direct-rf.json'), name: 'crowded', neighbours, clocks }));
+    writeFileSync(path, JSON.stringify({ extends: join(ROOT, 'test/bench/direct-rf.json'), name: 'crowded', boardSpurs, clocks }));
     const plain = JSON.parse(runBin('solve', path, '--json').stdout);
     const interferers = plain.interferers.length + plain.interferersOmitted;
     // The case must be past the limit for the refusal to mean anything.

@@ -70,7 +70,9 @@ describe('counts and frequencies bounded', () => {
   });
 
   it('takes the limits themselves: 256 neighbours, 64 spurs, 1,024 clock parts, 1 THz', () => {
-    expect(firstIssue({ neighbours: many(256, (i) => ({ label: `n${i}`, center: `${100 + i}M`, width: '100k', level: -30 })) })).toBeNull();
+    // 256 neighbours pass the count; on the demo's 40–250 MHz converter their products then meet the folding-work bound instead.
+    const crowded = firstIssue({ neighbours: many(256, (i) => ({ label: `n${i}`, center: `${100 + i}M`, width: '100k', level: -30 })) });
+    expect(crowded?.expected ?? '').not.toContain('a list of at most');
     expect(firstIssue({ clocks: many(1024, (i) => ({ label: `c${i}`, frequency: `${100 + i}M`, tolerance: 20 })) })).toBeNull();
     expect(firstIssue({ boardSpurs: many(64, (i) => ({ label: `s${i}`, frequency: `${i + 1}M`, level: -90 })) })).toBeNull();
     expect(firstIssue({ boardSpurs: [{ label: 's', frequency: '1000G', level: -90 }] })).toBeNull();
