@@ -143,7 +143,7 @@ export interface PlanReport {
  * @param listing bounded (default: at most a thousand interferers and checks
  *   per candidate) or all
  * @returns the `solve` report
- * @example planReport('Heron-4 base', context, solvePlan(context)).candidates[0].checksListed // 'all'
+ * @example planReport('hand-worked', handWorked, solvePlan(handWorked)).candidates[0].checksListed // 'all'
  */
 export function planReport(
   name: string,

@@ -55,7 +55,7 @@ export interface PlanResult {
  * @param context the plan, with a finite rate range
  * @returns windows, feasible set, blocked ranges, ranked candidates, part plans
  * @throws Error when a part's integer optimum fails its exact re-check (a bug)
- * @example solvePlan(context).candidates[0].evaluation.checkScope // 'all'
+ * @example solvePlan(handWorked).candidates[0].evaluation.checkScope // 'all'
  */
 export function solvePlan(context: PlanContext): PlanResult {
   const set = planRates(context);
@@ -109,7 +109,7 @@ export function solvePlan(context: PlanContext): PlanResult {
  * @param candidates ranked candidates
  * @param count how many, from the first, to judge in full
  * @returns the same candidates in the same order
- * @example withFullChecks(context, result.candidates).every((c) => c.evaluation.checkScope === 'all') // true
+ * @example withFullChecks(handWorked, solvePlan(handWorked).candidates).every((c) => c.evaluation.checkScope === 'all') // true
  */
 export function withFullChecks(context: PlanContext, candidates: readonly Candidate[], count = candidates.length): Candidate[] {
   return candidates.map((c, i) =>

@@ -184,7 +184,7 @@ export function imageMargin(extent: NormalisedExtent, band: Band, term: BandImag
  * @param imageLow, imageHigh the image's offsets (imageOffsets), Hz
  * @param shift c·r, Hz
  * @returns the signed margin, Hz
- * @example marginAt(72e6, 72e6, 70e6, 80e6, 0) // −2e6
+ * @example marginAt(72e6, 72e6, 70e6, 80e6, 0) // -2e6 (2 MHz inside)
  */
 export function marginAt(low: number, high: number, imageLow: number, imageHigh: number, shift: number): number {
   return Math.max(shift + imageLow - high, low - (shift + imageHigh));
