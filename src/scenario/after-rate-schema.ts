@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import { db, type Db } from '../units/quantities.js';
 import { MOST_NCO_BITS, type AfterRateSettings } from './scenario.js';
 import { level, positiveFrequency, wholeNumber } from './scenario-fields.js';
