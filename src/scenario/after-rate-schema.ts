@@ -1,3 +1,4 @@
+import './zod-config.js';
 import * as z from 'zod';
 import { db, type Db } from '../units/quantities.js';
 import { MOST_NCO_BITS, type AfterRateSettings } from './scenario.js';

@@ -1,3 +1,4 @@
+import './zod-config.js';
 import * as z from 'zod';
 import type { Db, Hz } from '../units/quantities.js';
 import type { Converter, Interleave, RateFractionSpur } from './scenario.js';

@@ -1,3 +1,4 @@
+import './zod-config.js';
 import * as z from 'zod';
 import { formatFrequency } from '../units/format-frequency.js';
 import { hz } from '../units/quantities.js';

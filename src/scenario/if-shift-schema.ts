@@ -1,3 +1,4 @@
+import './zod-config.js';
 import * as z from 'zod';
 import { formatFrequency } from '../units/format-frequency.js';
 import type { Hz } from '../units/quantities.js';

@@ -1,3 +1,4 @@
+import './zod-config.js';
 import * as z from 'zod';
 import type { Db } from '../units/quantities.js';
 import type { KindMargins, RateFractionSpur } from './scenario.js';

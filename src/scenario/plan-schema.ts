@@ -1,3 +1,4 @@
+import './zod-config.js';
 import * as z from 'zod';
 import { hz } from '../units/quantities.js';
 import type { Goal, Requirements, WantedBand } from './scenario.js';

@@ -1,3 +1,4 @@
+import './zod-config.js';
 import * as z from 'zod';
 import { InputError } from '../units/input-error.js';
 import { parseFrequency } from '../units/parse-frequency.js';

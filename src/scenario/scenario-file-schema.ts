@@ -1,4 +1,5 @@
 import { guardBands } from '../math/band.js';
+import './zod-config.js';
 import * as z from 'zod';
 import { formatFrequency } from '../units/format-frequency.js';
 import { hz, type Hz } from '../units/quantities.js';
@@ -16,9 +17,6 @@ import { afterRateFileFields, afterRateSettings } from './after-rate-schema.js';
 import { maxOrderSchema } from './interferer-model-schema.js';
 import { refuseTooMuchWork } from './work-bounds.js';
 
-// A command reads one scenario or a few: zod's compiled fast path for objects
-// costs more to build (about 5 ms at start-up) than it saves on a few parses.
-z.config({ jitless: true });
 
 /** Most board spurs in a scenario: each brings up to 20 harmonics, and the simulated capture synthesises every one. */
 export const MOST_BOARD_SPURS = 64;

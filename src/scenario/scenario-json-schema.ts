@@ -1,3 +1,4 @@
+import './zod-config.js';
 import * as z from 'zod';
 import { scenarioFileSchema } from './scenario-file-schema.js';
 

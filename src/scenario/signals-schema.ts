@@ -1,3 +1,4 @@
+import './zod-config.js';
 import * as z from 'zod';
 import type { BoardSpur, Neighbour } from './scenario.js';
 import { bandFromForm, EDGES_OR_CENTRE, refuseAt, TONE_OR_EDGES } from './band-forms.js';
