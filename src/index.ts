@@ -49,4 +49,5 @@ export { reviewPage } from './output/html-report.js';
 export { hz, db, ppm, seconds, type Hz, type Db, type Ppm, type Seconds } from './units/quantities.js';
 export { parseFrequency } from './units/parse-frequency.js';
 export { formatFrequency } from './units/format-frequency.js';
+export { quantityText, settingsText, type Medium, type QuantityText } from './text/quantity-text.js';
 export { InputError } from './units/input-error.js';

@@ -4,6 +4,8 @@ export interface Io {
   readonly err: (text: string) => void;
   /** Progress notes for long runs; present only when stderr is a terminal. */
   readonly progress?: (text: string) => void;
+  /** The terminal's width in characters; present only when standard output is a terminal. */
+  readonly columns?: number;
 }
 
 /** Exit statuses: answered, a valid question with no answer, bad input or usage. */

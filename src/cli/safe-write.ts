@@ -24,7 +24,7 @@ export interface OutputFile {
   readonly content: string;
 }
 
-export const EXISTS_EXPECTED = 'a path that does not exist yet; add --force to overwrite';
+export const EXISTS_EXPECTED = 'exists; add --force to replace it';
 export const INPUT_EXPECTED = 'a path other than an input file of this command';
 export const WRITABLE_EXPECTED = 'a file ifzone can write';
 

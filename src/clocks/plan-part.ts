@@ -1,6 +1,6 @@
 import type { ClockPart } from '../scenario/scenario.js';
 import { blockingInterferers, evaluateRate, type RateEvaluation } from '../solve/evaluate-rate.js';
-import { hz, type Ppm } from '../units/quantities.js';
+import { hz, type Hz, type Ppm } from '../units/quantities.js';
 import { planRates, type FeasibleInterval, type FeasibleSet } from '../solve/feasible-set.js';
 import type { PlanContext } from '../solve/plan-context.js';
 import { driftHeadroom, driftReach, driftSafeRange } from '../solve/drift.js';
@@ -11,6 +11,7 @@ import { bestIntegerN, ENUMERATE_UP_TO, modelSlack } from './integer-widest-marg
 import type { PartPlan, PartSearch, RateSettings } from './part-plan.js';
 import { nRangeFor, partRates, rateFamilies, rateOf, type RateFamily } from './part-rates.js';
 import { worstSlackAt } from '../solve/worst-slack.js';
+import { NO_WHOLE_MULTIPLE } from '../solve/limited-by.js';
 import { limitText } from '../solve/limited-by.js';
 
 /** Tuning of planPart's search (the defaults suit the command line; tests force each path). */
@@ -85,7 +86,12 @@ export function planPart(plan: PlanContext, set: FeasibleSet, part: ClockPart, o
   if (count === 0) return null;
   let chosen: Judged;
   let search: PartSearch;
-  if (count <= (options.everyRateUpTo ?? EVERY_RATE_UP_TO)) {
+  const goal = plan.goal;
+  const multiple = goal.kind === 'decimation' ? bestWholeMultiple(context, part, families, goal.outputRate) : null;
+  if (goal.kind === 'decimation' && multiple !== null) {
+    chosen = multiple;
+    search = 'every rate';
+  } else if (count <= (options.everyRateUpTo ?? EVERY_RATE_UP_TO)) {
     chosen = bestOfEvery(context, part);
     search = 'every rate';
   } else {
@@ -100,6 +106,8 @@ export function planPart(plan: PlanContext, set: FeasibleSet, part: ClockPart, o
       search = every ? 'every rate' : 'sampled';
     }
   }
+  // Under decimation a part passes only at a whole multiple of the output rate: without one, its best rate fails.
+  if (goal.kind === 'decimation' && multiple === null) chosen = { ...chosen, evaluation: { ...chosen.evaluation, pass: false, limitedBy: NO_WHOLE_MULTIPLE } };
   const rate = chosen.evaluation.rate;
   return {
     part,
@@ -112,6 +120,73 @@ export function planPart(plan: PlanContext, set: FeasibleSet, part: ClockPart, o
     search,
     ratesJudged: chosen.ratesJudged,
   };
+}
+
+/** Most whole-multiple rates judged for one part under the decimation goal; beyond it an even sample of them. */
+const MOST_MULTIPLES_JUDGED = 2048;
+
+/**
+ * The part's best rate among those that are whole multiples of the output
+ * rate. For each (M, D), f·N/(M·D) is a whole multiple of out exactly when
+ * f·N is a multiple of M·D·out, that is when N is a multiple of
+ * M·D·out / gcd(f, M·D·out) (integer arithmetic; figures that are not whole
+ * hertz are tried multiple by multiple to 1e-12). Those N inside the
+ * family's range (VCO limits included) are judged exactly, at most
+ * MOST_MULTIPLES_JUDGED of them (an even sample beyond).
+ *
+ * @returns the best (passing first, then widest worst slack), or null when the part makes no whole multiple
+ */
+function bestWholeMultiple(context: PlanContext, part: ClockPart, families: readonly RateFamily[], outputRate: Hz): Judged | null {
+  const { minRate, maxRate } = context.limits;
+  const options: RateSettings[] = [];
+  const seen = new Set<number>();
+  for (const family of families) {
+    const span = nRangeFor(part.frequency, family, minRate, maxRate);
+    if (!span) continue;
+    for (const N of wholeMultipleNs(part.frequency, family.M * family.D, outputRate, span)) {
+      const settings = { N, M: family.M, D: family.D };
+      const rate = rateOf(part.frequency, settings);
+      if (seen.has(rate)) continue;
+      seen.add(rate);
+      options.push(settings);
+    }
+  }
+  const step = Math.max(1, options.length / MOST_MULTIPLES_JUDGED);
+  let best: Judged | undefined;
+  let judged = 0;
+  for (let i = 0; i < options.length; i += step) {
+    const settings = options[Math.floor(i)]!;
+    const evaluation = evaluateRate(context, rateOf(part.frequency, settings), part.tolerancePpm, 'blocking');
+    judged += 1;
+    if (better(context, evaluation, best?.evaluation)) best = { settings, evaluation, ratesJudged: 0 };
+  }
+  return best ? { ...best, ratesJudged: judged } : null;
+}
+
+/** The N in span with f·N/K a whole multiple of out, ascending, at most MOST_MULTIPLES_JUDGED·4 of them. */
+function wholeMultipleNs(frequency: number, K: number, outputRate: number, span: { readonly min: number; readonly max: number }): number[] {
+  const limit = MOST_MULTIPLES_JUDGED * 4;
+  const found: number[] = [];
+  if (Number.isSafeInteger(frequency) && Number.isSafeInteger(outputRate)) {
+    const modulus = BigInt(K) * BigInt(outputRate);
+    const stride = Number(modulus / gcd(BigInt(frequency), modulus));
+    const every = Math.max(1, Math.ceil((Math.floor(span.max / stride) - Math.ceil(span.min / stride) + 1) / limit));
+    for (let m = Math.ceil(span.min / stride); m * stride <= span.max; m += every) found.push(m * stride);
+    return found;
+  }
+  const first = Math.ceil((frequency * span.min) / K / outputRate);
+  const last = Math.floor((frequency * span.max) / K / outputRate);
+  const every = Math.max(1, Math.ceil((last - first + 1) / limit));
+  for (let k = first; k <= last; k += every) {
+    const N = Math.round((k * outputRate * K) / frequency);
+    if (N >= span.min && N <= span.max && Math.abs((frequency * N) / K - k * outputRate) <= 1e-12 * k * outputRate) found.push(N);
+  }
+  return found;
+}
+
+function gcd(a: bigint, b: bigint): bigint {
+  while (b !== 0n) [a, b] = [b, a % b];
+  return a;
 }
 
 /** Ties within this fraction of the bandwidth keep the earlier (simpler) settings. */

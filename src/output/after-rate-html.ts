@@ -11,7 +11,7 @@ import { designSentence, downConverterSentences, MASK_HEAD, maskRows, maskSenten
  *
  * @param candidate a reported candidate
  * @returns HTML; '' when the candidate has no after-rate figures
- * @example afterRateHtml(report.candidates[0]) // '<h3>After the rate, at VCXO-C 184.32M...'
+ * @example afterRateHtml(report.candidates[0]) // '<h3>After the rate, at best in 171–194.5 MHz...'
  */
 export function afterRateHtml(candidate: ReportedCandidate): string {
   const after = candidate.afterRate;

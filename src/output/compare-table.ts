@@ -1,63 +1,94 @@
-import { formatFrequency, trimmed } from '../units/format-frequency.js';
-import type { ComparedPart, CompareReport, VariantVerdict } from '../plan/compare-report.js';
-import { plainTable } from './table.js';
+import { quantityText } from '../text/quantity-text.js';
+import { wrapProse } from './wrap-prose.js';
+import { NOT_PLANNED, type ComparedPart, type CompareReport } from '../plan/compare-report.js';
+import { textTable, type TextColumn } from './text-table.js';
 import { toCsv } from './csv.js';
 import { filterOrdersText } from './after-rate-words.js';
+import { zoneText } from './plan-table.js';
 
-/** The comparison as text for people: one row per part and variant, then the family answer. */
-export function compareTable(report: CompareReport): string {
+const T = quantityText('terminal');
+
+/**
+ * The comparison as text for people, laid out for a width: one row per part
+ * and variant (deciding columns first; settings, drift room and SNR in a
+ * second block when the width is short), then the family answer.
+ *
+ * @param report from compareReport
+ * @param width characters per line (Infinity: one block; default 100)
+ * @returns the text, ending in a newline
+ * @example compareTable(planFamily([{ scenario: heronBase, source: 'heron-base.json' }]).comparison) // 'Clock parts compared on Heron-4 base...'
+ */
+export function compareTable(report: CompareReport, width = 100): string {
   const several = report.variants.length > 1;
   const rows = report.parts.flatMap((part, rank) =>
     part.perVariant.map((v, i) => [
       i === 0 ? String(rank + 1) : '',
       i === 0 ? part.label : '',
       ...(several ? [v.variant] : []),
-      v.rate === null ? '–' : formatFrequency(v.rate),
-      settingsText(v),
-      v.rate === null ? '–' : v.zone === null ? 'straddles' : String(v.zone),
-      v.inverted === null ? '–' : v.inverted ? 'yes' : 'no',
-      v.rate === null ? '–' : formatFrequency(v.worstMargin, 7),
-      v.limitedBy,
-      headroomText(v, part),
-      v.jitterSnrDb === null ? '–' : trimmed(v.jitterSnrDb, 4),
-      v.channelSnrDb === null ? '–' : trimmed(v.channelSnrDb, 4),
-      filterOrdersText(v),
+      v.rate === null ? '–' : T.rate(v.rate),
+      v.rate === null ? '–' : zoneText(v),
+      v.rate === null ? '–' : T.frequency(v.worstMargin),
+      v.rate === null ? 'not planned' : v.limitedBy,
       v.pass ? 'pass' : 'FAIL',
+      T.settings(v.settings),
+      headroomText(v.headroomPpm),
+      T.tolerance(part.tolerancePpm),
+      v.jitterSnrDb === null ? '–' : T.decibels(v.jitterSnrDb),
+      v.channelSnrDb === null ? '–' : T.decibels(v.channelSnrDb),
+      filterOrdersText(v),
     ]),
   );
-  const head = ['#', 'part', ...(several ? ['variant'] : []), 'rate', 'N·M·D', 'zone', 'inverted', 'worst margin', 'limited by', 'drift room −/+ ppm (tol.)', 'jitter SNR dB', 'channel SNR dB', 'filter B/C/E', 'verdict'];
-  const lines = [`Clock parts compared on ${report.variants.join(', ')} (margins and verdicts hold over each part's whole ±ppm):`, plainTable(head, rows)];
-  if (several) lines.push(familyText(report));
-  if (report.parts.some((p) => p.perVariant.some((v) => v.filterOrders !== null))) lines.push(FILTER_ORDERS_NOTE);
-  lines.push(report.caution);
+  const columns: TextColumn[] = [
+    { head: '#', role: 'key', align: 'right' },
+    { head: 'part', role: 'key', wrap: true },
+    ...(several ? [{ head: 'variant', role: 'key', wrap: true } as const] : []),
+    { head: 'rate', align: 'right' },
+    { head: 'zone', align: 'right' },
+    { head: 'worst margin', align: 'right' },
+    { head: 'limited by', wrap: true },
+    { head: 'verdict' },
+    { head: 'settings', role: 'detail' },
+    { head: 'drift room', align: 'right', role: 'detail' },
+    { head: 'tolerance', align: 'right', role: 'detail' },
+    { head: 'jitter SNR dB', align: 'right', role: 'detail' },
+    { head: 'channel SNR dB', align: 'right', role: 'detail' },
+    { head: 'filter B/C/E', align: 'right', role: 'detail' },
+  ];
+  const lines = [
+    wrapProse(`Clock parts compared on ${report.variants.join(', ')} (margins and verdicts hold over each part's whole tolerance):`, width),
+    textTable(columns, rows, width),
+  ];
+  if (report.parts.some((p) => p.perVariant.some((v) => v.rate === null))) lines.push(wrapProse(`Not planned: ${NOT_PLANNED}.`, width));
+  if (several) lines.push(wrapProse(familyText(report), width));
+  if (report.parts.some((p) => p.perVariant.some((v) => v.filterOrders !== null))) lines.push(wrapProse(FILTER_ORDERS_NOTE, width));
+  lines.push(wrapProse(report.caution, width));
   return lines.join('\n\n') + '\n';
 }
 
 const FILTER_ORDERS_NOTE =
-  'filter B/C/E: the least Butterworth / Chebyshev I / elliptic order (low-pass prototype) of an anti-alias filter\n' +
-  "that meets the mask at the part's rate; a shortfall of the scenario's filter fails the part only where an\n" +
+  'filter B/C/E: the least Butterworth / Chebyshev I / elliptic order (low-pass prototype) of an anti-alias filter ' +
+  "that meets the mask at the part's rate; a shortfall of the scenario's filter fails the part only where an " +
   'out-of-band level is stated.';
 
-
-function settingsText(v: VariantVerdict): string {
-  if (v.settings === null) return '–';
-  const { N, M, D } = v.settings;
-  return N === 1 && M === 1 && D === 1 ? 'direct' : `${N}·${M}·${D}`;
-}
-
-function headroomText(v: VariantVerdict, part: ComparedPart): string {
-  if (v.headroomPpm === null) return `– (±${trimmed(part.tolerancePpm, 4)})`;
-  return `${trimmed(v.headroomPpm.down, 4)} / ${trimmed(v.headroomPpm.up, 4)} (±${trimmed(part.tolerancePpm, 4)})`;
+function headroomText(headroom: ComparedPart['perVariant'][number]['headroomPpm']): string {
+  return headroom === null ? '–' : T.driftRoom(headroom.down, headroom.up);
 }
 
 function familyText(report: CompareReport): string {
   if (report.family.length === 0) return 'One part for the whole family: none passes every variant.';
   const best = report.parts.filter((p) => report.family.includes(p.label));
-  const list = best.map((p) => `${p.label} (worst margin ${formatFrequency(p.familyWorstMargin, 7)}, ${p.familyLimitedBy})`).join('; ');
+  const list = best.map((p) => `${p.label} (worst margin ${T.frequency(p.familyWorstMargin)}, ${p.familyLimitedBy})`).join('; ');
   return `One part for the whole family, best first: ${list}.`;
 }
 
-/** The comparison as CSV, one row per part and variant. */
+/**
+ * The comparison as CSV, one row per part and variant, every number in full
+ * precision with its unit in the column name.
+ *
+ * @param report from compareReport
+ * @returns CSV text, CRLF line ends
+ * @example compareCsv(planFamily([{ scenario: heronBase, source: 'heron-base.json' }]).comparison) // 'part,frequency_hz,tolerance_ppm,...'
+ */
 export function compareCsv(report: CompareReport): string {
   const head = ['part', 'frequency_hz', 'tolerance_ppm', 'jitter_s', 'variant', 'rate_hz', 'N', 'M', 'D', 'zone', 'inverted', 'worst_margin_hz', 'limited_by', 'headroom_down_ppm', 'headroom_up_ppm', 'jitter_snr_db', 'channel_snr_db', 'pass', 'passes_all', 'butterworth_order', 'chebyshev_order', 'elliptic_order', 'mask_margin_db'];
   const rows = report.parts.flatMap((p) =>

@@ -1,23 +1,28 @@
-import { formatFrequency, trimmed } from '../units/format-frequency.js';
+import { quantityText } from '../text/quantity-text.js';
 import { escapeXml } from '../pictures/escape-xml.js';
 import { rateMapSvg } from '../pictures/rate-map.js';
 import { spectrumSvg } from '../pictures/spectrum.js';
 import { bandPositionSvg } from '../pictures/band-position.js';
-import { filterMaskSvg } from '../pictures/filter-mask.js';
 import type { PlanReport, ReportedCandidate } from '../plan/plan-report.js';
 import type { CompareReport } from '../plan/compare-report.js';
+import { factorText, goalText, zoneText } from './plan-table.js';
+import { orderedChecks, tiedGroups } from './plan-order.js';
 import { htmlTable } from './html-table.js';
 import { shiftParts } from './shift-table.js';
 import { afterRateHtml } from './after-rate-html.js';
 import { candidateVerdict, filterOrdersText, maskShortfall } from './after-rate-words.js';
+import { filterMaskSvg } from '../pictures/filter-mask.js';
+
+const T = quantityText('html');
 
 const JOB = 'Sample-clock plan for an IF-sampling receiver: the rates at which the wanted channel sits whole in one Nyquist zone with its guard bands and nothing strong enough folds onto it.';
 
 const STYLE = `
-body { font-family: sans-serif; font-size: 10.5pt; color: #000; margin: 2em; max-width: 1000px; }
+body { font-family: sans-serif; font-size: 10.5pt; color: #000; margin: 1.5em; }
 h1 { font-size: 16pt; margin-bottom: 0.2em; } h2 { font-size: 13pt; border-bottom: 1px solid #000; margin-top: 2em; } h3 { font-size: 11pt; }
 table { border-collapse: collapse; margin: 0.6em 0 1.2em; font-size: 9pt; } caption { text-align: left; font-weight: bold; padding: 0.2em 0; }
 th, td { border: 1px solid #888; padding: 2px 6px; text-align: left; vertical-align: top; } th { background: #eee; }
+td.num { white-space: nowrap; text-align: right; } figure svg { max-width: 100%; }
 td.fail { font-weight: bold; text-decoration: underline; } td.pass { font-style: italic; }
 .caution { border: 2px solid #000; padding: 0.6em 1em; margin: 1em 0; }
 figure { margin: 1em 0; page-break-inside: avoid; } svg { max-width: 100%; height: auto; }
@@ -59,13 +64,15 @@ function comparisonSection(report: CompareReport): string {
     p.perVariant.map((v) => [
       p.label,
       v.variant,
-      v.rate === null ? '–' : formatFrequency(v.rate),
-      v.settings === null ? '–' : `N ${v.settings.N}, M ${v.settings.M}, D ${v.settings.D}`,
-      v.zone === null ? '–' : String(v.zone),
-      v.rate === null ? '–' : formatFrequency(v.worstMargin, 7),
-      v.limitedBy,
-      v.headroomPpm === null ? '–' : `−${trimmed(v.headroomPpm.down, 4)} / +${trimmed(v.headroomPpm.up, 4)} (±${trimmed(p.tolerancePpm, 4)})`,
-      v.channelSnrDb === null ? '–' : trimmed(v.channelSnrDb, 4),
+      v.rate === null ? '–' : T.rate(v.rate),
+      T.settings(v.settings),
+      v.rate === null ? '–' : zoneText(v),
+      v.rate === null ? '–' : T.frequency(v.worstMargin),
+      v.rate === null ? 'not planned' : v.limitedBy,
+      v.headroomPpm === null ? '–' : T.driftRoom(v.headroomPpm.down, v.headroomPpm.up),
+      T.tolerance(p.tolerancePpm),
+      v.jitterSnrDb === null ? '–' : T.decibels(v.jitterSnrDb),
+      v.channelSnrDb === null ? '–' : T.decibels(v.channelSnrDb),
       filterOrdersText(v),
       verdictCell(v.pass),
     ]),
@@ -73,7 +80,7 @@ function comparisonSection(report: CompareReport): string {
   const family = report.family.length > 0 ? `One part for the whole family, best first: ${report.family.join(', ')}.` : 'No part passes every variant.';
   return (
     '<h2>Clock parts across the variants</h2>' +
-    htmlTable(['part', 'variant', 'rate', 'settings', 'zone', 'worst margin', 'limited by', 'drift room ppm (tolerance)', 'channel SNR dB', 'filter orders B/C/E', 'verdict'], rows) +
+    htmlTable(['part', 'variant', 'rate', 'settings', 'zone', 'worst margin', 'limited by', 'drift room', 'tolerance', 'jitter SNR dB', 'channel SNR dB', 'filter orders B/C/E', 'verdict'], rows) +
     `<p>${escapeXml(family)}</p>`
   );
 }
@@ -96,82 +103,85 @@ function planSection(report: PlanReport): string {
 }
 
 function inputsTables(report: PlanReport): string {
-  const { band, guard, search, goal } = report;
+  const { band, guard, search } = report;
   const inputs = htmlTable(
     ['wanted band', 'guards', 'rates searched', 'goal'],
-    [[`${formatFrequency(band.low)} – ${formatFrequency(band.high)}`, `${formatFrequency(guard.low)} below, ${formatFrequency(guard.high)} above`, `${formatFrequency(search.minRate)} – ${formatFrequency(search.maxRate)}`, goal.kind]],
+    [[T.extent(band.low, band.high), `${T.frequency(guard.low)} below, ${T.frequency(guard.high)} above`, T.extent(search.minRate, search.maxRate), goalText(report)]],
     'Inputs',
   );
   const interferers = htmlTable(
-    ['interferer', 'kind', 'source', 'extent', 'level dBFS', 'required margin', 'blocks'],
-    report.interferers.map((i) => [i.label, i.kind, i.source, extentText(i.rateMultiple, i.low, i.high), trimmed(i.level, 4), formatFrequency(i.requiredMargin), i.blocking ? 'yes' : 'no']),
-    'Interferers (extent = multiple of the rate r plus a band; levels at the converter)',
+    ['interferer', 'kind', 'source', 'input frequencies', 'level dBFS', 'required margin', 'blocks'],
+    report.interferers.map((i) => [i.label, i.kind, i.source, T.tiedExtent(i.rateMultiple, i.low, i.high), T.level(i.level), T.frequency(i.requiredMargin), i.blocking ? 'yes' : 'no']),
+    'Interferers (input frequencies; r is the sampling rate; levels at the converter)',
   );
   return inputs + interferers;
 }
 
-function extentText(multiple: number, low: number, high: number): string {
-  const band = low === high ? formatFrequency(low) : `[${formatFrequency(low)}, ${formatFrequency(high)}]`;
-  return multiple === 0 ? band : `${trimmed(multiple, 6)}·r + ${band}`;
-}
-
 function windowsTable(report: PlanReport): string {
   if (report.windows.length === 0) return '<p>No legal window inside the rate range.</p>';
-  const rows = report.windows.map((w) => [String(w.zone), w.inverted ? 'yes' : 'no', formatFrequency(w.minRate), formatFrequency(w.maxRate), formatFrequency(w.maxRate - w.minRate)]);
-  return htmlTable(['zone', 'inverted', 'min rate', 'max rate', 'width'], rows, 'Legal windows (band with guards whole in one zone)');
+  const rows = report.windows.map((w) => [String(w.zone), w.inverted ? 'yes' : 'no', T.rateRange(w.minRate, w.maxRate), T.frequency(w.maxRate - w.minRate)]);
+  return htmlTable(['zone', 'inverted', 'legal rates', 'width'], rows, 'Legal windows (band with guards whole in one zone; rates rounded inward)');
 }
 
 function feasibleTable(report: PlanReport): string {
   if (report.feasible.length === 0) return '<p>No feasible interval: every legal rate is blocked.</p>';
-  const rows = report.feasible.map((f) => [String(f.zone), f.inverted ? 'yes' : 'no', formatFrequency(f.minRate), formatFrequency(f.maxRate), formatFrequency(f.width), `±${trimmed(f.widthPpm, 4)}`]);
-  return htmlTable(['zone', 'inverted', 'min rate', 'max rate', 'width', 'ppm at centre'], rows, 'Feasible intervals');
+  const rows = report.feasible.map((f) => [String(f.zone), f.inverted ? 'yes' : 'no', T.rateRange(f.minRate, f.maxRate), T.frequency(f.width), T.tolerance(f.widthPpm)]);
+  return htmlTable(['zone', 'inverted', 'feasible rates', 'width', 'drift at centre'], rows, 'Feasible intervals (nothing blocking lands near the band)');
 }
 
 function candidatesTable(report: PlanReport): string {
+  const goal = report.goal.kind;
   const rows = report.candidates.map((c, i) => [
     String(i + 1),
     c.label,
-    formatFrequency(c.rate),
-    `±${trimmed(c.tolerancePpm, 4)}`,
-    c.zone === null ? 'straddles' : String(c.zone),
-    c.inverted === null ? '–' : c.inverted ? 'yes' : 'no',
-    c.center === null ? '–' : formatFrequency(c.center),
-    formatFrequency(c.worstMargin, 7),
+    T.rate(c.rate),
+    zoneText(c),
+    T.frequency(c.worstMargin),
     c.limitedBy,
     c.pass ? verdictCell(true) : ([candidateVerdict(c), 'fail'] as const),
+    ...(goal === 'decimation' ? [factorText(c.decimationFactor)] : []),
+    ...(goal === 'quarter-rate' ? [c.quarterRateOffset === null ? '–' : T.signedFrequency(c.quarterRateOffset)] : []),
+    T.tolerance(c.tolerancePpm),
+    c.nco === null ? '–' : T.rate(c.nco),
+    T.settings(c.settings),
+    c.headroomPpm === null ? '–' : T.driftRoom(c.headroomPpm.down, c.headroomPpm.up),
+    c.jitterSnrDb === null ? '–' : T.decibels(c.jitterSnrDb),
+    c.channelSnrDb === null ? '–' : T.decibels(c.channelSnrDb),
   ]);
-  return htmlTable(['#', 'candidate', 'rate', 'tolerance', 'zone', 'inverted', 'centre / NCO', 'worst margin', 'limited by', 'verdict'], rows, 'Candidates, best first (over each rate\'s whole tolerance)');
+  const head = ['#', 'candidate', 'rate', 'zone', 'worst margin', 'limited by', 'verdict', ...(goal === 'decimation' ? ['decimation factor'] : []), ...(goal === 'quarter-rate' ? ['centre from odd·rate/4'] : []), 'tolerance', 'NCO', 'settings', 'drift room', 'jitter SNR dB', 'channel SNR dB'];
+  const ties = tiedGroups(report.candidates, 'html').map((t) => `<p>${escapeXml(t)}</p>`).join('');
+  return htmlTable(head, rows, "Candidates, best first (over each rate's whole tolerance)") + ties;
 }
 
 function checksTable(candidate: ReportedCandidate): string {
-  const rows = candidate.checks.map((c) => [
+  const rows = orderedChecks(candidate.checks).map((c) => [
     c.label,
     c.kind,
-    `${formatFrequency(c.input[0])} – ${formatFrequency(c.input[1])}`,
-    c.alias.map(([a, b]) => (a === b ? formatFrequency(a) : `${formatFrequency(a)} – ${formatFrequency(b)}`)).join(', '),
-    formatFrequency(c.margin, 7),
-    trimmed(c.level, 4),
-    trimmed(c.levelMargin, 4),
+    T.extent(c.input[0], c.input[1]),
+    c.alias.map(([a, b]) => T.extent(a, b)).join(', '),
+    T.frequency(c.margin),
+    T.level(c.level),
+    T.decibels(c.levelMargin),
     c.blocking ? 'yes' : 'no',
     verdictCell(c.pass),
   ]);
-  return htmlTable(['check', 'kind', 'input at this rate', 'aliased to', 'margin', 'level dBFS', 'level margin dB', 'blocks', 'verdict'], rows, `Checks at ${candidate.label} (${formatFrequency(candidate.rate)})`);
+  return htmlTable(['check', 'kind', 'input at this rate', 'aliased to', 'margin', 'level dBFS', 'level margin dB', 'blocks', 'verdict'], rows, `Checks at ${candidate.label} (${T.rate(candidate.rate)}), blocking checks first, tightest first`);
 }
 
 function shiftHtml(shift: NonNullable<PlanReport['ifShift']>): string {
-  const { title, head, rows, searched } = shiftParts(shift);
+  const { title, columns, rows, searched } = shiftParts(shift, 'html');
   const heading = '<h3>Best IF shift and rate</h3>';
   if (rows.length === 0) return `${heading}<p>${escapeXml(title)} No rate is feasible at any seed shift (${escapeXml(searched)})</p>`;
-  return `${heading}${htmlTable(head, rows, title)}<p>${escapeXml(searched)}</p>`;
+  return `${heading}${htmlTable(columns.map((c) => c.head), rows, title)}<p>${escapeXml(searched)}</p>`;
 }
 
 function verdictLine(report: PlanReport, focus: ReportedCandidate | undefined): string {
   if (!focus) return 'No candidate: no legal window inside the rate range.';
   if (report.best === null) {
     const mask = candidateVerdict(focus) === 'FAIL: mask' ? maskShortfall(focus) : null;
-    return `No candidate passes; the nearest is ${focus.label} at ${formatFrequency(focus.rate)}, ${mask ?? `limited by ${focus.limitedBy}`}.`;
+    return `No candidate passes; the nearest is ${focus.label} at ${T.rate(focus.rate)}, ${mask ?? `limited by ${focus.limitedBy}`}.`;
   }
-  return `Best: ${focus.label} at ${formatFrequency(focus.rate)}, zone ${focus.zone}${focus.inverted ? ' (inverted)' : ''}, worst margin ${formatFrequency(focus.worstMargin, 7)} (${focus.limitedBy}).`;
+  return `Best: ${focus.label} at ${T.rate(focus.rate)}, zone ${zoneText(focus)}, worst margin ${T.frequency(focus.worstMargin)} (${focus.limitedBy}).`;
 }
 
 function verdictCell(pass: boolean): readonly [string, string] {

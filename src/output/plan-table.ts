@@ -1,138 +1,217 @@
-import { formatFrequency, trimmed } from '../units/format-frequency.js';
+import { quantityText } from '../text/quantity-text.js';
+import { wrapProse } from './wrap-prose.js';
 import type { PlanReport, ReportedCandidate, ReportedCheck } from '../plan/plan-report.js';
-import { plainTable } from './table.js';
+import { textTable, type TextColumn } from './text-table.js';
 import { shiftSection } from './shift-table.js';
 import { afterRateSection } from './after-rate-table.js';
 import { candidateVerdict, maskShortfall } from './after-rate-words.js';
+import { orderedChecks, tiedGroups } from './plan-order.js';
 
 const MOST_CANDIDATES_SHOWN = 12;
 const MOST_CHECKS_SHOWN = 30;
+const T = quantityText('terminal');
 
-/** The solved plan as text for people: windows, feasible set, candidates, the best one's checks and, with ifShift, the best (IF shift, rate) pair. */
-export function planTable(report: PlanReport): string {
-  if (report.conflicts.length > 0) return [heading(report), conflictsSection(report), report.caution].join('\n\n') + '\n';
-  const sections = [heading(report), windowsSection(report), feasibleSection(report), candidatesSection(report)];
-  const focus = report.candidates[0];
-  if (focus) sections.push(checksSection(focus));
-  if (focus?.afterRate) sections.push(afterRateSection(focus));
-  if (report.ifShift) sections.push(shiftSection(report.ifShift));
-  sections.push(verdict(report), report.caution);
+/**
+ * The solved plan as text for people, laid out for a width: windows, feasible
+ * set, candidates (deciding columns first; drift, settings and SNR in a
+ * second block when the width is short), the first candidate's checks and,
+ * with ifShift, the best (IF shift, rate) pair.
+ *
+ * @param report the solved plan
+ * @param width characters per line (Infinity: every table in one block)
+ * @returns the text, ending in a newline
+ * @example planTable(report, 100).startsWith('Scenario: Heron-4 base') // true
+ */
+export function planTable(report: PlanReport, width = 100): string {
+  const prose = (text: string) => wrapProse(text, width);
+  if (report.conflicts.length > 0) return [heading(report, prose), conflictsSection(report, width), prose(report.caution)].join('\n\n') + '\n';
+  const sections = [heading(report, prose), windowsSection(report, width), feasibleSection(report, width), candidatesSection(report, width)];
+  // Rates given with --rate each get their checks; a search shows the first candidate's.
+  const typed = report.candidates.length > 0 && report.candidates.every((c) => c.origin === 'typed');
+  for (const focus of typed ? report.candidates : report.candidates.slice(0, 1)) {
+    sections.push(checksSection(focus, width));
+    if (focus.afterRate) sections.push(afterRateSection(focus, false, width));
+  }
+  if (report.ifShift) sections.push(shiftSection(report.ifShift, width));
+  sections.push(prose(verdict(report)), prose(report.caution));
   return sections.join('\n\n') + '\n';
 }
 
-function heading(report: PlanReport): string {
+function heading(report: PlanReport, prose: (text: string) => string): string {
   const { band, guard, search } = report;
   const blocking = report.interferers.filter((i) => i.blocking).length;
   return [
     `Scenario: ${report.scenario}`,
-    `Wanted band ${range(band.low, band.high)} (width ${formatFrequency(band.high - band.low)}), guards ${formatFrequency(guard.low)} below and ${formatFrequency(guard.high)} above.`,
-    `Rates searched ${range(search.minRate, search.maxRate)}; goal: ${goalText(report)}.`,
+    `Wanted band ${T.extent(band.low, band.high)} (width ${T.frequency(band.high - band.low)}), guards ${T.frequency(guard.low)} below and ${T.frequency(guard.high)} above.`,
+    `Rates searched ${T.extent(search.minRate, search.maxRate)}; goal: ${goalText(report)}.`,
     `${report.interferers.length} interferers derived, ${blocking} strong enough to block.`,
     ...(report.derivation ? [derivationText(report.derivation)] : []),
-  ].join('\n');
+  ]
+    .map(prose)
+    .join('\n');
 }
 
 function derivationText(d: NonNullable<PlanReport['derivation']>): string {
-  const strongest = d.strongestPruned === null ? '' : ` (the strongest at ${trimmed(d.strongestPruned, 4)} dBFS)`;
+  const strongest = d.strongestPruned === null ? '' : ` (the strongest at ${T.level(d.strongestPruned)} dBFS)`;
   const images = d.prunedImages > 0 ? `; ${d.prunedImages} interleaving images under it left out` : '';
-  return `Mixing products to order ${d.maxOrder} (harmonics to ${Math.max(d.maxOrder, d.harmonicOrder)}): ${d.products} listed, ${d.pruned} at or under the threshold ${trimmed(d.threshold, 4)} dBFS left out${strongest}${images}.`;
+  return `Mixing products to order ${d.maxOrder} (harmonics to ${Math.max(d.maxOrder, d.harmonicOrder)}): ${d.products} listed, ${d.pruned} at or under the threshold ${T.level(d.threshold)} dBFS left out${strongest}${images}.`;
 }
 
-function conflictsSection(report: PlanReport): string {
-  return 'No sampling rate can work:\n' + report.conflicts.map((c) => `- ${c.sentence}`).join('\n');
+function conflictsSection(report: PlanReport, width: number): string {
+  return 'No sampling rate can work:\n' + report.conflicts.map((c) => wrapProse(`- ${c.sentence}`, width)).join('\n');
 }
 
-function goalText(report: PlanReport): string {
+/**
+ * The goal in words.
+ *
+ * @param report the solved plan
+ * @returns e.g. "decimation to 30.72 MHz (rates a whole multiple of it)"
+ * @example goalText(report) // 'widest-margin'
+ */
+export function goalText(report: PlanReport): string {
   const goal = report.goal;
-  return goal.kind === 'decimation' ? `decimation to ${formatFrequency(goal.outputRate)}` : goal.kind;
+  return goal.kind === 'decimation' ? `decimation to ${T.rate(goal.outputRate)} (rates a whole multiple of it)` : goal.kind;
 }
 
-function windowsSection(report: PlanReport): string {
+function windowsSection(report: PlanReport, width: number): string {
   if (report.windows.length === 0) return 'Legal windows: none inside the rate range.';
-  const rows = report.windows.map((w) => [String(w.zone), yesNo(w.inverted), formatFrequency(w.minRate), formatFrequency(w.maxRate), formatFrequency(w.maxRate - w.minRate)]);
-  return 'Legal windows (band with guards whole in one zone):\n' + plainTable(['zone', 'inverted', 'min rate', 'max rate', 'width'], rows);
+  const rows = report.windows.map((w) => [String(w.zone), yesNo(w.inverted), T.rateRange(w.minRate, w.maxRate), T.frequency(w.maxRate - w.minRate)]);
+  const columns: TextColumn[] = [{ head: 'zone', role: 'key', align: 'right' }, { head: 'inverted' }, { head: 'legal rates', align: 'right' }, { head: 'width', align: 'right' }];
+  return wrapProse('Legal windows (band with guards whole in one zone; rates rounded inward):', width) + '\n' + textTable(columns, rows, width);
 }
 
-function feasibleSection(report: PlanReport): string {
+function feasibleSection(report: PlanReport, width: number): string {
   if (report.feasible.length === 0) return 'Feasible intervals: none; every legal rate is blocked.';
-  const rows = report.feasible.map((f) => [String(f.zone), yesNo(f.inverted), formatFrequency(f.minRate), formatFrequency(f.maxRate), formatFrequency(f.width), `±${trimmed(f.widthPpm, 4)}`]);
-  return 'Feasible intervals (nothing blocking lands near the band):\n' + plainTable(['zone', 'inverted', 'min rate', 'max rate', 'width', 'ppm at centre'], rows);
+  const rows = report.feasible.map((f) => [String(f.zone), yesNo(f.inverted), T.rateRange(f.minRate, f.maxRate), T.frequency(f.width), T.tolerance(f.widthPpm)]);
+  const columns: TextColumn[] = [{ head: 'zone', role: 'key', align: 'right' }, { head: 'inverted' }, { head: 'feasible rates', align: 'right' }, { head: 'width', align: 'right' }, { head: 'drift at centre', align: 'right' }];
+  return wrapProse('Feasible intervals (nothing blocking lands near the band):', width) + '\n' + textTable(columns, rows, width);
 }
 
-function candidatesSection(report: PlanReport): string {
+function candidatesSection(report: PlanReport, width: number): string {
   const shown = report.candidates.slice(0, MOST_CANDIDATES_SHOWN);
+  const goal = report.goal.kind;
+  const columns: TextColumn[] = [
+    { head: '#', role: 'key', align: 'right' },
+    { head: 'candidate', role: 'key', wrap: true },
+    { head: 'rate', align: 'right' },
+    { head: 'zone', align: 'right' },
+    { head: 'worst margin', align: 'right' },
+    { head: 'limited by', wrap: true },
+    { head: 'verdict' },
+    ...(goal === 'decimation' ? [{ head: 'decimation factor', align: 'right' } as const] : []),
+    ...(goal === 'quarter-rate' ? [{ head: 'centre from odd·rate/4', align: 'right' } as const] : []),
+    { head: 'tolerance', align: 'right', role: 'detail' },
+    { head: 'NCO (centre after sampling)', align: 'right', role: 'detail' },
+    { head: 'settings', role: 'detail' },
+    { head: 'drift room', align: 'right', role: 'detail' },
+    { head: 'jitter SNR dB', align: 'right', role: 'detail' },
+    { head: 'channel SNR dB', align: 'right', role: 'detail' },
+  ];
   const rows = shown.map((c, i) => [
     String(i + 1),
     c.label,
-    formatFrequency(c.rate),
-    `±${trimmed(c.tolerancePpm, 4)}`,
-    c.zone === null ? 'straddles' : String(c.zone),
-    c.inverted === null ? '–' : yesNo(c.inverted),
-    c.center === null ? '–' : formatFrequency(c.center),
-    formatFrequency(c.worstMargin, 7),
+    T.rate(c.rate),
+    zoneText(c),
+    T.frequency(c.worstMargin),
     c.limitedBy,
-    settingsText(c.settings),
-    c.headroomPpm === null ? '–' : `−${trimmed(c.headroomPpm.down, 3)} / +${trimmed(c.headroomPpm.up, 3)}`,
     candidateVerdict(c),
+    ...(goal === 'decimation' ? [factorText(c.decimationFactor)] : []),
+    ...(goal === 'quarter-rate' ? [c.quarterRateOffset === null ? '–' : T.signedFrequency(c.quarterRateOffset)] : []),
+    T.tolerance(c.tolerancePpm),
+    c.nco === null ? '–' : T.rate(c.nco),
+    T.settings(c.settings),
+    c.headroomPpm === null ? '–' : T.driftRoom(c.headroomPpm.down, c.headroomPpm.up),
+    c.jitterSnrDb === null ? '–' : T.decibels(c.jitterSnrDb),
+    c.channelSnrDb === null ? '–' : T.decibels(c.channelSnrDb),
   ]);
   const more = report.candidates.length - shown.length;
-  const table = plainTable(['#', 'candidate', 'rate', 'ppm', 'zone', 'inverted', 'centre / NCO', 'worst margin', 'limited by', 'from part', 'headroom ppm', 'verdict'], rows);
-  const unplanned = report.unplannedParts.length > 0 ? `\nNot planned (no rate inside the converter's range): ${report.unplannedParts.join(', ')}.` : '';
-  return 'Candidates, best first (margins hold over each rate\'s whole ±ppm):\n' + table + (more > 0 ? `\n(+${more} more in --json)` : '') + unplanned;
+  const lines = [wrapProse("Candidates, best first (margins hold over each rate's whole tolerance; zone \"2 inv\": inverted):", width), textTable(columns, rows, width)];
+  if (more > 0) lines.push(`(+${more} more in --json)`);
+  for (const tie of tiedGroups(shown)) lines.push(wrapProse(tie, width));
+  if (report.unplannedParts.length > 0) lines.push(wrapProse(`Not planned (no rate inside the converter's range): ${report.unplannedParts.join(', ')}.`, width));
+  return lines.join('\n');
 }
 
-/** A part's settings for people: "direct", "÷2" through a divider, "×93/1 ÷5" through a synthesiser (rate = f·N/M ÷ D). */
-function settingsText(settings: ReportedCandidate['settings']): string {
-  if (settings === null) return '–';
-  const { N, M, D } = settings;
-  if (N === 1 && M === 1) return D === 1 ? 'direct' : `÷${D}`;
-  return `×${N}/${M}` + (D === 1 ? '' : ` ÷${D}`);
+/**
+ * A zone for people: "2", "2 inv" when the band arrives inverted, "straddles" when it crosses a zone edge.
+ *
+ * @param c a candidate
+ * @example zoneText(candidate) // '2 inv'
+ */
+export function zoneText(c: { readonly zone: number | null; readonly inverted: boolean | null }): string {
+  if (c.zone === null) return 'straddles';
+  return c.inverted ? `${c.zone} inv` : String(c.zone);
 }
 
-function checksSection(candidate: ReportedCandidate): string {
-  const ordered = [...candidate.checks].sort((a, b) => Number(b.blocking) - Number(a.blocking) || a.margin - a.requiredMargin - (b.margin - b.requiredMargin));
+/**
+ * A decimation factor: the whole number, or the ratio to 4 digits marked "not whole".
+ *
+ * @param factor rate ÷ output rate, or null
+ * @example factorText(6) // '6'
+ */
+export function factorText(factor: number | null): string {
+  if (factor === null) return '–';
+  const whole = Math.round(factor);
+  return Math.abs(factor - whole) <= 1e-9 * factor ? String(whole) : `${T.number(factor, 4)} (not whole)`;
+}
+
+function checksSection(candidate: ReportedCandidate, width: number): string {
+  const ordered = orderedChecks(candidate.checks);
   const shown = ordered.slice(0, MOST_CHECKS_SHOWN);
-  const rows = shown.map((c) => checkRow(c));
   const more = ordered.length - shown.length;
-  const inversion = candidate.conjugate ? '; spectrum inverted: conjugate the complex output (or tune the NCO to the negative frequency)' : '';
-  const title = `Checks at ${candidate.label} (${formatFrequency(candidate.rate)}): zone edge margin ${formatFrequency(candidate.zoneEdgeMargin, 7)}` +
-    (candidate.nco === null ? '' : `; NCO ${formatFrequency(candidate.nco)}${inversion}`) + ':';
+  const inversion = candidate.conjugate ? '; the band arrives inverted: conjugate the complex output (or tune the NCO to the negative frequency)' : '';
+  const title =
+    `Checks at ${candidate.label === T.rate(candidate.rate) ? candidate.label : `${candidate.label} (${T.rate(candidate.rate)})`}: zone edge margin ${T.frequency(candidate.zoneEdgeMargin)}` +
+    (candidate.nco === null ? '' : `; NCO ${T.rate(candidate.nco)}${inversion}`) +
+    '. Blocking checks first, tightest first:';
+  const columns: TextColumn[] = [
+    { head: 'check', role: 'key', wrap: true },
+    { head: 'aliased to', wrap: true },
+    { head: 'margin', align: 'right' },
+    { head: 'level dBFS', align: 'right' },
+    { head: 'blocks' },
+    { head: 'verdict' },
+    { head: 'kind', role: 'detail' },
+    { head: 'input at this rate', role: 'detail', wrap: true },
+    { head: 'level margin dB', align: 'right', role: 'detail' },
+  ];
+  const table = textTable(columns, shown.map(checkRow), width);
   const omitted = candidate.checksOmitted;
   const rest = more > 0 ? `\n(+${more} more in --json${omitted > 0 ? `, ${omitted} more with --json --all-checks` : ''})` : omitted > 0 ? `\n(+${omitted} more with --json --all-checks)` : '';
-  return title + '\n' + plainTable(['check', 'kind', 'input at this rate', 'aliased to', 'margin', 'level dBFS', 'level margin dB', 'blocks', 'verdict'], rows) + rest;
+  return wrapProse(title, width) + '\n' + table + rest;
 }
 
 function checkRow(check: ReportedCheck): string[] {
   return [
     check.label,
-    check.kind,
-    range(check.input[0], check.input[1]),
-    check.alias.map(([a, b]) => range(a, b)).join(', '),
-    formatFrequency(check.margin, 7),
-    trimmed(check.level, 4),
-    trimmed(check.levelMargin, 4),
+    check.alias.map(([a, b]) => T.extent(a, b)).join(', '),
+    T.frequency(check.margin),
+    T.level(check.level),
     yesNo(check.blocking),
     check.pass ? 'pass' : 'FAIL',
+    check.kind,
+    T.extent(check.input[0], check.input[1]),
+    T.decibels(check.levelMargin),
   ];
 }
 
 function verdict(report: PlanReport): string {
+  if (report.candidates.length > 0 && report.candidates.every((c) => c.origin === 'typed')) {
+    return report.candidates.map((c) => `${c.label}: ${c.pass ? 'passes' : 'FAILS'}, zone ${zoneText(c)}, worst margin ${T.frequency(c.worstMargin)} (${c.limitedBy}).`).join('\n');
+  }
   const best = report.candidates.find((c) => c.label === report.best);
-  if (best) return `Best: ${best.label} at ${formatFrequency(best.rate)}, zone ${best.zone}${best.inverted ? ' (inverted)' : ''}, worst margin ${formatFrequency(best.worstMargin)} (${best.limitedBy}).`;
+  if (best) return `Best: ${best.label} at ${T.rate(best.rate)}, zone ${zoneText(best)}, worst margin ${T.frequency(best.worstMargin)} (${best.limitedBy}).`;
   const nearest = report.candidates[0];
   if (!nearest) return 'No candidate: no legal window inside the rate range.';
   const failing = nearest.checks.filter((c) => !c.pass).sort((a, b) => a.margin - a.requiredMargin - (b.margin - b.requiredMargin))[0];
   const shortfall = maskShortfall(nearest);
-  const cause = shortfall !== null && failing === undefined && nearest.zoneEdgeMargin >= 0
-    ? shortfall
-    : failing
-    ? `${failing.label} lands ${formatFrequency(failing.margin)} from the band where ${formatFrequency(failing.requiredMargin)} is required (short by ${formatFrequency(failing.requiredMargin - failing.margin)})`
-    : `the guarded band crosses a zone edge by ${formatFrequency(-nearest.zoneEdgeMargin)}`;
-  return `No candidate passes. Nearest: ${nearest.label} at ${formatFrequency(nearest.rate)}: ${cause}.`;
-}
-
-function range(low: number, high: number): string {
-  return low === high ? formatFrequency(low) : `${formatFrequency(low)} – ${formatFrequency(high)}`;
+  const cause =
+    shortfall !== null && failing === undefined && nearest.zoneEdgeMargin >= 0
+      ? shortfall
+      : failing
+        ? `${failing.label} lands ${T.frequency(failing.margin)} from the band where ${T.frequency(failing.requiredMargin)} is required (short by ${T.frequency(failing.requiredMargin - failing.margin)})`
+        : `the guarded band crosses a zone edge by ${T.frequency(-nearest.zoneEdgeMargin)}`;
+  return `No candidate passes. Nearest: ${nearest.label} at ${T.rate(nearest.rate)}: ${cause}.`;
 }
 
 function yesNo(value: boolean): string {

@@ -1,88 +1,119 @@
-import { formatFrequency, trimmed } from '../units/format-frequency.js';
-import type { PeakRow, PredictionRow, VerifyResult } from '../report/verify-result.js';
-import { plainTable } from './table.js';
+import { quantityText } from '../text/quantity-text.js';
+import { wrapProse } from './wrap-prose.js';
+import type { PeakRow, VerifyResult } from '../report/verify-result.js';
+import { textTable, type TextColumn } from './text-table.js';
 
 /** Unlisted peaks shown in the table; JSON carries them all. */
 const MOST_PEAKS_SHOWN = 25;
+const T = quantityText('terminal');
 
 /**
- * A simulated capture beside the plan, as text for people: the record and
- * converter model, the tones synthesised, every predicted line with its
- * measurement, the peaks the plan does not list, the verdict, what was
- * compared, and the caution.
+ * A simulated capture beside the plan, as text for people laid out for a
+ * width: the record and converter model, the tones synthesised, every
+ * predicted line with its measurement, the peaks the plan does not list,
+ * the verdict, what was compared, and the caution.
  *
  * @param result from verifyCapture
+ * @param width characters per line (Infinity: one block per table)
  * @returns the text, ending in a newline
- * @example verifyTable(verifyCapture(s, { rate: hz(184.32e6) })).startsWith('Simulated capture: ') // true
+ * @example verifyTable(verifyCapture(s, { rate: hz(184.32e6) }), 100).startsWith('Simulated capture: ') // true
  */
-export function verifyTable(result: VerifyResult): string {
-  const sections = [heading(result), tonesSection(result), linesSection(result)];
-  const peaks = peaksSection(result.unlisted);
+export function verifyTable(result: VerifyResult, width = 100): string {
+  const prose = (text: string) => wrapProse(text, width);
+  const sections = [heading(result, prose), tonesSection(result, width), linesSection(result, width)];
+  const peaks = peaksSection(result.unlisted, width);
   if (peaks) sections.push(peaks);
-  sections.push(verdict(result), `What was compared: ${result.compared}`, result.caution);
+  sections.push(prose(verdict(result)), prose(`What was compared: ${result.compared}`), prose(result.caution));
   return sections.join('\n\n') + '\n';
 }
 
-function heading(r: VerifyResult): string {
+function heading(r: VerifyResult, prose: (text: string) => string): string {
   const coefficients = r.converter.coefficients.flatMap((a, k) => (k >= 2 ? [`a${k} = ${a.toExponential(3)}`] : [])).join(', ');
   const plan = r.plan.pass ? 'pass' : 'FAIL';
   return [
-    `Simulated capture: ${r.scenario} at ${formatFrequency(r.rate)}`,
-    `Record ${r.samples} samples, bin width ${formatFrequency(r.binWidth, 7)}; ${r.window.name} window, coherent gain ${trimmed(r.window.coherentGain, 5)}, noise bandwidth ${trimmed(r.window.noiseBandwidthBins, 4)} bins.`,
+    `Simulated capture: ${r.scenario} at ${T.rate(r.rate)}`,
+    `Record ${r.samples} samples, bin width ${T.frequency(r.binWidth)}; ${r.window.name} window, coherent gain ${T.number(r.window.coherentGain, 4)}, noise bandwidth ${T.number(r.window.noiseBandwidthBins, 4)} bins.`,
     `Converter: ${r.converter.bits} bits; y = x + Σ a_k·x^k${coefficients ? ` with ${coefficients}` : ' (linear: no harmonic figures)'}; dither ${r.converter.dither}; ${r.converter.clippedSamples} samples clipped.`,
-    `Levels: threshold ${db(r.levels.threshold)}, peak floor ${db(r.levels.floor)} (median bin ${db(r.levels.noiseMedian)}), tolerance ${trimmed(r.levels.tolerance, 3)} dB.`,
-    `The plan at this rate, no drift: ${plan}, limited by ${r.plan.limitedBy} (margin ${formatFrequency(r.plan.worstMargin, 7)}).`,
-  ].join('\n');
+    `Levels: threshold ${T.level(r.levels.threshold)} dBFS, peak floor ${T.level(r.levels.floor)} dBFS (median bin ${T.level(r.levels.noiseMedian)} dBFS), tolerance ${T.decibels(r.levels.tolerance)} dB.`,
+    `The plan at this rate, no drift: ${plan}, limited by ${r.plan.limitedBy} (margin ${T.frequency(r.plan.worstMargin)}).`,
+  ]
+    .map(prose)
+    .join('\n');
 }
 
-function tonesSection(r: VerifyResult): string {
-  const rows = r.tones.map((t) => [t.label, t.role, formatFrequency(t.nominal), formatFrequency(t.frequency), formatFrequency(t.move, 6), String(t.bin), level(t.level)]);
-  return 'Tones synthesised (moved to whole cycles of the record):\n' + plainTable(['tone', 'role', 'asked', 'synthesised', 'moved', 'bin', 'dBFS'], rows);
+function tonesSection(r: VerifyResult, width: number): string {
+  const rows = r.tones.map((t) => [t.label, t.role, T.rate(t.nominal), T.rate(t.frequency), T.frequency(t.move), String(t.bin), T.level(t.level)]);
+  const columns: TextColumn[] = [
+    { head: 'tone', role: 'key', wrap: true },
+    { head: 'role' },
+    { head: 'asked', align: 'right' },
+    { head: 'synthesised', align: 'right' },
+    { head: 'moved', align: 'right' },
+    { head: 'bin', align: 'right' },
+    { head: 'dBFS', align: 'right' },
+  ];
+  return wrapProse('Tones synthesised (moved to whole cycles of the record):', width) + '\n' + textTable(columns, rows, width);
 }
 
-function linesSection(r: VerifyResult): string {
+function linesSection(r: VerifyResult, width: number): string {
+  const tolerance = T.decibels(r.levels.tolerance);
   const rows = r.predictions.map((p) => [
     p.check,
     p.line,
-    `${formatFrequency(p.predicted.frequency, 7)} (${trimmed(p.predicted.bin, 7)})`,
-    p.measured ? `${formatFrequency(p.measured.frequency, 7)} (${p.measured.bin})` : '–',
-    p.binError === null ? '–' : trimmed(p.binError, 3),
-    level(p.planLevel),
-    p.basis === 'plan' ? `±${trimmed(r.levels.tolerance, 3)} dB` : `≤ +${trimmed(r.levels.tolerance, 3)} dB`,
-    level(p.modelLevel),
-    p.measured ? level(p.measured.level) : '–',
-    p.levelError === null ? '–' : p.levelError.toFixed(2),
-    statusText(p),
+    T.frequency(p.predicted.frequency),
+    p.measured ? T.frequency(p.measured.frequency) : '–',
+    T.level(p.planLevel),
+    p.measured ? T.level(p.measured.level) : '–',
+    p.status,
+    p.note === '' ? '–' : p.note,
+    `${T.number(p.predicted.bin, 7)}`,
+    p.measured ? String(p.measured.bin) : '–',
+    p.binError === null ? '–' : T.number(p.binError, 3),
+    p.basis === 'plan' ? `±${tolerance} dB` : `≤ +${tolerance} dB`,
+    T.level(p.modelLevel),
+    p.levelError === null ? '–' : T.decibels(p.levelError),
   ]);
-  const table = plainTable(['check', 'line', 'predicted (bin)', 'measured (bin)', 'Δ bins', 'plan dBFS', 'level rule', 'model dBFS', 'measured dBFS', 'Δ dB', 'result'], rows);
+  const columns: TextColumn[] = [
+    { head: 'check', role: 'key', wrap: true },
+    { head: 'line', wrap: true },
+    { head: 'predicted', align: 'right' },
+    { head: 'measured', align: 'right' },
+    { head: 'plan dBFS', align: 'right' },
+    { head: 'measured dBFS', align: 'right' },
+    { head: 'result', wrap: true },
+    { head: 'why', wrap: true, role: 'detail' },
+    { head: 'predicted bin', align: 'right', role: 'detail' },
+    { head: 'measured bin', align: 'right', role: 'detail' },
+    { head: 'Δ bins', align: 'right', role: 'detail' },
+    { head: 'level rule', role: 'detail' },
+    { head: 'model dBFS', align: 'right', role: 'detail' },
+    { head: 'Δ dB', align: 'right', role: 'detail' },
+  ];
+  const table = textTable(columns, rows, width);
   const under = r.underFloor.reduce((sum, u) => sum + u.lines, 0);
-  const note = under > 0 ? `\n${under} further line${under === 1 ? '' : 's'} of ${r.underFloor.length} check${r.underFloor.length === 1 ? '' : 's'} under the floor by the model (not looked for): ${r.underFloor.map((u) => u.check).join(', ')}.` : '';
-  const rule = `Level rule: ±${trimmed(r.levels.tolerance, 3)} dB where the plan's level is the level the capture put there; ≤ +${trimmed(r.levels.tolerance, 3)} dB above it (when above the threshold) where it is a bound.`;
-  return `Predicted lines beside the capture (looked for: the model puts them at least 3 dB above the floor). ${rule}\n` + table + note;
+  const note = under > 0 ? `\n${wrapProse(`${under} further line${under === 1 ? '' : 's'} of ${r.underFloor.length} check${r.underFloor.length === 1 ? '' : 's'} under the floor by the model (not looked for): ${r.underFloor.map((u) => u.check).join(', ')}.`, width)}` : '';
+  const rule = `Level rule: ±${tolerance} dB where the plan's level is the level the capture put there; ≤ +${tolerance} dB above it (when above the threshold) where it is a bound.`;
+  return wrapProse(`Predicted lines beside the capture (looked for: the model puts them at least 3 dB above the floor). ${rule}`, width) + '\n' + table + note;
 }
 
-function statusText(p: PredictionRow): string {
-  return p.note ? `${p.status}: ${p.note}` : p.status;
-}
-
-function peaksSection(peaks: readonly PeakRow[]): string | null {
+function peaksSection(peaks: readonly PeakRow[], width: number): string | null {
   if (peaks.length === 0) return null;
   const strongest = [...peaks].sort((a, b) => b.level - a.level).slice(0, MOST_PEAKS_SHOWN);
-  const rows = strongest.map((p) => [formatFrequency(p.frequency, 7), String(p.bin), level(p.level), formatFrequency(p.distance, 6), p.explainedBy ?? 'unexplained']);
+  const rows = strongest.map((p) => [T.frequency(p.frequency), T.level(p.level), T.frequency(p.distance), p.explainedBy ?? 'unexplained', String(p.bin)]);
+  const columns: TextColumn[] = [
+    { head: 'frequency', role: 'key', align: 'right' },
+    { head: 'dBFS', align: 'right' },
+    { head: 'from band', align: 'right' },
+    { head: 'what the model says', wrap: true },
+    { head: 'bin', align: 'right', role: 'detail' },
+  ];
   const more = peaks.length > strongest.length ? `\n${peaks.length - strongest.length} weaker ones in the JSON.` : '';
-  return 'Measured peaks the plan does not list:\n' + plainTable(['frequency', 'bin', 'dBFS', 'from band', 'what the model says'], rows) + more;
+  return wrapProse('Measured peaks the plan does not list:', width) + '\n' + textTable(columns, rows, width) + more;
 }
 
 function verdict(r: VerifyResult): string {
   const unsimulated = r.notSimulated.length ? `\nNot simulated (nothing in the capture stands for them): ${r.notSimulated.join(', ')}.` : '';
-  if (r.consistent) return `Verdict: the capture agrees with the plan at ${formatFrequency(r.rate)}.${unsimulated}`;
-  return `Verdict: the capture contradicts the plan at ${formatFrequency(r.rate)}:\n${r.contradictions.map((c) => `- ${c}`).join('\n')}${unsimulated}`;
-}
-
-function level(value: number): string {
-  return Number.isFinite(value) ? value.toFixed(2) : '–';
-}
-
-function db(value: number): string {
-  return `${value.toFixed(1)} dBFS`;
+  const plan = r.plan.pass ? 'passes' : 'fails';
+  if (r.consistent) return `Verdict: the capture agrees with the plan at ${T.rate(r.rate)} (the plan ${plan} there).${unsimulated}`;
+  return `Verdict: the capture contradicts the plan at ${T.rate(r.rate)} (the plan ${plan} there):\n${r.contradictions.map((c) => `- ${c}`).join('\n')}${unsimulated}`;
 }

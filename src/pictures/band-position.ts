@@ -1,5 +1,8 @@
 import type { PlanReport, ReportedCandidate } from '../plan/plan-report.js';
-import { formatFrequency, trimmed } from '../units/format-frequency.js';
+import { trimmed } from '../units/format-frequency.js';
+import { quantityText } from '../text/quantity-text.js';
+
+const T = quantityText('svg');
 import { horizontalAxis, verticalAxis } from './axis.js';
 import { spreadApart, textWidth } from './label-packing.js';
 import { boxSwatch, legendRows } from './legend.js';
@@ -94,7 +97,7 @@ function heading(report: PlanReport, fL: number, fH: number, design: number): st
   const B = fH - fL;
   return (
     textElement(24, 22, `Band-position chart: ${report.scenario}`, { 'font-size': 14, 'font-weight': 'bold' }) +
-    textElement(24, 40, `zone n allows 2·fH/n ≤ fs ≤ 2·(fH − B)/(n − 1) (Vaughan, Scott & White 1991); guarded band ${formatFrequency(fL)} – ${formatFrequency(fH)}, B = ${formatFrequency(B)}, fH/B = ${trimmed(design, 6)}`, { 'font-size': 10.5 })
+    textElement(24, 40, `zone n allows 2·fH/n ≤ fs ≤ 2·(fH − B)/(n − 1) (Vaughan, Scott & White 1991); guarded band ${T.extent(fL, fH)}, B = ${T.frequency(B)} (the guarded width: fs/B and fH/B divide by it), fH/B = ${trimmed(design, 6)}`, { 'font-size': 10.5 })
   );
 }
 
@@ -154,7 +157,7 @@ function candidatePoints(report: PlanReport, focus: ReportedCandidate | null, B:
   const placed = spreadApart(wanted, 12, TOP + 6, BOTTOM - 4);
   const labelX = Math.max(at, x.range[1]) + 76;
   labelled.forEach((c, i) => {
-    const text = `${c.label}: ${formatFrequency(c.rate, 7)} = ${trimmed(c.rate / B, 5)}·B`;
+    const text = `${c.label}: ${T.rate(c.rate)} = ${trimmed(c.rate / B, 5)}·B`;
     parts.push(element('path', { d: `M${at + 6} ${wanted[i]}L${labelX - 36} ${wanted[i]}L${labelX - 4} ${placed[i]}`, fill: 'none', stroke: '#777', 'stroke-width': 0.5 }));
     parts.push(textElement(labelX, placed[i]! + 3.5, text, { 'font-size': SMALL, 'font-weight': c.label === report.best ? 'bold' : undefined }));
   });

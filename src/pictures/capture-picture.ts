@@ -1,6 +1,9 @@
 import type { PeakRow, PredictionRow, VerifyResult } from '../report/verify-result.js';
 import { CONTRADICTING } from '../report/verify-result.js';
-import { formatFrequency, trimmed } from '../units/format-frequency.js';
+import { trimmed } from '../units/format-frequency.js';
+import { quantityText } from '../text/quantity-text.js';
+
+const T = quantityText('svg');
 import { horizontalAxis, verticalAxis } from './axis.js';
 import { frequencyUnit, inUnit } from './frequency-unit.js';
 import { packLabels, textWidth } from './label-packing.js';
@@ -78,8 +81,8 @@ export function captureFigure(result: VerifyResult, levels: ArrayLike<number>): 
   const binWidth = result.binWidth;
   const points = columns.map((c) => [x.at(((c.first + c.last) / 2) * binWidth), y.at(clamp(c.level))] as const);
   parts.push(element('polyline', { class: 'spectrum', points: pointList(points), fill: 'none', stroke: '#000', 'stroke-width': 0.8, 'stroke-linejoin': 'round' }));
-  parts.push(levelLine(y.at(threshold), `threshold ${trimmed(threshold, 4)} dBFS`, '8 3 2 3', 'end'));
-  parts.push(levelLine(y.at(floor), `peak floor ${trimmed(floor, 4)} dBFS (noise median + ${trimmed(floor - noiseMedian, 3)} dB)`, '4 3', 'start'));
+  parts.push(levelLine(y.at(threshold), `threshold ${T.level(threshold)} dBFS`, '8 3 2 3', 'end'));
+  parts.push(levelLine(y.at(floor), `peak floor ${T.level(floor)} dBFS (noise median + ${T.decibels(floor - noiseMedian)} dB)`, '4 3', 'start'));
 
   for (const p of placed) {
     const baseline = HEAD + (p.row + 1) * LABEL_ROW - 2;
@@ -103,7 +106,7 @@ export function captureFigure(result: VerifyResult, levels: ArrayLike<number>): 
   const list = peakList(result, intrusionBins, 24, cursor);
   parts.push(list.markup);
   cursor += list.height;
-  return { width: WIDTH, height: Math.ceil(cursor + 12), title: `Simulated capture at ${formatFrequency(result.rate)}: ${result.scenario}`, body: parts.join('') };
+  return { width: WIDTH, height: Math.ceil(cursor + 12), title: `Simulated capture at ${T.rate(result.rate)}: ${result.scenario}`, body: parts.join('') };
 }
 
 /**
@@ -125,11 +128,12 @@ function contradicts(p: PredictionRow): boolean {
 
 function heading(r: VerifyResult): string {
   const reasons = r.contradictions.length;
-  const verdict = r.consistent ? 'the capture agrees with the plan' : `the capture CONTRADICTS the plan (${reasons} reason${reasons === 1 ? '' : 's'})`;
+  const plan = r.plan.pass ? 'the plan passes at this rate' : 'the plan fails at this rate';
+  const verdict = r.consistent ? `the capture agrees with the plan (${plan})` : `the capture CONTRADICTS the plan (${plan}; ${reasons} reason${reasons === 1 ? '' : 's'})`;
   const tones = `${r.wantedTones} wanted tone${r.wantedTones === 1 ? '' : 's'}`;
   return (
-    textElement(24, 22, `Simulated capture at ${formatFrequency(r.rate)}: ${r.scenario}`, { 'font-size': 14, 'font-weight': 'bold' }) +
-    textElement(24, 40, `rate ${formatFrequency(r.rate)}; ${r.samples} samples, bin width ${formatFrequency(r.binWidth, 6)}; ${r.window.name} window; ${tones}`, { 'font-size': 11 }) +
+    textElement(24, 22, `Simulated capture at ${T.rate(r.rate)}: ${r.scenario}`, { 'font-size': 14, 'font-weight': 'bold' }) +
+    textElement(24, 40, `rate ${T.rate(r.rate)}; ${r.samples} samples, bin width ${T.frequency(r.binWidth)}; ${r.window.name} window; ${tones}`, { 'font-size': 11 }) +
     textElement(24, 56, `Verdict: ${verdict}.`, { 'font-size': 11, 'font-weight': r.consistent ? undefined : 'bold' }) +
     textElement(24, 72, 'Labels: the check of the plan each predicted line belongs to, over its marker at the plan level.', { 'font-size': SMALL, 'font-style': 'italic' })
   );
@@ -191,7 +195,7 @@ function legendEntries(r: VerifyResult, intrusionBins: ReadonlySet<number>): Leg
   return [
     { swatch: line(undefined, 0.8), text: 'measured (max-hold, one column per pixel)' },
     { swatch: boxSwatch(FILL.wanted), text: 'wanted image' },
-    { swatch: boxSwatch(FILL.guard), text: `margin ${formatFrequency(r.margin)}` },
+    { swatch: boxSwatch(FILL.guard), text: `margin ${T.frequency(r.margin)}` },
     { swatch: line('8 3 2 3', 1), text: 'threshold' },
     { swatch: line('4 3', 1), text: 'peak floor' },
     { swatch: (cx, cy) => predictionMarker(false, cx, cy), text: `predicted line (${r.predictions.length})` },
@@ -214,11 +218,11 @@ function peakList(r: VerifyResult, intrusionBins: ReadonlySet<number>, left: num
   shown.forEach(({ row, intrusion }, i) => {
     const cy = top + i * step + 6;
     parts.push(intrusion ? failMarker(left + 6, cy) : unlistedMarker(left + 6, cy));
-    const where = row.distance === 0 ? 'inside the wanted image' : `${formatFrequency(row.distance, 4)} from the wanted image`;
+    const where = row.distance === 0 ? 'inside the wanted image' : `${T.frequency(row.distance)} from the wanted image`;
     // A peak a predicted line was measured on carries no explanation of its own: name that line, as the verdict does.
     const line = r.predictions.find((p) => p.measured?.bin === row.bin);
     const what = row.explainedBy ?? (line ? `${line.check}, ${line.line}` : 'unexplained');
-    const text = `${formatFrequency(row.frequency, 7)}, ${trimmed(row.level, 4)} dBFS, ${intrusion ? 'intrusion, ' : ''}${where}: ${what}`;
+    const text = `${T.frequency(row.frequency)}, ${T.level(row.level)} dBFS, ${intrusion ? 'intrusion, ' : ''}${where}: ${what}`;
     parts.push(textElement(left + 18, cy + 3.5, withMinus(text), { 'font-size': SMALL }));
   });
   let height = shown.length * step;

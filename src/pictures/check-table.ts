@@ -1,7 +1,8 @@
 import type { ReportedCheck } from '../plan/plan-report.js';
-import { formatFrequency, trimmed } from '../units/format-frequency.js';
+import { quantityText } from '../text/quantity-text.js';
+
+const T = quantityText('svg');
 import { element, textElement } from './svg-element.js';
-import { withMinus } from './typography.js';
 
 const FONT = 10;
 const ROW = 14;
@@ -17,10 +18,10 @@ interface Column {
 const COLUMNS: readonly Column[] = [
   { title: 'key', at: 22, align: 'end', cell: (_c, key) => String(key) },
   { title: 'check', at: 32, align: 'start', cell: (c) => c.label },
-  { title: 'aliased to', at: 262, align: 'start', cell: (c) => c.alias.map(([a, b]) => (a === b ? formatFrequency(a, 6) : `${formatFrequency(a, 6)} – ${formatFrequency(b, 6)}`)).join(', ') },
-  { title: 'level dBFS', at: 612, align: 'end', cell: (c) => withMinus(trimmed(c.level, 4)) },
-  { title: 'margin', at: 692, align: 'end', cell: (c) => withMinus(formatFrequency(c.margin, 4)) },
-  { title: 'required', at: 772, align: 'end', cell: (c) => formatFrequency(c.requiredMargin, 4) },
+  { title: 'aliased to', at: 262, align: 'start', cell: (c) => c.alias.map(([a, b]) => T.extent(a, b)).join(', ') },
+  { title: 'level dBFS', at: 612, align: 'end', cell: (c) => T.level(c.level) },
+  { title: 'margin', at: 692, align: 'end', cell: (c) => T.frequency(c.margin) },
+  { title: 'required', at: 772, align: 'end', cell: (c) => T.frequency(c.requiredMargin) },
   { title: 'blocks', at: 822, align: 'end', cell: (c) => (c.blocking ? 'yes' : 'no') },
   { title: 'verdict', at: 872, align: 'end', cell: (c) => (c.pass ? 'pass' : 'FAIL') },
 ];

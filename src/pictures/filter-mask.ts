@@ -39,7 +39,7 @@ const SAMPLES_PER_PX = 2;
  * @param candidateLabel a label from report.candidates
  * @returns the figure, 960 px wide; null when the report carries no after-rate figures
  * @throws InputError when no candidate has that label
- * @example filterMaskFigure(report, report.best!)?.title // 'Anti-alias filter mask at VCXO-C 184.32M: Heron-4 base'
+ * @example filterMaskFigure(report, report.best!)?.title // 'Anti-alias filter mask at best in 171–194.5 MHz: Heron-4 base'
  */
 export function filterMaskFigure(report: PlanReport, candidateLabel: string): Figure | null {
   const candidate = findCandidate(report, candidateLabel);

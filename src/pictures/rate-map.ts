@@ -1,5 +1,7 @@
 import type { PlanReport, ReportedCandidate } from '../plan/plan-report.js';
-import { formatFrequency } from '../units/format-frequency.js';
+import { quantityText } from '../text/quantity-text.js';
+
+const T = quantityText('svg');
 import type { RateWindow } from '../windows/rate-window.js';
 import { horizontalAxis } from './axis.js';
 import { frequencyUnit, inUnit } from './frequency-unit.js';
@@ -19,7 +21,7 @@ const LEFT = 132;
 const RIGHT = 24;
 const TOP = 60;
 const BODY = 16;
-const CANDIDATE_ROWS = 2;
+const CANDIDATE_ROWS = 3;
 const CANDIDATE_ROW = 12;
 const BLOCKED_ROWS = 4;
 const BLOCKED_ROW = 13;
@@ -58,10 +60,10 @@ export function rateMapFigure(report: PlanReport): Figure {
   const inAxis = (rate: number) => rate >= view.low && rate <= view.high;
   const zonesWithWindow = new Set(report.windows.map((w) => w.zone));
   const lanes: Lane[] = view.windows.map((w) =>
-    lane(`zone ${w.zone}${w.inverted ? ' (inv)' : ''}`, w, report.candidates.filter((c) => c.zone === w.zone && inAxis(c.rate)), blockedGroups(report, w.zone, keys), scale),
+    lane(`zone ${w.zone}${w.inverted ? ' (inv)' : ''}`, w, report.candidates.filter((c) => c.zone === w.zone && inAxis(c.rate)), blockedGroups(report, w.zone, keys), scale, report),
   );
   const others = report.candidates.filter((c) => (c.zone === null || !zonesWithWindow.has(c.zone)) && inAxis(c.rate));
-  if (others.length > 0) lanes.push(lane('outside windows', null, others, [], scale));
+  if (others.length > 0) lanes.push(lane('outside windows', null, others, [], scale, report));
   const drawnCandidates = lanes.reduce((n, l) => n + l.markers.length, 0);
 
   const parts: string[] = [heading(report)];
@@ -95,6 +97,7 @@ export function rateMapFigure(report: PlanReport): Figure {
   parts.push(legend.markup);
   y += legend.height + 8;
   const notes = [
+    ...candidateLines(report),
     ...keyLines(keys),
     ...viewNotes(view, report, drawnCandidates),
   ];
@@ -119,14 +122,15 @@ export function rateMapSvg(report: PlanReport): string {
 
 function heading(report: PlanReport): string {
   const { band, guard, search } = report;
-  const sub = `wanted ${formatFrequency(band.low)} – ${formatFrequency(band.high)}, guards ${formatFrequency(guard.low)} / ${formatFrequency(guard.high)}; rates searched ${formatFrequency(search.minRate)} – ${formatFrequency(search.maxRate)}`;
+  const sub = `wanted ${T.extent(band.low, band.high)}, guards ${T.frequency(guard.low)} below / ${T.frequency(guard.high)} above; rates searched ${T.extent(search.minRate, search.maxRate)}`;
   return textElement(LEFT - 100, 22, `Sampling-rate map: ${report.scenario}`, { 'font-size': 14, 'font-weight': 'bold' }) + textElement(LEFT - 100, 40, sub, { 'font-size': 11 });
 }
 
-function lane(title: string, window: RateWindow | null, candidates: readonly ReportedCandidate[], groups: readonly BlockedGroup[], scale: Scale): Lane {
+function lane(title: string, window: RateWindow | null, candidates: readonly ReportedCandidate[], groups: readonly BlockedGroup[], scale: Scale, report: PlanReport): Lane {
   const plot = scale.range;
   const placedCandidates = packLabels(
-    candidates.map((c) => ({ x: scale.at(c.rate), text: c.label, item: c })),
+    // A label with no room falls back to the candidate's rank, the number every table gives it; the notes list them.
+    candidates.map((c) => ({ x: scale.at(c.rate), text: c.label, short: String(report.candidates.indexOf(c) + 1), item: c })),
     CANDIDATE_ROWS,
     plot,
     SMALL,
@@ -201,6 +205,13 @@ function drawLane(l: Lane, top: number, scale: Scale, report: PlanReport, index:
   }
   for (const c of l.markers) parts.push(candidateMarker(c.pass, scale.at(c.rate), mid));
   return element('g', { class: 'lane' }, parts.join(''));
+}
+
+/** Every candidate by its rank number, as the tables number them: the key of a marker whose label had no room. */
+function candidateLines(report: PlanReport): string[] {
+  if (report.candidates.length === 0) return [];
+  const phrases = report.candidates.map((c, i) => `${i + 1} = ${c.label} (${T.rate(c.rate)}, ${c.pass ? 'passes' : 'fails'})`);
+  return ['Candidates by rank (a number stands in where a label has no room):', ...wrapPhrases(phrases, WIDTH - LEFT - RIGHT + 80, LEGEND_FONT, ';   ').map((line) => `    ${line}`)];
 }
 
 function keyLines(keys: ReadonlyMap<string, number>): string[] {

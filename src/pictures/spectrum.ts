@@ -1,6 +1,9 @@
 import type { PlanReport, ReportedCandidate, ReportedCheck } from '../plan/plan-report.js';
 import { foldExtent } from '../math/fold-extent.js';
-import { formatFrequency, trimmed } from '../units/format-frequency.js';
+import { trimmed } from '../units/format-frequency.js';
+import { quantityText } from '../text/quantity-text.js';
+
+const T = quantityText('svg');
 import { InputError } from '../units/input-error.js';
 import { horizontalAxis, verticalAxis } from './axis.js';
 import { checkTable } from './check-table.js';
@@ -11,7 +14,6 @@ import { coveringTicks, linearTicks } from './nice-ticks.js';
 import { FILL } from './patterns.js';
 import { linearScale, type Scale } from './scale.js';
 import { element, textElement } from './svg-element.js';
-import { withMinus } from './typography.js';
 import { svgDocument, type Figure } from './svg-document.js';
 
 const WIDTH = 960;
@@ -91,7 +93,7 @@ function checkLabels(checks: ReportedCandidate['checks'], x: Scale, plotX: reado
     order.flatMap(({ c, key }) => {
       const widest = [...c.alias].sort((p, q) => q[1] - q[0] - (p[1] - p[0]))[0];
       if (!widest) return [];
-      return [{ x: x.at((widest[0] + widest[1]) / 2), text: withMinus(`${key} ${c.label}, ${trimmed(c.level, 3)} dBFS, ${formatFrequency(c.margin, 3)}`), short: String(key), item: { c, key, at: (widest[0] + widest[1]) / 2 } }];
+      return [{ x: x.at((widest[0] + widest[1]) / 2), text: `${key} ${c.label}, ${T.level(c.level)} dBFS, ${T.frequency(c.margin)}`, short: String(key), item: { c, key, at: (widest[0] + widest[1]) / 2 } }];
     }),
     LABEL_ROWS,
     plotX,
@@ -101,7 +103,7 @@ function checkLabels(checks: ReportedCandidate['checks'], x: Scale, plotX: reado
 
 /** The blocking threshold: a dash-dot line across the plot, named at its right end. */
 function thresholdLine(threshold: number, y: Scale): string {
-  const text = withMinus(`blocking threshold ${trimmed(threshold, 4)} dBFS`);
+  const text = `blocking threshold ${T.level(threshold)} dBFS`;
   const w = textWidth(text, SMALL) + 6;
   return (
     element('line', { x1: LEFT, y1: y.at(threshold), x2: WIDTH - RIGHT, y2: y.at(threshold), stroke: '#000', 'stroke-width': 1, 'stroke-dasharray': '8 3 2 3' }) +
@@ -178,11 +180,11 @@ function slack(c: ReportedCheck): number {
 }
 
 function heading(report: PlanReport, c: ReportedCandidate): string {
-  const zone = c.zone === null ? 'band straddles a zone edge' : `zone ${c.zone}${c.inverted ? ' (inverted)' : ''}, centre ${formatFrequency(c.center ?? 0, 7)}`;
-  const verdict = c.pass ? `passes; worst margin ${formatFrequency(c.worstMargin, 6)} (${c.limitedBy})` : `FAILS; limited by ${c.limitedBy}, margin ${formatFrequency(c.worstMargin, 6)}`;
+  const zone = c.zone === null ? 'band straddles a zone edge' : `zone ${c.zone}${c.inverted ? ' (inverted)' : ''}, centre ${T.rate(c.center ?? 0)}`;
+  const verdict = c.pass ? `passes; worst margin ${T.frequency(c.worstMargin)} (${c.limitedBy})` : `FAILS; limited by ${c.limitedBy}, margin ${T.frequency(c.worstMargin)}`;
   return (
     textElement(24, 22, `Spectrum after sampling at ${c.label}: ${report.scenario}`, { 'font-size': 14, 'font-weight': 'bold' }) +
-    textElement(24, 40, withMinus(`rate ${formatFrequency(c.rate)} ±${trimmed(c.tolerancePpm, 4)} ppm; ${zone}; ${verdict}`), { 'font-size': 11 }) +
+    textElement(24, 40, `rate ${T.rate(c.rate)} ${T.tolerance(c.tolerancePpm)}; ${zone}; ${verdict}`, { 'font-size': 11 }) +
     textElement(24, 56, 'Labels: key, check, level, margin to the wanted image.', { 'font-size': SMALL, 'font-style': 'italic' })
   );
 }
@@ -245,5 +247,5 @@ function marks(c: ReportedCandidate, x: ReturnType<typeof linearScale>, top: num
       textElement(boxLeft + w / 2, top + 12, text, { 'text-anchor': 'middle', 'font-size': SMALL })
     );
   };
-  return element('g', { class: 'marks' }, mark(0, 'DC', 'start') + mark(quarter, `fs/4 = ${formatFrequency(quarter, 6)}`, 'middle') + mark(half, 'fs/2', 'end'));
+  return element('g', { class: 'marks' }, mark(0, 'DC', 'start') + mark(quarter, `fs/4 = ${T.rate(quarter)}`, 'middle') + mark(half, 'fs/2', 'end'));
 }

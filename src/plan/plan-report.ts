@@ -8,6 +8,7 @@ import { withFullChecks, type Candidate, type PlanResult } from './solve-plan.js
 import type { CheckResult, RateEvaluation } from '../solve/evaluate-rate.js';
 import type { ShiftSearch } from '../solve/if-shift/best-shift-and-rate.js';
 import { limitText, type LimitKind } from '../solve/limited-by.js';
+import { nextLimit, type NextLimit } from '../solve/next-limit.js';
 import { PAPER_DESIGN_CAUTION } from './caution.js';
 import { shiftReport, type ShiftReport } from './shift-report.js';
 import { afterRate, channelSnrWithDriver, type AfterRate, type AfterRateInputs } from '../after-rate/after-rate.js';
@@ -97,6 +98,12 @@ export interface ReportedCandidate {
    * "limiting") only the worst band is listed, as in `afterRate.mask.worst`.
    */
   readonly maskBandsOmitted: number;
+  /** The tightest check with more slack than the worst: what ranks candidates that tie on the worst margin; null when none. */
+  readonly next: NextLimit | null;
+  /** rate ÷ the output rate under the decimation goal (a whole number when the rate decimates exactly); null under other goals. */
+  readonly decimationFactor: number | null;
+  /** Input centre minus the nearest odd multiple of rate/4, Hz (0: the band's centre lands on rate/4); null when the band straddles. */
+  readonly quarterRateOffset: Hz | null;
 }
 
 /** The solved plan for people and programs alike: the `solve` JSON contract. */
@@ -233,5 +240,24 @@ function reportedCandidate(context: PlanContext, byLabel: ReadonlyMap<string, In
     checksListed: listed.listed,
     checksOmitted: context.interferers.length - listed.checks.length,
     maskBandsOmitted: atRate === null || shownAfter === null ? 0 : atRate.mask.bands.length - shownAfter.mask.bands.length,
+    next: nextLimit(e, context.band.high - context.band.low),
+    decimationFactor: context.goal.kind === 'decimation' ? e.rate / context.goal.outputRate : null,
+    quarterRateOffset: e.zone === null ? null : quarterRateOffset((context.band.low + context.band.high) / 2, e.rate),
   };
+}
+
+/**
+ * How far a frequency lies from the nearest odd multiple of rate/4, where a
+ * digital mixer by rate/4 needs no multiplier: f − (2k + 1)·rate/4 for the
+ * nearest k ≥ 0.
+ *
+ * @param frequency input frequency, Hz
+ * @param rate sampling rate, Hz
+ * @returns the signed distance, Hz
+ * @example quarterRateOffset(140e6, 184.32e6) // 1.76e6 (3·46.08 MHz = 138.24 MHz)
+ */
+export function quarterRateOffset(frequency: number, rate: number): Hz {
+  const quarter = rate / 4;
+  const k = Math.max(0, Math.round((frequency / quarter - 1) / 2));
+  return hz(frequency - (2 * k + 1) * quarter);
 }

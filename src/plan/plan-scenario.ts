@@ -5,7 +5,7 @@ import { evaluateRate, type RateEvaluation } from '../solve/evaluate-rate.js';
 import type { PlanContext } from '../solve/plan-context.js';
 import { bestShiftAndRate, type ShiftSearch } from '../solve/if-shift/best-shift-and-rate.js';
 import { planReport, type PlanReport } from './plan-report.js';
-import { solvePlan, type PlanResult } from './solve-plan.js';
+import { judgeRates, solvePlan, type PlanResult } from './solve-plan.js';
 import { afterRateInputs } from '../after-rate/after-rate.js';
 
 /** What a caller may change about a scenario's plan without editing the scenario. */
@@ -42,7 +42,7 @@ export interface SolvedScenario {
  * @param options goal, clock parts or name instead of the scenario's
  * @returns the report the table, JSON, SVG and HTML writers read
  * @throws Error when an optimum fails its exact re-check (a bug, never a property of the plan)
- * @example planScenario(heronBase).best // 'VCXO-C 184.32M' (the label of the best passing candidate)
+ * @example planScenario(heronBase).best // 'best in 171–194.5 MHz' (the label of the best passing candidate)
  */
 export function planScenario(scenario: Scenario, options: PlanOptions = {}): PlanReport {
   return solveScenario(scenario, options).report;
@@ -82,4 +82,23 @@ export function solveScenario(scenario: Scenario, options: PlanOptions = {}): So
  */
 export function planAtRate(scenario: Scenario, rate: Hz, tolerancePpm: Ppm): RateEvaluation {
   return evaluateRate(contextFromScenario(scenario), rate, tolerancePpm);
+}
+
+/**
+ * The plan's verdict on rates the user gives: each judged as a candidate
+ * (every check over the drift, drift room, verdict), in the order given,
+ * with the scenario's windows and feasible set. No clock part is planned
+ * and the IF is not shifted.
+ *
+ * @param scenario a validated scenario
+ * @param rates nominal sampling rates, Hz
+ * @param options goal and name as planScenario; tolerancePpm the drift judged (default: the scenario's)
+ * @returns the report, one candidate per rate (origin "typed", labelled by the rate)
+ * @example planRates(heronBase, [hz(200e6)]).candidates[0].pass // false (the band's second harmonic lands on it)
+ */
+export function planRates(scenario: Scenario, rates: readonly Hz[], options: PlanOptions & { readonly tolerancePpm?: Ppm } = {}): PlanReport {
+  const planned = { ...scenario, goal: options.goal ?? scenario.goal };
+  const base = contextFromScenario(planned);
+  const context = options.tolerancePpm === undefined ? base : { ...base, tolerancePpm: options.tolerancePpm };
+  return planReport(options.name ?? scenario.name, context, judgeRates(context, rates), null, afterRateInputs(planned, planned.goal));
 }

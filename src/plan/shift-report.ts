@@ -1,8 +1,8 @@
 import { hz, type Hz, type Ppm } from '../units/quantities.js';
 import type { Band } from '../math/band.js';
-import type { RateEvaluation } from '../solve/evaluate-rate.js';
+import { nextLimit } from '../solve/next-limit.js';
 import type { ShiftedRate, ShiftSearch } from '../solve/if-shift/best-shift-and-rate.js';
-import { interfererLimit, limitText, ZONE_EDGE, type Limit, type LimitKind } from '../solve/limited-by.js';
+import { limitText, type LimitKind } from '../solve/limited-by.js';
 
 /** One (IF shift, rate) pair as reported. */
 export interface ReportedShift {
@@ -77,12 +77,4 @@ function reportedShift(band: Band, pair: ShiftedRate): ReportedShift {
     origin: pair.origin,
     pass: e.pass,
   };
-}
-
-/** The tightest check (zone edge or blocking) whose slack exceeds the worst by more than 1e-9 of the bandwidth. */
-function nextLimit(e: RateEvaluation, width: number): ReportedShift['next'] {
-  const rows: { limit: Limit; margin: Hz; slack: number }[] = [{ limit: ZONE_EDGE, margin: e.zoneEdgeMargin, slack: e.zoneEdgeMargin }];
-  for (const c of e.checks) if (c.blocking) rows.push({ limit: interfererLimit(c.label), margin: c.margin, slack: c.margin - c.requiredMargin });
-  const next = rows.filter((r) => r.slack > e.worstSlack + 1e-9 * width).sort((a, b) => a.slack - b.slack)[0];
-  return next ? { limitedBy: limitText(next.limit), limitedByKind: next.limit.kind, margin: next.margin, slack: hz(next.slack) } : null;
 }

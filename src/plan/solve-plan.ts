@@ -1,12 +1,17 @@
-import { hz } from '../units/quantities.js';
+import { hz, type Hz } from '../units/quantities.js';
 import type { RateWindow } from '../windows/rate-window.js';
 import { bestRateIn, goalScore } from '../solve/best-rate.js';
 import { evaluateRate, type RateEvaluation } from '../solve/evaluate-rate.js';
 import { planRates, type BlockedRange, type FeasibleInterval } from '../solve/feasible-set.js';
 import type { PlanContext } from '../solve/plan-context.js';
+import { nextLimit, tieAllowance } from '../solve/next-limit.js';
+import { quantityText } from '../text/quantity-text.js';
 import { planPart } from '../clocks/plan-part.js';
 import { driftHeadroom, type DriftHeadroom } from '../solve/drift.js';
 import type { ClockSnr, PartPlan, PartSearch, RateSettings } from '../clocks/part-plan.js';
+
+/** Interval candidates are named by the rates of their interval, written as every output writes them. */
+const RATES = quantityText('terminal');
 
 /** A rate put forward: a listed clock, or the best rate of a feasible interval. */
 export interface Candidate {
@@ -14,9 +19,10 @@ export interface Candidate {
   /**
    * "clock" for a listed part, "interval" for the best rate of a feasible
    * interval, "window" for a window's centre, put forward only when nothing
-   * is feasible so that the report can say what blocks.
+   * is feasible so that the report can say what blocks, "typed" for a rate
+   * given on the command line (judgeRates).
    */
-  readonly origin: 'clock' | 'interval' | 'window';
+  readonly origin: 'clock' | 'interval' | 'window' | 'typed';
   readonly evaluation: RateEvaluation;
   /** Higher is better for the goal. */
   readonly score: number;
@@ -87,16 +93,22 @@ export function solvePlan(context: PlanContext): PlanResult {
     const index = (perZone.get(interval.zone) ?? 0) + 1;
     perZone.set(interval.zone, index);
     const evaluation = bestRateIn(context, interval);
-    if (evaluation) candidates.push({ label: `Z${interval.zone}.${index}`, origin: 'interval', ...unpartnered(evaluation) });
+    if (evaluation) candidates.push({ label: `best in ${RATES.rateRange(interval.minRate, interval.maxRate)}`, origin: 'interval', ...unpartnered(evaluation) });
   }
   if (feasible.length === 0) {
     for (const window of windows) {
       const evaluation = evaluateRate(context, hz((window.minRate + window.maxRate) / 2), context.tolerancePpm, 'blocking');
-      candidates.push({ label: `W${window.zone}`, origin: 'window', ...unpartnered(evaluation) });
+      candidates.push({ label: `centre of the zone ${window.zone} window`, origin: 'window', ...unpartnered(evaluation) });
     }
   }
   const scored = candidates.map((c) => ({ ...c, score: goalScore(context, c.evaluation) }));
-  scored.sort((a, b) => Number(b.evaluation.pass) - Number(a.evaluation.pass) || b.score - a.score || b.evaluation.worstSlack - a.evaluation.worstSlack);
+  const bandwidth = context.band.high - context.band.low;
+  // Rates that tie on the worst slack are ranked by the next-tightest check's slack (the report names it).
+  const nextSlack = new Map(scored.map((c) => [c, nextLimit(c.evaluation, bandwidth)?.slack ?? Infinity]));
+  const tie = tieAllowance(bandwidth);
+  const byGoal = (a: Candidate, b: Candidate) => (Math.abs(b.score - a.score) <= tie && context.goal.kind !== 'lowest-rate' && context.goal.kind !== 'quarter-rate' ? 0 : b.score - a.score);
+  const bySlack = (a: Candidate, b: Candidate) => (Math.abs(b.evaluation.worstSlack - a.evaluation.worstSlack) <= tie ? 0 : b.evaluation.worstSlack - a.evaluation.worstSlack);
+  scored.sort((a, b) => Number(b.evaluation.pass) - Number(a.evaluation.pass) || byGoal(a, b) || bySlack(a, b) || nextSlack.get(b)! - nextSlack.get(a)!);
   return { windows, feasible, blocked, candidates: withFullChecks(context, scored, 1), parts, unplannedParts };
 }
 
@@ -117,3 +129,22 @@ export function withFullChecks(context: PlanContext, candidates: readonly Candid
   );
 }
 
+/**
+ * Judges rates given by the user as candidates: each with every check over
+ * the plan's tolerance, its drift room and its verdict, in the order given;
+ * the windows and the feasible set come with them.
+ * No clock part is planned.
+ *
+ * @param context the plan (its tolerancePpm is the drift judged)
+ * @param rates nominal sampling rates, Hz, in the order given
+ * @returns the plan with one candidate per rate, labelled by the rate as written
+ * @example judgeRates(handWorked, [hz(26e6)]).candidates[0].label // '26 MHz'
+ */
+export function judgeRates(context: PlanContext, rates: readonly Hz[]): PlanResult {
+  const set = planRates(context);
+  const candidates: Candidate[] = rates.map((rate) => {
+    const evaluation = evaluateRate(context, rate, context.tolerancePpm, 'all');
+    return { label: RATES.rate(rate), origin: 'typed', evaluation, score: goalScore(context, evaluation), settings: null, headroom: driftHeadroom(set, context.limits, rate), snr: null, partSearch: null };
+  });
+  return { windows: set.windows, feasible: set.feasible, blocked: set.blocked, candidates, parts: [], unplannedParts: [] };
+}

@@ -116,7 +116,7 @@ export function verifyCaptureWithSpectrum(scenario: Scenario, settings: CaptureS
   const image = plan.image ? [[plan.image.low, plan.image.high] as const] : foldExtent(scenario.wanted.low, scenario.wanted.high, rate).map((s) => [hz(s.low), hz(s.high)] as const);
   const marginAt = peakMargins(judged.predictions, checks, scenario.requirements.margin);
   const peaks = sortPeaks(measurement, judged, image, record, marginAt);
-  const contradictions = contradictionWords(judged.predictions, peaks, threshold, marginAt);
+  const contradictions = contradictionWords(judged.predictions, peaks, threshold, marginAt, plan);
   const result: VerifyResult = {
     scenario: scenario.name,
     rate,
@@ -254,13 +254,15 @@ function contradictionWords(
   peaks: { unlisted: readonly PeakRow[]; intrusions: readonly PeakRow[] },
   threshold: number,
   marginAt: (bin: number) => Hz,
+  plan: { readonly pass: boolean; readonly checks: ReadonlyArray<{ readonly label: string; readonly pass: boolean }> },
 ): string[] {
   return [
     ...predictions.filter((p) => CONTRADICTING.has(p.status)).map((p) => `${p.check} (${p.line}): ${p.status}: ${p.note}`),
     ...peaks.unlisted
       .filter((u) => u.level > threshold && !(u.explainedBy ?? '').startsWith('window overlap'))
       .map((u) => `${formatFrequency(u.frequency, 7)} at ${u.level.toFixed(1)} dBFS, above the threshold ${threshold.toFixed(1)} dBFS: ${u.explainedBy ?? 'unexplained'}; missed by the plan`),
-    ...peaks.intrusions.map((u) => {
+    // An intrusion confirms a failing plan when it is a line of a check the plan itself fails at this rate.
+    ...peaks.intrusions.filter((u) => plan.pass || !failingLine(predictions, plan, u.bin)).map((u) => {
       const where = u.distance === 0 ? 'lies inside the wanted image' : `lies ${formatFrequency(u.distance, 4)} from the wanted image, inside the ${formatFrequency(marginAt(u.bin))} margin`;
       return `${formatFrequency(u.frequency, 7)} at ${u.level.toFixed(1)} dBFS (${u.explainedBy ?? lineName(predictions, u.bin)}) ${where}: the rate is not clean`;
     }),
@@ -320,7 +322,14 @@ function levelBasis(family: LineFamily, wantedTones: number, mismatch: CoreMisma
 /** The plan's line measured on a bin, in words, or 'not named'. */
 function lineName(predictions: readonly PredictionRow[], bin: number): string {
   const row = predictions.find((p) => p.measured?.bin === bin);
-  return row ? `${row.check}, ${row.line}` : 'not named';
+  // A tone's line carries its check's own label: name it once.
+  return row ? (row.line === row.check ? row.check : `${row.check}, ${row.line}`) : 'not named';
+}
+
+/** Whether the peak on this bin is a line of a check that the plan fails at this rate. */
+function failingLine(predictions: readonly PredictionRow[], plan: { readonly checks: ReadonlyArray<{ readonly label: string; readonly pass: boolean }> }, bin: number): boolean {
+  const row = predictions.find((p) => p.measured?.bin === bin);
+  return row !== undefined && plan.checks.some((c) => c.label === row.check && !c.pass);
 }
 
 function strongestWithin(components: readonly ModelComponent[], bin: number, reach: number, samples: number): ModelComponent | null {
@@ -343,7 +352,7 @@ function comparedText(wantedTones: number, tolerance: number, floor: number, thr
     ...(interleaved ? ['The interleaving images were not added as tones: the capture samples with M cores whose gain (or, with a reference frequency, timing) differs by just enough to make the stated image level, so every input tone and product has its images at k·R/M ± f.'] : []),
     ...(wantedTones === 1 ? ['With one wanted tone the differences inside the wanted band make no line: a tone less itself is DC.'] : []),
     `Positions must agree within one bin. Levels are judged ${tolerance} dB either way where the plan's level is the level the capture put there (stated spurs, neighbours, and with one wanted tone its harmonics and images); where the plan's level is a band's worst case or an extrapolation (neighbour harmonics, intermodulation, several wanted tones), the measurement must not exceed it by more than ${tolerance} dB when above the threshold.`,
-    `Peaks above ${floor.toFixed(1)} dBFS count; any above the threshold ${threshold.toFixed(1)} dBFS that no line of the plan explains, or that lands inside the wanted image or within the margin its interferer must keep from it, contradicts the plan.`,
+    `Peaks above ${floor.toFixed(1)} dBFS count; any above the threshold ${threshold.toFixed(1)} dBFS that no line of the plan explains, or that lands inside the wanted image or within the margin its interferer must keep from it (unless it is a line of a check the plan fails at this rate, which confirms the plan's failure), contradicts the plan.`,
   ];
   if (!complete) lines.push('The list of the model\'s products was cut short at its budget: an unexplained peak may be a product of high order the list does not name.');
   if (floor > threshold) lines.push(`The floor is above the threshold: spurs between ${threshold.toFixed(1)} and ${floor.toFixed(1)} dBFS are not seen.`);

@@ -9,13 +9,16 @@ export type Limit =
   /** The guarded band reaches a fold edge (0 or rate/2 of its zone). */
   | { readonly kind: 'zone edge' }
   /** A feasible interval ends at the converter's slowest or fastest rate. */
-  | { readonly kind: 'rate limit' };
+  | { readonly kind: 'rate limit' }
+  /** Under the decimation goal, a clock part none of whose rates is a whole multiple of the output rate. */
+  | { readonly kind: 'no whole multiple of the output rate' };
 
 /** The kinds of limit, as the JSON's `…Kind` fields write them. */
 export type LimitKind = Limit['kind'];
 
 export const ZONE_EDGE: Limit = { kind: 'zone edge' };
 export const RATE_LIMIT: Limit = { kind: 'rate limit' };
+export const NO_WHOLE_MULTIPLE: Limit = { kind: 'no whole multiple of the output rate' };
 
 /**
  * The limit set by one interferer.

@@ -9,7 +9,8 @@ export class InputError extends Error {
     readonly expected: string,
     readonly received: string,
   ) {
-    super(`${where}: ${expected} (got ${JSON.stringify(received)})`);
+    // A refused path names itself as `where`: saying it twice adds nothing.
+    super(received === where ? `${where}: ${expected}` : `${where}: ${expected} (got ${JSON.stringify(received)})`);
     this.name = 'InputError';
   }
 }

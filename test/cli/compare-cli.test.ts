@@ -101,7 +101,7 @@ describe('ifzone compare: CSV, files and exit statuses', () => {
     writeFileSync(out, 'keep me');
     const refused = runBin('compare', VARIANTS[0]!, '--csv', '-o', out);
     expect(refused.status).toBe(2);
-    expect(refused.stderr).toMatch(/^ifzone: .*parts\.csv: .*add --force to overwrite/);
+    expect(refused.stderr).toMatch(/^ifzone: .*parts\.csv: .*add --force to replace it/);
     expect(readFileSync(out, 'utf8')).toBe('keep me');
     expect(runBin('compare', VARIANTS[0]!, '--csv', '-o', out, '--force').status).toBe(0);
     expect(readFileSync(out)).toEqual(first);

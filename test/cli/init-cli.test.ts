@@ -44,7 +44,7 @@ describe('ifzone init', () => {
     writeFileSync(file, '{"keep": true}');
     const run = runBin('init', file);
     expect(run.status).toBe(2);
-    expect(run.stderr).toMatch(/^ifzone: .*kept\.json: .*add --force to overwrite/);
+    expect(run.stderr).toMatch(/^ifzone: .*kept\.json: .*add --force to replace it/);
     expect(readFileSync(file, 'utf8')).toBe('{"keep": true}');
     expect(runBin('init', file, '--force').status).toBe(0);
     expect(JSON.parse(readFileSync(file, 'utf8')).name).toBe('New receiver variant');

@@ -71,4 +71,28 @@ describe('ifzone report --html', () => {
     expect(Math.min(...boxes)).toBeGreaterThan(100);
     await page.close();
   }, 60_000);
+  it.skipIf(!hasChromium && !process.env['CI'])('uses the page at 1280 px: no number wrapped inside a cell, the content as wide as the window', async () => {
+    const out = join(dir, 'width.html');
+    expect(runBin('report', ...VARIANTS, '--html', out).status).toBe(0);
+    const page = await browser!.newPage({ viewport: { width: 1280, height: 900 } });
+    await page.goto(pathToFileURL(out).href);
+    const body = await page.locator('body').evaluate((element) => element.getBoundingClientRect().width);
+    // A cell's text occupies one line box per line it takes: count the distinct tops of its text's rectangles.
+    const lines = await page.locator('td.num').evaluateAll((cells) =>
+      cells.map((cell) => {
+        const range = cell.ownerDocument.createRange();
+        range.selectNodeContents(cell);
+        return { text: cell.textContent ?? '', lines: new Set([...range.getClientRects()].map((r) => Math.round(r.top))).size };
+      }),
+    );
+    const measured = { body, numbers: lines.length, wrapped: lines.filter((l) => l.lines > 1).map((l) => l.text) };
+    // Common practice (no source): a review page fills a wide window rather than a fixed column.
+    expect(measured.body).toBeGreaterThan(1180);
+    expect(measured.numbers).toBeGreaterThan(500);
+    expect(measured.wrapped).toEqual([]);
+    const shot = await page.screenshot({ fullPage: false });
+    // PNG header: width and height as 32-bit big-endian numbers at bytes 16 and 20 (PNG specification, IHDR).
+    expect([shot.readUInt32BE(16), shot.readUInt32BE(20)]).toEqual([1280, 900]);
+    await page.close();
+  }, 60_000);
 });

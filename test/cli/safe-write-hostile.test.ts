@@ -138,7 +138,7 @@ describe('outputs are committed together or not at all', () => {
     const run = await ifzone('compare', base, '--csv', '--svg', svg, '-o', exists);
     expect(run.code).toBe(2);
     expect(run.out).toBe('');
-    expect(refusalLine(run)).toContain(`${exists}: a path that does not exist yet; add --force to overwrite`);
+    expect(refusalLine(run)).toContain(`${exists}: exists; add --force to replace it`);
     expect(fs.existsSync(svg)).toBe(false);
     expect(fs.readFileSync(exists, 'utf8')).toBe('mine');
   });

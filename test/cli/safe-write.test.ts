@@ -52,7 +52,7 @@ describe('writeFileSafely', () => {
     const error = refusal(() => writeFileSafely(target, 'new content', { force: false }));
     expect(error.where).toBe(target);
     expect(error.expected).toBe(EXISTS_EXPECTED);
-    expect(error.message).toContain('add --force to overwrite');
+    expect(error.message).toContain('add --force to replace it');
     expect(fs.readFileSync(target).equals(old)).toBe(true);
     expect(listing()).toEqual(['plan.svg']);
   });

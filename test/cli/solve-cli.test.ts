@@ -149,7 +149,8 @@ describe('ifzone solve: exit statuses', () => {
     const run = runBin('solve', impossible);
     expect(run.status).toBe(1);
     expect(run.stderr).toBe('');
-    expect(run.stdout).toMatch(/No candidate passes\. Nearest: .+ at .+: .+ lands .+ from the band where 30 MHz is required \(short by .+\)\./);
+    // The verdict is prose, wrapped to the width: read it as one line.
+    expect(run.stdout.replace(/\n(?!\n)/g, ' ')).toMatch(/No candidate passes\. Nearest: .+ at .+: .+ lands .+ from the band where 30 MHz is required \(short by .+\)\./);
     const plan = JSON.parse(runBin('solve', impossible, '--json').stdout);
     expect(plan.best).toBeNull();
     expect(plan.conflicts).toEqual([]);
@@ -163,7 +164,8 @@ describe('ifzone solve: exit statuses', () => {
     const run = runBin('solve', impossible);
     expect(run.status).toBe(1);
     expect(run.stderr).toBe('');
-    const sentences = run.stdout.split('\n').filter((line) => line.startsWith('- '));
+    // Each sentence is a list item wrapped to the width, its continuation lines indented: read each as one line.
+    const sentences = run.stdout.replace(/\n {2}(?=\S)/g, ' ').split('\n').filter((line) => line.startsWith('- '));
     expect(sentences).toHaveLength(2);
     expect(sentences[0]).toMatch(/^- Lower adjacent channel \(neighbour\) lies 5 MHz from the wanted band where 60 MHz is required; .*no sampling rate can clear it: more anti-alias filter rejection .* a different channel plan, or a smaller required margin for it/);
     expect(sentences[1]).toMatch(/^- Paging blocker 175M \(neighbour\) lies 24\.5 MHz from the wanted band/);
@@ -175,17 +177,77 @@ describe('ifzone solve: exit statuses', () => {
     ]);
   });
 
-  it('exits 2 with one line for a bad goal or a missing output rate', () => {
+  it('exits 2 with one line for a bad goal, a missing output rate, or an output rate under another goal', () => {
     for (const args of [
       ['solve', BASE, '--goal', 'fastest'],
       ['solve', BASE, '--goal', 'decimation'],
-      ['solve', BASE, '--output-rate', '30.72M'],
+      ['solve', BASE, '--goal', 'widest-margin', '--output-rate', '30.72M'],
+      ['solve', BASE, '--ppm', '5'],
     ]) {
       const run = runBin(...args);
       expect(run.status).toBe(2);
       expect(run.stdout).toBe('');
-      expect(run.stderr).toMatch(/^ifzone: --(goal|output-rate)[^\n]*\n$/);
+      expect(run.stderr).toMatch(/^ifzone: --(goal|output-rate|ppm)[^\n]*\n$/);
     }
+  });
+
+  it('--output-rate alone asks for decimation; every candidate shows its factor', () => {
+    const plan = JSON.parse(runBin('solve', BASE, '--output-rate', '30.72M', '--json').stdout);
+    expect(plan.goal).toEqual({ kind: 'decimation', outputRate: 30.72e6 });
+    for (const c of plan.candidates) expect(c.decimationFactor).toBeCloseTo(c.rate / 30.72e6, 12);
+    // 184.32 MHz = 6 × 30.72 MHz (common practice: a whole decimation factor).
+    const table = runBin('solve', BASE, '--output-rate', '30.72M').stdout;
+    expect(table).toMatch(/decimation\s+factor/);
+    expect(table).toMatch(/VCXO-C 184\.32M\s+184\.32 MHz\s.*\s6\s*$/m);
+  });
+
+  it('under decimation a clock part passes only at a whole multiple of the output rate (exhaustive check of the synthesiser)', () => {
+    const plan = JSON.parse(runBin('solve', BASE, '--output-rate', '30.72M', '--json').stdout);
+    for (const c of plan.candidates.filter((c: { origin: string; pass: boolean }) => c.origin === 'clock' && c.pass)) expect(Number.isInteger(c.decimationFactor), c.label).toBe(true);
+    // SYN-1: 10 MHz × N / M ÷ D with N 1–512, M 1–16, D 1–8, VCO 10 MHz·N/M in 800 MHz–1.6 GHz (scenarios/heron-base.json).
+    // Every setting enumerated, in integers (Hz): no rate in 40–250 MHz is a whole multiple of 30.72 MHz, so the part fails.
+    const multiples: number[] = [];
+    for (let N = 1; N <= 512; N++)
+      for (let M = 1; M <= 16; M++)
+        for (let D = 1; D <= 8; D++) {
+          const vco = (10e6 * N) / M;
+          if (vco < 800e6 || vco > 1.6e9) continue;
+          const numerator = 10_000_000n * BigInt(N);
+          const denominator = BigInt(M * D);
+          if (numerator % denominator !== 0n) continue;
+          const rate = numerator / denominator;
+          if (rate >= 40_000_000n && rate <= 250_000_000n && rate % 30_720_000n === 0n) multiples.push(Number(rate));
+        }
+    expect(multiples).toEqual([]);
+    const syn = plan.candidates.find((c: { label: string }) => c.label === 'SYN-1 from TCXO-R 10M');
+    expect(syn).toMatchObject({ pass: false, limitedBy: 'no whole multiple of the output rate' });
+    // With a 10 MHz output the synthesiser makes whole multiples (N a multiple of M·D), so it can pass.
+    const ten = JSON.parse(runBin('solve', BASE, '--output-rate', '10M', '--json').stdout);
+    const syn10 = ten.candidates.find((c: { label: string }) => c.label === 'SYN-1 from TCXO-R 10M');
+    expect(syn10.pass).toBe(true);
+    expect(Number.isInteger(syn10.decimationFactor)).toBe(true);
+  });
+
+  it('--rate judges the rates given: every check and a verdict each, exit 0 only when all pass', () => {
+    const both = JSON.parse(runBin('solve', BASE, '--rate', '184.32M', '245.76M', '--json').stdout);
+    expect(both.candidates.map((c: { label: string; origin: string }) => [c.label, c.origin])).toEqual([
+      ['184.32 MHz', 'typed'],
+      ['245.76 MHz', 'typed'],
+    ]);
+    const base = JSON.parse(runBin('solve', BASE, '--json').stdout);
+    const part = (label: string) => base.candidates.find((c: { label: string }) => c.label === label);
+    // The same rate judged as a part with the same tolerance gives the same checks (the VCXO is ±10 ppm).
+    const typed = JSON.parse(runBin('solve', BASE, '--rate', '184.32M', '--ppm', '10', '--json').stdout).candidates[0];
+    expect(typed.checks).toEqual(part('VCXO-C 184.32M').checks);
+    expect(typed.pass).toBe(part('VCXO-C 184.32M').pass);
+    expect(both.candidates[0].tolerancePpm).toBe(base.candidates.find((c: { origin: string }) => c.origin === 'interval').tolerancePpm);
+    const pass = runBin('solve', BASE, '--rate', '184.32M');
+    expect(pass.status).toBe(0);
+    expect(pass.stdout).toMatch(/^184\.32 MHz: passes, zone 2 inv/m);
+    const fail = runBin('solve', BASE, '--rate', '184.32M', '245.76M');
+    expect(fail.status).toBe(1);
+    expect(fail.stdout).toMatch(/^245\.76 MHz: FAILS/m);
+    expect(fail.stdout.match(/^Checks at /gm)).toHaveLength(2);
   });
 
   it('puts every decimation candidate on an integer multiple of the output rate', () => {

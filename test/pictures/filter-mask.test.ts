@@ -49,7 +49,8 @@ const marginLabel = (margin: number) => `${margin >= 0 ? '+' : '−'}${Number(Ma
 describe('filter-mask picture', () => {
   it('a Butterworth filter: one stop region per alias band, the tightest margin labelled, the heading says reported only', () => {
     const { texts, stops, bands, tightest } = check('filter-mask-board', withLevel(heronBoardScenario(), null));
-    expect(bands).toBeGreaterThan(3);
+    // Several alias bands below the input bandwidth at the best rate (three at the widest-margin rate of the board scenario).
+    expect(bands).toBeGreaterThanOrEqual(3);
     expect(stops).toBe(bands);
     expect(texts).toContain(marginLabel(tightest));
     expect(texts.join('\n')).toMatch(/out-of-band level not stated: full scale assumed, reported only/);

@@ -3,7 +3,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { ensureBuilt, ROOT, runBin } from '../helpers/run-bin.js';
-import { formatFrequency } from '../../src/units/format-frequency.js';
+import { quantityText } from '../../src/text/quantity-text.js';
 import type { PlanReport } from '../../src/plan/plan-report.js';
 
 /**
@@ -29,32 +29,36 @@ beforeAll(() => {
   html = readFileSync(out, 'utf8');
 }, 120_000);
 
+/** Each medium with its own way of writing numbers (one minus sign per medium), from the one text layer. */
+const media = () =>
+  [
+    ['table', table, quantityText('terminal')],
+    ['HTML', html, quantityText('html')],
+  ] as const;
+
 describe('the same plan in the JSON, the table and the HTML page', () => {
   it('the best candidate: label, rate and worst margin in all three', () => {
     const best = report.candidates.find((c) => c.label === report.best)!;
-    for (const [name, text] of [['table', table], ['HTML', html]] as const) {
+    for (const [name, text, t] of media()) {
       expect(text, name).toContain(best.label);
-      expect(text, name).toContain(formatFrequency(best.rate));
-      expect(text, name).toContain(formatFrequency(best.worstMargin, 7));
+      expect(text, name).toContain(t.rate(best.rate));
+      expect(text, name).toContain(t.frequency(best.worstMargin));
     }
   });
 
   it('the IF-shift section: the best pair\'s shift centre and rate in all three', () => {
     expect(report.ifShift?.best).toBeTruthy();
     const pair = report.ifShift!.best!;
-    for (const [name, text] of [['table', table], ['HTML', html]] as const) {
+    for (const [name, text, t] of media()) {
       expect(text, name).toContain('Best IF shift and rate');
-      expect(text, name).toContain(formatFrequency(pair.center));
-      expect(text, name).toContain(formatFrequency(pair.rate));
-      expect(text, name).toContain(formatFrequency(pair.worstMargin, 7));
+      expect(text, name).toContain(t.rate(pair.center));
+      expect(text, name).toContain(t.rate(pair.rate));
+      expect(text, name).toContain(t.frequency(pair.worstMargin));
     }
   });
 
   it('every feasible interval in all three', () => {
     expect(report.feasible.length).toBeGreaterThan(0);
-    for (const f of report.feasible) {
-      expect(table).toContain(formatFrequency(f.minRate));
-      expect(html).toContain(formatFrequency(f.minRate));
-    }
+    for (const f of report.feasible) for (const [name, text, t] of media()) expect(text, name).toContain(t.rateRange(f.minRate, f.maxRate));
   });
 });

@@ -109,10 +109,11 @@ describe('hand-worked plan: 21–25 MHz, tone at 10 MHz, rate/4 spur, 10–60 MH
     // Rates to within 1 Hz: the LP (javascript-lp-solver) rounds its position to about 1e-8 of the interval.
     const near = (mhz: number) => expect.closeTo(mhz * MHZ, -0.3);
     expect(found).toEqual([
-      ['Z1.1', near(60), near(5), true],
-      ['Z2.2', near(113 / 3), near(13 / 6), true],
-      ['Z2.1', near(26), near(1), true],
-      ['Z3.1', near(62 / 3), near(1 / 3), true],
+      // Each labelled by its feasible interval, rounded inward (82/3 MHz written 27.33 MHz).
+      ['best in 50–60 MHz', near(60), near(5), true],
+      ['best in 35.5–42 MHz', near(113 / 3), near(13 / 6), true],
+      ['best in 25–27.33 MHz', near(26), near(1), true],
+      ['best in 20.4–21 MHz', near(62 / 3), near(1 / 3), true],
     ]);
   });
 

@@ -4,9 +4,10 @@ import { aliasReport } from '../../report/alias-report.js';
 import { aliasTable } from '../../output/alias-table.js';
 import { writeJson } from '../../output/json.js';
 import { EXIT, type ExitCode, type Io } from '../io.js';
+import { layoutWidth, withLayoutOptions, type LayoutOptions } from '../layout-options.js';
 import { positiveFrequency, wholeNumber } from '../option-values.js';
 
-interface AliasOptions {
+interface AliasOptions extends LayoutOptions {
   rate: string;
   multiples: string;
   json?: boolean;
@@ -14,8 +15,7 @@ interface AliasOptions {
 
 /** `ifzone alias`: where frequencies show after sampling at one rate. */
 export function addAliasCommand(program: Command, io: Io, settle: (code: ExitCode) => void): void {
-  program
-    .command('alias')
+  withLayoutOptions(program.command('alias'))
     .description('show where frequencies land after sampling at a rate')
     .argument('<freq...>', 'frequencies to fold, e.g. 70M 140.5M')
     .requiredOption('--rate <freq>', 'sampling rate, e.g. 61.44M')
@@ -27,7 +27,7 @@ export function addAliasCommand(program: Command, io: Io, settle: (code: ExitCod
       const tones = frequencies.map((f, i) => parseFrequency(f, `frequency ${i + 1}`));
       const report = aliasReport(rate, tones, multiples);
       if (options.json) writeJson(report, io.out);
-      else io.out(aliasTable(report));
+      else io.out(aliasTable(report, layoutWidth(options, io)));
       settle(EXIT.answered);
     });
 }

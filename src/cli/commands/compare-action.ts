@@ -4,6 +4,7 @@ import { toJson, writeJson } from '../../output/json.js';
 import { rateMapFigure } from '../../pictures/rate-map.js';
 import { stackFigures, svgDocument } from '../../pictures/svg-document.js';
 import { writeFilesSafely, type OutputFile } from '../safe-write.js';
+import { layoutWidth } from '../layout-options.js';
 import { EXIT, type ExitCode, type Io } from '../io.js';
 import type { CompareOptions } from './compare-command.js';
 import { planVariants } from './plan-variants.js';
@@ -15,11 +16,12 @@ import { planVariants } from './plan-variants.js';
  */
 export function runCompare(files: readonly string[], options: CompareOptions, io: Io): ExitCode {
   if (options.json && options.csv) throw new InputError('--csv', 'either --json or --csv, not both', '--json --csv');
+  const width = layoutWidth(options, io);
   const outputs = [options.svg, options.output].filter((path): path is string => path !== undefined);
   const force = options.force === true;
   const { plans, comparison: report, inputs } = planVariants(files, io, { paths: outputs, force });
   // Standard output takes the JSON in pieces; a file gets it whole (the safe write swaps in complete files).
-  const text = options.json && options.output === undefined ? null : options.json ? toJson(report) : options.csv ? compareCsv(report) : compareTable(report);
+  const text = options.json && options.output === undefined ? null : options.json ? toJson(report) : options.csv ? compareCsv(report) : compareTable(report, width);
   const written: OutputFile[] = [];
   if (options.svg !== undefined) {
     const maps = plans.map((plan) => rateMapFigure(plan));

@@ -1,7 +1,8 @@
 import type { Command } from 'commander';
 import type { ExitCode, Io } from '../io.js';
+import { withLayoutOptions, type LayoutOptions } from '../layout-options.js';
 
-export interface CompareOptions {
+export interface CompareOptions extends LayoutOptions {
   json?: boolean;
   csv?: boolean;
   output?: string;
@@ -15,8 +16,7 @@ export interface CompareOptions {
  * imported when the command runs (zod, the LP solver).
  */
 export function addCompareCommand(program: Command, io: Io, settle: (code: ExitCode) => void): void {
-  program
-    .command('compare')
+  withLayoutOptions(program.command('compare'))
     .description('compare the clock parts of one scenario, or of several variants, and find one part for the family')
     .argument('<file...>', 'scenario files (JSON), one per variant')
     .option('--json', 'print JSON for programs')

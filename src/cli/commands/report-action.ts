@@ -8,7 +8,10 @@ import { planVariants } from './plan-variants.js';
 export function runReport(files: readonly string[], options: ReportOptions, io: Io, version: string): ExitCode {
   const { plans, comparison: compared, inputs } = planVariants(files, io, { paths: [options.html], force: options.force === true });
   const comparison = plans.length > 1 ? compared : null;
-  const page = reviewPage({ plans, comparison, generated: new Date().toISOString().slice(0, 16).replace('T', ' ') + ' UTC', version });
+  // SOURCE_DATE_EPOCH (reproducible-builds.org) fixes the page's date, so that the same inputs give the same page.
+  const epoch = process.env['SOURCE_DATE_EPOCH'];
+  const when = epoch !== undefined && /^\d+$/.test(epoch) ? new Date(Number(epoch) * 1000) : new Date();
+  const page = reviewPage({ plans, comparison, generated: when.toISOString().slice(0, 16).replace('T', ' ') + ' UTC', version });
   writeFileSafely(options.html, page, { force: options.force === true, inputs });
   io.out(`Wrote ${options.html}: ${plans.length} plan(s)${comparison ? ' and the comparison of clock parts' : ''}.\n`);
   return plans.every((p) => p.best !== null) ? EXIT.answered : EXIT.noAnswer;

@@ -8,6 +8,7 @@ import { writeJson } from '../../output/json.js';
 import { readScenarioWithInputs } from '../read-scenario.js';
 import { checkOutputPaths, writeFileSafely } from '../safe-write.js';
 import { positiveFrequency, wholeNumber } from '../option-values.js';
+import { layoutWidth } from '../layout-options.js';
 import { EXIT, progressNotes, type ExitCode, type Io } from '../io.js';
 import type { VerifyOptions } from './verify-command.js';
 
@@ -30,6 +31,7 @@ const MOST_TONES = 5;
  */
 export function runVerify(file: string, options: VerifyOptions, io: Io): ExitCode {
   const progress = progressNotes(io);
+  const width = layoutWidth(options, io);
   const { scenario, inputs } = readScenarioWithInputs(file);
   const rate = positiveFrequency(options.rate, '--rate');
   const { minRate, maxRate } = scenario.converter;
@@ -49,6 +51,6 @@ export function runVerify(file: string, options: VerifyOptions, io: Io): ExitCod
   if (options.svg !== undefined) writeFileSafely(options.svg, captureSvg(result, levels), { force: options.force === true, inputs });
   progress.done();
   if (options.json) writeJson(result, io.out);
-  else io.out(verifyTable(result));
+  else io.out(verifyTable(result, width));
   return result.consistent ? EXIT.answered : EXIT.noAnswer;
 }

@@ -1,7 +1,8 @@
 import type { Command } from 'commander';
 import type { ExitCode, Io } from '../io.js';
+import { withLayoutOptions, type LayoutOptions } from '../layout-options.js';
 
-export interface VerifyOptions {
+export interface VerifyOptions extends LayoutOptions {
   rate: string;
   tones: string;
   samples: string;
@@ -22,8 +23,7 @@ export interface VerifyOptions {
  * @example addVerifyCommand(new Command(), io, () => undefined) // undefined (then: ifzone verify scenarios/heron-base.json --rate 184.32M)
  */
 export function addVerifyCommand(program: Command, io: Io, settle: (code: ExitCode) => void): void {
-  program
-    .command('verify')
+  withLayoutOptions(program.command('verify'))
     .description('simulate a capture at one rate and set it beside the plan: each predicted spur against the measured peaks')
     .argument('<file>', 'scenario file (JSON)')
     .requiredOption('--rate <freq>', 'sample rate of the capture, e.g. 184.32M')

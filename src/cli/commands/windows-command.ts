@@ -11,9 +11,10 @@ import { writeJson } from '../../output/json.js';
 import { jointWindowsReport } from '../../report/joint-windows-report.js';
 import { jointWindowsTable } from '../../output/joint-windows-table.js';
 import { EXIT, type ExitCode, type Io } from '../io.js';
+import { layoutWidth, withLayoutOptions, type LayoutOptions } from '../layout-options.js';
 import { bandFromOptions, bandFromPair, guardFromOptions, type BandOptions, type GuardOptions } from '../option-values.js';
 
-interface WindowsOptions extends BandOptions, GuardOptions {
+interface WindowsOptions extends BandOptions, GuardOptions, LayoutOptions {
   minRate?: string;
   maxRate?: string;
   json?: boolean;
@@ -26,8 +27,7 @@ const collect = (value: string, previous: string[] = []) => [...previous, value]
 
 /** `ifzone windows`: every legal sampling-rate window of a band. */
 export function addWindowsCommand(program: Command, io: Io, settle: (code: ExitCode) => void): void {
-  program
-    .command('windows')
+  withLayoutOptions(program.command('windows'), true)
     .description('list every legal band-pass sampling-rate window for a band, or the rates valid for several bands together')
     .option('--low <freq>', 'lower band edge, e.g. 60M')
     .option('--high <freq>', 'upper band edge, e.g. 80 MHz')
@@ -64,13 +64,13 @@ export function addWindowsCommand(program: Command, io: Io, settle: (code: ExitC
           { minRate, maxRate },
         );
         if (options.json) writeJson(joint, io.out);
-        else io.out(jointWindowsTable(joint));
+        else io.out(jointWindowsTable(joint, layoutWidth({ ...options, width: undefined }, io)));
         settle(joint.intervals.length > 0 ? EXIT.answered : EXIT.noAnswer);
         return;
       }
       const report = windowsReport(band, guard, { minRate, maxRate });
       if (options.json) writeJson(report, io.out);
-      else io.out(windowsTable(report));
+      else io.out(windowsTable(report, layoutWidth({ ...options, width: undefined }, io)));
       settle(report.windows.length > 0 ? EXIT.answered : EXIT.noAnswer);
     });
 }

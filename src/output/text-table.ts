@@ -1,0 +1,118 @@
+import { displayWidth as length } from './display-width.js';
+import { wrapProse } from './wrap-prose.js';
+
+/** A column of a terminal table. */
+export interface TextColumn {
+  readonly head: string;
+  /** Numbers align right. */
+  readonly align?: 'left' | 'right';
+  /**
+   * key: repeated in every block (the row's number or name); main: in the
+   * first block while it fits; detail: in the first block only when the whole
+   * table fits, else in a second block.
+   */
+  readonly role?: 'key' | 'main' | 'detail';
+  /** Cells may wrap at spaces onto more lines (names, lists). */
+  readonly wrap?: boolean;
+}
+
+const GAP = '  ';
+
+/**
+ * A plain table laid out for a width: headers over a rule, columns two spaces
+ * apart, numbers right-aligned. When it is too wide, headers break at spaces,
+ * wrapping cells break at spaces (down to their longest word), and what still
+ * does not fit moves to further blocks that repeat the key columns: first the
+ * detail columns, then main columns from the right. A detail column that
+ * reads "–" in every row is left out.
+ *
+ * @param columns the columns, deciding ones first
+ * @param rows cells as text, one array per row
+ * @param width characters available (Infinity: one block, nothing wrapped)
+ * @returns the table, lines joined by newlines, no trailing newline
+ * @example textTable([{ head: 'zone' }, { head: 'rate', align: 'right' }], [['2', '184.32 MHz']], 100)
+ * // 'zone        rate\n────  ──────────\n2     184.32 MHz'
+ */
+export function textTable(columns: readonly TextColumn[], rows: ReadonlyArray<readonly string[]>, width: number): string {
+  // A detail column with nothing to say in any row ("–" throughout) is left out.
+  const all = columns.map((_, i) => i).filter((i) => columns[i]!.role !== 'detail' || rows.some((r) => (r[i] ?? '–') !== '–'));
+  if (fits(natural(columns, rows, all), width)) return block(columns, rows, all, width);
+  const keys = all.filter((i) => columns[i]!.role === 'key');
+  const main = all.filter((i) => (columns[i]!.role ?? 'main') === 'main');
+  const detail = all.filter((i) => columns[i]!.role === 'detail');
+  // Deciding columns may wrap to stay in the first block; detail columns move to later blocks, at their natural width where they can.
+  const blocks: number[][] = [];
+  for (const [pending, wrapOk] of [[main, true], [detail, false]] as const) {
+    let left = [...pending];
+    while (left.length > 0) {
+      const chosen: number[] = [];
+      for (const i of left) {
+        const trial = [...keys, ...chosen, i];
+        const widths = wrapOk ? narrowest(columns, rows, trial) : natural(columns, rows, trial);
+        if (chosen.length === 0 || fits(widths, width)) chosen.push(i);
+      }
+      blocks.push([...keys, ...chosen].sort((a, b) => a - b));
+      left = left.filter((i) => !chosen.includes(i));
+    }
+  }
+  return blocks.map((b) => block(columns, rows, b, width)).join('\n\n');
+}
+
+function fits(widths: readonly number[], width: number): boolean {
+  return widths.reduce((sum, w) => sum + w, 0) + GAP.length * (widths.length - 1) <= width;
+}
+
+/** The least width of each picked column: its longest unbreakable cell, and its header's longest word. */
+function narrowest(columns: readonly TextColumn[], rows: ReadonlyArray<readonly string[]>, picked: readonly number[]): number[] {
+  return picked.map((i) => {
+    const column = columns[i]!;
+    const cells = rows.map((r) => r[i] ?? '');
+    const cellWidth = Math.max(0, ...cells.map((c) => (column.wrap ? longestWord(c) : length(c))));
+    return Math.max(cellWidth, longestWord(column.head));
+  });
+}
+
+function natural(columns: readonly TextColumn[], rows: ReadonlyArray<readonly string[]>, picked: readonly number[]): number[] {
+  return picked.map((i) => Math.max(length(columns[i]!.head), ...rows.map((r) => length(r[i] ?? ''))));
+}
+
+/** One block: widths from natural down towards the narrowest, widest columns shrunk first. */
+function block(columns: readonly TextColumn[], rows: ReadonlyArray<readonly string[]>, picked: readonly number[], width: number): string {
+  const least = narrowest(columns, rows, picked);
+  const widths = natural(columns, rows, picked);
+  const total = () => widths.reduce((sum, w) => sum + w, 0) + GAP.length * (picked.length - 1);
+  while (total() > width) {
+    let widest = -1;
+    for (let k = 0; k < widths.length; k++) if (widths[k]! > least[k]! && (widest < 0 || widths[k]! > widths[widest]!)) widest = k;
+    if (widest < 0) break;
+    widths[widest]! -= 1;
+  }
+  const heads = picked.map((i, k) => wrapProse(columns[i]!.head, widths[k]!).split('\n'));
+  const headLines = Math.max(...heads.map((h) => h.length));
+  const lines: string[] = [];
+  for (let line = 0; line < headLines; line++) {
+    // Headers sit on their last line, so a one-line header lines up with the last line of a two-line one.
+    lines.push(joinCells(picked.map((i, k) => heads[k]![line - (headLines - heads[k]!.length)] ?? ''), picked.map((i) => columns[i]!), widths));
+  }
+  lines.push(widths.map((w) => '─'.repeat(w)).join(GAP));
+  for (const row of rows) {
+    const cells = picked.map((i, k) => (columns[i]!.wrap ? wrapProse(row[i] ?? '', widths[k]!).split('\n') : [row[i] ?? '']));
+    const height = Math.max(...cells.map((c) => c.length));
+    for (let line = 0; line < height; line++) lines.push(joinCells(cells.map((c) => c[line] ?? ''), picked.map((i) => columns[i]!), widths));
+  }
+  return lines.join('\n');
+}
+
+function joinCells(cells: readonly string[], columns: readonly TextColumn[], widths: readonly number[]): string {
+  return cells
+    .map((cell, k) => {
+      const pad = ' '.repeat(Math.max(0, widths[k]! - length(cell)));
+      return columns[k]!.align === 'right' ? pad + cell : cell + pad;
+    })
+    .join(GAP)
+    .trimEnd();
+}
+
+function longestWord(text: string): number {
+  return Math.max(0, ...text.split(/ +/).map(length));
+}
