@@ -234,7 +234,8 @@ describe('ifzone solve: exit statuses', () => {
       ['184.32 MHz', 'typed'],
       ['245.76 MHz', 'typed'],
     ]);
-    const base = JSON.parse(runBin('solve', BASE, '--json').stdout);
+    // Every candidate of the search judged on every interferer (--all-checks), as a typed rate is.
+    const base = JSON.parse(runBin('solve', BASE, '--json', '--all-checks').stdout);
     const part = (label: string) => base.candidates.find((c: { label: string }) => c.label === label);
     // The same rate judged as a part with the same tolerance gives the same checks (the VCXO is ±10 ppm).
     const typed = JSON.parse(runBin('solve', BASE, '--rate', '184.32M', '--ppm', '10', '--json').stdout).candidates[0];
