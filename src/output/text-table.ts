@@ -1,3 +1,4 @@
+import Table from 'cli-table3';
 import { displayWidth as length } from './display-width.js';
 import { wrapProse } from './wrap-prose.js';
 
@@ -89,29 +90,28 @@ function block(columns: readonly TextColumn[], rows: ReadonlyArray<readonly stri
   }
   const heads = picked.map((i, k) => wrapProse(columns[i]!.head, widths[k]!).split('\n'));
   const headLines = Math.max(...heads.map((h) => h.length));
-  const lines: string[] = [];
-  for (let line = 0; line < headLines; line++) {
-    // Headers sit on their last line, so a one-line header lines up with the last line of a two-line one.
-    lines.push(joinCells(picked.map((i, k) => heads[k]![line - (headLines - heads[k]!.length)] ?? ''), picked.map((i) => columns[i]!), widths));
-  }
-  lines.push(widths.map((w) => '─'.repeat(w)).join(GAP));
-  for (const row of rows) {
-    const cells = picked.map((i, k) => (columns[i]!.wrap ? wrapProse(row[i] ?? '', widths[k]!).split('\n') : [row[i] ?? '']));
-    const height = Math.max(...cells.map((c) => c.length));
-    for (let line = 0; line < height; line++) lines.push(joinCells(cells.map((c) => c[line] ?? ''), picked.map((i) => columns[i]!), widths));
-  }
-  return lines.join('\n');
+  // Headers sit on their last line, so a one-line header lines up with the last line of a two-line one.
+  const headRow = heads.map((h) => [...Array<string>(headLines - h.length).fill(''), ...h].join('\n'));
+  const rule = widths.map((w) => '─'.repeat(w));
+  const body = rows.map((row) => picked.map((i, k) => (columns[i]!.wrap ? wrapProse(row[i] ?? '', widths[k]!) : (row[i] ?? ''))));
+  // cli-table3 lays the block out: no borders, columns two spaces apart, the rule under the headers drawn as a row.
+  const table = new Table({ chars: BORDERLESS, colWidths: widths, style: { head: [], border: [], 'padding-left': 0, 'padding-right': 0 } });
+  const aligned = (cells: readonly string[]) => cells.map((content, k) => ({ content, hAlign: columns[picked[k]!]!.align ?? 'left' }));
+  table.push(aligned(headRow), aligned(rule), ...body.map(aligned));
+  return table
+    .toString()
+    .split('\n')
+    .map((line) => line.trimEnd())
+    .join('\n');
 }
 
-function joinCells(cells: readonly string[], columns: readonly TextColumn[], widths: readonly number[]): string {
-  return cells
-    .map((cell, k) => {
-      const pad = ' '.repeat(Math.max(0, widths[k]! - length(cell)));
-      return columns[k]!.align === 'right' ? pad + cell : cell + pad;
-    })
-    .join(GAP)
-    .trimEnd();
-}
+/** No border or rule characters, and the gap between columns. */
+const BORDERLESS = {
+  top: '', 'top-mid': '', 'top-left': '', 'top-right': '',
+  bottom: '', 'bottom-mid': '', 'bottom-left': '', 'bottom-right': '',
+  left: '', 'left-mid': '', mid: '', 'mid-mid': '', right: '', 'right-mid': '',
+  middle: GAP,
+};
 
 function longestWord(text: string): number {
   return Math.max(0, ...text.split(/ +/).map(length));
