@@ -1,10 +1,14 @@
 import { closeSync, constants, fstatSync, openSync, readSync, statSync, type Stats } from 'node:fs';
 import type { Scenario } from '../scenario/scenario.js';
 import { resolveScenario } from '../scenario/resolve-scenario.js';
+import { deriveInterfererList } from '../interferers/derive-interferers.js';
+
+/** The work bounds on the derived interferers, refused as an issue of the file (deriveInterfererList throws them). */
+const planWork = (scenario: Scenario): void => void deriveInterfererList(scenario);
 
 /**
  * Reads a scenario file from disk, following its `extends` chain, and
- * validates it. The shell side of resolveScenario: node:fs does the reading
+ * validates it, including the work bounds of its interferers. The shell side of resolveScenario: node:fs does the reading
  * and its error codes become short reasons for the message.
  *
  * @param path the scenario file, relative to the working directory or absolute
@@ -13,7 +17,7 @@ import { resolveScenario } from '../scenario/resolve-scenario.js';
  * @example readScenarioFile('scenarios/heron-base.json').converter.bits // 14
  */
 export function readScenarioFile(path: string): Scenario {
-  return resolveScenario(path, readTextFile);
+  return resolveScenario(path, readTextFile, planWork);
 }
 
 /**
@@ -26,7 +30,7 @@ export function readScenarioWithInputs(path: string): { scenario: Scenario; inpu
   const scenario = resolveScenario(path, (file) => {
     inputs.push(file);
     return readTextFile(file);
-  });
+  }, planWork);
   return { scenario, inputs };
 }
 

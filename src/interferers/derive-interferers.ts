@@ -6,6 +6,7 @@ import { orderLaw } from './converter-law.js';
 import { converterSpurDrafts } from './converter-spurs.js';
 import { inputSignals } from './input-signals.js';
 import { complete, type InterfererDraft } from './interferer-draft.js';
+import { refuseTooManyImages } from './image-work.js';
 import { interleaveImages } from './interleave-images.js';
 import { levelThreshold } from './level-threshold.js';
 import { mixingProducts } from './mixing-products.js';
@@ -50,12 +51,14 @@ export interface DerivedInterferers {
  * signal and every listed product, in that order. Each carries its required
  * margin (its own, its kind's or the scenario's) and is blocking when its
  * level is above levelThreshold(scenario). Labels are unique (repeats
- * suffixed ` #2`, ...).
+ * suffixed ` #2`, ...). A list whose blocking interferers would take too
+ * long to search is refused here, before any solving (refuseTooManyImages).
  *
  * @param scenario the validated scenario
  * @param listing the same scenario with its signals where they decide what is listed and which way round a product is written (default: the scenario itself): the IF-shift search passes the neighbours swept over the shift range, so that every shift lists the same interferers in the same order
  * @returns the interferers (extents rateMultiple·r + [low, high] in Hz, levels in dBFS) and the summary
  * @throws RangeError for a malformed filter (see leastAttenuation)
+ * @throws WorkBoundError (an InputError) past MOST_PRODUCTS listed products, or MOST_IMAGES images of the blocking ones
  * @example deriveInterfererList(s).summary.pruned // 0
  */
 export function deriveInterfererList(scenario: Scenario, listing: Scenario = scenario): DerivedInterferers {
@@ -75,8 +78,10 @@ export function deriveInterfererList(scenario: Scenario, listing: Scenario = sce
   const own = sources(scenario, products.drafts);
   const images = interleaveImages(own, scenario, listing === scenario ? own : sources(listing, mixingProducts({ ...request, signals: listingSignals }).drafts));
   const drafts = [...own.slice(1), ...converterSpurDrafts(scenario), ...images.drafts];
+  const interferers = uniqueLabels(drafts).map((draft) => complete(draft, scenario));
+  refuseTooManyImages(scenario, interferers);
   return {
-    interferers: uniqueLabels(drafts).map((draft) => complete(draft, scenario)),
+    interferers,
     summary: {
       maxOrder: request.maxOrder,
       harmonicOrder: scenario.harmonicOrder,

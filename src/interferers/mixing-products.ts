@@ -4,6 +4,14 @@ import type { MixingTerm } from './interferer.js';
 import type { InterfererDraft } from './interferer-draft.js';
 import { factorial, productLevel, type OrderLaw } from './converter-law.js';
 import { ordinal } from './words.js';
+import { WorkBoundError } from '../scenario/work-bounds.js';
+
+/**
+ * Most products listed above the threshold. Each blocking one costs the
+ * solver a search over every window; tens of thousands already take minutes,
+ * so the walk stops here rather than list (and hold) millions.
+ */
+export const MOST_PRODUCTS = 40_000;
 
 /** What the generator was asked for. */
 export interface ProductRequest {
@@ -62,6 +70,7 @@ export interface ProductList {
  *
  * @param request signals, laws, orders and threshold
  * @returns drafts of kind `harmonic` (one signal, all +) or `intermod`, labelled `H3 wanted`, `ADJ H2`, `IM3 2·A−B`, `IM3 A+B−C`, `IM2 wanted difference`
+ * @throws WorkBoundError at maxOrder as soon as more than MOST_PRODUCTS products are listed
  * @example mixingProducts({ signals: inputSignals(s), law: (order) => orderLaw(s.converter, order, -1), maxOrder: 3, harmonicOrder: 3, threshold: db(-100) }).drafts.length > 0 // true
  */
 export function mixingProducts(request: ProductRequest): ProductList {
@@ -100,7 +109,10 @@ export function mixingProducts(request: ProductRequest): ProductList {
         const level = productLevel(law, picks.map(([i, plus, minus]) => [sorted[i]!.level, plus, minus] as const));
         if (level <= threshold) prune(1, level);
         else if (picks.every(([i]) => wantedOnly[i]) && picks.reduce((net, [, plus, minus]) => net + plus - minus, 0) === 1) inBand++;
-        else drafts.push(productDraft(law, picks.map(([i, plus, minus]) => [order[i]!, plus, minus] as const), signals, listing));
+        else {
+          drafts.push(productDraft(law, picks.map(([i, plus, minus]) => [order[i]!, plus, minus] as const), signals, listing));
+          if (drafts.length > MOST_PRODUCTS) throw tooManyProducts(n);
+        }
         return;
       }
       for (let j = from; j < sorted.length; j++) {
@@ -123,6 +135,14 @@ export function mixingProducts(request: ProductRequest): ProductList {
     walk(0, n, 0, true);
   }
   return { drafts, pruned, strongestPruned: Number.isFinite(strongestPruned) ? db(strongestPruned) : null, inBand };
+}
+
+function tooManyProducts(order: number): WorkBoundError {
+  return new WorkBoundError(
+    ['maxOrder'],
+    `at most ${MOST_PRODUCTS} mixing products above the level threshold; lower maxOrder, the signals' levels at the converter (a filter ahead of it) or the number of neighbours`,
+    `more than ${MOST_PRODUCTS} by order ${order}`,
+  );
 }
 
 /**

@@ -7,12 +7,20 @@ import { fileOfPaths, mergeLayers, type Layer } from './merge-layers.js';
 import { isJsonObject, pathText, type DocumentPath } from './document-path.js';
 import { scenarioFileSchema } from './scenario-file-schema.js';
 import { scenarioJsonSchema } from './scenario-json-schema.js';
+import { WorkBoundError } from './work-bounds.js';
 
 /**
  * Reads a file's whole text. Throws when it cannot, with a short reason as
  * the message (e.g. `no such file`); the reason is quoted in the issue.
  */
 export type ReadText = (path: string) => string;
+
+/**
+ * A check of the validated scenario that needs a later stage (the shell
+ * passes the interferers' work bound): it throws a WorkBoundError, which
+ * becomes an issue naming the file that set the path.
+ */
+export type ScenarioCheck = (scenario: Scenario) => void;
 
 /** Deeper than any scenario needs (4 levels) and far below the call stack's limit. */
 const MAX_NESTING = 32;
@@ -24,13 +32,23 @@ const MAX_NESTING = 32;
  *
  * @param path the variant's file
  * @param readText reads one file (the shell passes node:fs; tests a Map)
+ * @param check run on the validated scenario (default: none)
  * @returns the validated scenario: every frequency in Hz, defaults filled
  * @throws ScenarioError (an InputError) listing every issue found, each
- *   naming its file and path; a missing file or a cycle shows the chain
+ *   naming its file and path; a missing file or a cycle shows the chain;
+ *   the check's WorkBoundError as one issue
  * @example resolveScenario(join(root, 'scenarios', 'heron-narrow.json'), (p) => readFileSync(p, 'utf8')).wanted // { low: 137.5e6, high: 142.5e6 }
  */
-export function resolveScenario(path: string, readText: ReadText): Scenario {
-  return validateLayers(readChain(path, readText));
+export function resolveScenario(path: string, readText: ReadText, check?: ScenarioCheck): Scenario {
+  const layers = readChain(path, readText);
+  const scenario = validateLayers(layers);
+  try {
+    check?.(scenario);
+  } catch (error) {
+    if (!(error instanceof WorkBoundError)) throw error;
+    throw new ScenarioError([{ kind: 'invalid', file: fileOfPaths(layers, [error.path]), path: pathText(error.path), expected: error.expected, received: error.received }]);
+  }
+  return scenario;
 }
 
 /**

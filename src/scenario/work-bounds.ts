@@ -4,6 +4,8 @@ import type { Hz } from '../units/quantities.js';
 import { guardedBand, type Band, type Guard } from '../math/band.js';
 import { windowCount, zoneSpan } from '../math/zone-span.js';
 import { refuseAt } from './band-forms.js';
+import { InputError } from '../units/input-error.js';
+import { pathText, type DocumentPath } from './document-path.js';
 import type { BoardSpur, Converter, KindMargins, Neighbour, WantedBand } from './scenario.js';
 
 /**
@@ -15,7 +17,8 @@ export const MOST_PLAN_WINDOWS = 1000;
 
 /**
  * Most images of the wanted band the interferers can meet over the rate
- * range (an upper estimate, see foldingWork). Measured at 20 to 40 µs per
+ * range (an upper estimate, see foldingWork and, on the derived list, the
+ * interferers stage's refuseTooManyImages). Measured at 20 to 40 µs per
  * blocking image in the solver on a loaded machine (most products are too weak
  * to block and cost far less), 200,000 images are seconds, not minutes.
  */
@@ -90,10 +93,7 @@ export function refuseTooMuchWork(ctx: z.RefinementCtx, inputs: WorkInputs): voi
  * source reach F·Σk in all; the margin adds its width to each extent.
  */
 function foldingWork(inputs: WorkInputs, bands: readonly Band[]): { images: number; worst: WorkSource | null } {
-  const { converter } = inputs;
-  const lowestRate = Math.min(...bands.map((band) => Math.max(converter.minRate, (2 * band.high) / zoneSpan(band, converter.minRate, converter.maxRate).last)));
-  const perHertz = 2 * (1 / lowestRate - 1 / converter.maxRate);
-  const windows = Math.max(...bands.map((band) => windowCount(band, converter.minRate, converter.maxRate)));
+  const { perHertz, windows } = imageDensity(inputs.converter, bands);
   if (windows === 0) return { images: 0, worst: null };
   const margin = largestMargin(inputs);
   let images = 0;
@@ -108,15 +108,49 @@ function foldingWork(inputs: WorkInputs, bands: readonly Band[]): { images: numb
   return { images, worst };
 }
 
+/**
+ * How many images of the wanted band an extent meets over the rate range:
+ * about `perHertz` per hertz of its reach, 2·F·(1/rLow − 1/rHigh) for an
+ * extent reaching F (j·r ± band for every j up to F/r, both sides), plus
+ * two per window (`windows`, the most any guarded band has).
+ *
+ * @param converter the converter's rate range, Hz
+ * @param bands the guarded wanted band (and its IF-shifted copies)
+ * @returns images per hertz of reach (1/Hz) and the window count
+ * @example imageDensity({ minRate: 40e6, maxRate: 250e6 }, [{ low: 128e6, high: 152e6 }]).windows // 6 (the 24 MHz guarded band has a window in six zones between 40 and 250 MHz)
+ */
+export function imageDensity(converter: Pick<Converter, 'minRate' | 'maxRate'>, bands: readonly Band[]): { perHertz: number; windows: number } {
+  const lowestRate = Math.min(...bands.map((band) => Math.max(converter.minRate, (2 * band.high) / zoneSpan(band, converter.minRate, converter.maxRate).last)));
+  const perHertz = 2 * (1 / lowestRate - 1 / converter.maxRate);
+  const windows = Math.max(...bands.map((band) => windowCount(band, converter.minRate, converter.maxRate)));
+  return { perHertz, windows };
+}
+
+/**
+ * A plan refused for its size after the scenario itself was found valid
+ * (the interferers it derives would take too long to search), naming the
+ * scenario field to narrow by its path from the document's root. The shell
+ * adds the file (resolveScenario's check).
+ */
+export class WorkBoundError extends InputError {
+  constructor(
+    readonly path: DocumentPath,
+    expected: string,
+    received: string,
+  ) {
+    super(pathText(path), expected, received);
+    this.name = 'WorkBoundError';
+    this.message = `${pathText(path)}: expected ${expected} (got ${received})`;
+  }
+}
+
 /** The interferers' sources, each with the highest frequency its derived interferers reach. */
 function workSources(inputs: WorkInputs): WorkSource[] {
   const lift = Math.max(0, inputs.ifShift?.high ?? 0);
   const highestWanted = inputs.wanted.high + lift;
-  const highestNeighbour = Math.max(highestWanted, ...inputs.neighbours.map((n) => n.high + lift));
   const order = inputs.harmonicOrder;
-  // Mixing products among the neighbours and the wanted band, each below maxOrder times the highest: counted as
-  // two per ordered pair, since the generator prunes every product too weak to block before it is made.
-  const products = 2 * (inputs.neighbours.length + 1) ** 2;
+  // The mixing products are left out here: most are too weak to block and are never made (mixingProducts prunes
+  // them). The interferers stage counts the blocking ones it derives instead (refuseTooManyImages).
   return [
     { path: ['harmonicOrder'], words: `the wanted band's harmonics up to ${formatFrequency(order * highestWanted)}`, reach: highestWanted * (triangle(order) - 1), count: order - 1 },
     ...inputs.boardSpurs.map((spur, i) => ({
@@ -131,7 +165,6 @@ function workSources(inputs: WorkInputs): WorkSource[] {
       reach: (neighbour.high + lift) * triangle(3),
       count: 3,
     })),
-    { path: ['neighbours'], words: 'the products of the neighbours and the wanted band', reach: products * inputs.maxOrder * highestNeighbour, count: products },
   ];
 }
 
@@ -147,8 +180,14 @@ function triangle(n: number): number {
   return (n * (n + 1)) / 2;
 }
 
-/** The wanted band, and moved to either end of the IF shift. */
-function shiftedBands(inputs: WorkInputs): Band[] {
+/**
+ * The wanted band, and moved to either end of the IF shift.
+ *
+ * @param inputs the wanted band (Hz) and the IF shift (Hz, or null)
+ * @returns one band, or three (the unshifted one and either end of the shift, those not below zero)
+ * @example shiftedBands({ wanted: { low: 130e6, high: 150e6 }, ifShift: null }) // [{ low: 130e6, high: 150e6 }]
+ */
+export function shiftedBands(inputs: { readonly wanted: Band; readonly ifShift: WorkInputs['ifShift'] }): Band[] {
   const { wanted, ifShift } = inputs;
   const at = (shift: number): Band => ({ low: (wanted.low + shift) as Hz, high: (wanted.high + shift) as Hz });
   return ifShift ? [at(0), at(ifShift.low), at(ifShift.high)].filter((band) => band.low >= 0) : [at(0)];

@@ -70,7 +70,7 @@ describe('counts and frequencies bounded', () => {
   });
 
   it('takes the limits themselves: 256 neighbours, 64 spurs, 1,024 clock parts, 1 THz', () => {
-    // 256 neighbours pass the count; on the demo's 40–250 MHz converter their products then meet the folding-work bound instead.
+    // 256 neighbours pass the count (whether their products are too much work is judged once they are derived).
     const crowded = firstIssue({ neighbours: many(256, (i) => ({ label: `n${i}`, center: `${100 + i}M`, width: '100k', level: -30 })) });
     expect(crowded?.expected ?? '').not.toContain('a list of at most');
     expect(firstIssue({ clocks: many(1024, (i) => ({ label: `c${i}`, frequency: `${100 + i}M`, tolerance: 20 })) })).toBeNull();
