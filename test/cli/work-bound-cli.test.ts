@@ -58,10 +58,12 @@ describe('the folding-work bound on the derived interferers', () => {
   }, 60_000);
 
   it('refuses 200 strong neighbours while their products are listed, naming maxOrder and what to lower', () => {
-    // 200 tones make 20,100 second-order products alone (sums and differences of pairs, and squares), 1.3 million at order 3.
+    // 201 signals (the neighbours and the wanted band) make 20,100 pairs, so 40,200 sums and differences at
+    // order 2 alone (counted by hand), all at about −5 dBFS: the generator stops during order 2.
     const path = variant('strong-200.json', { neighbours: neighbours(200, -5, 1), filter: null, maxOrder: 3 });
     const run = runBin('solve', path);
     expect(run.status).toBe(2);
     expect(run.stderr).toMatch(/^ifzone: [^\n]*strong-200\.json: maxOrder: expected at most 40000 mixing products above the level threshold; lower maxOrder[^\n]*neighbours[^\n]*\n$/);
+    expect(run.stderr).toContain('by order 2');
   }, 60_000);
 });
