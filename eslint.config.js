@@ -20,7 +20,10 @@ export default tseslint.config(
       // must keep whole (locales and all), about 30 ms more on every scenario read.
       'no-restricted-syntax': [
         'error',
-        { selector: "ImportDeclaration[source.value='zod'] > ImportSpecifier[imported.name='z']", message: "import * as z from 'zod', so that the bundle keeps only the parts used" },
+        {
+          selector: "ImportDeclaration[source.value='zod'] > ImportSpecifier[imported.name='z']",
+          message: "import * as z from 'zod', so that the bundle keeps only the parts used",
+        },
       ],
     },
   },

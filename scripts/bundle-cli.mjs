@@ -27,7 +27,9 @@ await build({
   minifySyntax: true,
   // commander is CommonJS and requires Node's built-ins; an ES module has no
   // `require` of its own.
-  banner: { js: "import { createRequire as ifzoneCreateRequire } from 'node:module'; const require = ifzoneCreateRequire(import.meta.url);" },
+  banner: {
+    js: "import { createRequire as ifzoneCreateRequire } from 'node:module'; const require = ifzoneCreateRequire(import.meta.url);",
+  },
   chunkNames: 'chunks/[name]-[hash]',
   logLevel: 'warning',
 });

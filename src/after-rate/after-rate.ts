@@ -125,7 +125,8 @@ function downConverterSettings(inputs: AfterRateInputs, rate: Hz, center: Hz | n
   const { ncoBits, usableFraction } = inputs.settings.downConverter;
   const nco = ncoBits === null || center === null ? null : ncoSetting(center, rate, ncoBits, inverted === true);
   const width = hz(inputs.band.high - inputs.band.low);
-  const decimation = inputs.outputRate === null ? null : decimationPlan(rate, inputs.outputRate, width, usableFraction, nco ? nco.error : hz(0));
+  const decimation =
+    inputs.outputRate === null ? null : decimationPlan(rate, inputs.outputRate, width, usableFraction, nco ? nco.error : hz(0));
   return { nco, decimation };
 }
 

@@ -35,8 +35,10 @@ export interface AliasBand {
  * @example aliasBands({ low: hz(21e6), high: hz(25e6) }, hz(40e6), hz(40e6), hz(100e6)).map((b) => [b.low, b.high]) // [[15e6, 19e6], [55e6, 59e6], [61e6, 65e6], [95e6, 99e6]]
  */
 export function aliasBands(channel: Band, rateLow: Hz, rateHigh: Hz, inputBandwidth: Hz): AliasBand[] {
-  if (!(rateLow > 0 && rateHigh >= rateLow && Number.isFinite(rateHigh))) throw new RangeError(`alias bands need 0 < rateLow ≤ rateHigh, found [${rateLow}, ${rateHigh}] Hz`);
-  if (!(channel.high >= channel.low)) throw new RangeError(`alias bands need channel.low ≤ channel.high, found [${channel.low}, ${channel.high}] Hz`);
+  if (!(rateLow > 0 && rateHigh >= rateLow && Number.isFinite(rateHigh)))
+    throw new RangeError(`alias bands need 0 < rateLow ≤ rateHigh, found [${rateLow}, ${rateHigh}] Hz`);
+  if (!(channel.high >= channel.low))
+    throw new RangeError(`alias bands need channel.low ≤ channel.high, found [${channel.low}, ${channel.high}] Hz`);
   const bands: AliasBand[] = [];
   // Past this multiple even the mirrored image starts above the input bandwidth.
   const last = Math.ceil((inputBandwidth + channel.high) / rateLow);

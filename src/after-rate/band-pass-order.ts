@@ -39,7 +39,13 @@ export interface BandPassOrders {
  * @throws RangeError for a passband that is not 0 ≤ low < high
  * @example bandPassOrders({ low: hz(100e6), high: hz(120e6) }, hz(80e6), hz(150e6), db(1), db(60)).orders // { butterworth: 7, chebyshev: 5, elliptic: 4 }
  */
-export function bandPassOrders(passband: Band, stopBelow: Hz | null, stopAbove: Hz | null, passbandRippleDb: Db, stopbandDb: Db): BandPassOrders {
+export function bandPassOrders(
+  passband: Band,
+  stopBelow: Hz | null,
+  stopAbove: Hz | null,
+  passbandRippleDb: Db,
+  stopbandDb: Db,
+): BandPassOrders {
   if (!(passband.low >= 0 && passband.high > passband.low && Number.isFinite(passband.high))) {
     throw new RangeError(`band-pass orders need 0 ≤ low < high, found [${passband.low}, ${passband.high}] Hz`);
   }
@@ -47,11 +53,25 @@ export function bandPassOrders(passband: Band, stopBelow: Hz | null, stopAbove: 
   const bandwidth = passband.high - passband.low;
   // With f0 = 0 (a low-pass) the transform is Ω = f / high.
   const omega = (f: number) => Math.abs(f * f - f0Squared) / (f * bandwidth);
-  const selectivityBelow = stopBelow === null || passband.low === 0 ? null : stopBelow <= 0 ? Infinity : stopBelow >= passband.low ? 1 : omega(stopBelow);
+  const selectivityBelow =
+    stopBelow === null || passband.low === 0 ? null : stopBelow <= 0 ? Infinity : stopBelow >= passband.low ? 1 : omega(stopBelow);
   const selectivityAbove = stopAbove === null ? null : stopAbove <= passband.high ? 1 : omega(stopAbove);
   const lowPass = passband.low === 0;
-  const sides = ([['below', selectivityBelow], ['above', selectivityAbove]] as const).filter((s): s is readonly [MaskSide, number] => s[1] !== null);
-  if (sides.length === 0) return { orders: { butterworth: 0, chebyshev: 0, elliptic: 0 }, selectivity: null, tightest: null, selectivityBelow, selectivityAbove, lowPass };
+  const sides = (
+    [
+      ['below', selectivityBelow],
+      ['above', selectivityAbove],
+    ] as const
+  ).filter((s): s is readonly [MaskSide, number] => s[1] !== null);
+  if (sides.length === 0)
+    return {
+      orders: { butterworth: 0, chebyshev: 0, elliptic: 0 },
+      selectivity: null,
+      tightest: null,
+      selectivityBelow,
+      selectivityAbove,
+      lowPass,
+    };
   const [tightest, selectivity] = sides.reduce((a, b) => (b[1] < a[1] ? b : a));
   if (stopbandDb <= passbandRippleDb || selectivity === Infinity) {
     return { orders: { butterworth: 0, chebyshev: 0, elliptic: 0 }, selectivity, tightest, selectivityBelow, selectivityAbove, lowPass };

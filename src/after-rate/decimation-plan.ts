@@ -42,7 +42,16 @@ export function decimationPlan(rate: Hz, outputRate: Hz, channelWidth: Hz, usabl
   const fitSlack = hz(usableBandwidth / 2 - (channelWidth / 2 + Math.abs(ncoError)));
   const ratio = rate / outputRate;
   const whole = Math.round(ratio);
-  const noFactor = (refusal: string): DecimationPlan => ({ outputRate, factor: null, refusal, halfBandStages: 0, remainder: null, usableBandwidth, fitSlack, fits: fitSlack >= 0 });
+  const noFactor = (refusal: string): DecimationPlan => ({
+    outputRate,
+    factor: null,
+    refusal,
+    halfBandStages: 0,
+    remainder: null,
+    usableBandwidth,
+    fitSlack,
+    fits: fitSlack >= 0,
+  });
   if (whole < 1 || !sameEdge(ratio, whole)) return noFactor(ratio < 1 ? 'the output rate is above the sample rate' : NOT_AN_INTEGER);
   let halfBandStages = 0;
   let remainder = whole;

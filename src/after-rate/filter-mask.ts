@@ -47,7 +47,12 @@ export interface FilterMask {
  * @returns the mask with a margin per band
  * @example filterMask([{ multiple: 1, sense: 'mirrored', low: hz(15e6), high: hz(19e6) }], null, db(-20), db(-80)).worst.marginDb // −60
  */
-export function filterMask(bands: readonly AliasBand[], filter: AntiAliasFilter | null, outOfBandLevel: Db | null, threshold: Db): FilterMask {
+export function filterMask(
+  bands: readonly AliasBand[],
+  filter: AntiAliasFilter | null,
+  outOfBandLevel: Db | null,
+  threshold: Db,
+): FilterMask {
   const level = outOfBandLevel ?? db(0);
   const requiredDb = db(Math.max(0, level - threshold));
   const masked = bands.map((band): MaskBand => {
@@ -56,5 +61,13 @@ export function filterMask(bands: readonly AliasBand[], filter: AntiAliasFilter 
   });
   const worst = masked.reduce<MaskBand | null>((w, b) => (w === null || b.marginDb < w.marginDb ? b : w), null);
   const levelStated = outOfBandLevel !== null;
-  return { outOfBandLevel: level, levelStated, threshold, requiredDb, bands: masked, worst, pass: !levelStated || worst === null || worst.marginDb >= 0 };
+  return {
+    outOfBandLevel: level,
+    levelStated,
+    threshold,
+    requiredDb,
+    bands: masked,
+    worst,
+    pass: !levelStated || worst === null || worst.marginDb >= 0,
+  };
 }

@@ -33,7 +33,8 @@ export interface NcoSetting {
  * @example ncoSetting(hz(10e6), hz(100e6), 8, false) // { word: 26, actual: 10156250, error: 156250 }
  */
 export function ncoSetting(target: Hz, rate: Hz, bits: number, inverted: boolean): NcoSetting {
-  if (!(Number.isInteger(bits) && bits >= 1 && bits <= MOST_NCO_BITS)) throw new RangeError(`NCO width must be a whole number of bits from 1 to ${MOST_NCO_BITS}, found ${bits}`);
+  if (!(Number.isInteger(bits) && bits >= 1 && bits <= MOST_NCO_BITS))
+    throw new RangeError(`NCO width must be a whole number of bits from 1 to ${MOST_NCO_BITS}, found ${bits}`);
   if (!(rate > 0 && Number.isFinite(rate))) throw new RangeError(`NCO rate must be > 0, found ${rate}`);
   if (!(target >= 0 && target <= rate / 2)) throw new RangeError(`NCO frequency must lie in [0, rate/2], found ${target} Hz at ${rate} Hz`);
   const full = 2 ** bits;

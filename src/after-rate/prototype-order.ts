@@ -30,7 +30,8 @@ export interface PrototypeOrders {
  * @example prototypeOrders(db(1), db(40), 2) // { butterworth: 8, chebyshev: 5, elliptic: 4 }
  */
 export function prototypeOrders(passbandRippleDb: Db, stopbandDb: Db, selectivity: number): PrototypeOrders {
-  if (!(passbandRippleDb > 0 && Number.isFinite(passbandRippleDb))) throw new RangeError(`passband ripple must be > 0 dB, found ${passbandRippleDb}`);
+  if (!(passbandRippleDb > 0 && Number.isFinite(passbandRippleDb)))
+    throw new RangeError(`passband ripple must be > 0 dB, found ${passbandRippleDb}`);
   if (!(selectivity > 1 && Number.isFinite(selectivity))) throw new RangeError(`selectivity must be > 1, found ${selectivity}`);
   if (!Number.isFinite(stopbandDb)) throw new RangeError(`stopband attenuation must be finite, found ${stopbandDb}`);
   if (stopbandDb <= passbandRippleDb) return { butterworth: 0, chebyshev: 0, elliptic: 0 };

@@ -25,7 +25,14 @@ const DEEPEST = 48;
  * @returns the integral and its error estimate
  * @example integrate((x) => x * x, 0, 3, 1e-12).value // 9
  */
-export function integrate(f: (x: number) => number, a: number, b: number, absoluteTolerance: number, cuts: readonly number[] = [], minimumPieces = 8): Quadrature {
+export function integrate(
+  f: (x: number) => number,
+  a: number,
+  b: number,
+  absoluteTolerance: number,
+  cuts: readonly number[] = [],
+  minimumPieces = 8,
+): Quadrature {
   if (!(b >= a)) throw new RangeError(`integration needs a ≤ b, found [${a}, ${b}]`);
   if (!(absoluteTolerance > 0)) throw new RangeError(`integration needs a tolerance > 0, found ${absoluteTolerance}`);
   if (a === b) return { value: 0, errorEstimate: 0 };
@@ -33,7 +40,8 @@ export function integrate(f: (x: number) => number, a: number, b: number, absolu
   const pieces: Array<[number, number]> = [];
   for (let i = 1; i < edges.length; i++) {
     const [lo, hi] = [edges[i - 1]!, edges[i]!];
-    for (let p = 0; p < minimumPieces; p++) pieces.push([lo + ((hi - lo) * p) / minimumPieces, p === minimumPieces - 1 ? hi : lo + ((hi - lo) * (p + 1)) / minimumPieces]);
+    for (let p = 0; p < minimumPieces; p++)
+      pieces.push([lo + ((hi - lo) * p) / minimumPieces, p === minimumPieces - 1 ? hi : lo + ((hi - lo) * (p + 1)) / minimumPieces]);
   }
   let value = 0;
   let errorEstimate = 0;
@@ -52,7 +60,17 @@ function simpson(a: number, b: number, fa: number, fm: number, fb: number): numb
   return ((b - a) / 6) * (fa + 4 * fm + fb);
 }
 
-function adaptive(f: (x: number) => number, a: number, b: number, fa: number, fm: number, fb: number, whole: number, tolerance: number, depth: number): Quadrature {
+function adaptive(
+  f: (x: number) => number,
+  a: number,
+  b: number,
+  fa: number,
+  fm: number,
+  fb: number,
+  whole: number,
+  tolerance: number,
+  depth: number,
+): Quadrature {
   const m = (a + b) / 2;
   const flm = f((a + m) / 2);
   const frm = f((m + b) / 2);

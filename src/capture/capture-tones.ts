@@ -126,14 +126,28 @@ export function captureTones(scenario: Scenario, record: CaptureRecord, layout: 
   const add = (label: string, source: ToneSource, input: boolean, nominal: number, cycles: number, level: number, inPhase = false) => {
     const frequency = cyclesFrequency(cycles, rate, samples);
     const drawn = 2 * Math.PI * phase();
-    tones.push({ label, source, input, nominal: hz(nominal), cycles, frequency, move: hz(frequency - nominal), level: db(level), amplitude: 10 ** (level / 20), phase: inPhase ? 0 : drawn });
+    tones.push({
+      label,
+      source,
+      input,
+      nominal: hz(nominal),
+      cycles,
+      frequency,
+      move: hz(frequency - nominal),
+      level: db(level),
+      amplitude: 10 ** (level / 20),
+      phase: inPhase ? 0 : drawn,
+    });
   };
   const wantedLevel = wantedToneLevel(scenario, record.wantedTones);
   wantedNominals(scenario.wanted, record.wantedTones).forEach((f, i) => {
     add(`W${i + 1}`, { kind: 'wanted', index: i }, true, f, nearestCycles(f, rate, samples) + (layout.wanted[i] ?? 0), wantedLevel);
   });
   // A tone source is attenuated at the frequency it is synthesised at (where the re-derived plan puts it); a band over its extent.
-  const at = (low: number, high: number, cycles: number) => (low === high ? [cyclesFrequency(cycles, rate, samples), cyclesFrequency(cycles, rate, samples)] as const : [hz(low), hz(high)] as const);
+  const at = (low: number, high: number, cycles: number) =>
+    low === high
+      ? ([cyclesFrequency(cycles, rate, samples), cyclesFrequency(cycles, rate, samples)] as const)
+      : ([hz(low), hz(high)] as const);
   scenario.neighbours.forEach((n, i) => {
     const centre = (n.low + n.high) / 2;
     const cycles = nearestCycles(centre, rate, samples) + (layout.neighbours[i] ?? 0);
@@ -144,15 +158,31 @@ export function captureTones(scenario: Scenario, record: CaptureRecord, layout: 
     const centre = (spur.low + spur.high) / 2;
     const cycles = nearestCycles(centre, rate, samples);
     for (let h = 1; h <= Math.max(1, spur.harmonics); h++) {
-      const loss = spur.coupling === 'before-filter' ? leastAttenuation(scenario.filter, ...at(h * spur.low, h * spur.high, h * cycles)) : 0;
-      add(h === 1 ? spur.label : `${spur.label} H${h}`, { kind: 'board spur', index: i, harmonic: h }, true, h * centre, h * cycles, spur.level - 20 * Math.log10(h) - loss);
+      const loss =
+        spur.coupling === 'before-filter' ? leastAttenuation(scenario.filter, ...at(h * spur.low, h * spur.high, h * cycles)) : 0;
+      add(
+        h === 1 ? spur.label : `${spur.label} H${h}`,
+        { kind: 'board spur', index: i, harmonic: h },
+        true,
+        h * centre,
+        h * cycles,
+        spur.level - 20 * Math.log10(h) - loss,
+      );
     }
   });
   const { dc, halfRate, quarterRate, fractions } = scenario.converter.rateSpurs;
   const rateSpur = (numerator: number, denominator: number, level: number) => {
     const cycles = Math.round((numerator * samples) / denominator);
     const onEdge = foldCycles(cycles, samples) === 0 || foldCycles(cycles, samples) === samples / 2;
-    add(rateFractionLabel(numerator, denominator), { kind: 'rate spur', numerator, denominator }, false, (numerator * rate) / denominator, cycles, level, onEdge);
+    add(
+      rateFractionLabel(numerator, denominator),
+      { kind: 'rate spur', numerator, denominator },
+      false,
+      (numerator * rate) / denominator,
+      cycles,
+      level,
+      onEdge,
+    );
   };
   if (dc !== null) rateSpur(0, 1, dc);
   if (halfRate !== null) add('rate/2', { kind: 'rate spur', numerator: 1, denominator: 2 }, false, rate / 2, samples / 2, halfRate, true);
@@ -162,7 +192,15 @@ export function captureTones(scenario: Scenario, record: CaptureRecord, layout: 
   if (interleave !== null) {
     const m = interleave.ways;
     for (let k = 1; 2 * k <= m; k++) {
-      add(`IL offset ${k}/${m}`, { kind: 'interleave offset', k }, false, (k * rate) / m, Math.round((k * samples) / m), interleave.offsetSpur, 2 * k === m);
+      add(
+        `IL offset ${k}/${m}`,
+        { kind: 'interleave offset', k },
+        false,
+        (k * rate) / m,
+        Math.round((k * samples) / m),
+        interleave.offsetSpur,
+        2 * k === m,
+      );
     }
   }
   return tones;

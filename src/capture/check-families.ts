@@ -16,7 +16,13 @@ export type LineFamily =
   /** Every product of the signals' tones with these counts (one signal, plus 1: the tone itself). */
   | { readonly kind: 'mixing'; readonly terms: readonly MixingTerm[] }
   /** The interleaving images k/M·R + side·f of every line of a mixing family. */
-  | { readonly kind: 'interleave image'; readonly k: number; readonly ways: number; readonly side: 1 | -1; readonly terms: readonly MixingTerm[] }
+  | {
+      readonly kind: 'interleave image';
+      readonly k: number;
+      readonly ways: number;
+      readonly side: 1 | -1;
+      readonly terms: readonly MixingTerm[];
+    }
   /** One tone added after the converter (a rate-tied spur). */
   | { readonly kind: 'tone'; readonly tone: number }
   /** Nothing in the capture stands for it. */
@@ -41,7 +47,14 @@ export function checkFamily(interferer: Interferer, tones: readonly CaptureTone[
   }
   if (interferer.kind === 'converter' && interferer.low === 0 && interferer.high === 0) {
     const bin = foldCycles(Math.round(interferer.rateMultiple * samples), samples);
-    const matching = tones.flatMap((t, i) => (!t.input && (t.source.kind === 'rate spur' || t.source.kind === 'interleave offset') && foldCycles(t.cycles, samples) === bin && same(t.level, interferer.level) ? [i] : []));
+    const matching = tones.flatMap((t, i) =>
+      !t.input &&
+      (t.source.kind === 'rate spur' || t.source.kind === 'interleave offset') &&
+      foldCycles(t.cycles, samples) === bin &&
+      same(t.level, interferer.level)
+        ? [i]
+        : [],
+    );
     const free = matching.find((i) => !claimed.has(i)) ?? matching[0];
     if (free !== undefined) {
       claimed.add(free);

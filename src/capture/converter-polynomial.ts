@@ -55,7 +55,8 @@ export function binomial(n: number, k: number): number {
  */
 export function singleToneHarmonic(coefficients: Coefficients, amplitude: number, order: number): number {
   let sum = 0;
-  for (let k = order; k < coefficients.length; k += 2) sum += (coefficients[k]! * amplitude ** k * binomial(k, (k - order) / 2)) / 2 ** (k - 1);
+  for (let k = order; k < coefficients.length; k += 2)
+    sum += (coefficients[k]! * amplitude ** k * binomial(k, (k - order) / 2)) / 2 ** (k - 1);
   return sum;
 }
 

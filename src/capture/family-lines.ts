@@ -68,7 +68,13 @@ export function familyLines(family: LineFamily, tones: readonly CaptureTone[], i
       return [{ what: t.label, component: `t:${family.tone}`, cycles: t.cycles, net: null, tone: family.tone }];
     }
     case 'mixing':
-      return mixingLines(family.terms, tones, index).map((line) => ({ what: productName(line.normal, index, tones), component: `n:${line.normal.join(',')}`, cycles: line.cycles, net: line.normal, tone: null }));
+      return mixingLines(family.terms, tones, index).map((line) => ({
+        what: productName(line.normal, index, tones),
+        component: `n:${line.normal.join(',')}`,
+        cycles: line.cycles,
+        net: line.normal,
+        tone: null,
+      }));
     case 'interleave image':
       return mixingLines(family.terms, tones, index).map((line) => {
         // k/M·R + side·f with f written as its normal form: the normal form may be −f, which turns the side.
@@ -92,12 +98,20 @@ export function familyLines(family: LineFamily, tones: readonly CaptureTone[], i
 }
 
 /** Every product of the terms' tones: its normal form, the sign that gives it (+1 or −1) and its whole cycles before folding. */
-function mixingLines(terms: readonly MixingTerm[], tones: readonly CaptureTone[], index: InputIndex): Array<{ normal: number[]; sign: 1 | -1; cycles: number }> {
+function mixingLines(
+  terms: readonly MixingTerm[],
+  tones: readonly CaptureTone[],
+  index: InputIndex,
+): Array<{ normal: number[]; sign: 1 | -1; cycles: number }> {
   const members = (term: MixingTerm) =>
     tones.flatMap((t, i) => {
       const s = t.source;
       const match =
-        term.signal === 'wanted' ? s.kind === 'wanted' : term.signal === 'neighbour' ? s.kind === 'neighbour' && s.index === term.index : s.kind === 'board spur' && s.index === term.index && s.harmonic === term.harmonic;
+        term.signal === 'wanted'
+          ? s.kind === 'wanted'
+          : term.signal === 'neighbour'
+            ? s.kind === 'neighbour' && s.index === term.index
+            : s.kind === 'board spur' && s.index === term.index && s.harmonic === term.harmonic;
       return match ? [i] : [];
     });
   let partial: number[][] = [new Array<number>(index.inputs.length).fill(0)];

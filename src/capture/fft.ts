@@ -26,7 +26,8 @@ export function isPowerOfTwo(n: number): boolean {
  */
 export function fftInPlace(re: Float64Array, im: Float64Array): void {
   const n = re.length;
-  if (im.length !== n || !isPowerOfTwo(n)) throw new RangeError(`FFT needs two arrays of one power-of-two length, got ${re.length} and ${im.length}`);
+  if (im.length !== n || !isPowerOfTwo(n))
+    throw new RangeError(`FFT needs two arrays of one power-of-two length, got ${re.length} and ${im.length}`);
   for (let i = 1, j = 0; i < n; i++) {
     let bit = n >> 1;
     for (; j & bit; bit >>= 1) j ^= bit;

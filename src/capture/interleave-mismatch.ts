@@ -42,7 +42,12 @@ export function coreMismatch(interleave: Interleave): CoreMismatch {
     return { ways: m, gains: pattern(epsilon).map((g) => 1 + g), skews: new Array<number>(m).fill(0), imageFactor: () => epsilon };
   }
   const t = epsilon / (2 * Math.PI * reference);
-  return { ways: m, gains: new Array<number>(m).fill(1), skews: pattern(t), imageFactor: (frequency) => 2 * Math.PI * Math.abs(frequency) * t };
+  return {
+    ways: m,
+    gains: new Array<number>(m).fill(1),
+    skews: pattern(t),
+    imageFactor: (frequency) => 2 * Math.PI * Math.abs(frequency) * t,
+  };
 }
 
 /**

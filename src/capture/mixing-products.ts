@@ -174,7 +174,12 @@ export const PRODUCT_BUDGET = 50_000;
  * @returns the products at or above the cutoff, with exact amplitudes, and whether the list is complete
  * @example enumerateProducts([0, 1, 0.1], [0.5], 1e-9).products.map((p) => p.net) // [[1], [2]]
  */
-export function enumerateProducts(coefficients: Coefficients, amplitudes: readonly number[], cutoff: number, budget = PRODUCT_BUDGET): ProductList {
+export function enumerateProducts(
+  coefficients: Coefficients,
+  amplitudes: readonly number[],
+  cutoff: number,
+  budget = PRODUCT_BUDGET,
+): ProductList {
   const highest = coefficients.length - 1;
   const peak = amplitudes.reduce((sum, a) => sum + a, 0);
   const own = orderSupremums(coefficients, peak);

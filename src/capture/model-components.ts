@@ -51,11 +51,20 @@ export interface ModelComponents {
  * @returns the components, and whether the product search ran to its end
  * @example modelComponents(tones, index, converterCoefficients(heronBase), 65536, 1e-8).components.some((c) => c.name === '2·W1') // true
  */
-export function modelComponents(tones: readonly CaptureTone[], index: InputIndex, coefficients: Coefficients, samples: number, cutoff: number, cores: { readonly mismatch: CoreMismatch; readonly rate: number } | null = null): ModelComponents {
+export function modelComponents(
+  tones: readonly CaptureTone[],
+  index: InputIndex,
+  coefficients: Coefficients,
+  samples: number,
+  cutoff: number,
+  cores: { readonly mismatch: CoreMismatch; readonly rate: number } | null = null,
+): ModelComponents {
   const mismatch = cores?.mismatch ?? null;
   const amplitudes = index.inputs.map((i) => tones[i]!.amplitude);
   // Images are at most a factor below their source: search the products down to that much lower, keep the images above the cutoff.
-  const factor = mismatch ? Math.max(1e-30, ...tones.filter((t) => t.input).map((t) => mismatch.imageFactor(t.frequency * (coefficients.length - 1)))) : 1;
+  const factor = mismatch
+    ? Math.max(1e-30, ...tones.filter((t) => t.input).map((t) => mismatch.imageFactor(t.frequency * (coefficients.length - 1))))
+    : 1;
   const list = enumerateProducts(coefficients, amplitudes, mismatch ? Math.min(cutoff, cutoff / factor) : cutoff);
   const products = list.products.map((p) => {
     const cycles = p.net.reduce((sum, n, i) => sum + n * tones[index.inputs[i]!]!.cycles, 0);
@@ -69,7 +78,9 @@ export function modelComponents(tones: readonly CaptureTone[], index: InputIndex
       wanted: single >= 0 && tones[single]!.source.kind === 'wanted',
     };
   });
-  const added = tones.flatMap((t, i) => (t.input ? [] : [{ key: `t:${i}`, name: t.label, order: 1, bin: foldCycles(t.cycles, samples), amplitude: t.amplitude, wanted: false }]));
+  const added = tones.flatMap((t, i) =>
+    t.input ? [] : [{ key: `t:${i}`, name: t.label, order: 1, bin: foldCycles(t.cycles, samples), amplitude: t.amplitude, wanted: false }],
+  );
   const images: ModelComponent[] = [];
   if (mismatch) {
     const rate = cores!.rate;
@@ -78,7 +89,14 @@ export function modelComponents(tones: readonly CaptureTone[], index: InputIndex
       const amplitude = p.amplitude * mismatch.imageFactor((cycles * rate) / samples);
       if (amplitude < cutoff) return;
       for (let k = 1; k < mismatch.ways; k++) {
-        images.push({ key: imageKey(k, p.net), name: `IL ${k}/${mismatch.ways} + (${products[j]!.name})`, order: p.order, bin: foldCycles(Math.round((k * samples) / mismatch.ways) + cycles, samples), amplitude, wanted: false });
+        images.push({
+          key: imageKey(k, p.net),
+          name: `IL ${k}/${mismatch.ways} + (${products[j]!.name})`,
+          order: p.order,
+          bin: foldCycles(Math.round((k * samples) / mismatch.ways) + cycles, samples),
+          amplitude,
+          wanted: false,
+        });
       }
     });
   }

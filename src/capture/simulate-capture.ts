@@ -46,7 +46,13 @@ export interface SimulatedCapture {
  * @returns the level spectrum, its floor, the peaks and the clipped sample count
  * @example simulateCapture(tones, 65536, hz(184.32e6), { bits: 14, coefficients: converterCoefficients(heronBase), mismatch: null }, blackmanHarris(65536)).peaks.length > 0 // true
  */
-export function simulateCapture(tones: readonly CaptureTone[], samples: number, rate: Hz, converter: SimulatedConverter, window: SpectralWindow): SimulatedCapture {
+export function simulateCapture(
+  tones: readonly CaptureTone[],
+  samples: number,
+  rate: Hz,
+  converter: SimulatedConverter,
+  window: SpectralWindow,
+): SimulatedCapture {
   const capture = new Float64Array(samples);
   const table = phaseTable(samples);
   const { mismatch } = converter;
@@ -56,7 +62,11 @@ export function simulateCapture(tones: readonly CaptureTone[], samples: number, 
   applyPolynomial(capture, converter.coefficients);
   if (mismatch) applyCoreGains(capture, mismatch.gains);
   const clippedSamples = quantise(capture, converter.bits, seededUniform(DITHER_SEED));
-  addTones(capture, tones.filter((t) => !t.input), table);
+  addTones(
+    capture,
+    tones.filter((t) => !t.input),
+    table,
+  );
   const spectrum = levelSpectrum(capture, window);
   const floor = spectrum.medianLevel + FLOOR_ABOVE_MEDIAN;
   return { spectrum, floor, peaks: findPeaks(spectrum.levels, floor), clippedSamples };

@@ -49,17 +49,24 @@ export function chooseLayout(scenario: Scenario, record: CaptureRecord, componen
   const base = captureTones(scenario, record, { wanted: [], neighbours: [] });
   const inputs = base.flatMap((t, i) => (t.input ? [i] : []));
   const cycles = base.map((t) => t.cycles);
-  const range = (low: number, high: number, first: number) => ({ least: Math.ceil((low * samples) / rate) - first, most: Math.floor((high * samples) / rate) - first });
+  const range = (low: number, high: number, first: number) => ({
+    least: Math.ceil((low * samples) / rate) - first,
+    most: Math.floor((high * samples) / rate) - first,
+  });
   const layout = { wanted: wantedNominals(scenario.wanted, record.wantedTones).map(() => 0), neighbours: scenario.neighbours.map(() => 0) };
   // Each movable tone and how far it may go.
   const movable = base.flatMap((t, i) => {
     const source = t.source;
     if (source.kind === 'wanted') {
-      return [{ offsets: layout.wanted, slot: source.index, tones: [i], allowed: range(scenario.wanted.low, scenario.wanted.high, t.cycles) }];
+      return [
+        { offsets: layout.wanted, slot: source.index, tones: [i], allowed: range(scenario.wanted.low, scenario.wanted.high, t.cycles) },
+      ];
     }
     if (source.kind === 'neighbour') {
       const n = scenario.neighbours[source.index]!;
-      return n.low === n.high ? [] : [{ offsets: layout.neighbours, slot: source.index, tones: [i], allowed: range(n.low, n.high, t.cycles) }];
+      return n.low === n.high
+        ? []
+        : [{ offsets: layout.neighbours, slot: source.index, tones: [i], allowed: range(n.low, n.high, t.cycles) }];
     }
     return [];
   });
@@ -95,9 +102,15 @@ export function chooseLayout(scenario: Scenario, record: CaptureRecord, componen
  * @returns the number of close pairs
  * @example crowding([], [], [], 65536) // 0 (nothing to keep apart)
  */
-export function crowding(components: readonly ComponentTemplate[], cycles: readonly number[], inputs: readonly number[], samples: number): number {
+export function crowding(
+  components: readonly ComponentTemplate[],
+  cycles: readonly number[],
+  inputs: readonly number[],
+  samples: number,
+): number {
   const placed = components.map((c) => {
-    const total = c.net === null ? cycles[c.tone!]! : c.net.reduce((sum, n, i) => (n === 0 ? sum : sum + n * cycles[inputs[i]!]!), c.offset ?? 0);
+    const total =
+      c.net === null ? cycles[c.tone!]! : c.net.reduce((sum, n, i) => (n === 0 ? sum : sum + n * cycles[inputs[i]!]!), c.offset ?? 0);
     const bin = foldCycles(total, samples);
     return { bin, watched: c.watched, atEdge: c.net === null && (bin === 0 || bin === samples / 2) };
   });

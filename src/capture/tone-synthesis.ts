@@ -69,7 +69,13 @@ export function addTones(samples: Float64Array, tones: readonly SampledTone[], t
  * @param table phaseTable(N), when one is at hand
  * @example (() => { const x = new Float64Array(4); addSkewedTones(x, [{ cycles: 1, amplitude: 1, phase: 0 }], 4, [0, 0]); return x.map((v) => Math.round(v)); })() // [1, 0, -1, 0]
  */
-export function addSkewedTones(samples: Float64Array, tones: readonly SampledTone[], rate: number, skews: readonly number[], table: PhaseTable = phaseTable(samples.length)): void {
+export function addSkewedTones(
+  samples: Float64Array,
+  tones: readonly SampledTone[],
+  rate: number,
+  skews: readonly number[],
+  table: PhaseTable = phaseTable(samples.length),
+): void {
   const n = samples.length;
   const m = skews.length;
   const { cos, sin } = table;

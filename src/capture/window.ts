@@ -44,5 +44,11 @@ export function blackmanHarris(length: number): SpectralWindow {
     sum += w;
     squares += w * w;
   }
-  return { name: '4-term Blackman–Harris (periodic)', weights, coherentGain: a0, noiseBandwidthBins: (length * squares) / (sum * sum), reachBins: 3 };
+  return {
+    name: '4-term Blackman–Harris (periodic)',
+    weights,
+    coherentGain: a0,
+    noiseBandwidthBins: (length * squares) / (sum * sum),
+    reachBins: 3,
+  };
 }

@@ -25,7 +25,9 @@ export interface LayoutOptions {
 export function withLayoutOptions(command: Command, widthIsTaken = false): Command {
   const help = `characters per line for tables and text (default: the terminal's width, ${DEFAULT_WIDTH} when not a terminal)`;
   if (!widthIsTaken) command.option('--width <columns>', help);
-  return command.option('--columns <columns>', widthIsTaken ? help : 'the same as --width').option('--wide', 'every column in one table, however wide; nothing wrapped');
+  return command
+    .option('--columns <columns>', widthIsTaken ? help : 'the same as --width')
+    .option('--wide', 'every column in one table, however wide; nothing wrapped');
 }
 
 /**
@@ -40,11 +42,13 @@ export function withLayoutOptions(command: Command, widthIsTaken = false): Comma
  */
 export function layoutWidth(options: LayoutOptions, io: Io): number {
   const [name, written] = options.columns !== undefined ? ['--columns', options.columns] : ['--width', options.width];
-  if (options.wide && written !== undefined) throw new InputError('--wide', `either --wide or ${name}, not both`, `--wide ${name} ${written}`);
+  if (options.wide && written !== undefined)
+    throw new InputError('--wide', `either --wide or ${name}, not both`, `--wide ${name} ${written}`);
   if (options.wide) return Infinity;
   if (written !== undefined) {
     const value = Number(written);
-    if (!/^\s*\d+\s*$/.test(written) || value < 40 || value > 1000) throw new InputError(name, 'a whole number of characters from 40 to 1000', written);
+    if (!/^\s*\d+\s*$/.test(written) || value < 40 || value > 1000)
+      throw new InputError(name, 'a whole number of characters from 40 to 1000', written);
     return value;
   }
   return io.columns !== undefined && io.columns >= 40 ? io.columns : DEFAULT_WIDTH;

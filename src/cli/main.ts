@@ -57,7 +57,10 @@ export async function runCli(args: readonly string[], given: Io): Promise<ExitCo
   addReportCommand(program, io, settle, VERSION);
   addVerifyCommand(program, io, settle);
   try {
-    await program.parseAsync(args.filter((a) => a !== '--debug'), { from: 'user' });
+    await program.parseAsync(
+      args.filter((a) => a !== '--debug'),
+      { from: 'user' },
+    );
     return exitCode;
   } catch (error) {
     return failure(error, io, debug);

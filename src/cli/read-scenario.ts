@@ -27,10 +27,14 @@ export function readScenarioFile(path: string): Scenario {
  */
 export function readScenarioWithInputs(path: string): { scenario: Scenario; inputs: string[] } {
   const inputs: string[] = [];
-  const scenario = resolveScenario(path, (file) => {
-    inputs.push(file);
-    return readTextFile(file);
-  }, planWork);
+  const scenario = resolveScenario(
+    path,
+    (file) => {
+      inputs.push(file);
+      return readTextFile(file);
+    },
+    planWork,
+  );
   return { scenario, inputs };
 }
 
@@ -69,7 +73,8 @@ export function readTextFile(path: string): string {
       refuseUnlessSmallRegularFile(fstatSync(fd));
       const buffer = Buffer.alloc(MOST_SCENARIO_BYTES + 1);
       let length = 0;
-      for (let read = -1; read !== 0 && length < buffer.length; length += read) read = readSync(fd, buffer, length, buffer.length - length, null);
+      for (let read = -1; read !== 0 && length < buffer.length; length += read)
+        read = readSync(fd, buffer, length, buffer.length - length, null);
       if (length > MOST_SCENARIO_BYTES) throw new Error(tooLarge(length));
       return buffer.toString('utf8', 0, length);
     } finally {

@@ -6,7 +6,17 @@ import { InputError } from '../units/input-error.js';
 /** The file-system calls a safe write makes; node:fs by default, a shim in tests. */
 export type SafeWriteFs = Pick<
   typeof nodeFs,
-  'lstatSync' | 'statSync' | 'realpathSync' | 'openSync' | 'writeSync' | 'fsyncSync' | 'closeSync' | 'renameSync' | 'linkSync' | 'unlinkSync' | 'fchmodSync'
+  | 'lstatSync'
+  | 'statSync'
+  | 'realpathSync'
+  | 'openSync'
+  | 'writeSync'
+  | 'fsyncSync'
+  | 'closeSync'
+  | 'renameSync'
+  | 'linkSync'
+  | 'unlinkSync'
+  | 'fchmodSync'
 >;
 
 export interface SafeWriteOptions {
@@ -53,12 +63,21 @@ export function checkOutputPaths(paths: readonly string[], options: SafeWriteOpt
     const existing = fs.lstatSync(target, { throwIfNoEntry: false });
     if (!existing) {
       const folder = fs.statSync(dirname(target), { throwIfNoEntry: false });
-      if (!folder?.isDirectory()) throw new InputError(path, 'a path in an existing directory', `${dirname(path)}: ${folder ? 'not a directory' : 'no such directory'}`);
+      if (!folder?.isDirectory())
+        throw new InputError(
+          path,
+          'a path in an existing directory',
+          `${dirname(path)}: ${folder ? 'not a directory' : 'no such directory'}`,
+        );
       continue;
     }
     if (!options.force) throw new InputError(path, EXISTS_EXPECTED, path);
     if (existing.isSymbolicLink()) {
-      throw new InputError(path, 'a regular file to replace, not a symbolic link (ifzone does not write through links; give the file it points to)', `a link to ${realPathOf(fs, target)}`);
+      throw new InputError(
+        path,
+        'a regular file to replace, not a symbolic link (ifzone does not write through links; give the file it points to)',
+        `a link to ${realPathOf(fs, target)}`,
+      );
     }
     if (!existing.isFile()) throw new InputError(path, 'a regular file to replace', kindOf(existing));
   }
@@ -134,7 +153,7 @@ function stage(fs: SafeWriteFs, file: OutputFile, force: boolean): Staged {
     live.add(temporary);
     if (existing) fs.fchmodSync(fd, existing.mode & 0o7777);
     const bytes = Buffer.from(file.content, 'utf8');
-    for (let written = 0; written < bytes.length; ) written += fs.writeSync(fd, bytes, written, bytes.length - written);
+    for (let written = 0; written < bytes.length;) written += fs.writeSync(fd, bytes, written, bytes.length - written);
     fs.fsyncSync(fd);
     fs.closeSync(fd);
     fd = null;
@@ -220,7 +239,8 @@ const REASONS: Readonly<Record<string, string>> = {
 function writeFailure(shown: string, error: unknown): InputError {
   if (error instanceof InputError) return error;
   const code = (error as NodeJS.ErrnoException).code;
-  const words = code !== undefined ? `${REASONS[code] ?? 'the system refused'} (${code})` : error instanceof Error ? error.message : String(error);
+  const words =
+    code !== undefined ? `${REASONS[code] ?? 'the system refused'} (${code})` : error instanceof Error ? error.message : String(error);
   return new InputError(shown, WRITABLE_EXPECTED, words);
 }
 

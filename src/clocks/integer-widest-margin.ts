@@ -121,7 +121,8 @@ function milp(slacks: readonly LinearSlack[], varying: readonly LinearSlack[], l
   const base = modelSlack(binding, hz(r0));
   const scale = Math.max(...binding.map((s) => Math.abs(s.slope * (rLast - r0))));
   let noise = 0;
-  for (const s of slacks) noise = Math.max(noise, NOISE * (Math.abs(s.slope) * Math.max(Math.abs(r0), Math.abs(rLast)) + Math.abs(s.offset)));
+  for (const s of slacks)
+    noise = Math.max(noise, NOISE * (Math.abs(s.slope) * Math.max(Math.abs(r0), Math.abs(rLast)) + Math.abs(s.offset)));
   const allowance = MILP_ALLOWANCE * scale + noise;
   const value = (N: number) => modelSlack(slacks, line.rateAt(N));
   let n = 0;
@@ -132,7 +133,9 @@ function milp(slacks: readonly LinearSlack[], varying: readonly LinearSlack[], l
     if (!first) throw new Error(`MILP infeasible over N ${line.first}..${line.last}`);
     promised = first.t;
     if (Math.abs(value(line.first + first.n) - promised) > allowance) {
-      throw new Error(`MILP promised a worst slack of ${promised} Hz over N ${line.first}..${line.last}; the slacks at its N = ${line.first + first.n} give ${value(line.first + first.n)} Hz`);
+      throw new Error(
+        `MILP promised a worst slack of ${promised} Hz over N ${line.first}..${line.last}; the slacks at its N = ${line.first + first.n} give ${value(line.first + first.n)} Hz`,
+      );
     }
     n = first.n;
     const heldVarying = binding.filter((s) => varying.includes(s));
@@ -147,7 +150,9 @@ function milp(slacks: readonly LinearSlack[], varying: readonly LinearSlack[], l
   const worstSlack = value(N);
   const shortfall = worstSlack - value(solverN);
   if (shortfall > allowance) {
-    throw new Error(`MILP answer N = ${solverN} over ${line.first}..${line.last} gives ${value(solverN)} Hz; N = ${N} gives ${worstSlack} Hz, beyond the allowance of ${allowance} Hz`);
+    throw new Error(
+      `MILP answer N = ${solverN} over ${line.first}..${line.last} gives ${value(solverN)} Hz; N = ${N} gives ${worstSlack} Hz, beyond the allowance of ${allowance} Hz`,
+    );
   }
   return { N, worstSlack, promised, shortfall: Math.max(0, shortfall), allowance, method: 'milp' };
 }
@@ -192,7 +197,12 @@ interface ScaledModel {
  * so τ is kept non-negative instead: without held slacks τ ≥ 0 at n = 0; with
  * them τ ≥ floor, lifted by −floor when that is negative.)
  */
-function solveInteger(bounds: readonly LinearSlack[], held: readonly LinearSlack[], m: ScaledModel, floor: number): { n: number; t: number } | null {
+function solveInteger(
+  bounds: readonly LinearSlack[],
+  held: readonly LinearSlack[],
+  m: ScaledModel,
+  floor: number,
+): { n: number; t: number } | null {
   const lift = held.length > 0 ? Math.max(0, -(floor - m.base) / m.scale) : 0;
   const constraints: Record<string, { max: number }> = { span: { max: m.count } };
   const tau: Record<string, number> = {};
@@ -206,10 +216,14 @@ function solveInteger(bounds: readonly LinearSlack[], held: readonly LinearSlack
     constraints[`h${i}`] = { max: (s.slope * m.r0 + s.offset - floor) / m.scale };
     n[`h${i}`] = (-s.slope * m.step) / m.scale;
   });
-  const solution = lpSolver.Solve({ optimize: 'tau', opType: 'max', constraints, variables: { tau, n }, ints: { n: 1 } }) as Record<string, unknown>;
+  const solution = lpSolver.Solve({ optimize: 'tau', opType: 'max', constraints, variables: { tau, n }, ints: { n: 1 } }) as Record<
+    string,
+    unknown
+  >;
   if (solution['feasible'] !== true) return null;
   const raw = Number(solution['n'] ?? 0);
   const rounded = Math.round(raw);
-  if (Math.abs(raw - rounded) > 1e-6 || rounded < 0 || rounded > m.count) throw new Error(`MILP returned n = ${raw}, not an integer in 0..${m.count}`);
+  if (Math.abs(raw - rounded) > 1e-6 || rounded < 0 || rounded > m.count)
+    throw new Error(`MILP returned n = ${raw}, not an integer in 0..${m.count}`);
   return { n: rounded, t: m.base + (Number(solution['tau'] ?? 0) - lift) * m.scale };
 }

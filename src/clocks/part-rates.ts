@@ -61,7 +61,12 @@ export function rateFamilies(part: ClockPart, dividers: readonly number[]): Rate
       return [...new Set(dividers)].sort((a, b) => a - b).map((D) => ({ M: 1, D, nMin: 1, nMax: 1 }));
     case 'synthesiser': {
       const { n, m, d, vco } = derivation;
-      for (const [name, range] of [['N', n], ['M', m], ['D', d]] as const) checkRange(range, `${name} of ${part.label}`);
+      for (const [name, range] of [
+        ['N', n],
+        ['M', m],
+        ['D', d],
+      ] as const)
+        checkRange(range, `${name} of ${part.label}`);
       const families: RateFamily[] = [];
       for (let M = m.min; M <= m.max; M++) {
         const span = vco ? vcoRange(part.frequency, M, n, vco) : n;
@@ -88,7 +93,14 @@ function vcoRange(frequency: Hz, M: number, n: IntegerRange, vco: { readonly low
  * range), then stepped where rounding put the estimate an integer off, so
  * that the test holds for the value as computed.
  */
-function integerSpan(range: IntegerRange, lowQuotient: number, highQuotient: number, value: (N: number) => number, low: number, high: number): IntegerRange | null {
+function integerSpan(
+  range: IntegerRange,
+  lowQuotient: number,
+  highQuotient: number,
+  value: (N: number) => number,
+  low: number,
+  high: number,
+): IntegerRange | null {
   const clamp = (k: number) => Math.min(Math.max(k, range.min), range.max);
   let min = clamp(Math.ceil(lowQuotient));
   let max = clamp(Math.floor(highQuotient));

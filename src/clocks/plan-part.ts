@@ -107,7 +107,8 @@ export function planPart(plan: PlanContext, set: FeasibleSet, part: ClockPart, o
     }
   }
   // Under decimation a part passes only at a whole multiple of the output rate: without one, its best rate fails.
-  if (goal.kind === 'decimation' && multiple === null) chosen = { ...chosen, evaluation: { ...chosen.evaluation, pass: false, limitedBy: NO_WHOLE_MULTIPLE } };
+  if (goal.kind === 'decimation' && multiple === null)
+    chosen = { ...chosen, evaluation: { ...chosen.evaluation, pass: false, limitedBy: NO_WHOLE_MULTIPLE } };
   const rate = chosen.evaluation.rate;
   return {
     part,
@@ -286,11 +287,16 @@ function feasiblePieces(context: PlanContext, set: FeasibleSet, part: ClockPart)
 function recheck(part: ClockPart, piece: Piece, evaluation: RateEvaluation, modelled: number): void {
   const { interval } = piece;
   const where = `${part.label} at ${evaluation.rate} Hz (feasible interval ${interval.minRate}–${interval.maxRate} Hz)`;
-  if (!evaluation.pass) throw new Error(`${where}: its drift range lies inside the interval, yet the exact evaluator fails it (${limitText(evaluation.limitedBy)})`);
+  if (!evaluation.pass)
+    throw new Error(
+      `${where}: its drift range lies inside the interval, yet the exact evaluator fails it (${limitText(evaluation.limitedBy)})`,
+    );
   let scale = 0;
   for (const s of piece.slacks) scale = Math.max(scale, Math.abs(s.slope * evaluation.rate) + Math.abs(s.offset));
   if (Math.abs(evaluation.worstSlack - modelled) > MODEL_AGREEMENT * scale) {
-    throw new Error(`${where}: the linear slacks give a worst slack of ${modelled} Hz, the exact evaluator ${evaluation.worstSlack} Hz (${limitText(evaluation.limitedBy)})`);
+    throw new Error(
+      `${where}: the linear slacks give a worst slack of ${modelled} Hz, the exact evaluator ${evaluation.worstSlack} Hz (${limitText(evaluation.limitedBy)})`,
+    );
   }
 }
 
@@ -309,7 +315,14 @@ const CLIMBED = 8;
  * is left. A sample is not proven best. A rate that cannot beat the ones
  * kept is screened only until it is known to fall short.
  */
-function nearestFailing(context: PlanContext, set: FeasibleSet, part: ClockPart, families: readonly RateFamily[], every: boolean, budget: number): Judged {
+function nearestFailing(
+  context: PlanContext,
+  set: FeasibleSet,
+  part: ClockPart,
+  families: readonly RateFamily[],
+  every: boolean,
+  budget: number,
+): Judged {
   const blocking = blockingInterferers(context.interferers);
   const { minRate, maxRate } = context.limits;
   const tie = TIE * (context.band.high - context.band.low);
@@ -331,7 +344,8 @@ function nearestFailing(context: PlanContext, set: FeasibleSet, part: ClockPart,
     return slack;
   };
   if (every) {
-    for (const { settings } of partRates(part, context.clocking.clockDividers, minRate, maxRate)) consider(settings, slackOf(settings, best ? best.slack + tie : -Infinity));
+    for (const { settings } of partRates(part, context.clocking.clockDividers, minRate, maxRate))
+      consider(settings, slackOf(settings, best ? best.slack + tie : -Infinity));
   } else {
     const spans = families.flatMap((family) => {
       const span = nRangeFor(part.frequency, family, minRate, maxRate);
@@ -379,7 +393,9 @@ function nearestFailing(context: PlanContext, set: FeasibleSet, part: ClockPart,
   if (!best) throw new Error(`${part.label}: no rate inside the converter's range`);
   const evaluation = evaluateRate(context, rateOf(part.frequency, best.settings), part.tolerancePpm, 'blocking');
   if (evaluation.worstSlack !== best.slack) {
-    throw new Error(`${part.label} at ${evaluation.rate} Hz: the screen found a worst slack of ${best.slack} Hz, the exact evaluator ${evaluation.worstSlack} Hz`);
+    throw new Error(
+      `${part.label} at ${evaluation.rate} Hz: the screen found a worst slack of ${best.slack} Hz, the exact evaluator ${evaluation.worstSlack} Hz`,
+    );
   }
   return { settings: best.settings, evaluation, ratesJudged: screened + 1 };
 }

@@ -86,7 +86,8 @@ export function butterworthLeastAttenuation(filter: ButterworthBandPass, low: Hz
  * @example checkButterworth({ order: 0, passLow: hz(1), passHigh: hz(2) }) // throws
  */
 export function checkButterworth(filter: ButterworthBandPass): void {
-  if (!(Number.isInteger(filter.order) && filter.order >= 1)) throw new RangeError(`Butterworth order must be an integer ≥ 1, found ${filter.order}`);
+  if (!(Number.isInteger(filter.order) && filter.order >= 1))
+    throw new RangeError(`Butterworth order must be an integer ≥ 1, found ${filter.order}`);
   const { passLow, passHigh } = filter;
   if (!(passLow >= 0 && Number.isFinite(passLow) && passHigh > passLow && !(passLow === 0 && passHigh === Infinity))) {
     throw new RangeError(`Butterworth passband needs 0 ≤ passLow < passHigh, not both open, found [${passLow}, ${passHigh}] Hz`);

@@ -20,12 +20,14 @@ export interface AttenuationPoint {
 export function sortedTable(points: ReadonlyArray<AttenuationPoint>): AttenuationPoint[] {
   if (points.length === 0) throw new RangeError('an attenuation table needs at least one point');
   for (const p of points) {
-    if (!(Number.isFinite(p.frequency) && p.frequency > 0)) throw new RangeError(`attenuation table frequency must be > 0 Hz, found ${p.frequency}`);
+    if (!(Number.isFinite(p.frequency) && p.frequency > 0))
+      throw new RangeError(`attenuation table frequency must be > 0 Hz, found ${p.frequency}`);
     if (!(Number.isFinite(p.attenuation) && p.attenuation >= 0)) throw new RangeError(`attenuation must be ≥ 0 dB, found ${p.attenuation}`);
   }
   const sorted = [...points].sort((a, b) => a.frequency - b.frequency);
   for (let i = 1; i < sorted.length; i++) {
-    if (sorted[i]!.frequency === sorted[i - 1]!.frequency) throw new RangeError(`attenuation table has two points at ${sorted[i]!.frequency} Hz`);
+    if (sorted[i]!.frequency === sorted[i - 1]!.frequency)
+      throw new RangeError(`attenuation table has two points at ${sorted[i]!.frequency} Hz`);
   }
   return sorted;
 }

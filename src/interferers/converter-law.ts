@@ -46,14 +46,18 @@ export interface OrderLaw {
  * @example orderLaw(s.converter, 3, -1).gain // -78 (HD3 −80 dBc at −1 dBFS, no intercept)
  */
 export function orderLaw(converter: Converter, order: number, referenceLevel: number): OrderLaw | null {
-  const intercept = converter.intercepts?.get(order) ?? (order === 3 ? converter.intercept3 ?? undefined : undefined);
+  const intercept = converter.intercepts?.get(order) ?? (order === 3 ? (converter.intercept3 ?? undefined) : undefined);
   if (intercept !== undefined) {
     const gain = -(order - 1) * intercept - 20 * Math.log10(twoToneCount(order));
     return { order, gain: db(gain), note: `from the ${ordinal(order)}-order intercept ${dbText(intercept, 'dBFS')}` };
   }
   const figure = harmonicFigure(converter, order);
   if (figure === null) return null;
-  return { order, gain: db(figure.dbc - (order - 1) * referenceLevel), note: `from the ${ordinal(order)}-harmonic figure, ${figure.note} at ${dbText(referenceLevel, 'dBFS')}` };
+  return {
+    order,
+    gain: db(figure.dbc - (order - 1) * referenceLevel),
+    note: `from the ${ordinal(order)}-harmonic figure, ${figure.note} at ${dbText(referenceLevel, 'dBFS')}`,
+  };
 }
 
 /**

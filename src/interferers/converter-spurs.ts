@@ -49,13 +49,22 @@ export function converterSpurDrafts(scenario: Scenario): InterfererDraft[] {
   if (quarterRate !== null) drafts.push(tone('rate/4', 0.25, quarterRate, 'converter spur at a quarter of the sample rate'));
   for (const spur of fractions ?? []) {
     const where = `${spur.numerator}/${spur.denominator}`;
-    drafts.push(tone(rateFractionLabel(spur.numerator, spur.denominator), spur.numerator / spur.denominator, spur.level, `converter spur at ${where} of the sample rate`));
+    drafts.push(
+      tone(
+        rateFractionLabel(spur.numerator, spur.denominator),
+        spur.numerator / spur.denominator,
+        spur.level,
+        `converter spur at ${where} of the sample rate`,
+      ),
+    );
   }
   const interleave = converter.interleave;
   if (interleave === null) return drafts;
   const m = interleave.ways;
   for (let k = 1; k < m; k++) {
-    drafts.push(tone(`IL offset ${k}/${m}`, k / m, interleave.offsetSpur, `interleaving offset spur at ${k}/${m} of the sample rate (${m} cores)`));
+    drafts.push(
+      tone(`IL offset ${k}/${m}`, k / m, interleave.offsetSpur, `interleaving offset spur at ${k}/${m} of the sample rate (${m} cores)`),
+    );
   }
   return drafts;
 }

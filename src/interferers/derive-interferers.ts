@@ -74,9 +74,18 @@ export function deriveInterfererList(scenario: Scenario, listing: Scenario = sce
     listing: listingSignals,
   };
   const products = mixingProducts({ ...request, signals });
-  const sources = (s: Scenario, made: readonly InterfererDraft[]) => [wantedDraft(s), ...s.boardSpurs.flatMap((spur, i) => boardSpurDrafts(spur, i, s)), ...s.neighbours.map((n, i) => neighbourDraft(n, i, s)), ...made];
+  const sources = (s: Scenario, made: readonly InterfererDraft[]) => [
+    wantedDraft(s),
+    ...s.boardSpurs.flatMap((spur, i) => boardSpurDrafts(spur, i, s)),
+    ...s.neighbours.map((n, i) => neighbourDraft(n, i, s)),
+    ...made,
+  ];
   const own = sources(scenario, products.drafts);
-  const images = interleaveImages(own, scenario, listing === scenario ? own : sources(listing, mixingProducts({ ...request, signals: listingSignals }).drafts));
+  const images = interleaveImages(
+    own,
+    scenario,
+    listing === scenario ? own : sources(listing, mixingProducts({ ...request, signals: listingSignals }).drafts),
+  );
   const drafts = [...own.slice(1), ...converterSpurDrafts(scenario), ...images.drafts];
   const interferers = uniqueLabels(drafts).map((draft) => complete(draft, scenario));
   refuseTooManyImages(scenario, interferers);

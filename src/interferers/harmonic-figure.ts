@@ -27,5 +27,9 @@ export function harmonicFigure(converter: Converter, order: number): HarmonicFig
   if (stated !== undefined) return { dbc: stated, stated: true, note: dbText(stated, 'dBc') };
   if (converter.harmonics.size === 0) return null;
   const lowest = Math.min(...converter.harmonics.values()) as Db;
-  return { dbc: lowest, stated: false, note: `no ${ordinal(order)}-order figure stated; the lowest stated, ${dbText(lowest, 'dBc')}, assumed` };
+  return {
+    dbc: lowest,
+    stated: false,
+    note: `no ${ordinal(order)}-order figure stated; the lowest stated, ${dbText(lowest, 'dBc')}, assumed`,
+  };
 }

@@ -67,11 +67,19 @@ export function refuseTooManyImages(scenario: Scenario, interferers: readonly In
 function fieldOf(interferer: Interferer): { path: DocumentPath; narrow: string } {
   const terms = interferer.mixing ?? [];
   if (interferer.kind === 'intermod') {
-    return { path: ['maxOrder'], narrow: "lower maxOrder, the neighbours' levels (a filter ahead of the converter) or the number of neighbours" };
+    return {
+      path: ['maxOrder'],
+      narrow: "lower maxOrder, the neighbours' levels (a filter ahead of the converter) or the number of neighbours",
+    };
   }
-  if (interferer.kind === 'converter' || terms.length !== 1) return { path: ['converter'], narrow: 'lower the converter\'s spur or image levels' };
+  if (interferer.kind === 'converter' || terms.length !== 1)
+    return { path: ['converter'], narrow: "lower the converter's spur or image levels" };
   const [term] = terms;
   if (term!.signal === 'wanted') return { path: ['harmonicOrder'], narrow: 'lower harmonicOrder' };
-  if (term!.signal === 'neighbour') return { path: ['neighbours', term!.index], narrow: `lower neighbours[${term!.index}]'s level (a filter ahead of the converter) or remove it` };
+  if (term!.signal === 'neighbour')
+    return {
+      path: ['neighbours', term!.index],
+      narrow: `lower neighbours[${term!.index}]'s level (a filter ahead of the converter) or remove it`,
+    };
   return { path: ['boardSpurs', term!.index], narrow: `lower boardSpurs[${term!.index}]'s level or harmonics` };
 }

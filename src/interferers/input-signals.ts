@@ -31,10 +31,24 @@ export interface InputSignal {
 export function inputSignals(scenario: Scenario): InputSignal[] {
   const { wanted } = scenario;
   const signals: InputSignal[] = [
-    { ref: { signal: 'wanted', index: 0, harmonic: 1 }, label: 'wanted', low: wanted.low, high: wanted.high, level: wanted.strongestLevel, shiftMultiple: 1 },
+    {
+      ref: { signal: 'wanted', index: 0, harmonic: 1 },
+      label: 'wanted',
+      low: wanted.low,
+      high: wanted.high,
+      level: wanted.strongestLevel,
+      shiftMultiple: 1,
+    },
   ];
   scenario.neighbours.forEach((n, index) => {
-    signals.push({ ref: { signal: 'neighbour', index, harmonic: 1 }, label: n.label, low: n.low, high: n.high, level: neighbourLevel(n, scenario), shiftMultiple: 1 });
+    signals.push({
+      ref: { signal: 'neighbour', index, harmonic: 1 },
+      label: n.label,
+      low: n.low,
+      high: n.high,
+      level: neighbourLevel(n, scenario),
+      shiftMultiple: 1,
+    });
   });
   scenario.boardSpurs.forEach((spur, index) => {
     for (let h = 1; h <= Math.max(1, spur.harmonics); h++) {

@@ -43,7 +43,11 @@ export interface ImageList {
  * @returns drafts labelled `IL image k/M−` / `IL image k/M+` for the wanted band, `IL image k/M− <source>` otherwise
  * @example interleaveImages([], s).drafts.length // 0
  */
-export function interleaveImages(sources: readonly InterfererDraft[], scenario: Scenario, listing: readonly InterfererDraft[] = sources): ImageList {
+export function interleaveImages(
+  sources: readonly InterfererDraft[],
+  scenario: Scenario,
+  listing: readonly InterfererDraft[] = sources,
+): ImageList {
   const interleave = scenario.converter.interleave;
   if (interleave === null) return { drafts: [], pruned: 0 };
   const m = interleave.ways;
@@ -52,7 +56,8 @@ export function interleaveImages(sources: readonly InterfererDraft[], scenario: 
   for (const [index, source] of sources.entries()) {
     if (source.rateMultiple !== 0) continue;
     const decides = listing[index]!;
-    const isWanted = source.mixing?.length === 1 && source.mixing[0]!.signal === 'wanted' && source.mixing[0]!.plus === 1 && source.mixing[0]!.minus === 0;
+    const isWanted =
+      source.mixing?.length === 1 && source.mixing[0]!.signal === 'wanted' && source.mixing[0]!.plus === 1 && source.mixing[0]!.minus === 0;
     const dbc = imageDbc(interleave, Math.max(Math.abs(source.low), Math.abs(source.high)));
     const level = db(source.level + dbc);
     const listed = db(decides.level + imageDbc(interleave, Math.max(Math.abs(decides.low), Math.abs(decides.high))));
@@ -61,7 +66,10 @@ export function interleaveImages(sources: readonly InterfererDraft[], scenario: 
       continue;
     }
     const what = isWanted ? 'the wanted band' : source.label;
-    const slope = interleave.imageReference === null || interleave.imageReference === undefined ? '' : `, rising 20 dB per decade from ${dbText(interleave.imageLevel, 'dBc')} at the reference frequency`;
+    const slope =
+      interleave.imageReference === null || interleave.imageReference === undefined
+        ? ''
+        : `, rising 20 dB per decade from ${dbText(interleave.imageLevel, 'dBc')} at the reference frequency`;
     for (let k = 1; k < m; k++) {
       for (const side of [-1, 1] as const) {
         const sign = side === -1 ? '−' : '+';

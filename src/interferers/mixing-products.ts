@@ -106,11 +106,21 @@ export function mixingProducts(request: ProductRequest): ProductList {
     const picks: Array<[number, number, number]> = [];
     const walk = (from: number, left: number, partial: number, leading: boolean): void => {
       if (left === 0) {
-        const level = productLevel(law, picks.map(([i, plus, minus]) => [sorted[i]!.level, plus, minus] as const));
+        const level = productLevel(
+          law,
+          picks.map(([i, plus, minus]) => [sorted[i]!.level, plus, minus] as const),
+        );
         if (level <= threshold) prune(1, level);
         else if (picks.every(([i]) => wantedOnly[i]) && picks.reduce((net, [, plus, minus]) => net + plus - minus, 0) === 1) inBand++;
         else {
-          drafts.push(productDraft(law, picks.map(([i, plus, minus]) => [order[i]!, plus, minus] as const), signals, listing));
+          drafts.push(
+            productDraft(
+              law,
+              picks.map(([i, plus, minus]) => [order[i]!, plus, minus] as const),
+              signals,
+              listing,
+            ),
+          );
           if (drafts.length > MOST_PRODUCTS) throw tooManyProducts(n);
         }
         return;
@@ -152,7 +162,13 @@ function tooManyProducts(order: number): WorkBoundError {
  * generated once.
  */
 function splits(t: number, tone: boolean, leading: boolean): Array<readonly [number, number]> {
-  if (tone) return leading ? [[t, 0]] : [[t, 0], [0, t]];
+  if (tone)
+    return leading
+      ? [[t, 0]]
+      : [
+          [t, 0],
+          [0, t],
+        ];
   const out: Array<readonly [number, number]> = [];
   for (let plus = t; plus >= 0; plus--) if (!leading || plus >= t - plus) out.push([plus, t - plus]);
   return out;
@@ -163,7 +179,11 @@ function splits(t: number, tone: boolean, leading: boolean): Array<readonly [num
  * exactly m picks on signals j.. (−∞ when m > 0 and none is left);
  * count[j][m][leading]: how many such ways splits() generates.
  */
-function completionTables(sorted: readonly InputSignal[], isTone: readonly boolean[], n: number): { best: number[][]; count: number[][][] } {
+function completionTables(
+  sorted: readonly InputSignal[],
+  isTone: readonly boolean[],
+  n: number,
+): { best: number[][]; count: number[][][] } {
   const size = sorted.length;
   const best: number[][] = Array.from({ length: size + 1 }, () => new Array<number>(n + 1).fill(-Infinity));
   const count: number[][][] = Array.from({ length: size + 1 }, () => Array.from({ length: n + 1 }, () => [0, 0]));
@@ -178,7 +198,8 @@ function completionTables(sorted: readonly InputSignal[], isTone: readonly boole
         const even = isTone[j] ? factorial(t) : factorial(Math.ceil(t / 2)) * factorial(Math.floor(t / 2));
         most = Math.max(most, t * level - 20 * Math.log10(even) + best[j + 1]![m - t]!);
         for (const leading of [0, 1]) {
-          for (const [plus, minus] of splits(t, isTone[j]!, leading === 1)) ways[leading]! += count[j + 1]![m - t]![leading === 1 && plus === minus ? 1 : 0]!;
+          for (const [plus, minus] of splits(t, isTone[j]!, leading === 1))
+            ways[leading]! += count[j + 1]![m - t]![leading === 1 && plus === minus ? 1 : 0]!;
         }
       }
       best[j]![m] = most;
@@ -197,7 +218,12 @@ function completionTables(sorted: readonly InputSignal[], isTone: readonly boole
  * @param signals the input signals, in scenario order
  * @param listing the same signals as they decide which way round it is written (default: `signals`)
  */
-export function productDraft(law: OrderLaw, picks: ReadonlyArray<readonly [number, number, number]>, signals: readonly InputSignal[], listing: readonly InputSignal[] = signals): InterfererDraft {
+export function productDraft(
+  law: OrderLaw,
+  picks: ReadonlyArray<readonly [number, number, number]>,
+  signals: readonly InputSignal[],
+  listing: readonly InputSignal[] = signals,
+): InterfererDraft {
   let low = 0;
   let high = 0;
   let shift = 0;
@@ -210,9 +236,14 @@ export function productDraft(law: OrderLaw, picks: ReadonlyArray<readonly [numbe
     centre += ((plus - minus) * (listing[i]!.low + listing[i]!.high)) / 2;
   }
   const flip = centre < 0;
-  const terms = [...picks].sort((a, b) => a[0] - b[0]).map(([i, plus, minus]) => (flip ? ([i, minus, plus] as const) : ([i, plus, minus] as const)));
+  const terms = [...picks]
+    .sort((a, b) => a[0] - b[0])
+    .map(([i, plus, minus]) => (flip ? ([i, minus, plus] as const) : ([i, plus, minus] as const)));
   const mixing: MixingTerm[] = terms.map(([i, plus, minus]) => ({ ...signals[i]!.ref, plus, minus }));
-  const level = productLevel(law, picks.map(([i, plus, minus]) => [signals[i]!.level, plus, minus] as const));
+  const level = productLevel(
+    law,
+    picks.map(([i, plus, minus]) => [signals[i]!.level, plus, minus] as const),
+  );
   const n = law.order;
   const single = terms.length === 1 ? terms[0]! : null;
   const extent = flip ? { low: -high as Hz, high: -low as Hz } : { low: low as Hz, high: high as Hz };

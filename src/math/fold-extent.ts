@@ -21,7 +21,8 @@ export function foldExtent(low: Hz, high: Hz, rate: Hz): Interval[] {
   if (magnitude.high - magnitude.low >= rate) return [{ low: 0, high: half }];
   const k = Math.floor(magnitude.low / half) + 1;
   const pieces: (readonly [number, number, number])[] = [[k, magnitude.low, Math.min(magnitude.high, k * half)]];
-  for (let next = k + 1; (next - 1) * half < magnitude.high; next++) pieces.push([next, (next - 1) * half, Math.min(magnitude.high, next * half)]);
+  for (let next = k + 1; (next - 1) * half < magnitude.high; next++)
+    pieces.push([next, (next - 1) * half, Math.min(magnitude.high, next * half)]);
   return mergeIntervals(pieces.map(([zone, a, b]) => foldedPiece(zone, a, b, rate)));
 }
 

@@ -16,7 +16,9 @@ import { designSentence, downConverterSentences, MASK_HEAD, maskRows, maskSenten
 export function afterRateHtml(candidate: ReportedCandidate): string {
   const after = candidate.afterRate;
   if (after === null) return '';
-  const rows = maskRows(after).map((row) => row.map((cell, i) => (i === row.length - 1 && cell === 'FAIL' ? ([cell, 'fail'] as const) : cell)));
+  const rows = maskRows(after).map((row) =>
+    row.map((cell, i) => (i === row.length - 1 && cell === 'FAIL' ? ([cell, 'fail'] as const) : cell)),
+  );
   const paragraphs = [designSentence(after), noiseSentence(after, candidate), ...downConverterSentences(after)];
   return (
     `<h3>${escapeXml(`After the rate, at ${candidate.label} (${formatFrequency(candidate.rate)})`)}</h3>` +

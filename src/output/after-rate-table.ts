@@ -25,7 +25,13 @@ export function afterRateSection(candidate: ReportedCandidate, detail = false, w
   const lines = [
     `After the rate, at ${candidate.label} (${formatFrequency(candidate.rate)}):`,
     wrapText(maskSentence(after), width),
-    rows.length > 0 ? textTable(MASK_HEAD.map((head, i) => ({ head, align: i >= 2 && i <= 4 ? 'right' : 'left', role: i === 0 ? 'key' : 'main' })), rows, width) + (more > 0 ? `\n(+${more} more alias bands with wider margins in --json)` : '') : '',
+    rows.length > 0
+      ? textTable(
+          MASK_HEAD.map((head, i) => ({ head, align: i >= 2 && i <= 4 ? 'right' : 'left', role: i === 0 ? 'key' : 'main' })),
+          rows,
+          width,
+        ) + (more > 0 ? `\n(+${more} more alias bands with wider margins in --json)` : '')
+      : '',
     wrapText(designSentence(after), width),
     wrapText(noiseSentence(after, candidate), width),
     ...downConverterSentences(after).map((sentence) => wrapText(sentence, width)),

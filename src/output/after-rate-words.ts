@@ -22,7 +22,14 @@ export const MASK_HEAD = ['alias band (input)', 'image', 'needs dB', 'filter giv
  */
 export function maskRows(after: AfterRate, most = Infinity): string[][] {
   const ordered = [...after.mask.bands].sort((a, b) => a.marginDb - b.marginDb).slice(0, most);
-  return ordered.map((band) => [range(band.low, band.high, 7), imageText(band), trimmed(after.mask.requiredDb, 4), trimmed(band.givenDb, 4), trimmed(band.marginDb, 4), band.marginDb >= 0 ? 'holds' : after.mask.levelStated ? 'FAIL' : 'short']);
+  return ordered.map((band) => [
+    range(band.low, band.high, 7),
+    imageText(band),
+    trimmed(after.mask.requiredDb, 4),
+    trimmed(band.givenDb, 4),
+    trimmed(band.marginDb, 4),
+    band.marginDb >= 0 ? 'holds' : after.mask.levelStated ? 'FAIL' : 'short',
+  ]);
 }
 
 /** "2·r − channel" or "r + channel". */
@@ -38,10 +45,10 @@ function imageText(band: MaskBand): string {
  */
 export function maskSentence(after: AfterRate): string {
   const { mask } = after;
-  const level = mask.levelStated ? `${trimmed(mask.outOfBandLevel, 4)} dBFS (stated: a shortfall blocks the rate)` : `${trimmed(mask.outOfBandLevel, 4)} dBFS (full scale; no level stated, so reported only)`;
-  const worst = mask.worst
-    ? ` Least margin ${trimmed(mask.worst.marginDb, 4)} dB at ${range(mask.worst.low, mask.worst.high, 7)}.`
-    : '';
+  const level = mask.levelStated
+    ? `${trimmed(mask.outOfBandLevel, 4)} dBFS (stated: a shortfall blocks the rate)`
+    : `${trimmed(mask.outOfBandLevel, 4)} dBFS (full scale; no level stated, so reported only)`;
+  const worst = mask.worst ? ` Least margin ${trimmed(mask.worst.marginDb, 4)} dB at ${range(mask.worst.low, mask.worst.high, 7)}.` : '';
   return (
     `Anti-alias mask: an out-of-band signal at ${level} must reach the converter at or below ${trimmed(mask.threshold, 4)} dBFS, ` +
     `so the filter needs ${trimmed(mask.requiredDb, 4)} dB over each of the ${mask.bands.length} alias bands (images of the channel widened by the required margin, over the rate's ±ppm).${worst}`
@@ -55,13 +62,18 @@ export function maskSentence(after: AfterRate): string {
  */
 export function designSentence(after: AfterRate): string {
   const d = after.design;
-  const stops = [d.stopBelow === null ? null : `from ${formatFrequency(d.stopBelow, 7)} down`, d.stopAbove === null ? null : `from ${formatFrequency(d.stopAbove, 7)} up`].filter((s) => s !== null);
+  const stops = [
+    d.stopBelow === null ? null : `from ${formatFrequency(d.stopBelow, 7)} down`,
+    d.stopAbove === null ? null : `from ${formatFrequency(d.stopAbove, 7)} up`,
+  ].filter((s) => s !== null);
   const mask = `${trimmed(d.passbandRippleDb, 4)} dB ripple over the channel, ${trimmed(d.stopbandDb, 4)} dB ${stops.length > 0 ? stops.join(' and ') : 'nowhere (no alias band below the input bandwidth)'}`;
   const side = d.tightest === null || d.selectivity === null ? '' : `; tightest side: ${d.tightest}, Ωs ${trimmed(d.selectivity, 4)}`;
   if (d.orders === null) return `Filter that would do (${mask}${side}): none, an alias band reaches into the channel.`;
   const { butterworth, chebyshev, elliptic } = d.orders;
   if (butterworth === 0) return `Filter that would do (${mask}${side}): no filter needed.`;
-  const kind = d.lowPass ? 'low-pass orders: the channel starts at 0 Hz' : 'low-pass prototype orders; the band-pass has twice as many poles';
+  const kind = d.lowPass
+    ? 'low-pass orders: the channel starts at 0 Hz'
+    : 'low-pass prototype orders; the band-pass has twice as many poles';
   return `Filter that would do (${mask}${side}): Butterworth ${butterworth}, Chebyshev I ${chebyshev}, elliptic ${elliptic} (${kind}).`;
 }
 
@@ -75,7 +87,7 @@ export function noiseSentence(after: AfterRate, candidate: ReportedCandidate): s
   if (noise === null) return 'Noise folding: not computed, the filter stops the whole channel.';
   const penalty =
     `Noise folding: +${noise.penaltyDb.toFixed(3)} dB (quadrature error below ${noise.accuracyDb.toPrecision(1)} dB): wideband noise from the alias bands ` +
-    'on top of the channel\'s own through the filter (with no filter it would be 10·log10 of the zones up to the input bandwidth).';
+    "on top of the channel's own through the filter (with no filter it would be 10·log10 of the zones up to the input bandwidth).";
   if (noise.driverNoiseDensity === null || noise.driverSnrDb === null) return `${penalty} No driver noise density stated.`;
   const driver = ` Driver at ${trimmed(noise.driverNoiseDensity, 4)} dBFS/Hz leaves ${trimmed(noise.driverSnrDb, 4)} dB`;
   const lowered =
@@ -111,7 +123,10 @@ export function downConverterSentences(after: AfterRate): string[] {
 }
 
 function stagesText(halfBand: number, remainder: number): string {
-  const parts = [halfBand > 0 ? `${halfBand} half-band stage${halfBand === 1 ? '' : 's'}` : null, remainder > 1 ? `a ÷${remainder} stage` : null].filter((p) => p !== null);
+  const parts = [
+    halfBand > 0 ? `${halfBand} half-band stage${halfBand === 1 ? '' : 's'}` : null,
+    remainder > 1 ? `a ÷${remainder} stage` : null,
+  ].filter((p) => p !== null);
   return parts.length > 0 ? parts.join(' then ') : 'no decimation';
 }
 

@@ -14,7 +14,13 @@ const T = quantityText('terminal');
  * @example aliasTable(aliasReport(hz(100e6), [hz(70e6)], 2), 100).startsWith('Sampled at 100 MHz') // true
  */
 export function aliasTable(report: AliasReport, width = 100): string {
-  const rows = report.tones.map((t) => [T.rate(t.frequency), T.rate(t.alias), String(t.zone), t.inverted ? 'yes' : 'no', t.lookalikes.map((f) => T.rate(f)).join(', ')]);
+  const rows = report.tones.map((t) => [
+    T.rate(t.frequency),
+    T.rate(t.alias),
+    String(t.zone),
+    t.inverted ? 'yes' : 'no',
+    t.lookalikes.map((f) => T.rate(f)).join(', '),
+  ]);
   const table = textTable(
     [
       { head: 'frequency', role: 'key', align: 'right' },
@@ -26,5 +32,11 @@ export function aliasTable(report: AliasReport, width = 100): string {
     rows,
     width,
   );
-  return [wrapProse(`Sampled at ${T.rate(report.rate)} (first Nyquist zone 0–${T.rate(report.rate / 2)}):`, width), table, wrapProse(report.caution, width)].join('\n') + '\n';
+  return (
+    [
+      wrapProse(`Sampled at ${T.rate(report.rate)} (first Nyquist zone 0–${T.rate(report.rate / 2)}):`, width),
+      table,
+      wrapProse(report.caution, width),
+    ].join('\n') + '\n'
+  );
 }

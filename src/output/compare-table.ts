@@ -90,7 +90,31 @@ function familyText(report: CompareReport): string {
  * @example compareCsv(planFamily([{ scenario: heronBase, source: 'heron-base.json' }]).comparison) // 'part,frequency_hz,tolerance_ppm,...'
  */
 export function compareCsv(report: CompareReport): string {
-  const head = ['part', 'frequency_hz', 'tolerance_ppm', 'jitter_s', 'variant', 'rate_hz', 'N', 'M', 'D', 'zone', 'inverted', 'worst_margin_hz', 'limited_by', 'headroom_down_ppm', 'headroom_up_ppm', 'jitter_snr_db', 'channel_snr_db', 'pass', 'passes_all', 'butterworth_order', 'chebyshev_order', 'elliptic_order', 'mask_margin_db'];
+  const head = [
+    'part',
+    'frequency_hz',
+    'tolerance_ppm',
+    'jitter_s',
+    'variant',
+    'rate_hz',
+    'N',
+    'M',
+    'D',
+    'zone',
+    'inverted',
+    'worst_margin_hz',
+    'limited_by',
+    'headroom_down_ppm',
+    'headroom_up_ppm',
+    'jitter_snr_db',
+    'channel_snr_db',
+    'pass',
+    'passes_all',
+    'butterworth_order',
+    'chebyshev_order',
+    'elliptic_order',
+    'mask_margin_db',
+  ];
   const rows = report.parts.flatMap((p) =>
     p.perVariant.map((v) => [
       p.label,

@@ -15,7 +15,8 @@ import { filterMaskSvg } from '../pictures/filter-mask.js';
 
 const T = quantityText('html');
 
-const JOB = 'Sample-clock plan for an IF-sampling receiver: the rates at which the wanted channel sits whole in one Nyquist zone with its guard bands and nothing strong enough folds onto it.';
+const JOB =
+  'Sample-clock plan for an IF-sampling receiver: the rates at which the wanted channel sits whole in one Nyquist zone with its guard bands and nothing strong enough folds onto it.';
 
 const STYLE = `
 body { font-family: sans-serif; font-size: 10.5pt; color: #000; margin: 1.5em; }
@@ -77,17 +78,40 @@ function comparisonSection(report: CompareReport): string {
       verdictCell(v.pass),
     ]),
   );
-  const family = report.family.length > 0 ? `One part for the whole family, best first: ${report.family.join(', ')}.` : 'No part passes every variant.';
+  const family =
+    report.family.length > 0 ? `One part for the whole family, best first: ${report.family.join(', ')}.` : 'No part passes every variant.';
   return (
     '<h2>Clock parts across the variants</h2>' +
-    htmlTable(['part', 'variant', 'rate', 'settings', 'zone', 'worst margin', 'limited by', 'drift room', 'tolerance', 'jitter SNR dB', 'channel SNR dB', 'filter orders B/C/E', 'verdict'], rows) +
+    htmlTable(
+      [
+        'part',
+        'variant',
+        'rate',
+        'settings',
+        'zone',
+        'worst margin',
+        'limited by',
+        'drift room',
+        'tolerance',
+        'jitter SNR dB',
+        'channel SNR dB',
+        'filter orders B/C/E',
+        'verdict',
+      ],
+      rows,
+    ) +
     `<p>${escapeXml(family)}</p>`
   );
 }
 
 function planSection(report: PlanReport): string {
   const focus = report.candidates.find((c) => c.label === report.best) ?? report.candidates[0];
-  const pictures = [rateMapSvg(report), focus ? spectrumSvg(report, focus.label) : '', bandPositionSvg(report, focus?.label), focus ? filterMaskSvg(report, focus.label) : ''].filter((svg) => svg !== '');
+  const pictures = [
+    rateMapSvg(report),
+    focus ? spectrumSvg(report, focus.label) : '',
+    bandPositionSvg(report, focus?.label),
+    focus ? filterMaskSvg(report, focus.label) : '',
+  ].filter((svg) => svg !== '');
   return [
     `<h2>${escapeXml(report.scenario)}</h2>`,
     inputsTables(report),
@@ -106,12 +130,27 @@ function inputsTables(report: PlanReport): string {
   const { band, guard, search } = report;
   const inputs = htmlTable(
     ['wanted band', 'guards', 'rates searched', 'goal'],
-    [[T.extent(band.low, band.high), `${T.frequency(guard.low)} below, ${T.frequency(guard.high)} above`, T.extent(search.minRate, search.maxRate), goalText(report)]],
+    [
+      [
+        T.extent(band.low, band.high),
+        `${T.frequency(guard.low)} below, ${T.frequency(guard.high)} above`,
+        T.extent(search.minRate, search.maxRate),
+        goalText(report),
+      ],
+    ],
     'Inputs',
   );
   const interferers = htmlTable(
     ['interferer', 'kind', 'source', 'input frequencies', 'level dBFS', 'required margin', 'blocks'],
-    report.interferers.map((i) => [i.label, i.kind, i.source, T.tiedExtent(i.rateMultiple, i.low, i.high), T.level(i.level), T.frequency(i.requiredMargin), i.blocking ? 'yes' : 'no']),
+    report.interferers.map((i) => [
+      i.label,
+      i.kind,
+      i.source,
+      T.tiedExtent(i.rateMultiple, i.low, i.high),
+      T.level(i.level),
+      T.frequency(i.requiredMargin),
+      i.blocking ? 'yes' : 'no',
+    ]),
     'Interferers (input frequencies; r is the sampling rate; levels at the converter)',
   );
   return inputs + interferers;
@@ -119,14 +158,33 @@ function inputsTables(report: PlanReport): string {
 
 function windowsTable(report: PlanReport): string {
   if (report.windows.length === 0) return '<p>No legal window inside the rate range.</p>';
-  const rows = report.windows.map((w) => [String(w.zone), w.inverted ? 'yes' : 'no', T.rateRange(w.minRate, w.maxRate), T.frequency(w.maxRate - w.minRate)]);
-  return htmlTable(['zone', 'inverted', 'legal rates', 'width'], rows, 'Legal windows (band with guards whole in one zone; rates rounded inward)');
+  const rows = report.windows.map((w) => [
+    String(w.zone),
+    w.inverted ? 'yes' : 'no',
+    T.rateRange(w.minRate, w.maxRate),
+    T.frequency(w.maxRate - w.minRate),
+  ]);
+  return htmlTable(
+    ['zone', 'inverted', 'legal rates', 'width'],
+    rows,
+    'Legal windows (band with guards whole in one zone; rates rounded inward)',
+  );
 }
 
 function feasibleTable(report: PlanReport): string {
   if (report.feasible.length === 0) return '<p>No feasible interval: every legal rate is blocked.</p>';
-  const rows = report.feasible.map((f) => [String(f.zone), f.inverted ? 'yes' : 'no', T.rateRange(f.minRate, f.maxRate), T.frequency(f.width), T.tolerance(f.widthPpm)]);
-  return htmlTable(['zone', 'inverted', 'feasible rates', 'width', 'drift at centre'], rows, 'Feasible intervals (nothing blocking lands near the band)');
+  const rows = report.feasible.map((f) => [
+    String(f.zone),
+    f.inverted ? 'yes' : 'no',
+    T.rateRange(f.minRate, f.maxRate),
+    T.frequency(f.width),
+    T.tolerance(f.widthPpm),
+  ]);
+  return htmlTable(
+    ['zone', 'inverted', 'feasible rates', 'width', 'drift at centre'],
+    rows,
+    'Feasible intervals (nothing blocking lands near the band)',
+  );
 }
 
 function candidatesTable(report: PlanReport): string {
@@ -148,8 +206,26 @@ function candidatesTable(report: PlanReport): string {
     c.jitterSnrDb === null ? '–' : T.decibels(c.jitterSnrDb),
     c.channelSnrDb === null ? '–' : T.decibels(c.channelSnrDb),
   ]);
-  const head = ['#', 'candidate', 'rate', 'zone', 'worst margin', 'limited by', 'verdict', ...(goal === 'decimation' ? ['decimation factor'] : []), ...(goal === 'quarter-rate' ? ['centre from odd·rate/4'] : []), 'tolerance', 'NCO', 'settings', 'drift room', 'jitter SNR dB', 'channel SNR dB'];
-  const ties = tiedGroups(report.candidates, 'html').map((t) => `<p>${escapeXml(t)}</p>`).join('');
+  const head = [
+    '#',
+    'candidate',
+    'rate',
+    'zone',
+    'worst margin',
+    'limited by',
+    'verdict',
+    ...(goal === 'decimation' ? ['decimation factor'] : []),
+    ...(goal === 'quarter-rate' ? ['centre from odd·rate/4'] : []),
+    'tolerance',
+    'NCO',
+    'settings',
+    'drift room',
+    'jitter SNR dB',
+    'channel SNR dB',
+  ];
+  const ties = tiedGroups(report.candidates, 'html')
+    .map((t) => `<p>${escapeXml(t)}</p>`)
+    .join('');
   return htmlTable(head, rows, "Candidates, best first (over each rate's whole tolerance)") + ties;
 }
 
@@ -165,14 +241,22 @@ function checksTable(candidate: ReportedCandidate): string {
     c.blocking ? 'yes' : 'no',
     verdictCell(c.pass),
   ]);
-  return htmlTable(['check', 'kind', 'input at this rate', 'aliased to', 'margin', 'level dBFS', 'level margin dB', 'blocks', 'verdict'], rows, `Checks at ${candidate.label} (${T.rate(candidate.rate)}), blocking checks first, tightest first`);
+  return htmlTable(
+    ['check', 'kind', 'input at this rate', 'aliased to', 'margin', 'level dBFS', 'level margin dB', 'blocks', 'verdict'],
+    rows,
+    `Checks at ${candidate.label} (${T.rate(candidate.rate)}), blocking checks first, tightest first`,
+  );
 }
 
 function shiftHtml(shift: NonNullable<PlanReport['ifShift']>): string {
   const { title, columns, rows, searched } = shiftParts(shift, 'html');
   const heading = '<h3>Best IF shift and rate</h3>';
   if (rows.length === 0) return `${heading}<p>${escapeXml(title)} No rate is feasible at any seed shift (${escapeXml(searched)})</p>`;
-  return `${heading}${htmlTable(columns.map((c) => c.head), rows, title)}<p>${escapeXml(searched)}</p>`;
+  return `${heading}${htmlTable(
+    columns.map((c) => c.head),
+    rows,
+    title,
+  )}<p>${escapeXml(searched)}</p>`;
 }
 
 function verdictLine(report: PlanReport, focus: ReportedCandidate | undefined): string {

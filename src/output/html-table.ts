@@ -21,7 +21,11 @@ function isQuantity(text: string): boolean {
  * @returns the table as HTML
  * @example htmlTable(['rate'], [['184.32 MHz']]) // '<table><thead><tr><th>rate</th></tr></thead><tbody><tr><td class="num">184.32 MHz</td></tr></tbody></table>'
  */
-export function htmlTable(head: readonly string[], rows: ReadonlyArray<ReadonlyArray<string | readonly [string, string]>>, caption?: string): string {
+export function htmlTable(
+  head: readonly string[],
+  rows: ReadonlyArray<ReadonlyArray<string | readonly [string, string]>>,
+  caption?: string,
+): string {
   const cell = (tag: string, value: string | readonly [string, string]) =>
     typeof value !== 'string'
       ? `<${tag} class="${value[1]}">${escapeXml(value[0])}</${tag}>`

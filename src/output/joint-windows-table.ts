@@ -20,13 +20,27 @@ export function jointWindowsTable(report: JointWindowsReport, width = 100): stri
   const lines = [
     prose(`${bands.length} bands through one converter, their aliases kept at least ${T.frequency(report.spacing)} apart:`),
     textTable(
-      [{ head: 'band', role: 'key', align: 'right' }, { head: 'edges', align: 'right' }, { head: 'guard below', align: 'right' }, { head: 'guard above', align: 'right' }, { head: 'holding', align: 'right' }],
-      bands.map((b, i) => [String(i + 1), T.extent(b.band.low, b.band.high), T.frequency(b.guard.low), T.frequency(b.guard.high), T.extent(b.guardedBand.low, b.guardedBand.high)]),
+      [
+        { head: 'band', role: 'key', align: 'right' },
+        { head: 'edges', align: 'right' },
+        { head: 'guard below', align: 'right' },
+        { head: 'guard above', align: 'right' },
+        { head: 'holding', align: 'right' },
+      ],
+      bands.map((b, i) => [
+        String(i + 1),
+        T.extent(b.band.low, b.band.high),
+        T.frequency(b.guard.low),
+        T.frequency(b.guard.high),
+        T.extent(b.guardedBand.low, b.guardedBand.high),
+      ]),
       width,
     ),
   ];
   if (intervals.length === 0) {
-    lines.push(prose(`No rate between ${T.rate(report.limits.minRate)} and ${T.rate(report.limits.maxRate)} holds every band whole and apart.`));
+    lines.push(
+      prose(`No rate between ${T.rate(report.limits.minRate)} and ${T.rate(report.limits.maxRate)} holds every band whole and apart.`),
+    );
   } else {
     const rows = intervals.map((row) => [
       row.minRate === row.maxRate ? T.rate(row.minRate) : T.rateRange(row.minRate, row.maxRate),
@@ -37,12 +51,22 @@ export function jointWindowsTable(report: JointWindowsReport, width = 100): stri
     lines.push(prose('Rates valid for every band together (rounded inward; zone of each band, "inv": spectrally inverted):'));
     lines.push(
       textTable(
-        [{ head: 'valid rates', role: 'key', align: 'right' }, { head: 'width', align: 'right' }, { head: 'drift at centre', align: 'right' }, ...bands.map((_, i) => ({ head: `band ${i + 1}`, align: 'right' as const }))],
+        [
+          { head: 'valid rates', role: 'key', align: 'right' },
+          { head: 'width', align: 'right' },
+          { head: 'drift at centre', align: 'right' },
+          ...bands.map((_, i) => ({ head: `band ${i + 1}`, align: 'right' as const })),
+        ],
         rows,
         width,
       ),
     );
-    const lowest = report.minimumRate === null ? '∞' : report.minimumIsSingleRate ? T.rate(report.minimumRate) : `${T.leastRate(report.minimumRate)} (rounded up)`;
+    const lowest =
+      report.minimumRate === null
+        ? '∞'
+        : report.minimumIsSingleRate
+          ? T.rate(report.minimumRate)
+          : `${T.leastRate(report.minimumRate)} (rounded up)`;
     lines.push(
       prose(
         report.minimumIsSingleRate

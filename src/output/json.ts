@@ -49,7 +49,10 @@ export function writeJson(report: unknown, write: TextSink): void {
 
 /** The value JSON.stringify would write for holder[key]: toJSON applied, then Infinity made null. */
 function jsonValue(value: unknown, key: string): unknown {
-  const own = value !== null && typeof value === 'object' && typeof (value as { toJSON?: unknown }).toJSON === 'function' ? (value as { toJSON: (k: string) => unknown }).toJSON(key) : value;
+  const own =
+    value !== null && typeof value === 'object' && typeof (value as { toJSON?: unknown }).toJSON === 'function'
+      ? (value as { toJSON: (k: string) => unknown }).toJSON(key)
+      : value;
   return noInfinity(key, own);
 }
 
@@ -66,7 +69,8 @@ function valueText(value: unknown, indent: string, put: (text: string) => void):
   if (value === null || typeof value !== 'object') return JSON.stringify(value);
   const array = Array.isArray(value);
   const entries: Array<[string, unknown]> = array ? Array.from(value, (v, i) => [String(i), v]) : Object.entries(value);
-  if (entries.every(([, v]) => v === null || typeof v !== 'object')) return JSON.stringify(value, noInfinity, 2)?.replace(/\n/g, `\n${indent}`);
+  if (entries.every(([, v]) => v === null || typeof v !== 'object'))
+    return JSON.stringify(value, noInfinity, 2)?.replace(/\n/g, `\n${indent}`);
   const inner = `${indent}  `;
   let first = true;
   put(array ? '[' : '{');

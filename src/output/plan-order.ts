@@ -27,14 +27,18 @@ export function tiedGroups(candidates: readonly ReportedCandidate[], medium: Med
   const t = quantityText(medium);
   const key = (c: ReportedCandidate) => `${c.pass}|${c.limitedBy}|${t.frequency(c.worstMargin)}`;
   const sentences: string[] = [];
-  for (let start = 0; start < candidates.length; ) {
+  for (let start = 0; start < candidates.length;) {
     let end = start + 1;
     while (end < candidates.length && key(candidates[end]!) === key(candidates[start]!)) end++;
     if (end - start > 1) {
       const run = candidates.slice(start, end);
       const first = run[0]!;
-      const next = run.map((c) => `${start + 1 + run.indexOf(c)}. ${c.next ? `${t.frequency(c.next.margin)} (${c.next.limitedBy})` : 'none'}`).join('; ');
-      sentences.push(`Candidates ${start + 1}–${end} tie on worst margin (${t.frequency(first.worstMargin)}, ${first.limitedBy}); ranked by the next-tightest check's margin beyond its requirement: ${next}.`);
+      const next = run
+        .map((c) => `${start + 1 + run.indexOf(c)}. ${c.next ? `${t.frequency(c.next.margin)} (${c.next.limitedBy})` : 'none'}`)
+        .join('; ');
+      sentences.push(
+        `Candidates ${start + 1}–${end} tie on worst margin (${t.frequency(first.worstMargin)}, ${first.limitedBy}); ranked by the next-tightest check's margin beyond its requirement: ${next}.`,
+      );
     }
     start = end;
   }

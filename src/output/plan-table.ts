@@ -24,8 +24,14 @@ const T = quantityText('terminal');
  */
 export function planTable(report: PlanReport, width = 100): string {
   const prose = (text: string) => wrapProse(text, width);
-  if (report.conflicts.length > 0) return [heading(report, prose), conflictsSection(report, width), prose(report.caution)].join('\n\n') + '\n';
-  const sections = [heading(report, prose), windowsSection(report, width), feasibleSection(report, width), candidatesSection(report, width)];
+  if (report.conflicts.length > 0)
+    return [heading(report, prose), conflictsSection(report, width), prose(report.caution)].join('\n\n') + '\n';
+  const sections = [
+    heading(report, prose),
+    windowsSection(report, width),
+    feasibleSection(report, width),
+    candidatesSection(report, width),
+  ];
   // Rates given with --rate each get their checks; a search shows the first candidate's.
   const typed = report.candidates.length > 0 && report.candidates.every((c) => c.origin === 'typed');
   for (const focus of typed ? report.candidates : report.candidates.slice(0, 1)) {
@@ -75,15 +81,39 @@ export function goalText(report: PlanReport): string {
 
 function windowsSection(report: PlanReport, width: number): string {
   if (report.windows.length === 0) return 'Legal windows: none inside the rate range.';
-  const rows = report.windows.map((w) => [String(w.zone), yesNo(w.inverted), T.rateRange(w.minRate, w.maxRate), T.frequency(w.maxRate - w.minRate)]);
-  const columns: TextColumn[] = [{ head: 'zone', role: 'key', align: 'right' }, { head: 'inverted' }, { head: 'legal rates', align: 'right' }, { head: 'width', align: 'right' }];
-  return wrapProse('Legal windows (band with guards whole in one zone; rates rounded inward):', width) + '\n' + textTable(columns, rows, width);
+  const rows = report.windows.map((w) => [
+    String(w.zone),
+    yesNo(w.inverted),
+    T.rateRange(w.minRate, w.maxRate),
+    T.frequency(w.maxRate - w.minRate),
+  ]);
+  const columns: TextColumn[] = [
+    { head: 'zone', role: 'key', align: 'right' },
+    { head: 'inverted' },
+    { head: 'legal rates', align: 'right' },
+    { head: 'width', align: 'right' },
+  ];
+  return (
+    wrapProse('Legal windows (band with guards whole in one zone; rates rounded inward):', width) + '\n' + textTable(columns, rows, width)
+  );
 }
 
 function feasibleSection(report: PlanReport, width: number): string {
   if (report.feasible.length === 0) return 'Feasible intervals: none; every legal rate is blocked.';
-  const rows = report.feasible.map((f) => [String(f.zone), yesNo(f.inverted), T.rateRange(f.minRate, f.maxRate), T.frequency(f.width), T.tolerance(f.widthPpm)]);
-  const columns: TextColumn[] = [{ head: 'zone', role: 'key', align: 'right' }, { head: 'inverted' }, { head: 'feasible rates', align: 'right' }, { head: 'width', align: 'right' }, { head: 'drift at centre', align: 'right' }];
+  const rows = report.feasible.map((f) => [
+    String(f.zone),
+    yesNo(f.inverted),
+    T.rateRange(f.minRate, f.maxRate),
+    T.frequency(f.width),
+    T.tolerance(f.widthPpm),
+  ]);
+  const columns: TextColumn[] = [
+    { head: 'zone', role: 'key', align: 'right' },
+    { head: 'inverted' },
+    { head: 'feasible rates', align: 'right' },
+    { head: 'width', align: 'right' },
+    { head: 'drift at centre', align: 'right' },
+  ];
   return wrapProse('Feasible intervals (nothing blocking lands near the band):', width) + '\n' + textTable(columns, rows, width);
 }
 
@@ -125,10 +155,14 @@ function candidatesSection(report: PlanReport, width: number): string {
     c.channelSnrDb === null ? '–' : T.decibels(c.channelSnrDb),
   ]);
   const more = report.candidates.length - shown.length;
-  const lines = [wrapProse("Candidates, best first (margins hold over each rate's whole tolerance; zone \"2 inv\": inverted):", width), textTable(columns, rows, width)];
+  const lines = [
+    wrapProse('Candidates, best first (margins hold over each rate\'s whole tolerance; zone "2 inv": inverted):', width),
+    textTable(columns, rows, width),
+  ];
   if (more > 0) lines.push(`(+${more} more in --json)`);
   for (const tie of tiedGroups(shown)) lines.push(wrapProse(tie, width));
-  if (report.unplannedParts.length > 0) lines.push(wrapProse(`Not planned (no rate inside the converter's range): ${report.unplannedParts.join(', ')}.`, width));
+  if (report.unplannedParts.length > 0)
+    lines.push(wrapProse(`Not planned (no rate inside the converter's range): ${report.unplannedParts.join(', ')}.`, width));
   return lines.join('\n');
 }
 
@@ -159,7 +193,9 @@ function checksSection(candidate: ReportedCandidate, width: number): string {
   const ordered = orderedChecks(candidate.checks);
   const shown = ordered.slice(0, MOST_CHECKS_SHOWN);
   const more = ordered.length - shown.length;
-  const inversion = candidate.conjugate ? '; the band arrives inverted: conjugate the complex output (or tune the NCO to the negative frequency)' : '';
+  const inversion = candidate.conjugate
+    ? '; the band arrives inverted: conjugate the complex output (or tune the NCO to the negative frequency)'
+    : '';
   const title =
     `Checks at ${candidate.label === T.rate(candidate.rate) ? candidate.label : `${candidate.label} (${T.rate(candidate.rate)})`}: zone edge margin ${T.frequency(candidate.zoneEdgeMargin)}` +
     (candidate.nco === null ? '' : `; NCO ${T.rate(candidate.nco)}${inversion}`) +
@@ -177,7 +213,12 @@ function checksSection(candidate: ReportedCandidate, width: number): string {
   ];
   const table = textTable(columns, shown.map(checkRow), width);
   const omitted = candidate.checksOmitted;
-  const rest = more > 0 ? `\n(+${more} more in --json${omitted > 0 ? `, ${omitted} more with --json --all-checks` : ''})` : omitted > 0 ? `\n(+${omitted} more with --json --all-checks)` : '';
+  const rest =
+    more > 0
+      ? `\n(+${more} more in --json${omitted > 0 ? `, ${omitted} more with --json --all-checks` : ''})`
+      : omitted > 0
+        ? `\n(+${omitted} more with --json --all-checks)`
+        : '';
   return wrapProse(title, width) + '\n' + table + rest;
 }
 
@@ -197,10 +238,16 @@ function checkRow(check: ReportedCheck): string[] {
 
 function verdict(report: PlanReport): string {
   if (report.candidates.length > 0 && report.candidates.every((c) => c.origin === 'typed')) {
-    return report.candidates.map((c) => `${c.label}: ${c.pass ? 'passes' : 'FAILS'}, zone ${zoneText(c)}, worst margin ${T.frequency(c.worstMargin)} (${c.limitedBy}).`).join('\n');
+    return report.candidates
+      .map(
+        (c) =>
+          `${c.label}: ${c.pass ? 'passes' : 'FAILS'}, zone ${zoneText(c)}, worst margin ${T.frequency(c.worstMargin)} (${c.limitedBy}).`,
+      )
+      .join('\n');
   }
   const best = report.candidates.find((c) => c.label === report.best);
-  if (best) return `Best: ${best.label} at ${T.rate(best.rate)}, zone ${zoneText(best)}, worst margin ${T.frequency(best.worstMargin)} (${best.limitedBy}).`;
+  if (best)
+    return `Best: ${best.label} at ${T.rate(best.rate)}, zone ${zoneText(best)}, worst margin ${T.frequency(best.worstMargin)} (${best.limitedBy}).`;
   const nearest = report.candidates[0];
   if (!nearest) return 'No candidate: no legal window inside the rate range.';
   const failing = nearest.checks.filter((c) => !c.pass).sort((a, b) => a.margin - a.requiredMargin - (b.margin - b.requiredMargin))[0];

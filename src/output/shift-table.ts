@@ -3,7 +3,6 @@ import { wrapProse } from './wrap-prose.js';
 import type { ReportedShift, ShiftReport } from '../plan/shift-report.js';
 import { textTable, type TextColumn } from './text-table.js';
 
-
 /**
  * The "Best IF shift and rate" section of the solve table: the best pair and,
  * for comparison, the best at the nominal IF, with the check that limits

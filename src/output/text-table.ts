@@ -43,7 +43,10 @@ export function textTable(columns: readonly TextColumn[], rows: ReadonlyArray<re
   const detail = all.filter((i) => columns[i]!.role === 'detail');
   // Deciding columns may wrap to stay in the first block; detail columns move to later blocks, at their natural width where they can.
   const blocks: number[][] = [];
-  for (const [pending, wrapOk] of [[main, true], [detail, false]] as const) {
+  for (const [pending, wrapOk] of [
+    [main, true],
+    [detail, false],
+  ] as const) {
     let left = [...pending];
     while (left.length > 0) {
       const chosen: number[] = [];
@@ -107,9 +110,20 @@ function block(columns: readonly TextColumn[], rows: ReadonlyArray<readonly stri
 
 /** No border or rule characters, and the gap between columns. */
 const BORDERLESS = {
-  top: '', 'top-mid': '', 'top-left': '', 'top-right': '',
-  bottom: '', 'bottom-mid': '', 'bottom-left': '', 'bottom-right': '',
-  left: '', 'left-mid': '', mid: '', 'mid-mid': '', right: '', 'right-mid': '',
+  top: '',
+  'top-mid': '',
+  'top-left': '',
+  'top-right': '',
+  bottom: '',
+  'bottom-mid': '',
+  'bottom-left': '',
+  'bottom-right': '',
+  left: '',
+  'left-mid': '',
+  mid: '',
+  'mid-mid': '',
+  right: '',
+  'right-mid': '',
   middle: GAP,
 };
 

@@ -42,7 +42,15 @@ function heading(r: VerifyResult, prose: (text: string) => string): string {
 }
 
 function tonesSection(r: VerifyResult, width: number): string {
-  const rows = r.tones.map((t) => [t.label, t.role, T.rate(t.nominal), T.rate(t.frequency), T.frequency(t.move), String(t.bin), T.level(t.level)]);
+  const rows = r.tones.map((t) => [
+    t.label,
+    t.role,
+    T.rate(t.nominal),
+    T.rate(t.frequency),
+    T.frequency(t.move),
+    String(t.bin),
+    T.level(t.level),
+  ]);
   const columns: TextColumn[] = [
     { head: 'tone', role: 'key', wrap: true },
     { head: 'role' },
@@ -91,15 +99,29 @@ function linesSection(r: VerifyResult, width: number): string {
   ];
   const table = textTable(columns, rows, width);
   const under = r.underFloor.reduce((sum, u) => sum + u.lines, 0);
-  const note = under > 0 ? `\n${wrapProse(`${under} further line${under === 1 ? '' : 's'} of ${r.underFloor.length} check${r.underFloor.length === 1 ? '' : 's'} under the floor by the model (not looked for): ${r.underFloor.map((u) => u.check).join(', ')}.`, width)}` : '';
+  const note =
+    under > 0
+      ? `\n${wrapProse(`${under} further line${under === 1 ? '' : 's'} of ${r.underFloor.length} check${r.underFloor.length === 1 ? '' : 's'} under the floor by the model (not looked for): ${r.underFloor.map((u) => u.check).join(', ')}.`, width)}`
+      : '';
   const rule = `Level rule: ±${tolerance} dB where the plan's level is the level the capture put there; ≤ +${tolerance} dB above it (when above the threshold) where it is a bound.`;
-  return wrapProse(`Predicted lines beside the capture (looked for: the model puts them at least 3 dB above the floor). ${rule}`, width) + '\n' + table + note;
+  return (
+    wrapProse(`Predicted lines beside the capture (looked for: the model puts them at least 3 dB above the floor). ${rule}`, width) +
+    '\n' +
+    table +
+    note
+  );
 }
 
 function peaksSection(peaks: readonly PeakRow[], width: number): string | null {
   if (peaks.length === 0) return null;
   const strongest = [...peaks].sort((a, b) => b.level - a.level).slice(0, MOST_PEAKS_SHOWN);
-  const rows = strongest.map((p) => [T.frequency(p.frequency), T.level(p.level), T.frequency(p.distance), p.explainedBy ?? 'unexplained', String(p.bin)]);
+  const rows = strongest.map((p) => [
+    T.frequency(p.frequency),
+    T.level(p.level),
+    T.frequency(p.distance),
+    p.explainedBy ?? 'unexplained',
+    String(p.bin),
+  ]);
   const columns: TextColumn[] = [
     { head: 'frequency', role: 'key', align: 'right' },
     { head: 'dBFS', align: 'right' },
@@ -112,7 +134,9 @@ function peaksSection(peaks: readonly PeakRow[], width: number): string | null {
 }
 
 function verdict(r: VerifyResult): string {
-  const unsimulated = r.notSimulated.length ? `\nNot simulated (nothing in the capture stands for them): ${r.notSimulated.join(', ')}.` : '';
+  const unsimulated = r.notSimulated.length
+    ? `\nNot simulated (nothing in the capture stands for them): ${r.notSimulated.join(', ')}.`
+    : '';
   const plan = r.plan.pass ? 'passes' : 'fails';
   if (r.consistent) return `Verdict: the capture agrees with the plan at ${T.rate(r.rate)} (the plan ${plan} there).${unsimulated}`;
   return `Verdict: the capture contradicts the plan at ${T.rate(r.rate)} (the plan ${plan} there):\n${r.contradictions.map((c) => `- ${c}`).join('\n')}${unsimulated}`;

@@ -22,7 +22,10 @@ function wrapLine(line: string, width: number): string {
   if (length(line) <= width) return line;
   const indent = /^(\s*(?:- )?)/.exec(line)![1]!;
   const hanging = ' '.repeat(length(indent));
-  const words = line.slice(indent.length).split(/ +/).filter((w) => w !== '');
+  const words = line
+    .slice(indent.length)
+    .split(/ +/)
+    .filter((w) => w !== '');
   const lines: string[] = [];
   let current = indent;
   for (const word of words) {
@@ -35,4 +38,3 @@ function wrapLine(line: string, width: number): string {
   lines.push(current);
   return lines.join('\n');
 }
-

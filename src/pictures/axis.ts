@@ -30,7 +30,8 @@ export function horizontalAxis(scale: Scale, ticks: readonly Tick[], y: number, 
   let lastRight = -Infinity;
   for (const tick of ticks) {
     const x = scale.at(tick.value);
-    if (gridTop !== undefined) parts.push(element('line', { x1: x, y1: gridTop, x2: x, y2: y, stroke: '#c8c8c8', 'stroke-width': 0.5, 'stroke-dasharray': '2 3' }));
+    if (gridTop !== undefined)
+      parts.push(element('line', { x1: x, y1: gridTop, x2: x, y2: y, stroke: '#c8c8c8', 'stroke-width': 0.5, 'stroke-dasharray': '2 3' }));
     parts.push(element('line', { x1: x, y1: y, x2: x, y2: y + TICK, stroke: '#000', 'stroke-width': 1 }));
     const half = textWidth(tick.label, AXIS_FONT) / 2;
     if (x - half < lastRight + 6) continue;
@@ -60,7 +61,10 @@ export function verticalAxis(scale: Scale, ticks: readonly Tick[], x: number, ti
   let widest = 0;
   for (const tick of ticks) {
     const y = scale.at(tick.value);
-    if (gridRight !== undefined) parts.push(element('line', { x1: x, y1: y, x2: gridRight, y2: y, stroke: '#c8c8c8', 'stroke-width': 0.5, 'stroke-dasharray': '2 3' }));
+    if (gridRight !== undefined)
+      parts.push(
+        element('line', { x1: x, y1: y, x2: gridRight, y2: y, stroke: '#c8c8c8', 'stroke-width': 0.5, 'stroke-dasharray': '2 3' }),
+      );
     parts.push(element('line', { x1: x - TICK, y1: y, x2: x, y2: y, stroke: '#000', 'stroke-width': 1 }));
     if (y + AXIS_FONT / 2 > lastTop - 2) continue;
     lastTop = y - AXIS_FONT / 2;
@@ -69,6 +73,12 @@ export function verticalAxis(scale: Scale, ticks: readonly Tick[], x: number, ti
   }
   const titleX = x - TICK - 3 - widest - 10;
   const titleY = (y0 + y1) / 2;
-  parts.push(textElement(titleX, titleY, title, { 'text-anchor': 'middle', 'font-size': AXIS_FONT + 1, transform: `rotate(-90 ${px(titleX)} ${px(titleY)})` }));
+  parts.push(
+    textElement(titleX, titleY, title, {
+      'text-anchor': 'middle',
+      'font-size': AXIS_FONT + 1,
+      transform: `rotate(-90 ${px(titleX)} ${px(titleY)})`,
+    }),
+  );
   return element('g', { class: 'axis-y' }, parts.join(''));
 }

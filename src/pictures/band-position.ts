@@ -53,18 +53,59 @@ export function bandPositionFigure(report: PlanReport, candidateLabel?: string):
   const y = linearScale([0, yMax], [BOTTOM, TOP]);
 
   const parts: string[] = [heading(report, fL, fH, design)];
-  parts.push(element('rect', { x: LEFT, y: TOP, width: PLOT_RIGHT - LEFT, height: BOTTOM - TOP, fill: '#fff', stroke: '#000', 'stroke-width': 0.8 }));
+  parts.push(
+    element('rect', { x: LEFT, y: TOP, width: PLOT_RIGHT - LEFT, height: BOTTOM - TOP, fill: '#fff', stroke: '#000', 'stroke-width': 0.8 }),
+  );
   const wedges = allowedWedges(xMax, yMax);
   // Many wedges crowd towards (fH/B, 2): thinner outlines keep them apart.
   const outline = wedges.length > 24 ? 0.25 : 0.7;
-  for (const w of wedges) parts.push(element('polygon', { points: pointList(w.points.map(([a, b]) => [x.at(a), y.at(b)])), fill: w.inverted ? FILL.inverted : '#dcdcdc', stroke: '#000', 'stroke-width': outline }));
+  for (const w of wedges)
+    parts.push(
+      element('polygon', {
+        points: pointList(w.points.map(([a, b]) => [x.at(a), y.at(b)])),
+        fill: w.inverted ? FILL.inverted : '#dcdcdc',
+        stroke: '#000',
+        'stroke-width': outline,
+      }),
+    );
   parts.push(zoneNumbers(wedges, x, y, xMax, yMax));
   parts.push(searchLines(report, B, x, y, yMax));
-  parts.push(element('line', { x1: x.at(design), y1: TOP, x2: x.at(design), y2: BOTTOM, stroke: '#000', 'stroke-width': 1.4, 'stroke-dasharray': '7 3' }));
-  parts.push(textElement(x.at(design), TOP - 6, `this design: fH/B = ${trimmed(design, 5)}`, { 'text-anchor': design > (1 + xMax) / 2 ? 'end' : 'start', 'font-size': SMALL, 'font-weight': 'bold' }));
+  parts.push(
+    element('line', {
+      x1: x.at(design),
+      y1: TOP,
+      x2: x.at(design),
+      y2: BOTTOM,
+      stroke: '#000',
+      'stroke-width': 1.4,
+      'stroke-dasharray': '7 3',
+    }),
+  );
+  parts.push(
+    textElement(x.at(design), TOP - 6, `this design: fH/B = ${trimmed(design, 5)}`, {
+      'text-anchor': design > (1 + xMax) / 2 ? 'end' : 'start',
+      'font-size': SMALL,
+      'font-weight': 'bold',
+    }),
+  );
   parts.push(candidatePoints(report, focus, B, design, x, y));
-  parts.push(verticalAxis(y, yTicks.values.map((v) => ({ value: v, label: trimmed(v, 6) })), LEFT, 'sampling rate / bandwidth, fs/B', PLOT_RIGHT));
-  parts.push(horizontalAxis(x, linearTicks(1, xMax, 8).values.map((v) => ({ value: v, label: trimmed(v, 6) })), BOTTOM, 'upper band edge / bandwidth, fH/B'));
+  parts.push(
+    verticalAxis(
+      y,
+      yTicks.values.map((v) => ({ value: v, label: trimmed(v, 6) })),
+      LEFT,
+      'sampling rate / bandwidth, fs/B',
+      PLOT_RIGHT,
+    ),
+  );
+  parts.push(
+    horizontalAxis(
+      x,
+      linearTicks(1, xMax, 8).values.map((v) => ({ value: v, label: trimmed(v, 6) })),
+      BOTTOM,
+      'upper band edge / bandwidth, fH/B',
+    ),
+  );
   const legend = legendRows(
     [
       { swatch: boxSwatch('#dcdcdc'), text: 'allowed, upright zone' },
@@ -78,7 +119,12 @@ export function bandPositionFigure(report: PlanReport, candidateLabel?: string):
     WIDTH - 20,
   );
   parts.push(legend.markup);
-  return { width: WIDTH, height: Math.ceil(BOTTOM + 56 + legend.height + 12), title: `Band-position chart: ${report.scenario}`, body: parts.join('') };
+  return {
+    width: WIDTH,
+    height: Math.ceil(BOTTOM + 56 + legend.height + 12),
+    title: `Band-position chart: ${report.scenario}`,
+    body: parts.join(''),
+  };
 }
 
 /**
@@ -97,7 +143,12 @@ function heading(report: PlanReport, fL: number, fH: number, design: number): st
   const B = fH - fL;
   return (
     textElement(24, 22, `Band-position chart: ${report.scenario}`, { 'font-size': 14, 'font-weight': 'bold' }) +
-    textElement(24, 40, `zone n allows 2·fH/n ≤ fs ≤ 2·(fH − B)/(n − 1) (Vaughan, Scott & White 1991); guarded band ${T.extent(fL, fH)}, B = ${T.frequency(B)} (the guarded width: fs/B and fH/B divide by it), fH/B = ${trimmed(design, 6)}`, { 'font-size': 10.5 })
+    textElement(
+      24,
+      40,
+      `zone n allows 2·fH/n ≤ fs ≤ 2·(fH − B)/(n − 1) (Vaughan, Scott & White 1991); guarded band ${T.extent(fL, fH)}, B = ${T.frequency(B)} (the guarded width: fs/B and fH/B divide by it), fH/B = ${trimmed(design, 6)}`,
+      { 'font-size': 10.5 },
+    )
   );
 }
 
@@ -133,11 +184,24 @@ function zoneName(w: Wedge, count: number): string {
 function searchLines(report: PlanReport, B: number, x: Scale, y: Scale, yMax: number): string {
   const parts: string[] = [];
   // The slowest rate is labelled under its line and the fastest over it, so close lines keep both labels clear.
-  for (const [rate, text, below] of [[report.search.minRate, 'slowest rate searched', true], [report.search.maxRate, 'fastest rate searched', false]] as const) {
+  for (const [rate, text, below] of [
+    [report.search.minRate, 'slowest rate searched', true],
+    [report.search.maxRate, 'fastest rate searched', false],
+  ] as const) {
     const at = rate / B;
     if (at <= 0 || at > yMax) continue;
     const top = below ? y.at(at) + 1 : y.at(at) - 12;
-    parts.push(element('line', { x1: x.range[0], y1: y.at(at), x2: x.range[1], y2: y.at(at), stroke: '#000', 'stroke-width': 0.8, 'stroke-dasharray': '2 2' }));
+    parts.push(
+      element('line', {
+        x1: x.range[0],
+        y1: y.at(at),
+        x2: x.range[1],
+        y2: y.at(at),
+        stroke: '#000',
+        'stroke-width': 0.8,
+        'stroke-dasharray': '2 2',
+      }),
+    );
     parts.push(element('rect', { x: x.range[0] + 3, y: top, width: textWidth(text, 8.5) + 4, height: 11, fill: '#fff', opacity: 0.85 }));
     parts.push(textElement(x.range[0] + 5, top + 9, text, { 'font-size': 8.5, 'font-style': 'italic' }));
   }
@@ -150,7 +214,8 @@ function candidatePoints(report: PlanReport, focus: ReportedCandidate | null, B:
   const inChart = (c: ReportedCandidate) => c.rate / B <= y.domain[1];
   const marked = focus ? [focus] : report.candidates.filter(inChart);
   if (focus) {
-    for (const c of report.candidates.filter((c) => c !== focus && inChart(c))) parts.push(element('circle', { cx: at, cy: y.at(c.rate / B), r: 1.8, fill: '#777' }));
+    for (const c of report.candidates.filter((c) => c !== focus && inChart(c)))
+      parts.push(element('circle', { cx: at, cy: y.at(c.rate / B), r: 1.8, fill: '#777' }));
   }
   const labelled = marked.slice(0, MOST_LABELS).sort((a, b) => b.rate - a.rate);
   const wanted = labelled.map((c) => y.at(c.rate / B));
@@ -158,11 +223,26 @@ function candidatePoints(report: PlanReport, focus: ReportedCandidate | null, B:
   const labelX = Math.max(at, x.range[1]) + 76;
   labelled.forEach((c, i) => {
     const text = `${c.label}: ${T.rate(c.rate)} = ${trimmed(c.rate / B, 5)}·B`;
-    parts.push(element('path', { d: `M${at + 6} ${wanted[i]}L${labelX - 36} ${wanted[i]}L${labelX - 4} ${placed[i]}`, fill: 'none', stroke: '#777', 'stroke-width': 0.5 }));
-    parts.push(textElement(labelX, placed[i]! + 3.5, text, { 'font-size': SMALL, 'font-weight': c.label === report.best ? 'bold' : undefined }));
+    parts.push(
+      element('path', {
+        d: `M${at + 6} ${wanted[i]}L${labelX - 36} ${wanted[i]}L${labelX - 4} ${placed[i]}`,
+        fill: 'none',
+        stroke: '#777',
+        'stroke-width': 0.5,
+      }),
+    );
+    parts.push(
+      textElement(labelX, placed[i]! + 3.5, text, { 'font-size': SMALL, 'font-weight': c.label === report.best ? 'bold' : undefined }),
+    );
   });
   for (const c of marked) parts.push(candidateMarker(c.pass, at, y.at(c.rate / B)));
   const unlabelled = marked.length - labelled.length;
-  if (unlabelled > 0) parts.push(textElement(labelX, BOTTOM + 12, `+${unlabelled} more candidates marked, not labelled`, { 'font-size': SMALL, 'font-style': 'italic' }));
+  if (unlabelled > 0)
+    parts.push(
+      textElement(labelX, BOTTOM + 12, `+${unlabelled} more candidates marked, not labelled`, {
+        'font-size': SMALL,
+        'font-style': 'italic',
+      }),
+    );
   return element('g', { class: 'candidates' }, parts.join(''));
 }

@@ -43,7 +43,10 @@ export function blockedGroups(report: PlanReport, zone: number, keys: ReadonlyMa
   const groups = new Map<string, { ranges: Array<readonly [number, number]>; labels: string[] }>();
   for (const [label, ranges] of byLabel) {
     const widestFirst = [...ranges].sort((a, b) => b[1] - b[0] - (a[1] - a[0]) || a[0] - b[0]);
-    const id = [...ranges].sort((a, b) => a[0] - b[0]).map(([a, b]) => `${a}|${b}`).join(';');
+    const id = [...ranges]
+      .sort((a, b) => a[0] - b[0])
+      .map(([a, b]) => `${a}|${b}`)
+      .join(';');
     const group = groups.get(id) ?? { ranges: widestFirst, labels: [] };
     group.labels.push(label);
     groups.set(id, group);

@@ -50,7 +50,8 @@ const LISTED_PEAKS = 8;
  * @example captureFigure(verified.result, verified.levels).width // 960
  */
 export function captureFigure(result: VerifyResult, levels: ArrayLike<number>): Figure {
-  if (levels.length !== result.samples / 2 + 1) throw new RangeError(`the spectrum must hold N/2 + 1 = ${result.samples / 2 + 1} bins, got ${levels.length}`);
+  if (levels.length !== result.samples / 2 + 1)
+    throw new RangeError(`the spectrum must hold N/2 + 1 = ${result.samples / 2 + 1} bins, got ${levels.length}`);
   const half = result.rate / 2;
   const plotX: readonly [number, number] = [LEFT, WIDTH - RIGHT];
   const x = linearScale([0, half], plotX);
@@ -77,18 +78,53 @@ export function captureFigure(result: VerifyResult, levels: ArrayLike<number>): 
 
   const parts: string[] = [heading(result)];
   parts.push(wantedImage(result, x, plotTop, plotBottom));
-  parts.push(verticalAxis(y, levelTicks.values.map((v) => ({ value: v, label: trimmed(v, 6) })), LEFT, 'level (dBFS)', WIDTH - RIGHT));
+  parts.push(
+    verticalAxis(
+      y,
+      levelTicks.values.map((v) => ({ value: v, label: trimmed(v, 6) })),
+      LEFT,
+      'level (dBFS)',
+      WIDTH - RIGHT,
+    ),
+  );
   const binWidth = result.binWidth;
   const points = columns.map((c) => [x.at(((c.first + c.last) / 2) * binWidth), y.at(clamp(c.level))] as const);
-  parts.push(element('polyline', { class: 'spectrum', points: pointList(points), fill: 'none', stroke: '#000', 'stroke-width': 0.8, 'stroke-linejoin': 'round' }));
+  parts.push(
+    element('polyline', {
+      class: 'spectrum',
+      points: pointList(points),
+      fill: 'none',
+      stroke: '#000',
+      'stroke-width': 0.8,
+      'stroke-linejoin': 'round',
+    }),
+  );
   parts.push(levelLine(y.at(threshold), `threshold ${T.level(threshold)} dBFS`, '8 3 2 3', 'end'));
-  parts.push(levelLine(y.at(floor), `peak floor ${T.level(floor)} dBFS (noise median + ${T.decibels(floor - noiseMedian)} dB)`, '4 3', 'start'));
+  parts.push(
+    levelLine(y.at(floor), `peak floor ${T.level(floor)} dBFS (noise median + ${T.decibels(floor - noiseMedian)} dB)`, '4 3', 'start'),
+  );
 
   for (const p of placed) {
     const baseline = HEAD + (p.row + 1) * LABEL_ROW - 2;
     const at = x.at(p.item.predicted.frequency);
-    parts.push(element('line', { x1: at, y1: baseline + 2, x2: at, y2: y.at(clamp(p.item.planLevel)) - 6, stroke: '#555', 'stroke-width': 0.5, 'stroke-dasharray': '1 2' }));
-    parts.push(textElement(p.x, baseline, p.text, { 'text-anchor': 'middle', 'font-size': SMALL, 'font-weight': contradicts(p.item) ? 'bold' : undefined }));
+    parts.push(
+      element('line', {
+        x1: at,
+        y1: baseline + 2,
+        x2: at,
+        y2: y.at(clamp(p.item.planLevel)) - 6,
+        stroke: '#555',
+        'stroke-width': 0.5,
+        'stroke-dasharray': '1 2',
+      }),
+    );
+    parts.push(
+      textElement(p.x, baseline, p.text, {
+        'text-anchor': 'middle',
+        'font-size': SMALL,
+        'font-weight': contradicts(p.item) ? 'bold' : undefined,
+      }),
+    );
   }
   for (const p of result.predictions) parts.push(predictionMarker(contradicts(p), x.at(p.predicted.frequency), y.at(clamp(p.planLevel))));
   const intrusionBins = new Set(result.intrusions.map((r) => r.bin));
@@ -106,7 +142,12 @@ export function captureFigure(result: VerifyResult, levels: ArrayLike<number>): 
   const list = peakList(result, intrusionBins, 24, cursor);
   parts.push(list.markup);
   cursor += list.height;
-  return { width: WIDTH, height: Math.ceil(cursor + 12), title: `Simulated capture at ${T.rate(result.rate)}: ${result.scenario}`, body: parts.join('') };
+  return {
+    width: WIDTH,
+    height: Math.ceil(cursor + 12),
+    title: `Simulated capture at ${T.rate(result.rate)}: ${result.scenario}`,
+    body: parts.join(''),
+  };
 }
 
 /**
@@ -129,13 +170,23 @@ function contradicts(p: PredictionRow): boolean {
 function heading(r: VerifyResult): string {
   const reasons = r.contradictions.length;
   const plan = r.plan.pass ? 'the plan passes at this rate' : 'the plan fails at this rate';
-  const verdict = r.consistent ? `the capture agrees with the plan (${plan})` : `the capture CONTRADICTS the plan (${plan}; ${reasons} reason${reasons === 1 ? '' : 's'})`;
+  const verdict = r.consistent
+    ? `the capture agrees with the plan (${plan})`
+    : `the capture CONTRADICTS the plan (${plan}; ${reasons} reason${reasons === 1 ? '' : 's'})`;
   const tones = `${r.wantedTones} wanted tone${r.wantedTones === 1 ? '' : 's'}`;
   return (
     textElement(24, 22, `Simulated capture at ${T.rate(r.rate)}: ${r.scenario}`, { 'font-size': 14, 'font-weight': 'bold' }) +
-    textElement(24, 40, `rate ${T.rate(r.rate)}; ${r.samples} samples, bin width ${T.frequency(r.binWidth)}; ${r.window.name} window; ${tones}`, { 'font-size': 11 }) +
+    textElement(
+      24,
+      40,
+      `rate ${T.rate(r.rate)}; ${r.samples} samples, bin width ${T.frequency(r.binWidth)}; ${r.window.name} window; ${tones}`,
+      { 'font-size': 11 },
+    ) +
     textElement(24, 56, `Verdict: ${verdict}.`, { 'font-size': 11, 'font-weight': r.consistent ? undefined : 'bold' }) +
-    textElement(24, 72, 'Labels: the check of the plan each predicted line belongs to, over its marker at the plan level.', { 'font-size': SMALL, 'font-style': 'italic' })
+    textElement(24, 72, 'Labels: the check of the plan each predicted line belongs to, over its marker at the plan level.', {
+      'font-size': SMALL,
+      'font-style': 'italic',
+    })
   );
 }
 
@@ -147,7 +198,17 @@ function wantedImage(r: VerifyResult, x: Scale, top: number, bottom: number): st
     const lo = Math.max(0, a);
     const hi = Math.min(half, b);
     if (!(hi > lo)) return;
-    parts.push(element('rect', { x: x.at(lo), y: top, width: Math.max(x.at(hi) - x.at(lo), 1.5), height: bottom - top, fill, stroke: outline ? '#1f4e79' : undefined, 'stroke-width': outline ? 1.2 : undefined }));
+    parts.push(
+      element('rect', {
+        x: x.at(lo),
+        y: top,
+        width: Math.max(x.at(hi) - x.at(lo), 1.5),
+        height: bottom - top,
+        fill,
+        stroke: outline ? '#1f4e79' : undefined,
+        'stroke-width': outline ? 1.2 : undefined,
+      }),
+    );
   };
   for (const [low, high] of r.wantedImage) {
     box(low - r.margin, low, FILL.guard, false);
@@ -159,7 +220,9 @@ function wantedImage(r: VerifyResult, x: Scale, top: number, bottom: number): st
     const text = 'wanted image';
     const w = textWidth(text, SMALL) + 8;
     const centre = Math.min(Math.max(x.at((first[0] + first[1]) / 2), x.range[0] + w / 2), x.range[1] - w / 2);
-    parts.push(element('rect', { x: centre - w / 2, y: bottom - 20, width: w, height: 14, fill: '#fff', stroke: '#1f4e79', 'stroke-width': 0.8 }));
+    parts.push(
+      element('rect', { x: centre - w / 2, y: bottom - 20, width: w, height: 14, fill: '#fff', stroke: '#1f4e79', 'stroke-width': 0.8 }),
+    );
     parts.push(textElement(centre, bottom - 9, text, { 'text-anchor': 'middle', 'font-size': SMALL, 'font-weight': 'bold' }));
   }
   return element('g', { class: 'wanted' }, parts.join(''));
@@ -180,17 +243,28 @@ function levelLine(at: number, text: string, dash: string, end: 'start' | 'end')
 /** A predicted line: a triangle pointing down at the plan level, open when its judgement agrees, filled when it contradicts. */
 function predictionMarker(filled: boolean, cx: number, cy: number): string {
   const s = 4.5;
-  return element('path', { d: `M${cx - s} ${cy - s}L${cx + s} ${cy - s}L${cx} ${cy + s * 0.6}Z`, fill: filled ? '#000' : '#fff', stroke: '#000', 'stroke-width': 1.1 });
+  return element('path', {
+    d: `M${cx - s} ${cy - s}L${cx + s} ${cy - s}L${cx} ${cy + s * 0.6}Z`,
+    fill: filled ? '#000' : '#fff',
+    stroke: '#000',
+    'stroke-width': 1.1,
+  });
 }
 
 /** A measured peak no line of the plan accounts for: an open diamond. */
 function unlistedMarker(cx: number, cy: number): string {
   const s = 4.5;
-  return element('path', { d: `M${cx} ${cy - s}L${cx + s} ${cy}L${cx} ${cy + s}L${cx - s} ${cy}Z`, fill: '#fff', stroke: '#000', 'stroke-width': 1.2 });
+  return element('path', {
+    d: `M${cx} ${cy - s}L${cx + s} ${cy}L${cx} ${cy + s}L${cx - s} ${cy}Z`,
+    fill: '#fff',
+    stroke: '#000',
+    'stroke-width': 1.2,
+  });
 }
 
 function legendEntries(r: VerifyResult, intrusionBins: ReadonlySet<number>): LegendEntry[] {
-  const line = (dash: string | undefined, width: number) => (cx: number, cy: number) => element('line', { x1: cx - 11, y1: cy, x2: cx + 11, y2: cy, stroke: '#000', 'stroke-width': width, 'stroke-dasharray': dash });
+  const line = (dash: string | undefined, width: number) => (cx: number, cy: number) =>
+    element('line', { x1: cx - 11, y1: cy, x2: cx + 11, y2: cy, stroke: '#000', 'stroke-width': width, 'stroke-dasharray': dash });
   const unlisted = r.unlisted.filter((u) => !intrusionBins.has(u.bin)).length;
   return [
     { swatch: line(undefined, 0.8), text: 'measured (max-hold, one column per pixel)' },
@@ -199,7 +273,10 @@ function legendEntries(r: VerifyResult, intrusionBins: ReadonlySet<number>): Leg
     { swatch: line('8 3 2 3', 1), text: 'threshold' },
     { swatch: line('4 3', 1), text: 'peak floor' },
     { swatch: (cx, cy) => predictionMarker(false, cx, cy), text: `predicted line (${r.predictions.length})` },
-    { swatch: (cx, cy) => predictionMarker(true, cx, cy), text: `predicted, contradicts the plan (${r.predictions.filter(contradicts).length})` },
+    {
+      swatch: (cx, cy) => predictionMarker(true, cx, cy),
+      text: `predicted, contradicts the plan (${r.predictions.filter(contradicts).length})`,
+    },
     { swatch: unlistedMarker, text: `unlisted peak (${unlisted})` },
     { swatch: failMarker, text: `intrusion into the margin (${r.intrusions.length})` },
   ];
@@ -209,7 +286,10 @@ function legendEntries(r: VerifyResult, intrusionBins: ReadonlySet<number>): Leg
 function peakList(r: VerifyResult, intrusionBins: ReadonlySet<number>, left: number, top: number): { markup: string; height: number } {
   const rows: Array<{ row: PeakRow; intrusion: boolean }> = [
     ...r.intrusions.map((row) => ({ row, intrusion: true })),
-    ...r.unlisted.filter((u) => !intrusionBins.has(u.bin)).sort((a, b) => b.level - a.level).map((row) => ({ row, intrusion: false })),
+    ...r.unlisted
+      .filter((u) => !intrusionBins.has(u.bin))
+      .sort((a, b) => b.level - a.level)
+      .map((row) => ({ row, intrusion: false })),
   ];
   if (rows.length === 0) return { markup: '', height: 0 };
   const step = 14;
@@ -227,7 +307,12 @@ function peakList(r: VerifyResult, intrusionBins: ReadonlySet<number>, left: num
   });
   let height = shown.length * step;
   if (rows.length > shown.length) {
-    parts.push(textElement(left + 18, top + height + 9.5, `and ${rows.length - shown.length} more (see the table or --json)`, { 'font-size': SMALL, 'font-style': 'italic' }));
+    parts.push(
+      textElement(left + 18, top + height + 9.5, `and ${rows.length - shown.length} more (see the table or --json)`, {
+        'font-size': SMALL,
+        'font-style': 'italic',
+      }),
+    );
     height += step;
   }
   return { markup: element('g', { class: 'peaks' }, parts.join('')), height };

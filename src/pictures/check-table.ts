@@ -42,8 +42,16 @@ export function checkTable(checks: readonly ReportedCheck[], left: number, top: 
   const parts: string[] = [];
   const line = (y: number) => element('line', { x1: left, y1: y, x2: left + 880, y2: y, stroke: '#000', 'stroke-width': 0.6 });
   const row = (y: number, cells: readonly string[], bold: boolean) =>
-    COLUMNS.forEach((col, i) => parts.push(textElement(left + col.at, y, cells[i]!, { 'text-anchor': col.align, 'font-size': FONT, 'font-weight': bold ? 'bold' : undefined })));
-  row(top + FONT, COLUMNS.map((c) => c.title), true);
+    COLUMNS.forEach((col, i) =>
+      parts.push(
+        textElement(left + col.at, y, cells[i]!, { 'text-anchor': col.align, 'font-size': FONT, 'font-weight': bold ? 'bold' : undefined }),
+      ),
+    );
+  row(
+    top + FONT,
+    COLUMNS.map((c) => c.title),
+    true,
+  );
   parts.push(line(top + ROW - 1));
   checks.forEach((check, index) => {
     const cells = COLUMNS.map((col) => col.cell(check, index + 1));

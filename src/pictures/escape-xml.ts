@@ -1,6 +1,7 @@
 /** Characters XML 1.0 does not allow at all (C0 controls but tab, LF, CR; U+FFFE, U+FFFF; lone surrogates), and DEL and the C1 controls, which it discourages. */
-// eslint-disable-next-line no-control-regex -- finding control characters is the point
-const NOT_XML = /[\u0000-\u0008\u000B\u000C\u000E-\u001F\u007F-\u009F\uFFFE\uFFFF]|[\uD800-\uDBFF](?![\uDC00-\uDFFF])|(?<![\uD800-\uDBFF])[\uDC00-\uDFFF]/g;
+const NOT_XML =
+  // eslint-disable-next-line no-control-regex -- finding control characters is the point
+  /[\u0000-\u0008\u000B\u000C\u000E-\u001F\u007F-\u009F\uFFFE\uFFFF]|[\uD800-\uDBFF](?![\uDC00-\uDFFF])|(?<![\uD800-\uDBFF])[\uDC00-\uDFFF]/g;
 
 /**
  * Escapes text for XML character data and attribute values: &, <, >, " and '

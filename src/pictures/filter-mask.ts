@@ -70,12 +70,30 @@ export function filterMaskFigure(report: PlanReport, candidateLabel: string): Fi
   const parts: string[] = [heading(report, candidate)];
   // The channel: the passband, shaded the full height.
   const channel = report.band;
-  parts.push(element('rect', { x: x.at(channel.low), y: plotTop, width: Math.max(x.at(channel.high) - x.at(channel.low), 1.5), height: PLOT_HEIGHT, fill: FILL.wanted, stroke: '#1f4e79', 'stroke-width': 1 }));
+  parts.push(
+    element('rect', {
+      x: x.at(channel.low),
+      y: plotTop,
+      width: Math.max(x.at(channel.high) - x.at(channel.low), 1.5),
+      height: PLOT_HEIGHT,
+      fill: FILL.wanted,
+      stroke: '#1f4e79',
+      'stroke-width': 1,
+    }),
+  );
   // Stop regions: from 0 dB up to the attenuation needed.
   const stops = mask.bands.map((band) => {
     const x0 = x.at(band.low);
     const w = Math.max(x.at(band.high) - x0, 1.5);
-    return element('rect', { x: x0, y: clampY(band.requiredDb), width: w, height: plotBottom - clampY(band.requiredDb), fill: FILL.blocked, stroke: '#8f2d1f', 'stroke-width': 1 });
+    return element('rect', {
+      x: x0,
+      y: clampY(band.requiredDb),
+      width: w,
+      height: plotBottom - clampY(band.requiredDb),
+      fill: FILL.blocked,
+      stroke: '#8f2d1f',
+      'stroke-width': 1,
+    });
   });
   parts.push(element('g', { class: 'stop-regions' }, stops.join('')));
   const curve = filterCurve(report, x, y, span);
@@ -84,14 +102,40 @@ export function filterMaskFigure(report: PlanReport, candidateLabel: string): Fi
   for (const band of mask.bands) {
     const x0 = x.at(band.low);
     const w = Math.max(x.at(band.high) - x0, 1.5);
-    parts.push(element('rect', { x: x0, y: clampY(band.givenDb) - 1.5, width: w, height: 3, fill: band.marginDb >= 0 ? '#000' : '#fff', stroke: '#000', 'stroke-width': 1 }));
+    parts.push(
+      element('rect', {
+        x: x0,
+        y: clampY(band.givenDb) - 1.5,
+        width: w,
+        height: 3,
+        fill: band.marginDb >= 0 ? '#000' : '#fff',
+        stroke: '#000',
+        'stroke-width': 1,
+      }),
+    );
   }
   const labels: string[] = [];
   for (const p of placed) {
     const baseline = 64 + (p.row + 1) * LABEL_ROW - 2;
     const at = x.at((p.item.low + p.item.high) / 2);
-    labels.push(element('line', { x1: at, y1: baseline + 2, x2: at, y2: Math.min(clampY(p.item.givenDb), clampY(p.item.requiredDb)) - 2, stroke: '#555', 'stroke-width': 0.5, 'stroke-dasharray': '1 2' }));
-    labels.push(textElement(p.x, baseline, withMinus(p.text), { 'text-anchor': 'middle', 'font-size': SMALL, 'font-weight': p.item.marginDb < 0 ? 'bold' : undefined }));
+    labels.push(
+      element('line', {
+        x1: at,
+        y1: baseline + 2,
+        x2: at,
+        y2: Math.min(clampY(p.item.givenDb), clampY(p.item.requiredDb)) - 2,
+        stroke: '#555',
+        'stroke-width': 0.5,
+        'stroke-dasharray': '1 2',
+      }),
+    );
+    labels.push(
+      textElement(p.x, baseline, withMinus(p.text), {
+        'text-anchor': 'middle',
+        'font-size': SMALL,
+        'font-weight': p.item.marginDb < 0 ? 'bold' : undefined,
+      }),
+    );
   }
   parts.push(element('g', { class: 'margins' }, labels.join('')));
   const required = `needed ${trimmed(mask.requiredDb, 4)} dB`;
@@ -99,7 +143,15 @@ export function filterMaskFigure(report: PlanReport, candidateLabel: string): Fi
   parts.push(element('rect', { x: LEFT + 2, y: clampY(mask.requiredDb) - 14, width: w, height: 12, fill: '#fff', opacity: 0.9 }));
   parts.push(textElement(LEFT + 2 + w / 2, clampY(mask.requiredDb) - 5, required, { 'text-anchor': 'middle', 'font-size': SMALL }));
 
-  parts.push(verticalAxis(y, levelTicks.values.map((v) => ({ value: v, label: trimmed(v, 6) })), LEFT, 'attenuation (dB)', WIDTH - RIGHT));
+  parts.push(
+    verticalAxis(
+      y,
+      levelTicks.values.map((v) => ({ value: v, label: trimmed(v, 6) })),
+      LEFT,
+      'attenuation (dB)',
+      WIDTH - RIGHT,
+    ),
+  );
   const unit = frequencyUnit(span);
   const ticks = linearTicks(0, span, 10).values.map((v) => ({ value: v, label: inUnit(v, unit) }));
   parts.push(horizontalAxis(x, ticks, plotBottom, `input frequency (${unit.unit}), up to the converter's input bandwidth`));
@@ -107,8 +159,16 @@ export function filterMaskFigure(report: PlanReport, candidateLabel: string): Fi
     [
       { swatch: boxSwatch(FILL.blocked), text: `alias band: the filter must give ${trimmed(mask.requiredDb, 4)} dB or more` },
       { swatch: boxSwatch(FILL.wanted), text: 'channel (passband)' },
-      { swatch: (cx, cy) => element('line', { x1: cx - 11, y1: cy, x2: cx + 11, y2: cy, stroke: '#000', 'stroke-width': 2 }), text: report.afterRateInputs?.filter ? `the scenario's filter${curve.clipped ? ` (drawn up to ${trimmed(top, 6)} dB)` : ''}` : 'no filter stated (0 dB)' },
-      { swatch: (cx, cy) => element('rect', { x: cx - 11, y: cy - 1.5, width: 22, height: 3, fill: '#000', stroke: '#000' }), text: 'its least attenuation over a band (open: short)' },
+      {
+        swatch: (cx, cy) => element('line', { x1: cx - 11, y1: cy, x2: cx + 11, y2: cy, stroke: '#000', 'stroke-width': 2 }),
+        text: report.afterRateInputs?.filter
+          ? `the scenario's filter${curve.clipped ? ` (drawn up to ${trimmed(top, 6)} dB)` : ''}`
+          : 'no filter stated (0 dB)',
+      },
+      {
+        swatch: (cx, cy) => element('rect', { x: cx - 11, y: cy - 1.5, width: 22, height: 3, fill: '#000', stroke: '#000' }),
+        text: 'its least attenuation over a band (open: short)',
+      },
     ],
     24,
     plotBottom + 56,
@@ -139,12 +199,24 @@ function marginText(band: MaskBand): string {
 
 function heading(report: PlanReport, c: ReportedCandidate): string {
   const mask = c.afterRate!.mask;
-  const level = mask.levelStated ? `out-of-band level ${trimmed(mask.outOfBandLevel, 4)} dBFS (stated)` : 'out-of-band level not stated: full scale assumed, reported only';
-  const worst = mask.worst ? `; least margin ${trimmed(mask.worst.marginDb, 4)} dB at ${formatFrequency(mask.worst.low, 6)} – ${formatFrequency(mask.worst.high, 6)}` : '';
+  const level = mask.levelStated
+    ? `out-of-band level ${trimmed(mask.outOfBandLevel, 4)} dBFS (stated)`
+    : 'out-of-band level not stated: full scale assumed, reported only';
+  const worst = mask.worst
+    ? `; least margin ${trimmed(mask.worst.marginDb, 4)} dB at ${formatFrequency(mask.worst.low, 6)} – ${formatFrequency(mask.worst.high, 6)}`
+    : '';
   return (
-    textElement(24, 22, `Anti-alias filter mask at ${c.label} (${formatFrequency(c.rate)}): ${report.scenario}`, { 'font-size': 14, 'font-weight': 'bold' }) +
+    textElement(24, 22, `Anti-alias filter mask at ${c.label} (${formatFrequency(c.rate)}): ${report.scenario}`, {
+      'font-size': 14,
+      'font-weight': 'bold',
+    }) +
     textElement(24, 40, withMinus(`${level}; threshold ${trimmed(mask.threshold, 4)} dBFS${worst}`), { 'font-size': 11 }) +
-    textElement(24, 56, 'Alias bands: every input range that lands on the channel (widened by the required margin) at this rate and its ±ppm. Labels: margin, dB.', { 'font-size': SMALL, 'font-style': 'italic' })
+    textElement(
+      24,
+      56,
+      'Alias bands: every input range that lands on the channel (widened by the required margin) at this rate and its ±ppm. Labels: margin, dB.',
+      { 'font-size': SMALL, 'font-style': 'italic' },
+    )
   );
 }
 
@@ -161,5 +233,15 @@ function filterCurve(report: PlanReport, x: Scale, y: Scale, span: number): { ma
     clipped ||= attenuation > top;
     points.push([x.at(f), y.at(Math.min(attenuation, top))]);
   }
-  return { markup: element('polyline', { class: 'filter-curve', points: pointList(points), fill: 'none', stroke: '#000', 'stroke-width': 2, 'stroke-linejoin': 'round' }), clipped };
+  return {
+    markup: element('polyline', {
+      class: 'filter-curve',
+      points: pointList(points),
+      fill: 'none',
+      stroke: '#000',
+      'stroke-width': 2,
+      'stroke-linejoin': 'round',
+    }),
+    clipped,
+  };
 }

@@ -18,7 +18,10 @@ const POWERS: Readonly<Record<string, number>> = { Hz: 0, kHz: 3, MHz: 6, GHz: 9
  * @example frequencyUnit(250e6) // { unit: 'MHz', power: 6 }
  */
 export function frequencyUnit(largest: number): FrequencyUnit {
-  const unit = formatFrequency(Math.abs(largest) || 1).split(' ').pop() ?? 'Hz';
+  const unit =
+    formatFrequency(Math.abs(largest) || 1)
+      .split(' ')
+      .pop() ?? 'Hz';
   return { unit, power: POWERS[unit] ?? 0 };
 }
 

@@ -45,7 +45,12 @@ export function textWidth(text: string, fontSize: number): number {
  * @param fontSize px
  * @returns the placed labels; the ones missing were thinned out
  */
-export function packLabels<T>(requests: readonly LabelRequest<T>[], rows: number, bounds: readonly [number, number], fontSize: number): PlacedLabel<T>[] {
+export function packLabels<T>(
+  requests: readonly LabelRequest<T>[],
+  rows: number,
+  bounds: readonly [number, number],
+  fontSize: number,
+): PlacedLabel<T>[] {
   const taken: Array<Array<readonly [number, number]>> = Array.from({ length: rows }, () => []);
   const placed: PlacedLabel<T>[] = [];
   for (const request of requests) {

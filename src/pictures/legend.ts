@@ -43,5 +43,16 @@ export function legendRows(entries: readonly LegendEntry[], left: number, top: n
  * @param dashed outline dashed (for things drawn dashed in the plot)
  */
 export function boxSwatch(fill: string, dashed = false): (x: number, y: number) => string {
-  return (x, y) => element('rect', { x: x - SWATCH / 2, y: y - 6, width: SWATCH, height: 12, fill: '#fff' }) + element('rect', { x: x - SWATCH / 2, y: y - 6, width: SWATCH, height: 12, fill, stroke: '#000', 'stroke-width': 1, 'stroke-dasharray': dashed ? '3 2' : undefined });
+  return (x, y) =>
+    element('rect', { x: x - SWATCH / 2, y: y - 6, width: SWATCH, height: 12, fill: '#fff' }) +
+    element('rect', {
+      x: x - SWATCH / 2,
+      y: y - 6,
+      width: SWATCH,
+      height: 12,
+      fill,
+      stroke: '#000',
+      'stroke-width': 1,
+      'stroke-dasharray': dashed ? '3 2' : undefined,
+    });
 }

@@ -36,7 +36,13 @@ export function tickValue(k: number, step: TickStep): number {
  */
 export function linearTicks(low: number, high: number, count: number): Ticks {
   // A bound within 1e-9 of a step beyond a multiple still counts as that multiple.
-  return ticksBetween(low, high, count, (q) => Math.ceil(q - 1e-9), (q) => Math.floor(q + 1e-9));
+  return ticksBetween(
+    low,
+    high,
+    count,
+    (q) => Math.ceil(q - 1e-9),
+    (q) => Math.floor(q + 1e-9),
+  );
 }
 
 /**
@@ -48,13 +54,27 @@ export function linearTicks(low: number, high: number, count: number): Ticks {
  * @example coveringTicks(-186, 0, 10).values // [-200, -180, -160, -140, -120, -100, -80, -60, -40, -20, 0]
  */
 export function coveringTicks(low: number, high: number, count: number): Ticks {
-  return ticksBetween(low, high, count, (q) => Math.floor(q + 1e-9), (q) => Math.ceil(q - 1e-9), 1);
+  return ticksBetween(
+    low,
+    high,
+    count,
+    (q) => Math.floor(q + 1e-9),
+    (q) => Math.ceil(q - 1e-9),
+    1,
+  );
 }
 
 /** Most ticks one axis gets; a step that would give more (a span tiny beside its values) is coarsened. */
 const MOST_TICKS = 200;
 
-function ticksBetween(low: number, high: number, count: number, firstOf: (q: number) => number, lastOf: (q: number) => number, leastIntervals = 0): Ticks {
+function ticksBetween(
+  low: number,
+  high: number,
+  count: number,
+  firstOf: (q: number) => number,
+  lastOf: (q: number) => number,
+  leastIntervals = 0,
+): Ticks {
   let step = niceStep((high - low) / Math.max(1, count) || Math.abs(high) || 1);
   for (;;) {
     const size = tickValue(1, step);
@@ -65,7 +85,12 @@ function ticksBetween(low: number, high: number, count: number, firstOf: (q: num
       const multiples = Array.from({ length: Math.max(0, last - first + 1) }, (_, i) => first + i);
       return { step, multiples, values: multiples.map((k) => tickValue(k, step)) };
     }
-    step = step.mantissa === 1 ? { mantissa: 2, exponent: step.exponent } : step.mantissa === 2 ? { mantissa: 5, exponent: step.exponent } : { mantissa: 1, exponent: step.exponent + 1 };
+    step =
+      step.mantissa === 1
+        ? { mantissa: 2, exponent: step.exponent }
+        : step.mantissa === 2
+          ? { mantissa: 5, exponent: step.exponent }
+          : { mantissa: 1, exponent: step.exponent + 1 };
   }
 }
 

@@ -29,7 +29,8 @@ function hatch(id: string, spacing: number, angle: number, stroke: string, width
   return element(
     'pattern',
     { id, width: spacing, height: spacing, patternUnits: 'userSpaceOnUse', patternTransform: `rotate(${angle})` },
-    element('rect', { width: spacing, height: spacing, fill: '#fff' }) + element('line', { x1: 0, y1: 0, x2: 0, y2: spacing, stroke, 'stroke-width': width }),
+    element('rect', { width: spacing, height: spacing, fill: '#fff' }) +
+      element('line', { x1: 0, y1: 0, x2: 0, y2: spacing, stroke, 'stroke-width': width }),
   );
 }
 

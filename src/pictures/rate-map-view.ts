@@ -38,14 +38,23 @@ export function rateMapView(report: PlanReport): RateMapView {
   const inSearch = (r: number) => r >= report.search.minRate && r <= report.search.maxRate;
   const rates = [
     ...windows.flatMap((w) => [w.minRate, Math.min(w.maxRate, report.search.maxRate)]),
-    ...report.candidates.filter((c) => (c.zone === null || !report.windows.some((w) => w.zone === c.zone)) && inSearch(c.rate) && (all.length <= MOST_LANES || nearRun(c.rate, windows))).map((c) => c.rate),
+    ...report.candidates
+      .filter(
+        (c) =>
+          (c.zone === null || !report.windows.some((w) => w.zone === c.zone)) &&
+          inSearch(c.rate) &&
+          (all.length <= MOST_LANES || nearRun(c.rate, windows)),
+      )
+      .map((c) => c.rate),
   ];
   if (rates.length === 0) rates.push(report.search.minRate, report.search.maxRate);
   let low = Math.min(...rates);
   let high = Math.max(...rates);
   if (high === low) [low, high] = [low * 0.95, high * 1.05];
   const log = low > 0 && high / low >= LOG_RATIO;
-  const [paddedLow, paddedHigh] = log ? [low / (high / low) ** 0.03, high * (high / low) ** 0.03] : [low - 0.03 * (high - low), high + 0.03 * (high - low)];
+  const [paddedLow, paddedHigh] = log
+    ? [low / (high / low) ** 0.03, high * (high / low) ** 0.03]
+    : [low - 0.03 * (high - low), high + 0.03 * (high - low)];
   return {
     windows,
     hidden: all.length - shownZones.size,

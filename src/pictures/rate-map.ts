@@ -60,7 +60,14 @@ export function rateMapFigure(report: PlanReport): Figure {
   const inAxis = (rate: number) => rate >= view.low && rate <= view.high;
   const zonesWithWindow = new Set(report.windows.map((w) => w.zone));
   const lanes: Lane[] = view.windows.map((w) =>
-    lane(`zone ${w.zone}${w.inverted ? ' (inv)' : ''}`, w, report.candidates.filter((c) => c.zone === w.zone && inAxis(c.rate)), blockedGroups(report, w.zone, keys), scale, report),
+    lane(
+      `zone ${w.zone}${w.inverted ? ' (inv)' : ''}`,
+      w,
+      report.candidates.filter((c) => c.zone === w.zone && inAxis(c.rate)),
+      blockedGroups(report, w.zone, keys),
+      scale,
+      report,
+    ),
   );
   const others = report.candidates.filter((c) => (c.zone === null || !zonesWithWindow.has(c.zone)) && inAxis(c.rate));
   if (others.length > 0) lanes.push(lane('outside windows', null, others, [], scale, report));
@@ -73,7 +80,12 @@ export function rateMapFigure(report: PlanReport): Figure {
     y += l.height;
   }
   if (lanes.length === 0) {
-    parts.push(textElement((LEFT + WIDTH - RIGHT) / 2, y + 24, 'No legal window inside the search range', { 'text-anchor': 'middle', 'font-size': 12 }));
+    parts.push(
+      textElement((LEFT + WIDTH - RIGHT) / 2, y + 24, 'No legal window inside the search range', {
+        'text-anchor': 'middle',
+        'font-size': 12,
+      }),
+    );
     y += 48;
   }
   const unit = frequencyUnit(view.high);
@@ -96,11 +108,7 @@ export function rateMapFigure(report: PlanReport): Figure {
   );
   parts.push(legend.markup);
   y += legend.height + 8;
-  const notes = [
-    ...candidateLines(report),
-    ...keyLines(keys),
-    ...viewNotes(view, report, drawnCandidates),
-  ];
+  const notes = [...candidateLines(report), ...keyLines(keys), ...viewNotes(view, report, drawnCandidates)];
   for (const line of notes) {
     const indent = line.startsWith('  ') ? 16 : 0;
     parts.push(textElement(LEFT - 100 + indent, y + LEGEND_FONT, line.trim(), { 'font-size': LEGEND_FONT }));
@@ -123,10 +131,20 @@ export function rateMapSvg(report: PlanReport): string {
 function heading(report: PlanReport): string {
   const { band, guard, search } = report;
   const sub = `wanted ${T.extent(band.low, band.high)}, guards ${T.frequency(guard.low)} below / ${T.frequency(guard.high)} above; rates searched ${T.extent(search.minRate, search.maxRate)}`;
-  return textElement(LEFT - 100, 22, `Sampling-rate map: ${report.scenario}`, { 'font-size': 14, 'font-weight': 'bold' }) + textElement(LEFT - 100, 40, sub, { 'font-size': 11 });
+  return (
+    textElement(LEFT - 100, 22, `Sampling-rate map: ${report.scenario}`, { 'font-size': 14, 'font-weight': 'bold' }) +
+    textElement(LEFT - 100, 40, sub, { 'font-size': 11 })
+  );
 }
 
-function lane(title: string, window: RateWindow | null, candidates: readonly ReportedCandidate[], groups: readonly BlockedGroup[], scale: Scale, report: PlanReport): Lane {
+function lane(
+  title: string,
+  window: RateWindow | null,
+  candidates: readonly ReportedCandidate[],
+  groups: readonly BlockedGroup[],
+  scale: Scale,
+  report: PlanReport,
+): Lane {
   const plot = scale.range;
   const placedCandidates = packLabels(
     // A label with no room falls back to the candidate's rank, the number every table gives it; the notes list them.
@@ -153,7 +171,10 @@ function lane(title: string, window: RateWindow | null, candidates: readonly Rep
     candidates: placedCandidates,
     markers: candidates,
     blocked: placedBlocked,
-    thinned: groups.filter((g) => !placedBlocked.some((p) => p.item === g)).flatMap((g) => g.keys).sort((a, b) => a - b),
+    thinned: groups
+      .filter((g) => !placedBlocked.some((p) => p.item === g))
+      .flatMap((g) => g.keys)
+      .sort((a, b) => a - b),
     height: Math.max(candidateRows * CANDIDATE_ROW + BODY + blockedRows * BLOCKED_ROW + 10, 34),
   };
 }
@@ -169,21 +190,35 @@ function drawLane(l: Lane, top: number, scale: Scale, report: PlanReport, index:
   const bodyTop = top + 4 + candidateRows * CANDIDATE_ROW;
   const mid = bodyTop + BODY / 2;
   parts.push(textElement(LEFT - 10, mid + 4, l.title, { 'text-anchor': 'end', 'font-size': 11, 'font-weight': 'bold' }));
-  if (l.thinned.length > 0) parts.push(textElement(LEFT - 10, mid + 16, `not marked: ${l.thinned.join(', ')}`, { 'text-anchor': 'end', 'font-size': 8.5, 'font-style': 'italic' }));
+  if (l.thinned.length > 0)
+    parts.push(
+      textElement(LEFT - 10, mid + 16, `not marked: ${l.thinned.join(', ')}`, {
+        'text-anchor': 'end',
+        'font-size': 8.5,
+        'font-style': 'italic',
+      }),
+    );
   const w = l.window;
   if (w) {
     const [a, b] = [scale.at(w.minRate), scale.at(Math.min(w.maxRate, report.search.maxRate))];
-    const box = (x0: number, x1: number, fill: string) => element('rect', { x: x0, y: bodyTop, width: Math.max(x1 - x0, 1.5), height: BODY, fill });
+    const box = (x0: number, x1: number, fill: string) =>
+      element('rect', { x: x0, y: bodyTop, width: Math.max(x1 - x0, 1.5), height: BODY, fill });
     parts.push(box(a, b, w.inverted ? FILL.inverted : '#fff'));
-    for (const g of report.blocked.filter((r) => r.zone === w.zone)) parts.push(box(scale.at(g.minRate), scale.at(g.maxRate), FILL.blocked));
-    for (const f of report.feasible.filter((r) => r.zone === w.zone)) parts.push(box(scale.at(f.minRate), scale.at(f.maxRate), FILL.feasible));
-    parts.push(element('rect', { x: a, y: bodyTop, width: Math.max(b - a, 1.5), height: BODY, fill: 'none', stroke: '#000', 'stroke-width': 1 }));
+    for (const g of report.blocked.filter((r) => r.zone === w.zone))
+      parts.push(box(scale.at(g.minRate), scale.at(g.maxRate), FILL.blocked));
+    for (const f of report.feasible.filter((r) => r.zone === w.zone))
+      parts.push(box(scale.at(f.minRate), scale.at(f.maxRate), FILL.feasible));
+    parts.push(
+      element('rect', { x: a, y: bodyTop, width: Math.max(b - a, 1.5), height: BODY, fill: 'none', stroke: '#000', 'stroke-width': 1 }),
+    );
   } else {
     parts.push(element('line', { x1: LEFT, y1: mid, x2: WIDTH - RIGHT, y2: mid, stroke: '#777', 'stroke-dasharray': '2 3' }));
   }
   for (const p of l.blocked) {
     const rowTop = bodyTop + BODY + 3 + p.row * BLOCKED_ROW;
-    const d = p.item.ranges.map(([min, max]) => `M${px(scale.at(min))} ${px(rowTop - 2)}V${px(rowTop + 1)}H${px(scale.at(max))}V${px(rowTop - 2)}`).join('');
+    const d = p.item.ranges
+      .map(([min, max]) => `M${px(scale.at(min))} ${px(rowTop - 2)}V${px(rowTop + 1)}H${px(scale.at(max))}V${px(rowTop - 2)}`)
+      .join('');
     parts.push(element('path', { d, fill: 'none', stroke: '#8f2d1f', 'stroke-width': 1 }));
     parts.push(textElement(p.x, rowTop + 10, p.text, { 'text-anchor': 'middle', 'font-size': SMALL }));
     // The other brackets of the same checks carry the key number where it fits clear of the label.
@@ -193,15 +228,19 @@ function drawLane(l: Lane, top: number, scale: Scale, report: PlanReport, index:
       const [a, b] = [scale.at(min), scale.at(max)];
       const centre = (a + b) / 2;
       const clear = centre + keyWidth / 2 + 4 < p.x - p.width / 2 || centre - keyWidth / 2 - 4 > p.x + p.width / 2;
-      if (b - a >= keyWidth + 4 && clear) parts.push(textElement(centre, rowTop + 10, key, { 'text-anchor': 'middle', 'font-size': SMALL }));
+      if (b - a >= keyWidth + 4 && clear)
+        parts.push(textElement(centre, rowTop + 10, key, { 'text-anchor': 'middle', 'font-size': SMALL }));
     }
   }
   for (const p of l.candidates) {
     const baseline = bodyTop - 3 - (candidateRows - 1 - p.row) * CANDIDATE_ROW;
     const x = scale.at(p.item.rate);
-    if (Math.abs(p.x - x) > 1 || p.row < candidateRows - 1) parts.push(element('line', { x1: x, y1: baseline + 1, x2: x, y2: mid - 4, stroke: '#000', 'stroke-width': 0.6 }));
+    if (Math.abs(p.x - x) > 1 || p.row < candidateRows - 1)
+      parts.push(element('line', { x1: x, y1: baseline + 1, x2: x, y2: mid - 4, stroke: '#000', 'stroke-width': 0.6 }));
     const best = p.item.label === report.best;
-    parts.push(textElement(p.x, baseline - 1, p.text, { 'text-anchor': 'middle', 'font-size': SMALL, 'font-weight': best ? 'bold' : undefined }));
+    parts.push(
+      textElement(p.x, baseline - 1, p.text, { 'text-anchor': 'middle', 'font-size': SMALL, 'font-weight': best ? 'bold' : undefined }),
+    );
   }
   for (const c of l.markers) parts.push(candidateMarker(c.pass, scale.at(c.rate), mid));
   return element('g', { class: 'lane' }, parts.join(''));
@@ -211,23 +250,33 @@ function drawLane(l: Lane, top: number, scale: Scale, report: PlanReport, index:
 function candidateLines(report: PlanReport): string[] {
   if (report.candidates.length === 0) return [];
   const phrases = report.candidates.map((c, i) => `${i + 1} = ${c.label} (${T.rate(c.rate)}, ${c.pass ? 'passes' : 'fails'})`);
-  return ['Candidates by rank (a number stands in where a label has no room):', ...wrapPhrases(phrases, WIDTH - LEFT - RIGHT + 80, LEGEND_FONT, ';   ').map((line) => `    ${line}`)];
+  return [
+    'Candidates by rank (a number stands in where a label has no room):',
+    ...wrapPhrases(phrases, WIDTH - LEFT - RIGHT + 80, LEGEND_FONT, ';   ').map((line) => `    ${line}`),
+  ];
 }
 
 function keyLines(keys: ReadonlyMap<string, number>): string[] {
   if (keys.size === 0) return ['Blocking checks: none blocks a rate inside the windows.'];
   const phrases = [...keys].map(([label, key]) => `${key} = ${label}`);
-  return ['Blocking checks, by key number (a key stands in where a label has no room):', ...wrapPhrases(phrases, WIDTH - LEFT - RIGHT + 80, LEGEND_FONT, ';   ').map((line) => `    ${line}`)];
+  return [
+    'Blocking checks, by key number (a key stands in where a label has no room):',
+    ...wrapPhrases(phrases, WIDTH - LEFT - RIGHT + 80, LEGEND_FONT, ';   ').map((line) => `    ${line}`),
+  ];
 }
 
 function viewNotes(view: ReturnType<typeof rateMapView>, report: PlanReport, drawnCandidates: number): string[] {
   const notes: string[] = [];
   if (view.hidden > 0) {
     const zones = view.windows.map((w) => w.zone);
-    notes.push(`Zones ${Math.min(...zones)}–${Math.max(...zones)} drawn; ${view.hidden} more window${view.hidden > 1 ? 's' : ''} inside the search range ${view.hidden > 1 ? 'are' : 'is'} not (see the table or JSON).`);
+    notes.push(
+      `Zones ${Math.min(...zones)}–${Math.max(...zones)} drawn; ${view.hidden} more window${view.hidden > 1 ? 's' : ''} inside the search range ${view.hidden > 1 ? 'are' : 'is'} not (see the table or JSON).`,
+    );
   }
   const missing = report.candidates.length - drawnCandidates;
   if (missing > 0) notes.push(`${missing} candidate${missing > 1 ? 's' : ''} outside the drawn rates not marked.`);
-  notes.push(view.log ? 'Rate axis logarithmic: the drawn span is wide, so equal widths mean equal relative (ppm) widths.' : 'Rate axis linear.');
+  notes.push(
+    view.log ? 'Rate axis logarithmic: the drawn span is wide, so equal widths mean equal relative (ppm) widths.' : 'Rate axis linear.',
+  );
   return notes;
 }

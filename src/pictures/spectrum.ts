@@ -62,13 +62,26 @@ export function spectrumFigure(report: PlanReport, candidateLabel: string): Figu
   if (threshold !== null) parts.push(thresholdLine(threshold, y));
   parts.push(marks(candidate, x, plotTop, plotBottom));
   parts.push(labelLeaders(placed, x, y, bottom, top));
-  parts.push(verticalAxis(y, levelTicks.values.map((v) => ({ value: v, label: trimmed(v, 6) })), LEFT, 'level (dBFS)', WIDTH - RIGHT));
+  parts.push(
+    verticalAxis(
+      y,
+      levelTicks.values.map((v) => ({ value: v, label: trimmed(v, 6) })),
+      LEFT,
+      'level (dBFS)',
+      WIDTH - RIGHT,
+    ),
+  );
   const unit = frequencyUnit(half);
   const freqTicks = linearTicks(0, half, 8).values.map((v) => ({ value: v, label: inUnit(v, unit) }));
   parts.push(horizontalAxis(x, freqTicks, plotBottom, `frequency after sampling (${unit.unit})`));
   const below = legendAndTable(checks, plotBottom + 56);
   parts.push(below.markup);
-  return { width: WIDTH, height: Math.ceil(below.bottom + 12), title: `Spectrum after sampling at ${candidate.label}: ${report.scenario}`, body: parts.join('') };
+  return {
+    width: WIDTH,
+    height: Math.ceil(below.bottom + 12),
+    title: `Spectrum after sampling at ${candidate.label}: ${report.scenario}`,
+    body: parts.join(''),
+  };
 }
 
 /**
@@ -78,7 +91,12 @@ export function spectrumFigure(report: PlanReport, candidateLabel: string): Figu
  * blockers can compute to −250 dBFS) only squash the levels that matter; they
  * are drawn as stubs on the floor and keep their figures in the table below.
  */
-function levelAxis(checks: ReportedCandidate['checks']): { threshold: number | null; levelTicks: ReturnType<typeof coveringTicks>; bottom: number; top: number } {
+function levelAxis(checks: ReportedCandidate['checks']): {
+  threshold: number | null;
+  levelTicks: ReturnType<typeof coveringTicks>;
+  bottom: number;
+  top: number;
+} {
   const threshold = checks.length > 0 ? checks[0]!.level + checks[0]!.levelMargin : null;
   const levels = [...checks.map((c) => c.level).filter(Number.isFinite), ...(threshold === null ? [] : [threshold])];
   const floor = threshold === null ? -Infinity : threshold - 60;
@@ -88,12 +106,21 @@ function levelAxis(checks: ReportedCandidate['checks']): { threshold: number | n
 
 /** Labels above the plot, packed in rows: failing first, then blocking by slack, then the strongest of the rest. */
 function checkLabels(checks: ReportedCandidate['checks'], x: Scale, plotX: readonly [number, number]) {
-  const order = checks.map((c, i) => ({ c, key: i + 1 })).sort((a, b) => priority(a.c) - priority(b.c) || slack(a.c) - slack(b.c) || b.c.level - a.c.level);
+  const order = checks
+    .map((c, i) => ({ c, key: i + 1 }))
+    .sort((a, b) => priority(a.c) - priority(b.c) || slack(a.c) - slack(b.c) || b.c.level - a.c.level);
   return packLabels(
     order.flatMap(({ c, key }) => {
       const widest = [...c.alias].sort((p, q) => q[1] - q[0] - (p[1] - p[0]))[0];
       if (!widest) return [];
-      return [{ x: x.at((widest[0] + widest[1]) / 2), text: `${key} ${c.label}, ${T.level(c.level)} dBFS, ${T.frequency(c.margin)}`, short: String(key), item: { c, key, at: (widest[0] + widest[1]) / 2 } }];
+      return [
+        {
+          x: x.at((widest[0] + widest[1]) / 2),
+          text: `${key} ${c.label}, ${T.level(c.level)} dBFS, ${T.frequency(c.margin)}`,
+          short: String(key),
+          item: { c, key, at: (widest[0] + widest[1]) / 2 },
+        },
+      ];
     }),
     LABEL_ROWS,
     plotX,
@@ -106,7 +133,15 @@ function thresholdLine(threshold: number, y: Scale): string {
   const text = `blocking threshold ${T.level(threshold)} dBFS`;
   const w = textWidth(text, SMALL) + 6;
   return (
-    element('line', { x1: LEFT, y1: y.at(threshold), x2: WIDTH - RIGHT, y2: y.at(threshold), stroke: '#000', 'stroke-width': 1, 'stroke-dasharray': '8 3 2 3' }) +
+    element('line', {
+      x1: LEFT,
+      y1: y.at(threshold),
+      x2: WIDTH - RIGHT,
+      y2: y.at(threshold),
+      stroke: '#000',
+      'stroke-width': 1,
+      'stroke-dasharray': '8 3 2 3',
+    }) +
     element('rect', { x: WIDTH - RIGHT - 2 - w, y: y.at(threshold) + 2, width: w, height: 12, fill: '#fff', opacity: 0.9 }) +
     textElement(WIDTH - RIGHT - 2 - w / 2, y.at(threshold) + 11, text, { 'text-anchor': 'middle', 'font-size': SMALL })
   );
@@ -121,7 +156,11 @@ function labelLeaders(placed: ReturnType<typeof checkLabels>, x: Scale, y: Scale
       const at = x.at(p.item.at);
       return (
         element('line', { x1: at, y1: baseline + 2, x2: at, y2: barTop, stroke: '#555', 'stroke-width': 0.5, 'stroke-dasharray': '1 2' }) +
-        textElement(p.x, baseline, p.text, { 'text-anchor': 'middle', 'font-size': SMALL, 'font-weight': p.item.c.pass ? undefined : 'bold' })
+        textElement(p.x, baseline, p.text, {
+          'text-anchor': 'middle',
+          'font-size': SMALL,
+          'font-weight': p.item.c.pass ? undefined : 'bold',
+        })
       );
     })
     .join('');
@@ -180,8 +219,11 @@ function slack(c: ReportedCheck): number {
 }
 
 function heading(report: PlanReport, c: ReportedCandidate): string {
-  const zone = c.zone === null ? 'band straddles a zone edge' : `zone ${c.zone}${c.inverted ? ' (inverted)' : ''}, centre ${T.rate(c.center ?? 0)}`;
-  const verdict = c.pass ? `passes; worst margin ${T.frequency(c.worstMargin)} (${c.limitedBy})` : `FAILS; limited by ${c.limitedBy}, margin ${T.frequency(c.worstMargin)}`;
+  const zone =
+    c.zone === null ? 'band straddles a zone edge' : `zone ${c.zone}${c.inverted ? ' (inverted)' : ''}, centre ${T.rate(c.center ?? 0)}`;
+  const verdict = c.pass
+    ? `passes; worst margin ${T.frequency(c.worstMargin)} (${c.limitedBy})`
+    : `FAILS; limited by ${c.limitedBy}, margin ${T.frequency(c.worstMargin)}`;
   return (
     textElement(24, 22, `Spectrum after sampling at ${c.label}: ${report.scenario}`, { 'font-size': 14, 'font-weight': 'bold' }) +
     textElement(24, 40, `rate ${T.rate(c.rate)} ${T.tolerance(c.tolerancePpm)}; ${zone}; ${verdict}`, { 'font-size': 11 }) +
@@ -190,7 +232,13 @@ function heading(report: PlanReport, c: ReportedCandidate): string {
 }
 
 /** The wanted image and guards: fills (under the bars) and outlines with the label (over them). */
-function wantedImage(report: PlanReport, c: ReportedCandidate, x: ReturnType<typeof linearScale>, top: number, bottom: number): { fill: string; outline: string } {
+function wantedImage(
+  report: PlanReport,
+  c: ReportedCandidate,
+  x: ReturnType<typeof linearScale>,
+  top: number,
+  bottom: number,
+): { fill: string; outline: string } {
   const half = c.rate / 2;
   const fills: string[] = [];
   const outlines: string[] = [];
@@ -202,7 +250,9 @@ function wantedImage(report: PlanReport, c: ReportedCandidate, x: ReturnType<typ
   const label = (at: number, text: string) => {
     const w = textWidth(text, SMALL) + 8;
     const centre = Math.min(Math.max(at, x.range[0] + w / 2), x.range[1] - w / 2);
-    outlines.push(element('rect', { x: centre - w / 2, y: bottom - 20, width: w, height: 14, fill: '#fff', stroke: '#1f4e79', 'stroke-width': 0.8 }));
+    outlines.push(
+      element('rect', { x: centre - w / 2, y: bottom - 20, width: w, height: 14, fill: '#fff', stroke: '#1f4e79', 'stroke-width': 0.8 }),
+    );
     outlines.push(textElement(centre, bottom - 9, text, { 'text-anchor': 'middle', 'font-size': SMALL, 'font-weight': 'bold' }));
   };
   if (c.image) {
@@ -229,7 +279,13 @@ function bars(c: ReportedCheck, x: ReturnType<typeof linearScale>, y: ReturnType
     .map(([a, b]) => {
       const x0 = x.at(a);
       const w = Math.max(x.at(b) - x0, 2);
-      return element('rect', { x: x0 - (w > 2 ? 0 : 1), y: y.at(level), width: w, height: Math.max(y.at(bottom) - y.at(level), 1), ...style });
+      return element('rect', {
+        x: x0 - (w > 2 ? 0 : 1),
+        y: y.at(level),
+        width: w,
+        height: Math.max(y.at(bottom) - y.at(level), 1),
+        ...style,
+      });
     })
     .join('');
 }
@@ -247,5 +303,9 @@ function marks(c: ReportedCandidate, x: ReturnType<typeof linearScale>, top: num
       textElement(boxLeft + w / 2, top + 12, text, { 'text-anchor': 'middle', 'font-size': SMALL })
     );
   };
-  return element('g', { class: 'marks' }, mark(0, 'DC', 'start') + mark(quarter, `fs/4 = ${T.rate(quarter)}`, 'middle') + mark(half, 'fs/2', 'end'));
+  return element(
+    'g',
+    { class: 'marks' },
+    mark(0, 'DC', 'start') + mark(quarter, `fs/4 = ${T.rate(quarter)}`, 'middle') + mark(half, 'fs/2', 'end'),
+  );
 }

@@ -27,14 +27,16 @@ const SVG_NAMESPACE = 'http://www.w3.org/2000/svg';
  */
 export function svgDocument(figure: Figure): string {
   const { width, height } = figure;
-  return element(
-    'svg',
-    { xmlns: SVG_NAMESPACE, width, height, viewBox: `0 0 ${width} ${height}`, 'font-family': 'sans-serif', 'font-size': 11, role: 'img' },
-    `<title>${escapeXml(figure.title)}</title>` +
-      `<defs>${patternDefs()}</defs>` +
-      element('rect', { x: 0, y: 0, width, height, fill: '#fff' }) +
-      figure.body,
-  ) + '\n';
+  return (
+    element(
+      'svg',
+      { xmlns: SVG_NAMESPACE, width, height, viewBox: `0 0 ${width} ${height}`, 'font-family': 'sans-serif', 'font-size': 11, role: 'img' },
+      `<title>${escapeXml(figure.title)}</title>` +
+        `<defs>${patternDefs()}</defs>` +
+        element('rect', { x: 0, y: 0, width, height, fill: '#fff' }) +
+        figure.body,
+    ) + '\n'
+  );
 }
 
 /**

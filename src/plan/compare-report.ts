@@ -7,7 +7,7 @@ import { afterRate, type AfterRateInputs } from '../after-rate/after-rate.js';
 import type { PrototypeOrders } from '../after-rate/prototype-order.js';
 
 /** Why a part has no verdict on a variant. */
-export const NOT_PLANNED = 'no rate of this part keeps its drift inside the converter\'s rate range';
+export const NOT_PLANNED = "no rate of this part keeps its drift inside the converter's rate range";
 
 /** One part judged on one variant; rate, settings and zone are null when the part gives no rate the converter accepts. */
 export interface VariantVerdict {
@@ -77,7 +77,8 @@ export interface VariantPlans {
  */
 export function compareReport(variants: readonly VariantPlans[]): CompareReport {
   const parts = new Map<string, ClockPart>();
-  for (const v of variants) for (const part of [...v.plans.map((p) => p.part), ...v.unplanned]) if (!parts.has(part.label)) parts.set(part.label, part);
+  for (const v of variants)
+    for (const part of [...v.plans.map((p) => p.part), ...v.unplanned]) if (!parts.has(part.label)) parts.set(part.label, part);
   const compared = [...parts.values()].map((part) => comparedPart(part, variants));
   const worstSlack = (c: ComparedPart) => Math.min(...c.perVariant.map((v) => v.worstSlack));
   compared.sort((a, b) => Number(b.passesAll) - Number(a.passesAll) || worstSlack(b) - worstSlack(a));

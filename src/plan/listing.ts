@@ -38,14 +38,17 @@ export function listedChecks(
   limitedBy: Limit,
   listing: Listing,
 ): { checks: readonly CheckResult[]; listed: ChecksListed } {
-  if (!judgedAll) return { checks: checks.filter((c) => limitedBy.kind === 'interferer' && c.label === limitedBy.label), listed: 'limiting' };
+  if (!judgedAll)
+    return { checks: checks.filter((c) => limitedBy.kind === 'interferer' && c.label === limitedBy.label), listed: 'limiting' };
   if (listing === 'all' || checks.length <= MOST_LISTED) return { checks, listed: 'all' };
   const slack = (c: CheckResult) => c.margin - c.requiredMargin;
-  const order = checks.map((_, i) => i).sort((a, b) => {
-    const x = checks[a]!;
-    const y = checks[b]!;
-    return Number(y.blocking) - Number(x.blocking) || (x.blocking ? slack(x) - slack(y) : x.levelMargin - y.levelMargin) || a - b;
-  });
+  const order = checks
+    .map((_, i) => i)
+    .sort((a, b) => {
+      const x = checks[a]!;
+      const y = checks[b]!;
+      return Number(y.blocking) - Number(x.blocking) || (x.blocking ? slack(x) - slack(y) : x.levelMargin - y.levelMargin) || a - b;
+    });
   return { checks: keptInOrder(checks, order), listed: 'nearest' };
 }
 
@@ -58,13 +61,18 @@ export function listedChecks(
  * @returns the listed interferers in the plan's order, and whether that is all
  * @example listedInterferers([], 'bounded') // { interferers: [], listed: 'all' }
  */
-export function listedInterferers(interferers: readonly Interferer[], listing: Listing): { interferers: readonly Interferer[]; listed: 'all' | 'nearest' } {
+export function listedInterferers(
+  interferers: readonly Interferer[],
+  listing: Listing,
+): { interferers: readonly Interferer[]; listed: 'all' | 'nearest' } {
   if (listing === 'all' || interferers.length <= MOST_LISTED) return { interferers, listed: 'all' };
-  const order = interferers.map((_, i) => i).sort((a, b) => {
-    const x = interferers[a]!;
-    const y = interferers[b]!;
-    return Number(y.blocking) - Number(x.blocking) || y.level - x.level || a - b;
-  });
+  const order = interferers
+    .map((_, i) => i)
+    .sort((a, b) => {
+      const x = interferers[a]!;
+      const y = interferers[b]!;
+      return Number(y.blocking) - Number(x.blocking) || y.level - x.level || a - b;
+    });
   return { interferers: keptInOrder(interferers, order), listed: 'nearest' };
 }
 

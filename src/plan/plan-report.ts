@@ -164,7 +164,9 @@ export function planReport(
   const byLabel = new Map(context.interferers.map((i) => [i.label, i]));
   const report = (c: Candidate) => reportedCandidate(context, byLabel, c, after, listing);
   // A candidate the mask fails moves behind the passing ones (stable: the solver's order is kept otherwise).
-  const ordered = result.candidates.map((c) => ({ c, reported: report(c) })).sort((a, b) => Number(b.reported.pass) - Number(a.reported.pass));
+  const ordered = result.candidates
+    .map((c) => ({ c, reported: report(c) }))
+    .sort((a, b) => Number(b.reported.pass) - Number(a.reported.pass));
   // The first one is the one shown in full: judged on every interferer if the mask moved another ahead.
   const first = ordered[0];
   if (first && first.c.evaluation.checkScope !== 'all') first.reported = report(withFullChecks(context, [first.c])[0]!);
@@ -196,14 +198,23 @@ export function planReport(
   };
 }
 
-function reportedCandidate(context: PlanContext, byLabel: ReadonlyMap<string, Interferer>, candidate: Candidate, after: AfterRateInputs | null, listing: Listing): ReportedCandidate {
+function reportedCandidate(
+  context: PlanContext,
+  byLabel: ReadonlyMap<string, Interferer>,
+  candidate: Candidate,
+  after: AfterRateInputs | null,
+  listing: Listing,
+): ReportedCandidate {
   const e: RateEvaluation = candidate.evaluation;
   const atRate = after === null ? null : afterRate(after, e.rate, e.tolerancePpm, e.center, e.inverted);
   const channelSnrDb = candidate.snr ? candidate.snr.channelSnrDb : null;
   const listed = listedChecks(e.checks, e.checkScope === 'all', e.limitedBy, listing);
   // A candidate not shown in full lists its mask's worst alias band only: with a thousand parts the bands alone are megabytes.
   const inFull = e.checkScope === 'all' || listing === 'all';
-  const shownAfter = atRate === null || inFull ? atRate : { ...atRate, mask: { ...atRate.mask, bands: atRate.mask.worst === null ? [] : [atRate.mask.worst] } };
+  const shownAfter =
+    atRate === null || inFull
+      ? atRate
+      : { ...atRate, mask: { ...atRate.mask, bands: atRate.mask.worst === null ? [] : [atRate.mask.worst] } };
   return {
     label: candidate.label,
     origin: candidate.origin,
@@ -223,8 +234,12 @@ function reportedCandidate(context: PlanContext, byLabel: ReadonlyMap<string, In
     pass: e.pass && (atRate === null || atRate.mask.pass),
     settings: candidate.settings ? { N: candidate.settings.N, M: candidate.settings.M, D: candidate.settings.D } : null,
     headroomPpm: candidate.headroom ? { down: candidate.headroom.downPpm, up: candidate.headroom.upPpm } : null,
-    headroomLimitedBy: candidate.headroom ? { down: limitText(candidate.headroom.downLimitedBy), up: limitText(candidate.headroom.upLimitedBy) } : null,
-    headroomLimitedByKind: candidate.headroom ? { down: candidate.headroom.downLimitedBy.kind, up: candidate.headroom.upLimitedBy.kind } : null,
+    headroomLimitedBy: candidate.headroom
+      ? { down: limitText(candidate.headroom.downLimitedBy), up: limitText(candidate.headroom.upLimitedBy) }
+      : null,
+    headroomLimitedByKind: candidate.headroom
+      ? { down: candidate.headroom.downLimitedBy.kind, up: candidate.headroom.upLimitedBy.kind }
+      : null,
     jitterSnrDb: candidate.snr ? candidate.snr.jitterSnrDb : null,
     channelSnrDb,
     partSearch: candidate.partSearch,

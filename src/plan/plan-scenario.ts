@@ -96,7 +96,11 @@ export function planAtRate(scenario: Scenario, rate: Hz, tolerancePpm: Ppm): Rat
  * @returns the report, one candidate per rate (origin "typed", labelled by the rate)
  * @example planRates(heronBase, [hz(200e6)]).candidates[0].pass // false (the band's second harmonic lands on it)
  */
-export function planRates(scenario: Scenario, rates: readonly Hz[], options: PlanOptions & { readonly tolerancePpm?: Ppm } = {}): PlanReport {
+export function planRates(
+  scenario: Scenario,
+  rates: readonly Hz[],
+  options: PlanOptions & { readonly tolerancePpm?: Ppm } = {},
+): PlanReport {
   const planned = { ...scenario, goal: options.goal ?? scenario.goal };
   const base = contextFromScenario(planned);
   const context = options.tolerancePpm === undefined ? base : { ...base, tolerancePpm: options.tolerancePpm };

@@ -87,13 +87,25 @@ export function solvePlan(context: PlanContext): PlanResult {
       partSearch: { method: plan.search, ratesJudged: plan.ratesJudged },
     });
   }
-  const unpartnered = (evaluation: RateEvaluation) => ({ evaluation, score: 0, settings: null, headroom: driftHeadroom(set, context.limits, evaluation.rate), snr: null, partSearch: null });
+  const unpartnered = (evaluation: RateEvaluation) => ({
+    evaluation,
+    score: 0,
+    settings: null,
+    headroom: driftHeadroom(set, context.limits, evaluation.rate),
+    snr: null,
+    partSearch: null,
+  });
   const perZone = new Map<number, number>();
   for (const interval of feasible) {
     const index = (perZone.get(interval.zone) ?? 0) + 1;
     perZone.set(interval.zone, index);
     const evaluation = bestRateIn(context, interval);
-    if (evaluation) candidates.push({ label: `best in ${RATES.rateRange(interval.minRate, interval.maxRate)}`, origin: 'interval', ...unpartnered(evaluation) });
+    if (evaluation)
+      candidates.push({
+        label: `best in ${RATES.rateRange(interval.minRate, interval.maxRate)}`,
+        origin: 'interval',
+        ...unpartnered(evaluation),
+      });
   }
   if (feasible.length === 0) {
     for (const window of windows) {
@@ -106,9 +118,16 @@ export function solvePlan(context: PlanContext): PlanResult {
   // Rates that tie on the worst slack are ranked by the next-tightest check's slack (the report names it).
   const nextSlack = new Map(scored.map((c) => [c, nextLimit(c.evaluation, bandwidth)?.slack ?? Infinity]));
   const tie = tieAllowance(bandwidth);
-  const byGoal = (a: Candidate, b: Candidate) => (Math.abs(b.score - a.score) <= tie && context.goal.kind !== 'lowest-rate' && context.goal.kind !== 'quarter-rate' ? 0 : b.score - a.score);
-  const bySlack = (a: Candidate, b: Candidate) => (Math.abs(b.evaluation.worstSlack - a.evaluation.worstSlack) <= tie ? 0 : b.evaluation.worstSlack - a.evaluation.worstSlack);
-  scored.sort((a, b) => Number(b.evaluation.pass) - Number(a.evaluation.pass) || byGoal(a, b) || bySlack(a, b) || nextSlack.get(b)! - nextSlack.get(a)!);
+  const byGoal = (a: Candidate, b: Candidate) =>
+    Math.abs(b.score - a.score) <= tie && context.goal.kind !== 'lowest-rate' && context.goal.kind !== 'quarter-rate'
+      ? 0
+      : b.score - a.score;
+  const bySlack = (a: Candidate, b: Candidate) =>
+    Math.abs(b.evaluation.worstSlack - a.evaluation.worstSlack) <= tie ? 0 : b.evaluation.worstSlack - a.evaluation.worstSlack;
+  scored.sort(
+    (a, b) =>
+      Number(b.evaluation.pass) - Number(a.evaluation.pass) || byGoal(a, b) || bySlack(a, b) || nextSlack.get(b)! - nextSlack.get(a)!,
+  );
   return { windows, feasible, blocked, candidates: withFullChecks(context, scored, 1), parts, unplannedParts };
 }
 
@@ -125,7 +144,9 @@ export function solvePlan(context: PlanContext): PlanResult {
  */
 export function withFullChecks(context: PlanContext, candidates: readonly Candidate[], count = candidates.length): Candidate[] {
   return candidates.map((c, i) =>
-    i >= count || c.evaluation.checkScope === 'all' ? c : { ...c, evaluation: evaluateRate(context, c.evaluation.rate, c.evaluation.tolerancePpm, 'all') },
+    i >= count || c.evaluation.checkScope === 'all'
+      ? c
+      : { ...c, evaluation: evaluateRate(context, c.evaluation.rate, c.evaluation.tolerancePpm, 'all') },
   );
 }
 
@@ -144,7 +165,16 @@ export function judgeRates(context: PlanContext, rates: readonly Hz[]): PlanResu
   const set = planRates(context);
   const candidates: Candidate[] = rates.map((rate) => {
     const evaluation = evaluateRate(context, rate, context.tolerancePpm, 'all');
-    return { label: RATES.rate(rate), origin: 'typed', evaluation, score: goalScore(context, evaluation), settings: null, headroom: driftHeadroom(set, context.limits, rate), snr: null, partSearch: null };
+    return {
+      label: RATES.rate(rate),
+      origin: 'typed',
+      evaluation,
+      score: goalScore(context, evaluation),
+      settings: null,
+      headroom: driftHeadroom(set, context.limits, rate),
+      snr: null,
+      partSearch: null,
+    };
   });
   return { windows: set.windows, feasible: set.feasible, blocked: set.blocked, candidates, parts: [], unplannedParts: [] };
 }

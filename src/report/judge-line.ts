@@ -79,25 +79,36 @@ export function judgeLine(setting: LineSetting, measurement: Measurement): Predi
   };
   // DC and rate/2 spurs are read on their own bin: there the window's main lobe folds onto itself, and the bin beside reads higher on the tone scale.
   const ownEdge = measurement.edgeKeys.has(line.component);
-  const peak = ownEdge ? (measurement.levels[setting.bin]! > measurement.floor ? setting.bin : null) : nearestPeak(measurement, predictedBin, samples);
+  const peak = ownEdge
+    ? measurement.levels[setting.bin]! > measurement.floor
+      ? setting.bin
+      : null
+    : nearestPeak(measurement, predictedBin, samples);
   const measured = peak === null ? null : { frequency: hz(peak * binWidth), bin: peak, level: db(measurement.levels[peak]!) };
   const binError = peak === null ? null : peak - predictedBin;
   const levelError = measured === null ? null : db(measured.level - check.level);
   const insidePlan = setting.width === 'tone' ? null : inSegments((measured?.bin ?? setting.bin) * binWidth, check.alias, binWidth);
   const row = (status: LineStatus, note: string): PredictionRow => ({ ...base, insidePlan, measured, binError, levelError, status, note });
 
-  if (modelLevel < measurement.floor + FIND_ABOVE_FLOOR) return row('below floor', `the model puts it at ${modelLevel.toFixed(1)} dBFS, under the floor ${measurement.floor.toFixed(1)} dBFS`);
+  if (modelLevel < measurement.floor + FIND_ABOVE_FLOOR)
+    return row('below floor', `the model puts it at ${modelLevel.toFixed(1)} dBFS, under the floor ${measurement.floor.toFixed(1)} dBFS`);
   const crowd = crowdedBy(setting, measurement);
   if (crowd !== null) return row('crowded', crowd);
   if (measured === null || binError === null) return row('missing', `no peak within ${SEARCH_BINS} bins of bin ${predictedBin.toFixed(2)}`);
   if (Math.abs(binError) > 1) return row('off position', `peak ${binError.toFixed(2)} bins from the prediction`);
-  if (insidePlan === false) return row('outside plan segments', `measured at ${formatFrequency(measured.frequency)}, outside the plan's aliased segments of ${check.label}`);
-  if (modelLevel < measurement.floor + JUDGE_ABOVE_FLOOR) return row('found', `level not judged: less than ${JUDGE_ABOVE_FLOOR} dB above the floor`);
+  if (insidePlan === false)
+    return row(
+      'outside plan segments',
+      `measured at ${formatFrequency(measured.frequency)}, outside the plan's aliased segments of ${check.label}`,
+    );
+  if (modelLevel < measurement.floor + JUDGE_ABOVE_FLOOR)
+    return row('found', `level not judged: less than ${JUDGE_ABOVE_FLOOR} dB above the floor`);
   const error = measured.level - check.level;
   if (setting.basis === 'plan') {
     return Math.abs(error) > measurement.tolerance ? row('off level', `${signed(error)} dB from the plan's level`) : row('agrees', '');
   }
-  if (error > measurement.tolerance && measured.level > measurement.threshold) return row('above plan level', `${signed(error)} dB above the plan's level, and above the threshold`);
+  if (error > measurement.tolerance && measured.level > measurement.threshold)
+    return row('above plan level', `${signed(error)} dB above the plan's level, and above the threshold`);
   return row('agrees', `the plan's level is a bound here; measured ${signed(error)} dB from it`);
 }
 

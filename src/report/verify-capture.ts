@@ -86,7 +86,8 @@ export function verifyCaptureWithSpectrum(scenario: Scenario, settings: CaptureS
   const samples = settings.samples ?? 65536;
   const wantedTones = settings.wantedTones ?? 3;
   const tolerance = settings.tolerance ?? db(1);
-  if (!(samples >= 1024 && (samples & (samples - 1)) === 0)) throw new RangeError(`the record must be a power of two of at least 1024 samples, got ${samples}`);
+  if (!(samples >= 1024 && (samples & (samples - 1)) === 0))
+    throw new RangeError(`the record must be a power of two of at least 1024 samples, got ${samples}`);
   if (!(Number.isInteger(wantedTones) && wantedTones >= 1)) throw new RangeError(`at least one wanted tone, got ${wantedTones}`);
   const { rate } = settings;
   const record: CaptureRecord = { rate, samples, wantedTones };
@@ -102,7 +103,11 @@ export function verifyCaptureWithSpectrum(scenario: Scenario, settings: CaptureS
   const converter = { bits: scenario.converter.bits, coefficients: converterCoefficients(scenario), mismatch };
   const window = blackmanHarris(samples);
   const expectedNoise = expectedNoiseLevel(scenario.converter.bits, samples, window.noiseBandwidthBins, true);
-  const tones = captureTones(scenario, record, chooseLayout(scenario, record, layoutComponents(firstTones, families, converter.coefficients, mismatch, record, expectedNoise)));
+  const tones = captureTones(
+    scenario,
+    record,
+    chooseLayout(scenario, record, layoutComponents(firstTones, families, converter.coefficients, mismatch, record, expectedNoise)),
+  );
 
   // The capture, the model's components, each line of the plan judged, and the peaks no line accounts for.
   const capture = simulateCapture(tones, samples, rate, converter, window);
@@ -110,10 +115,22 @@ export function verifyCaptureWithSpectrum(scenario: Scenario, settings: CaptureS
   const cutoff = 10 ** (Math.max(capture.spectrum.medianLevel - CUTOFF_BELOW_MEDIAN, -240) / 20);
   const model = modelComponents(tones, index, converter.coefficients, samples, cutoff, mismatch ? { mismatch, rate } : null);
   const threshold = levelThreshold(scenario);
-  const edgeKeys = new Set(tones.flatMap((t, i) => (!t.input && (t.cycles === 0 || foldCycles(t.cycles, samples) === samples / 2) ? [`t:${i}`] : [])));
-  const measurement: Measurement = { levels: capture.spectrum.levels, peaks: capture.peaks, floor: capture.floor, threshold, tolerance, components: model.components, edgeKeys };
+  const edgeKeys = new Set(
+    tones.flatMap((t, i) => (!t.input && (t.cycles === 0 || foldCycles(t.cycles, samples) === samples / 2) ? [`t:${i}`] : [])),
+  );
+  const measurement: Measurement = {
+    levels: capture.spectrum.levels,
+    peaks: capture.peaks,
+    floor: capture.floor,
+    threshold,
+    tolerance,
+    components: model.components,
+    edgeKeys,
+  };
   const judged = judgeChecks({ checks, interferers: movedContext.interferers, families, tones, index, converter, record }, measurement);
-  const image = plan.image ? [[plan.image.low, plan.image.high] as const] : foldExtent(scenario.wanted.low, scenario.wanted.high, rate).map((s) => [hz(s.low), hz(s.high)] as const);
+  const image = plan.image
+    ? [[plan.image.low, plan.image.high] as const]
+    : foldExtent(scenario.wanted.low, scenario.wanted.high, rate).map((s) => [hz(s.low), hz(s.high)] as const);
   const marginAt = peakMargins(judged.predictions, checks, scenario.requirements.margin);
   const peaks = sortPeaks(measurement, judged, image, record, marginAt);
   const contradictions = contradictionWords(judged.predictions, peaks, threshold, marginAt, plan);
@@ -124,7 +141,12 @@ export function verifyCaptureWithSpectrum(scenario: Scenario, settings: CaptureS
     binWidth: hz(rate / samples),
     window: { name: window.name, coherentGain: window.coherentGain, noiseBandwidthBins: window.noiseBandwidthBins },
     wantedTones,
-    converter: { bits: scenario.converter.bits, coefficients: converter.coefficients, dither: 'uniform, one step peak to peak, fixed seed', clippedSamples: capture.clippedSamples },
+    converter: {
+      bits: scenario.converter.bits,
+      coefficients: converter.coefficients,
+      dither: 'uniform, one step peak to peak, fixed seed',
+      clippedSamples: capture.clippedSamples,
+    },
     levels: { threshold, noiseMedian: db(capture.spectrum.medianLevel), floor: db(capture.floor), tolerance },
     margin: scenario.requirements.margin,
     wantedImage: image,
@@ -169,7 +191,10 @@ function judgeChecks(lines: PlanLines, measurement: Measurement): JudgedChecks {
   const { coefficients, mismatch } = converter;
   const { rate, samples } = record;
   const amplitudes = index.inputs.map((i) => tones[i]!.amplitude);
-  const bounds = orderSupremums(coefficients, amplitudes.reduce((sum, a) => sum + a, 0));
+  const bounds = orderSupremums(
+    coefficients,
+    amplitudes.reduce((sum, a) => sum + a, 0),
+  );
   const lookedFor = 10 ** ((measurement.floor + FIND_ABOVE_FLOOR) / 20);
   const judged: JudgedChecks = { predictions: [], underFloor: [], notSimulated: [], lineKeys: new Set<string>() };
   lines.checks.forEach((check, i) => {
@@ -186,7 +211,12 @@ function judgeChecks(lines: PlanLines, measurement: Measurement): JudgedChecks {
       const factor = line.sourceCycles === undefined || !mismatch ? 1 : mismatch.imageFactor((line.sourceCycles * rate) / samples);
       const exact = (net: readonly number[]) => factor * Math.abs(productAmplitude(coefficients, amplitudes, net));
       // The cheap bound first: most products of many tones at high orders are far under the floor.
-      const amplitude = line.net === null ? tones[line.tone!]!.amplitude : factor * productBound(bounds, amplitudes, line.net) < lookedFor ? null : exact(line.net);
+      const amplitude =
+        line.net === null
+          ? tones[line.tone!]!.amplitude
+          : factor * productBound(bounds, amplitudes, line.net) < lookedFor
+            ? null
+            : exact(line.net);
       if (amplitude === null || amplitude < lookedFor) {
         const strongest = drafts.length <= UNDER_FLOOR_EXACT ? 20 * Math.log10(amplitude ?? exact(line.net!)) : -Infinity;
         under = { lines: under.lines + 1, strongest: Math.max(under.strongest, strongest) };
@@ -194,9 +224,19 @@ function judgeChecks(lines: PlanLines, measurement: Measurement): JudgedChecks {
       }
       const width = interferer.low === interferer.high ? 'tone' : 'band';
       const basis = levelBasis(family, record.wantedTones, mismatch);
-      judged.predictions.push(judgeLine({ check, line, width, basis, amplitude, samples, binWidth: rate / samples, bin: foldCycles(line.cycles, samples) }, measurement));
+      judged.predictions.push(
+        judgeLine(
+          { check, line, width, basis, amplitude, samples, binWidth: rate / samples, bin: foldCycles(line.cycles, samples) },
+          measurement,
+        ),
+      );
     }
-    if (under.lines > 0) judged.underFloor.push({ check: check.label, lines: under.lines, strongest: Number.isFinite(under.strongest) ? db(under.strongest) : null });
+    if (under.lines > 0)
+      judged.underFloor.push({
+        check: check.label,
+        lines: under.lines,
+        strongest: Number.isFinite(under.strongest) ? db(under.strongest) : null,
+      });
   });
   return judged;
 }
@@ -260,12 +300,20 @@ function contradictionWords(
     ...predictions.filter((p) => CONTRADICTING.has(p.status)).map((p) => `${p.check} (${p.line}): ${p.status}: ${p.note}`),
     ...peaks.unlisted
       .filter((u) => u.level > threshold && !(u.explainedBy ?? '').startsWith('window overlap'))
-      .map((u) => `${formatFrequency(u.frequency, 7)} at ${u.level.toFixed(1)} dBFS, above the threshold ${threshold.toFixed(1)} dBFS: ${u.explainedBy ?? 'unexplained'}; missed by the plan`),
+      .map(
+        (u) =>
+          `${formatFrequency(u.frequency, 7)} at ${u.level.toFixed(1)} dBFS, above the threshold ${threshold.toFixed(1)} dBFS: ${u.explainedBy ?? 'unexplained'}; missed by the plan`,
+      ),
     // An intrusion confirms a failing plan when it is a line of a check the plan itself fails at this rate.
-    ...peaks.intrusions.filter((u) => plan.pass || !failingLine(predictions, plan, u.bin)).map((u) => {
-      const where = u.distance === 0 ? 'lies inside the wanted image' : `lies ${formatFrequency(u.distance, 4)} from the wanted image, inside the ${formatFrequency(marginAt(u.bin))} margin`;
-      return `${formatFrequency(u.frequency, 7)} at ${u.level.toFixed(1)} dBFS (${u.explainedBy ?? lineName(predictions, u.bin)}) ${where}: the rate is not clean`;
-    }),
+    ...peaks.intrusions
+      .filter((u) => plan.pass || !failingLine(predictions, plan, u.bin))
+      .map((u) => {
+        const where =
+          u.distance === 0
+            ? 'lies inside the wanted image'
+            : `lies ${formatFrequency(u.distance, 4)} from the wanted image, inside the ${formatFrequency(marginAt(u.bin))} margin`;
+        return `${formatFrequency(u.frequency, 7)} at ${u.level.toFixed(1)} dBFS (${u.explainedBy ?? lineName(predictions, u.bin)}) ${where}: the rate is not clean`;
+      }),
   ];
 }
 
@@ -274,18 +322,35 @@ function contradictionWords(
  * (watched), and the model's products strong enough to show (above the
  * expected mean noise), which must not land on a watched line.
  */
-function layoutComponents(tones: readonly CaptureTone[], families: readonly LineFamily[], coefficients: readonly number[], mismatch: CoreMismatch | null, record: CaptureRecord, noiseLevel: number): ComponentTemplate[] {
+function layoutComponents(
+  tones: readonly CaptureTone[],
+  families: readonly LineFamily[],
+  coefficients: readonly number[],
+  mismatch: CoreMismatch | null,
+  record: CaptureRecord,
+  noiseLevel: number,
+): ComponentTemplate[] {
   const { samples, rate } = record;
   const index = inputIndex(tones);
   const watched = new Map<string, ComponentTemplate>();
   const amplitudes = index.inputs.map((i) => tones[i]!.amplitude);
-  const bounds = orderSupremums(coefficients, amplitudes.reduce((sum, a) => sum + a, 0));
+  const bounds = orderSupremums(
+    coefficients,
+    amplitudes.reduce((sum, a) => sum + a, 0),
+  );
   const visible = 10 ** (noiseLevel / 20);
-  const factorOf = (line: { sourceCycles?: number }) => (line.sourceCycles === undefined || !mismatch ? 1 : mismatch.imageFactor((line.sourceCycles * rate) / samples));
+  const factorOf = (line: { sourceCycles?: number }) =>
+    line.sourceCycles === undefined || !mismatch ? 1 : mismatch.imageFactor((line.sourceCycles * rate) / samples);
   for (const family of families) {
     for (const line of familyLines(family, tones, index, samples)) {
       if (line.net !== null && factorOf(line) * productBound(bounds, amplitudes, line.net) < visible) continue; // under the noise: its place does not matter
-      watched.set(line.component, { key: line.component, net: line.net, tone: line.tone, watched: true, ...(line.offset === undefined ? {} : { offset: line.offset }) });
+      watched.set(line.component, {
+        key: line.component,
+        net: line.net,
+        tone: line.tone,
+        watched: true,
+        ...(line.offset === undefined ? {} : { offset: line.offset }),
+      });
     }
   }
   index.inputs.forEach((tone, p) => {
@@ -299,7 +364,8 @@ function layoutComponents(tones: readonly CaptureTone[], families: readonly Line
     for (const p of products) {
       const cycles = p.net.reduce((sum, n, i) => sum + n * tones[index.inputs[i]!]!.cycles, 0);
       if (p.amplitude * mismatch.imageFactor((cycles * rate) / samples) < visible) continue;
-      for (let k = 1; k < mismatch.ways; k++) others.push({ key: imageKey(k, p.net), net: p.net, tone: null, watched: false, offset: Math.round((k * samples) / mismatch.ways) });
+      for (let k = 1; k < mismatch.ways; k++)
+        others.push({ key: imageKey(k, p.net), net: p.net, tone: null, watched: false, offset: Math.round((k * samples) / mismatch.ways) });
     }
   }
   return [...watched.values(), ...others.filter((c) => !watched.has(c.key))];
@@ -327,7 +393,11 @@ function lineName(predictions: readonly PredictionRow[], bin: number): string {
 }
 
 /** Whether the peak on this bin is a line of a check that the plan fails at this rate. */
-function failingLine(predictions: readonly PredictionRow[], plan: { readonly checks: ReadonlyArray<{ readonly label: string; readonly pass: boolean }> }, bin: number): boolean {
+function failingLine(
+  predictions: readonly PredictionRow[],
+  plan: { readonly checks: ReadonlyArray<{ readonly label: string; readonly pass: boolean }> },
+  bin: number,
+): boolean {
   const row = predictions.find((p) => p.measured?.bin === bin);
   return row !== undefined && plan.checks.some((c) => c.label === row.check && !c.pass);
 }
@@ -339,22 +409,55 @@ function strongestWithin(components: readonly ModelComponent[], bin: number, rea
 }
 
 function toneRow(tone: CaptureTone, samples: number): ToneRow {
-  const role = tone.source.kind === 'wanted' ? 'wanted' : tone.source.kind === 'neighbour' ? 'neighbour' : tone.source.kind === 'board spur' ? 'board spur' : 'converter';
-  return { label: tone.label, role, nominal: tone.nominal, frequency: tone.frequency, move: tone.move, bin: foldCycles(tone.cycles, samples), level: tone.level };
+  const role =
+    tone.source.kind === 'wanted'
+      ? 'wanted'
+      : tone.source.kind === 'neighbour'
+        ? 'neighbour'
+        : tone.source.kind === 'board spur'
+          ? 'board spur'
+          : 'converter';
+  return {
+    label: tone.label,
+    role,
+    nominal: tone.nominal,
+    frequency: tone.frequency,
+    move: tone.move,
+    bin: foldCycles(tone.cycles, samples),
+    level: tone.level,
+  };
 }
 
-function comparedText(wantedTones: number, tolerance: number, floor: number, threshold: number, complete: boolean, interleaved: boolean): string {
-  const wanted = wantedTones === 1 ? 'one tone at the strongest wanted level' : `${wantedTones} tones, each 20·log10(${wantedTones}) dB below the strongest wanted level`;
+function comparedText(
+  wantedTones: number,
+  tolerance: number,
+  floor: number,
+  threshold: number,
+  complete: boolean,
+  interleaved: boolean,
+): string {
+  const wanted =
+    wantedTones === 1
+      ? 'one tone at the strongest wanted level'
+      : `${wantedTones} tones, each 20·log10(${wantedTones}) dB below the strongest wanted level`;
   const lines = [
     `The plan at this rate (no drift) against a simulated capture. The wanted band is represented by ${wanted}, each band neighbour by one tone at its centre at its level after the filter.`,
-    'Tone sources (board spurs and their harmonics, tone neighbours, rate-tied converter spurs) were moved to the nearest whole number of cycles in the record (moves listed) and the plan was re-derived there; for each, the plan\'s aliased position is compared with the measured peak.',
-    'Band sources are represented by their tones: each mixing product the plan lists was formed from its recipe (every choice of the signals\' tones with the listed plus and minus counts, e.g. 3·W1, W1 + W2 − B1) by whole-cycle arithmetic, checked against the plan\'s aliased segments, and measured.',
-    ...(interleaved ? ['The interleaving images were not added as tones: the capture samples with M cores whose gain (or, with a reference frequency, timing) differs by just enough to make the stated image level, so every input tone and product has its images at k·R/M ± f.'] : []),
+    "Tone sources (board spurs and their harmonics, tone neighbours, rate-tied converter spurs) were moved to the nearest whole number of cycles in the record (moves listed) and the plan was re-derived there; for each, the plan's aliased position is compared with the measured peak.",
+    "Band sources are represented by their tones: each mixing product the plan lists was formed from its recipe (every choice of the signals' tones with the listed plus and minus counts, e.g. 3·W1, W1 + W2 − B1) by whole-cycle arithmetic, checked against the plan's aliased segments, and measured.",
+    ...(interleaved
+      ? [
+          'The interleaving images were not added as tones: the capture samples with M cores whose gain (or, with a reference frequency, timing) differs by just enough to make the stated image level, so every input tone and product has its images at k·R/M ± f.',
+        ]
+      : []),
     ...(wantedTones === 1 ? ['With one wanted tone the differences inside the wanted band make no line: a tone less itself is DC.'] : []),
     `Positions must agree within one bin. Levels are judged ${tolerance} dB either way where the plan's level is the level the capture put there (stated spurs, neighbours, and with one wanted tone its harmonics and images); where the plan's level is a band's worst case or an extrapolation (neighbour harmonics, intermodulation, several wanted tones), the measurement must not exceed it by more than ${tolerance} dB when above the threshold.`,
     `Peaks above ${floor.toFixed(1)} dBFS count; any above the threshold ${threshold.toFixed(1)} dBFS that no line of the plan explains, or that lands inside the wanted image or within the margin its interferer must keep from it (unless it is a line of a check the plan fails at this rate, which confirms the plan's failure), contradicts the plan.`,
   ];
-  if (!complete) lines.push('The list of the model\'s products was cut short at its budget: an unexplained peak may be a product of high order the list does not name.');
-  if (floor > threshold) lines.push(`The floor is above the threshold: spurs between ${threshold.toFixed(1)} and ${floor.toFixed(1)} dBFS are not seen.`);
+  if (!complete)
+    lines.push(
+      "The list of the model's products was cut short at its budget: an unexplained peak may be a product of high order the list does not name.",
+    );
+  if (floor > threshold)
+    lines.push(`The floor is above the threshold: spurs between ${threshold.toFixed(1)} and ${floor.toFixed(1)} dBFS are not seen.`);
   return lines.join(' ');
 }

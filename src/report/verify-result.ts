@@ -89,18 +89,16 @@ export interface ToneRow {
 export type LevelBasis = 'plan' | 'bound';
 
 export type LineStatus =
-  | 'agrees'
-  | 'found'
-  | 'below floor'
-  | 'crowded'
-  | 'missing'
-  | 'off position'
-  | 'outside plan segments'
-  | 'off level'
-  | 'above plan level';
+  'agrees' | 'found' | 'below floor' | 'crowded' | 'missing' | 'off position' | 'outside plan segments' | 'off level' | 'above plan level';
 
 /** Statuses that contradict the plan. */
-export const CONTRADICTING: ReadonlySet<LineStatus> = new Set(['missing', 'off position', 'outside plan segments', 'off level', 'above plan level']);
+export const CONTRADICTING: ReadonlySet<LineStatus> = new Set([
+  'missing',
+  'off position',
+  'outside plan segments',
+  'off level',
+  'above plan level',
+]);
 
 /** One line predicted for one of the plan's interferers, beside its measurement. */
 export interface PredictionRow {

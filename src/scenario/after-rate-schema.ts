@@ -22,8 +22,12 @@ const filterMaskSchema = z.strictObject({
 
 /** The digital down-converter after the converter. */
 const downConverterSchema = z.strictObject({
-  ncoBits: wholeNumber(1, MOST_NCO_BITS, 'NCO phase accumulator width, bits (leave out: no tuning word reported)').nullable().prefault(null),
-  outputRate: positiveFrequency('Complex output rate after decimation (leave out: the decimation goal\'s output rate, if any)').nullable().prefault(null),
+  ncoBits: wholeNumber(1, MOST_NCO_BITS, 'NCO phase accumulator width, bits (leave out: no tuning word reported)')
+    .nullable()
+    .prefault(null),
+  outputRate: positiveFrequency("Complex output rate after decimation (leave out: the decimation goal's output rate, if any)")
+    .nullable()
+    .prefault(null),
   usableFraction: z
     .number({ error: 'a fraction above 0 and at most 1, e.g. 0.8' })
     .gt(0, { error: 'a fraction above 0 and at most 1, e.g. 0.8' })
@@ -37,11 +41,17 @@ const downConverterSchema = z.strictObject({
  * each optional: spread into the scenario's object schema.
  */
 export const afterRateFileFields = {
-  filterMask: filterMaskSchema.meta({ description: 'The anti-alias filter mask: the strongest out-of-band level and the passband ripple (optional)' }).prefault({}),
-  driverNoiseDensity: level("Wideband noise density of the driver ahead of the anti-alias filter, dBFS/Hz (optional: when stated, the noise folded into the channel lowers the channel SNR)")
+  filterMask: filterMaskSchema
+    .meta({ description: 'The anti-alias filter mask: the strongest out-of-band level and the passband ripple (optional)' })
+    .prefault({}),
+  driverNoiseDensity: level(
+    'Wideband noise density of the driver ahead of the anti-alias filter, dBFS/Hz (optional: when stated, the noise folded into the channel lowers the channel SNR)',
+  )
     .nullable()
     .prefault(null),
-  downConverter: downConverterSchema.meta({ description: 'The digital down-converter: NCO width, output rate and usable band (optional)' }).prefault({}),
+  downConverter: downConverterSchema
+    .meta({ description: 'The digital down-converter: NCO width, output rate and usable band (optional)' })
+    .prefault({}),
 };
 
 /**
@@ -61,6 +71,10 @@ export function afterRateSettings(file: {
     outOfBandLevel: file.filterMask.outOfBandLevel,
     passbandRipple: file.filterMask.passbandRipple,
     driverNoiseDensity: file.driverNoiseDensity,
-    downConverter: { ncoBits: file.downConverter.ncoBits, outputRate: file.downConverter.outputRate, usableFraction: file.downConverter.usableFraction },
+    downConverter: {
+      ncoBits: file.downConverter.ncoBits,
+      outputRate: file.downConverter.outputRate,
+      usableFraction: file.downConverter.usableFraction,
+    },
   };
 }

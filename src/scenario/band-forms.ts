@@ -30,7 +30,13 @@ export function refuseAt(
   received: string,
   related: readonly (readonly (string | number)[])[] = [],
 ): void {
-  ctx.issues.push({ code: 'custom', path: [...path], message: expected, input: received, params: { received, related, depth: path.length } });
+  ctx.issues.push({
+    code: 'custom',
+    path: [...path],
+    message: expected,
+    input: received,
+    params: { received, related, depth: path.length },
+  });
 }
 
 /**
@@ -94,7 +100,13 @@ function centred(center: Hz, width: Hz, ctx: z.RefinementCtx, zeroWidth: boolean
   const band = { low: hz(center - width / 2), high: hz(center + width / 2) };
   if (!zeroWidth && !(band.high > band.low)) {
     // Below the centre's last digit the edges round to one frequency (a width of 1e-300 Hz at 70 MHz).
-    refuseAt(ctx, ['width'], `a width the centre's precision can hold (edges that differ at ${formatFrequency(center)})`, formatFrequency(width), [['center']]);
+    refuseAt(
+      ctx,
+      ['width'],
+      `a width the centre's precision can hold (edges that differ at ${formatFrequency(center)})`,
+      formatFrequency(width),
+      [['center']],
+    );
     return null;
   }
   return band;

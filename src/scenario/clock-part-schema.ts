@@ -17,7 +17,9 @@ const RANGE_WORDS = 'a whole number 1 or more, or a [min, max] pair of them';
  */
 const integerRange = (description: string) =>
   z
-    .union([countFromOne('The one value allowed'), z.tuple([countFromOne('Least value'), countFromOne('Greatest value')])], { error: RANGE_WORDS })
+    .union([countFromOne('The one value allowed'), z.tuple([countFromOne('Least value'), countFromOne('Greatest value')])], {
+      error: RANGE_WORDS,
+    })
     .meta({ description: `${description}: one whole number, or [min, max]` })
     .transform((written, ctx): IntegerRange => {
       const [min, max] = typeof written === 'number' ? [written, written] : written;
@@ -47,11 +49,19 @@ const synthesiser = z
     d: integerRange('Output divider D (default [1, 1])').prefault([1, 1]),
     vco: vcoRange.nullable().prefault(null),
   })
-  .meta({ description: `A synthesiser fed by the part: rate = f × N / (M × D), with the VCO at f × N / M; at most ${MOST_DIVIDER_PAIRS} (M, D) pairs` })
+  .meta({
+    description: `A synthesiser fed by the part: rate = f × N / (M × D), with the VCO at f × N / M; at most ${MOST_DIVIDER_PAIRS} (M, D) pairs`,
+  })
   .superRefine((written, ctx) => {
     const pairs = (written.m.max - written.m.min + 1) * (written.d.max - written.d.min + 1);
     if (pairs > MOST_DIVIDER_PAIRS) {
-      refuseAt(ctx, ['m'], `ranges of M and D that give at most ${MOST_DIVIDER_PAIRS} (M, D) pairs, each planned on its own; narrow m or d`, `${pairs} pairs`, [['d']]);
+      refuseAt(
+        ctx,
+        ['m'],
+        `ranges of M and D that give at most ${MOST_DIVIDER_PAIRS} (M, D) pairs, each planned on its own; narrow m or d`,
+        `${pairs} pairs`,
+        [['d']],
+      );
     }
   });
 
@@ -62,7 +72,11 @@ const derivation = z
   .union(
     [
       z.enum(DERIVE_WORDS),
-      z.discriminatedUnion('kind', [z.strictObject({ kind: z.literal('direct') }), z.strictObject({ kind: z.literal('divider') }), synthesiser]),
+      z.discriminatedUnion('kind', [
+        z.strictObject({ kind: z.literal('direct') }),
+        z.strictObject({ kind: z.literal('divider') }),
+        synthesiser,
+      ]),
     ],
     { error: 'a derivation: "direct", "divider" or { "kind": "synthesiser", "n": ..., "m": ... }' },
   )
@@ -110,14 +124,15 @@ export const clockPartSchema = z
     derive: derivation.prefault('direct'),
   })
   .meta({ description: 'A clock part: a crystal or oscillator, or a reference feeding a synthesiser' })
-  .transform(
-    (written): ClockPart => ({
-      label: written.label,
-      frequency: written.frequency,
-      tolerancePpm: typeof written.tolerance === 'number' ? written.tolerance : ppm(written.tolerance.initial + written.tolerance.temperature + written.tolerance.ageing),
-      toleranceBreakdown: typeof written.tolerance === 'number' ? null : { ...written.tolerance },
-      jitter: written.jitter,
-      note: written.note,
-      derivation: written.derive,
-    }),
-  );
+  .transform((written): ClockPart => ({
+    label: written.label,
+    frequency: written.frequency,
+    tolerancePpm:
+      typeof written.tolerance === 'number'
+        ? written.tolerance
+        : ppm(written.tolerance.initial + written.tolerance.temperature + written.tolerance.ageing),
+    toleranceBreakdown: typeof written.tolerance === 'number' ? null : { ...written.tolerance },
+    jitter: written.jitter,
+    note: written.note,
+    derivation: written.derive,
+  }));

@@ -19,9 +19,14 @@ const table = z
   .strictObject({
     kind: z.literal('table'),
     points: z
-      .array(z.tuple([positiveFrequency('Frequency'), decibels('Attenuation, dB', 'an attenuation')], { error: 'a [frequency, attenuation dB] pair' }), {
-        error: 'a list of [frequency, attenuation dB] pairs',
-      })
+      .array(
+        z.tuple([positiveFrequency('Frequency'), decibels('Attenuation, dB', 'an attenuation')], {
+          error: 'a [frequency, attenuation dB] pair',
+        }),
+        {
+          error: 'a list of [frequency, attenuation dB] pairs',
+        },
+      )
       .min(2, { error: 'at least 2 [frequency, attenuation dB] points' })
       .max(1000, { error: 'at most 1000 [frequency, attenuation dB] points' })
       .meta({ description: '[frequency, attenuation dB] points, frequencies strictly increasing; interpolated in dB over log-frequency' }),
@@ -41,9 +46,17 @@ export const filterSchema = z
     if (written.kind === 'butterworth') {
       const passHigh = written.passHigh ?? hz(Infinity);
       if (written.passLow === 0 && written.passHigh === null) {
-        refuseAt(ctx, ['passLow'], 'a frequency above 0 for a high-pass (passHigh left out); with passLow 0 and no passHigh the filter passes everything', '0 Hz', [['passHigh']]);
+        refuseAt(
+          ctx,
+          ['passLow'],
+          'a frequency above 0 for a high-pass (passHigh left out); with passLow 0 and no passHigh the filter passes everything',
+          '0 Hz',
+          [['passHigh']],
+        );
       } else if (written.passLow >= passHigh) {
-        refuseAt(ctx, ['passHigh'], `a frequency above passLow (${formatFrequency(written.passLow)})`, formatFrequency(passHigh), [['passLow']]);
+        refuseAt(ctx, ['passHigh'], `a frequency above passLow (${formatFrequency(written.passLow)})`, formatFrequency(passHigh), [
+          ['passLow'],
+        ]);
       }
       return { kind: 'butterworth', order: written.order, passLow: written.passLow, passHigh };
     }
@@ -51,7 +64,13 @@ export const filterSchema = z
     points.forEach((point, i) => {
       const before = points[i - 1];
       if (before && point.frequency <= before.frequency) {
-        refuseAt(ctx, ['points', i, 0], `a frequency above the point before (${formatFrequency(before.frequency)})`, formatFrequency(point.frequency), [['points', i - 1, 0]]);
+        refuseAt(
+          ctx,
+          ['points', i, 0],
+          `a frequency above the point before (${formatFrequency(before.frequency)})`,
+          formatFrequency(point.frequency),
+          [['points', i - 1, 0]],
+        );
       }
     });
     return { kind: 'table', points };

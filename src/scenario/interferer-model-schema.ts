@@ -14,13 +14,27 @@ import { frequency, level, levelAtMostFullScale, positiveFrequency, wholeNumber 
 const ORDER_KEY = /^(?:[2-9]|[1-9]\d)$/;
 
 /** Highest order of the mixing products generated (default 3). */
-export const maxOrderSchema = wholeNumber(2, 7, 'Highest total order |c|₁ of the mixing products Σ cᵢ·fᵢ generated among the signals at the converter input (default 3)').default(3);
+export const maxOrderSchema = wholeNumber(
+  2,
+  7,
+  'Highest total order |c|₁ of the mixing products Σ cᵢ·fᵢ generated among the signals at the converter input (default 3)',
+).default(3);
 
 /** Input intercepts by order, dBFS: { "2": IIP2, "3": IIP3, ... }. */
 export const interceptsSchema = z
   .record(z.string().regex(ORDER_KEY, { error: 'an order as the key: a whole number 2 or more, e.g. "3"' }), level('dBFS'))
-  .meta({ description: 'Input intercepts by order referred to full scale, dBFS, e.g. { "2": 60, "3": 30 }; an order given here takes its products from the intercept instead of the harmonic figure' })
-  .transform((written): ReadonlyMap<number, Db> => new Map(Object.entries(written).map(([order, value]) => [Number(order), value] as const).sort(([a], [b]) => a - b)));
+  .meta({
+    description:
+      'Input intercepts by order referred to full scale, dBFS, e.g. { "2": 60, "3": 30 }; an order given here takes its products from the intercept instead of the harmonic figure',
+  })
+  .transform(
+    (written): ReadonlyMap<number, Db> =>
+      new Map(
+        Object.entries(written)
+          .map(([order, value]) => [Number(order), value] as const)
+          .sort(([a], [b]) => a - b),
+      ),
+  );
 
 const FRACTION = /^\s*(\d+)\s*\/\s*(\d+)\s*$/;
 
@@ -49,7 +63,9 @@ export const imageReferenceSchema = positiveFrequency(
   .prefault(null);
 
 /** An interferer's own required margin (null: its kind's, else the scenario's). */
-export const ownMarginSchema = frequency('Margin this signal needs from the wanted alias, instead of its kind\'s or the scenario\'s (0: none, e.g. an adjacent channel the digital channel filter removes)')
+export const ownMarginSchema = frequency(
+  "Margin this signal needs from the wanted alias, instead of its kind's or the scenario's (0: none, e.g. an adjacent channel the digital channel filter removes)",
+)
   .nullable()
   .prefault(null);
 

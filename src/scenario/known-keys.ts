@@ -31,7 +31,9 @@ export function knownKeys(schema: SchemaNode, path: DocumentPath, document: unkn
 }
 
 function branches(node: SchemaNode): SchemaNode[] {
-  const alternatives = [node.anyOf, node.oneOf, [node.then, node.else]].flatMap((list) => (Array.isArray(list) ? list.filter(isJsonObject) : []));
+  const alternatives = [node.anyOf, node.oneOf, [node.then, node.else]].flatMap((list) =>
+    Array.isArray(list) ? list.filter(isJsonObject) : [],
+  );
   return [node, ...alternatives.flatMap(branches)];
 }
 

@@ -3,7 +3,16 @@ import * as z from 'zod';
 import { hz } from '../units/quantities.js';
 import type { Goal, Requirements, WantedBand } from './scenario.js';
 import { bandFromForm, EDGES_OR_CENTRE, refuseAt } from './band-forms.js';
-import { decibels, frequency, guardWidth, levelAtMostFullScale, oneFormOf, positiveFrequency, tolerance, type GuardWidth } from './scenario-fields.js';
+import {
+  decibels,
+  frequency,
+  guardWidth,
+  levelAtMostFullScale,
+  oneFormOf,
+  positiveFrequency,
+  tolerance,
+  type GuardWidth,
+} from './scenario-fields.js';
 import { kindMarginsSchema } from './interferer-model-schema.js';
 
 /** The wanted IF band, by low/high or center/width, with its planning levels. */
@@ -14,13 +23,21 @@ export const wantedSchema = z
     center: frequency('Centre (with width)').nullable().optional(),
     width: frequency('Width (with center)').nullable().optional(),
     weakestLevel: levelAtMostFullScale('Weakest wanted level at which the requirements apply, dBFS'),
-    strongestLevel: levelAtMostFullScale('Strongest wanted level, dBFS: the level harmonic figures are quoted at (default -1)').prefault(-1),
+    strongestLevel: levelAtMostFullScale('Strongest wanted level, dBFS: the level harmonic figures are quoted at (default -1)').prefault(
+      -1,
+    ),
   })
   .meta({ description: 'The wanted IF band', ...oneFormOf(EDGES_OR_CENTRE) })
   .transform((written, ctx): WantedBand => {
     const band = bandFromForm(written, EDGES_OR_CENTRE, ctx, false);
     if (written.strongestLevel < written.weakestLevel) {
-      refuseAt(ctx, ['strongestLevel'], `a level at or above weakestLevel (${written.weakestLevel} dBFS)`, `${written.strongestLevel} dBFS`, [['weakestLevel']]);
+      refuseAt(
+        ctx,
+        ['strongestLevel'],
+        `a level at or above weakestLevel (${written.weakestLevel} dBFS)`,
+        `${written.strongestLevel} dBFS`,
+        [['weakestLevel']],
+      );
     }
     if (!band) return z.NEVER;
     return { ...band, weakestLevel: written.weakestLevel, strongestLevel: written.strongestLevel };
@@ -41,7 +58,9 @@ export const guardSchema = z
   })
   .meta({ description: "Guard bands for the anti-alias filter's transitions: one value for both sides, or per side (default 0)" })
   .transform((written): GuardSides =>
-    'hz' in written || 'percent' in written ? { low: written, high: written } : { low: written.low ?? NO_GUARD, high: written.high ?? NO_GUARD },
+    'hz' in written || 'percent' in written
+      ? { low: written, high: written }
+      : { low: written.low ?? NO_GUARD, high: written.high ?? NO_GUARD },
   );
 
 /** What the plan must keep: frequency margin, rejection, drift. */

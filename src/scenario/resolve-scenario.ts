@@ -46,7 +46,15 @@ export function resolveScenario(path: string, readText: ReadText, check?: Scenar
     check?.(scenario);
   } catch (error) {
     if (!(error instanceof WorkBoundError)) throw error;
-    throw new ScenarioError([{ kind: 'invalid', file: fileOfPaths(layers, [error.path]), path: pathText(error.path), expected: error.expected, received: error.received }]);
+    throw new ScenarioError([
+      {
+        kind: 'invalid',
+        file: fileOfPaths(layers, [error.path]),
+        path: pathText(error.path),
+        expected: error.expected,
+        received: error.received,
+      },
+    ]);
   }
   return scenario;
 }
@@ -65,7 +73,13 @@ export function scenarioFromDocument(document: unknown, file: string): Scenario 
   const layer = layerOf(document, file);
   if (layer.extendsPath !== null) {
     throw new ScenarioError([
-      { kind: 'invalid', file, path: 'extends', expected: 'no extends here (use resolveScenario to follow a base file)', received: JSON.stringify(layer.extendsPath) },
+      {
+        kind: 'invalid',
+        file,
+        path: 'extends',
+        expected: 'no extends here (use resolveScenario to follow a base file)',
+        received: JSON.stringify(layer.extendsPath),
+      },
     ]);
   }
   return validateLayers([layer]);
@@ -92,7 +106,14 @@ function readChain(first: string, readText: ReadText): ChainLayer[] {
       throw new ScenarioError([
         namedBy === undefined
           ? { kind: 'unreadable', file, path: '', expected: 'a scenario file that can be read', received: reason }
-          : { kind: 'unreadable', file: namedBy, path: 'extends', expected: 'a base file that can be read', received: `${file}: ${reason}`, chain: files },
+          : {
+              kind: 'unreadable',
+              file: namedBy,
+              path: 'extends',
+              expected: 'a base file that can be read',
+              received: `${file}: ${reason}`,
+              chain: files,
+            },
       ]);
     }
     const layer = layerOf(parsedInChain(text, file, files), file);
@@ -127,17 +148,27 @@ function parsedInChain(text: string, file: string, files: readonly string[]): un
 
 function layerOf(document: unknown, file: string): ChainLayer {
   if (!isJsonObject(document)) {
-    throw new ScenarioError([{ kind: 'invalid', file, path: '', expected: 'a JSON object holding the scenario', received: describeValue(document) }]);
+    throw new ScenarioError([
+      { kind: 'invalid', file, path: '', expected: 'a JSON object holding the scenario', received: describeValue(document) },
+    ]);
   }
   const tooDeep = nestedBeyond(document, MAX_NESTING);
   if (tooDeep) {
     throw new ScenarioError([
-      { kind: 'invalid', file, path: pathText(tooDeep), expected: `nesting at most ${MAX_NESTING} levels deep`, received: 'deeper nesting' },
+      {
+        kind: 'invalid',
+        file,
+        path: pathText(tooDeep),
+        expected: `nesting at most ${MAX_NESTING} levels deep`,
+        received: 'deeper nesting',
+      },
     ]);
   }
   const { extends: base, ...rest } = document;
   if (base !== undefined && (typeof base !== 'string' || base.trim() === '')) {
-    throw new ScenarioError([{ kind: 'invalid', file, path: 'extends', expected: 'the name of a base scenario file', received: describeValue(base) }]);
+    throw new ScenarioError([
+      { kind: 'invalid', file, path: 'extends', expected: 'the name of a base scenario file', received: describeValue(base) },
+    ]);
   }
   return { file, document: rest, extendsPath: base ?? null };
 }

@@ -21,15 +21,13 @@ function refuse(ctx: z.RefinementCtx, error: unknown, value: unknown): never {
   return z.NEVER;
 }
 
-const frequencyText = z
-  .union([z.string(), z.number()], { error: FREQUENCY_WORDS })
-  .transform((value, ctx): Hz => {
-    try {
-      return parseFrequency(value, '');
-    } catch (error) {
-      return refuse(ctx, error, value);
-    }
-  });
+const frequencyText = z.union([z.string(), z.number()], { error: FREQUENCY_WORDS }).transform((value, ctx): Hz => {
+  try {
+    return parseFrequency(value, '');
+  } catch (error) {
+    return refuse(ctx, error, value);
+  }
+});
 
 const positiveFrequencyText = frequencyText.refine((value) => value > 0, { error: 'a frequency above zero' });
 const FREQUENCY_HINT = 'hertz as a number, or text such as "70M", "70 MHz", "455k"; at most 1 THz';
@@ -109,7 +107,9 @@ export const LEVEL_BOUNDS = {
 /** A level number within [least, most], refused in one wording when outside. */
 const boundedLevel = (description: string, least: number, most: number, words: string, strictlyBelow = false) => {
   const number = z.number().min(least, { error: words });
-  return (strictlyBelow ? number.lt(most, { error: words }) : number.max(most, { error: words })).meta({ description }).transform((value): Db => db(value));
+  return (strictlyBelow ? number.lt(most, { error: words }) : number.max(most, { error: words }))
+    .meta({ description })
+    .transform((value): Db => db(value));
 };
 
 /**
@@ -119,7 +119,12 @@ const boundedLevel = (description: string, least: number, most: number, words: s
  * @param description what the field means, for the JSON Schema
  */
 export const level = (description: string) =>
-  boundedLevel(description, LEVEL_BOUNDS.floor, LEVEL_BOUNDS.filterInput, `a level in dBFS from ${LEVEL_BOUNDS.floor} to +${LEVEL_BOUNDS.filterInput}`);
+  boundedLevel(
+    description,
+    LEVEL_BOUNDS.floor,
+    LEVEL_BOUNDS.filterInput,
+    `a level in dBFS from ${LEVEL_BOUNDS.floor} to +${LEVEL_BOUNDS.filterInput}`,
+  );
 
 /** A level at the converter, dBFS: at most 0 (full scale). */
 export const levelAtMostFullScale = (description: string) =>
@@ -147,7 +152,10 @@ export const tolerance = z
   .transform((value): Ppm => ppm(value));
 
 /** A label naming a part or signal: text that is not blank. */
-export const label = z.string().regex(/\S/, { error: 'a label that is not blank' }).meta({ description: 'A name for people, e.g. "XO-A 122.88M"' });
+export const label = z
+  .string()
+  .regex(/\S/, { error: 'a label that is not blank' })
+  .meta({ description: 'A name for people, e.g. "XO-A 122.88M"' });
 
 /** A whole number from least to most. */
 export const wholeNumber = (least: number, most: number, description: string) =>

@@ -17,7 +17,6 @@ import { afterRateFileFields, afterRateSettings } from './after-rate-schema.js';
 import { maxOrderSchema } from './interferer-model-schema.js';
 import { refuseTooMuchWork } from './work-bounds.js';
 
-
 /** Most board spurs in a scenario: each brings up to 20 harmonics, and the simulated capture synthesises every one. */
 export const MOST_BOARD_SPURS = 64;
 /**
@@ -43,7 +42,10 @@ export const MOST_CLOCKS = 1024;
 export const scenarioFileSchema = z
   .strictObject({
     $schema: z.string().optional().meta({ description: 'Where editors find this schema, e.g. "./ifzone-scenario.schema.json"' }),
-    extends: z.string().optional().meta({ description: 'A base scenario file, relative to this one; objects merge key by key, lists replace' }),
+    extends: z
+      .string()
+      .optional()
+      .meta({ description: 'A base scenario file, relative to this one; objects merge key by key, lists replace' }),
     name: z.string().regex(/\S/, { error: 'a name that is not blank' }).meta({ description: 'Variant name, e.g. "Heron-4 base"' }),
     description: z.string().default('').meta({ description: 'What this variant is, for people' }),
     wanted: wantedSchema,
@@ -124,7 +126,10 @@ type Same<A, B> = (<T>() => T extends A ? 1 : 2) extends <T>() => T extends B ? 
 const outputIsScenario: Same<z.output<typeof scenarioFileSchema>, Scenario> = true;
 void outputIsScenario;
 
-function refuseRepeatedLabels(ctx: z.RefinementCtx, lists: ReadonlyArray<readonly [string, ReadonlyArray<{ readonly label: string }>]>): void {
+function refuseRepeatedLabels(
+  ctx: z.RefinementCtx,
+  lists: ReadonlyArray<readonly [string, ReadonlyArray<{ readonly label: string }>]>,
+): void {
   const firstUse = new Map<string, { text: string; path: (string | number)[] }>();
   for (const [list, items] of lists) {
     items.forEach((item, i) => {

@@ -36,7 +36,8 @@ function partial(node: SchemaNode): SchemaNode {
   const entries = Object.entries(node).flatMap(([keyword, value]): Array<[string, unknown]> => {
     if (keyword === 'required') return [];
     if (keyword === 'oneOf' && Array.isArray(value) && value.every((branch: SchemaNode) => !('type' in branch))) return [];
-    if (keyword === 'properties') return [[keyword, Object.fromEntries(Object.entries(value as SchemaNode).map(([key, sub]) => [key, partial(sub as SchemaNode)]))]];
+    if (keyword === 'properties')
+      return [[keyword, Object.fromEntries(Object.entries(value as SchemaNode).map(([key, sub]) => [key, partial(sub as SchemaNode)]))]];
     if (keyword === 'anyOf' || keyword === 'oneOf') return [[keyword, (value as SchemaNode[]).map(partial)]];
     return [[keyword, value]];
   });

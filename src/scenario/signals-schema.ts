@@ -12,7 +12,7 @@ export const boardSpurSchema = z
     frequency: frequency('A tone at this frequency (or give low and high for a band)').nullable().optional(),
     low: frequency('Lower edge of a band-shaped spur').nullable().optional(),
     high: frequency('Upper edge of a band-shaped spur').nullable().optional(),
-    level: level('Level, dBFS at the converter (at most 0), or at the filter\'s input when coupling is before-filter (may exceed 0)'),
+    level: level("Level, dBFS at the converter (at most 0), or at the filter's input when coupling is before-filter (may exceed 0)"),
     coupling: z
       .enum(['before-filter', 'after-filter'])
       .default('after-filter')
@@ -24,11 +24,19 @@ export const boardSpurSchema = z
   .transform((written, ctx): BoardSpur => {
     const band = bandFromForm(written, TONE_OR_EDGES, ctx, true);
     if (written.coupling === 'after-filter' && written.level > 0) {
-      const words = 'a level at the converter of at most 0 dBFS (full scale); above it only at the filter\'s input, with coupling "before-filter"';
+      const words =
+        'a level at the converter of at most 0 dBFS (full scale); above it only at the filter\'s input, with coupling "before-filter"';
       refuseAt(ctx, ['level'], words, `${written.level} dBFS`, [['coupling']]);
     }
     if (!band) return z.NEVER;
-    return { label: written.label, ...band, level: written.level, coupling: written.coupling, harmonics: written.harmonics, ...(written.margin === null ? {} : { margin: written.margin }) };
+    return {
+      label: written.label,
+      ...band,
+      level: written.level,
+      coupling: written.coupling,
+      harmonics: written.harmonics,
+      ...(written.margin === null ? {} : { margin: written.margin }),
+    };
   });
 
 /** A neighbour channel or blocker: a band with its level at the filter's input. */

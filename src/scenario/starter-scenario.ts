@@ -14,7 +14,7 @@ export function starterScenario(schemaPath: string): Record<string, unknown> {
   return {
     $schema: schemaPath,
     name: 'New receiver variant',
-    description: 'Replace every value below with the variant\'s own: IF band, converter, board spurs, neighbours, filter, clock parts.',
+    description: "Replace every value below with the variant's own: IF band, converter, board spurs, neighbours, filter, clock parts.",
     wanted: { center: '70M', width: '10M', weakestLevel: -70, strongestLevel: -1 },
     guard: '10%',
     converter: {

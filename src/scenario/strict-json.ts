@@ -39,7 +39,7 @@ export function strictJsonProblems(text: string, file: string): ScenarioIssue[] 
     return top ? [...top.path, top.step] : [];
   };
   let expectKey = false;
-  for (let at = 0; at < text.length; ) {
+  for (let at = 0; at < text.length;) {
     const char = text[at]!;
     if (char === '{' || char === '[') {
       open.push({ kind: char, path: pathHere(), keys: new Map(), step: 0 });
@@ -62,7 +62,9 @@ export function strictJsonProblems(text: string, file: string): ScenarioIssue[] 
         top.step = key;
         const first = top.keys.get(key);
         if (first !== undefined) {
-          issues.push(problem(file, [...top.path, key], 'each key once in an object', `${JSON.stringify(key)} again at ${where}, first at ${first}`));
+          issues.push(
+            problem(file, [...top.path, key], 'each key once in an object', `${JSON.stringify(key)} again at ${where}, first at ${first}`),
+          );
         } else top.keys.set(key, where);
         if (FORBIDDEN_KEYS.has(key)) {
           issues.push(problem(file, [...top.path, key], 'a key other than __proto__ or constructor', `${JSON.stringify(key)} at ${where}`));

@@ -80,7 +80,11 @@ export function refuseTooMuchWork(ctx: z.RefinementCtx, inputs: WorkInputs): voi
       worst.path,
       `interferers that fold onto at most ${MOST_IMAGES} images of the wanted band over the rate range; raise converter.minRate, or lower the highest frequencies or requirements.margin`,
       `about ${Math.round(images)} images over ${range}, most from ${worst.words}`,
-      [['converter', 'minRate'], ['converter', 'maxRate'], ['requirements', 'margin']],
+      [
+        ['converter', 'minRate'],
+        ['converter', 'maxRate'],
+        ['requirements', 'margin'],
+      ],
     );
   }
 }
@@ -119,8 +123,13 @@ function foldingWork(inputs: WorkInputs, bands: readonly Band[]): { images: numb
  * @returns images per hertz of reach (1/Hz) and the window count
  * @example imageDensity({ minRate: 40e6, maxRate: 250e6 }, [{ low: 128e6, high: 152e6 }]).windows // 6 (the 24 MHz guarded band has a window in six zones between 40 and 250 MHz)
  */
-export function imageDensity(converter: Pick<Converter, 'minRate' | 'maxRate'>, bands: readonly Band[]): { perHertz: number; windows: number } {
-  const lowestRate = Math.min(...bands.map((band) => Math.max(converter.minRate, (2 * band.high) / zoneSpan(band, converter.minRate, converter.maxRate).last)));
+export function imageDensity(
+  converter: Pick<Converter, 'minRate' | 'maxRate'>,
+  bands: readonly Band[],
+): { perHertz: number; windows: number } {
+  const lowestRate = Math.min(
+    ...bands.map((band) => Math.max(converter.minRate, (2 * band.high) / zoneSpan(band, converter.minRate, converter.maxRate).last)),
+  );
   const perHertz = 2 * (1 / lowestRate - 1 / converter.maxRate);
   const windows = Math.max(...bands.map((band) => windowCount(band, converter.minRate, converter.maxRate)));
   return { perHertz, windows };
@@ -152,7 +161,12 @@ function workSources(inputs: WorkInputs): WorkSource[] {
   // The mixing products are left out here: most are too weak to block and are never made (mixingProducts prunes
   // them). The interferers stage counts the blocking ones it derives instead (refuseTooManyImages).
   return [
-    { path: ['harmonicOrder'], words: `the wanted band's harmonics up to ${formatFrequency(order * highestWanted)}`, reach: highestWanted * (triangle(order) - 1), count: order - 1 },
+    {
+      path: ['harmonicOrder'],
+      words: `the wanted band's harmonics up to ${formatFrequency(order * highestWanted)}`,
+      reach: highestWanted * (triangle(order) - 1),
+      count: order - 1,
+    },
     ...inputs.boardSpurs.map((spur, i) => ({
       path: ['boardSpurs', i, spur.high === spur.low ? 'frequency' : 'high'],
       words: `boardSpurs[${i}] (${spur.label}) up to ${formatFrequency(spur.harmonics * spur.high)}`,

@@ -48,9 +48,13 @@ export const expectedWords: z.core.$ZodErrorMap = (issue) => {
         ? `a list of at most ${String(issue.maximum)} entries`
         : `a number ${issue.inclusive ? 'at most' : 'below'} ${String(issue.maximum)}`;
     case 'invalid_value':
-      return issue.values.length === 1 ? JSON.stringify(issue.values[0]) : `one of ${issue.values.map((v) => JSON.stringify(v)).join(', ')}`;
+      return issue.values.length === 1
+        ? JSON.stringify(issue.values[0])
+        : `one of ${issue.values.map((v) => JSON.stringify(v)).join(', ')}`;
     case 'invalid_union':
-      return 'discriminator' in issue && issue.discriminator !== undefined ? `an object with a valid "${issue.discriminator}"` : 'a valid value';
+      return 'discriminator' in issue && issue.discriminator !== undefined
+        ? `an object with a valid "${issue.discriminator}"`
+        : 'a valid value';
     default:
       return 'a valid value';
   }
@@ -83,7 +87,15 @@ function translated(issues: readonly ZodIssue[], setting: IssueSetting, prefix: 
     const misspelt = issue.code === 'invalid_value' ? unknownValue(issue, path, setting) : null;
     if (misspelt) return [misspelt];
     const expected = issue.code === 'invalid_key' ? (issue.issues[0]?.message ?? issue.message) : issue.message;
-    return [{ kind: 'invalid', file: setting.fileOf(path, ...relatedPaths(issue, path)), path: pathText(path), expected, received: receivedWords(issue) }];
+    return [
+      {
+        kind: 'invalid',
+        file: setting.fileOf(path, ...relatedPaths(issue, path)),
+        path: pathText(path),
+        expected,
+        received: receivedWords(issue),
+      },
+    ];
   });
 }
 
@@ -94,7 +106,8 @@ function translated(issues: readonly ZodIssue[], setting: IssueSetting, prefix: 
 function explainedFirst(issues: readonly ScenarioIssue[]): ScenarioIssue[] {
   const unknown = issues.filter((issue) => issue.kind === 'unknown-key');
   const meant = new Set(unknown.map((issue) => `${issue.file}\0${parentPath(issue.path)}\0${issue.suggestion ?? ''}`));
-  const explained = (issue: ScenarioIssue) => issue.received === 'nothing' && meant.has(`${issue.file}\0${parentPath(issue.path)}\0${lastKey(issue.path)}`);
+  const explained = (issue: ScenarioIssue) =>
+    issue.received === 'nothing' && meant.has(`${issue.file}\0${parentPath(issue.path)}\0${lastKey(issue.path)}`);
   return [...unknown, ...issues.filter((issue) => issue.kind !== 'unknown-key' && !explained(issue))];
 }
 
@@ -114,10 +127,19 @@ function badDiscriminator(issue: ZodIssue & { code: 'invalid_union' }, path: Doc
   const value = object && Object.hasOwn(object, key) ? object[key] : undefined;
   const where = path.at(-1) === key ? path : [...path, key];
   // A misspelt discriminator key (`knid`) is the unknown key it is, not a missing `kind`.
-  const misspelt = value === undefined && object ? Object.keys(object).find((written) => written !== key && nearestKey(written, [key]) === key) : undefined;
+  const misspelt =
+    value === undefined && object
+      ? Object.keys(object).find((written) => written !== key && nearestKey(written, [key]) === key)
+      : undefined;
   if (misspelt !== undefined) return unknownKey(path.at(-1) === key ? path.slice(0, -1) : path, misspelt, setting);
   const choices = options.map((option) => JSON.stringify(option)).join(', ');
-  const nearest = typeof value === 'string' ? nearestKey(value, options.filter((option): option is string => typeof option === 'string')) : null;
+  const nearest =
+    typeof value === 'string'
+      ? nearestKey(
+          value,
+          options.filter((option): option is string => typeof option === 'string'),
+        )
+      : null;
   return {
     kind: nearest ? 'unknown-value' : 'invalid',
     file: setting.fileOf(where),
@@ -134,7 +156,14 @@ function unknownValue(issue: ZodIssue & { code: 'invalid_value' }, path: Documen
   const nearest = typeof issue.input === 'string' && words.length === issue.values.length ? nearestKey(issue.input, words) : null;
   if (!nearest) return null;
   const expected = `one of ${words.map((word) => JSON.stringify(word)).join(', ')}`;
-  return { kind: 'unknown-value', file: setting.fileOf(path), path: pathText(path), expected, received: describeValue(issue.input), suggestion: nearest };
+  return {
+    kind: 'unknown-value',
+    file: setting.fileOf(path),
+    path: pathText(path),
+    expected,
+    received: describeValue(issue.input),
+    suggestion: nearest,
+  };
 }
 
 function unknownKey(path: DocumentPath, key: string, setting: IssueSetting): ScenarioIssue {

@@ -40,7 +40,12 @@ export function bestRateIn(context: PlanContext, interval: FeasibleInterval): Ra
   }
 }
 
-function widestMargin(context: PlanContext, interval: FeasibleInterval, range: Interval, judge: (rate: number) => RateEvaluation): RateEvaluation {
+function widestMargin(
+  context: PlanContext,
+  interval: FeasibleInterval,
+  range: Interval,
+  judge: (rate: number) => RateEvaluation,
+): RateEvaluation {
   if (range.low === range.high) return judge(range.low);
   const blocking = context.interferers.filter((i) => i.blocking);
   const slacks = linearSlacks(context.band, context.guard, interval.zone, blocking, range, context.tolerancePpm);
@@ -49,12 +54,20 @@ function widestMargin(context: PlanContext, interval: FeasibleInterval, range: I
   const judged = judge(answer.rate);
   const allowance = 1e-6 * (range.high + context.band.high - context.band.low);
   if (judged.worstSlack < answer.worstSlack - allowance) {
-    throw new Error(`widest-margin LP promised ${answer.worstSlack} Hz at ${answer.rate} Hz; the exact re-check found ${judged.worstSlack} Hz (${limitText(judged.limitedBy)})`);
+    throw new Error(
+      `widest-margin LP promised ${answer.worstSlack} Hz at ${answer.rate} Hz; the exact re-check found ${judged.worstSlack} Hz (${limitText(judged.limitedBy)})`,
+    );
   }
   return judged;
 }
 
-function bestRatio(context: PlanContext, interval: FeasibleInterval, range: Interval, outputRate: Hz, judge: (rate: number) => RateEvaluation): RateEvaluation | null {
+function bestRatio(
+  context: PlanContext,
+  interval: FeasibleInterval,
+  range: Interval,
+  outputRate: Hz,
+  judge: (rate: number) => RateEvaluation,
+): RateEvaluation | null {
   const first = Math.ceil(range.low / outputRate);
   const last = Math.floor(range.high / outputRate);
   if (first > last) return null;
@@ -84,4 +97,3 @@ export function goalScore(context: PlanContext, evaluation: RateEvaluation): num
       return evaluation.worstSlack;
   }
 }
-

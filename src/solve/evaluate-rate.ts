@@ -3,7 +3,17 @@ import { bandImage, wantedZone, type Band, type Guard } from '../math/band.js';
 import { foldExtent } from '../math/fold-extent.js';
 import { EDGE_TOLERANCE } from '../math/edge-tolerance.js';
 import { meetsOpen } from '../math/interval-set.js';
-import { breakpointAt, firstNearbyImage, imageOffsetHigh, imageOffsetLow, lastNearbyImage, marginAt, normalisedHigh, normalisedLow, normalisedMultiple } from './fold-images.js';
+import {
+  breakpointAt,
+  firstNearbyImage,
+  imageOffsetHigh,
+  imageOffsetLow,
+  lastNearbyImage,
+  marginAt,
+  normalisedHigh,
+  normalisedLow,
+  normalisedMultiple,
+} from './fold-images.js';
 import { forbiddenRates } from './forbidden-rates.js';
 import { guardedBand } from '../windows/enumerate-windows.js';
 import type { Interferer, InterfererKind } from '../interferers/interferer.js';
@@ -85,7 +95,12 @@ export function evaluateRate(context: PlanContext, rate: Hz, tolerancePpm: Ppm, 
   const drift = driftRange(rate, tolerancePpm);
   const image = bandImage(context.band, rate);
   const zone = image?.zone ?? wantedZone(context.band, rate);
-  const zoneEdgeMargin = hz(Math.min(zoneEdgeMarginAt(context.band, context.guard, zone, drift.low), zoneEdgeMarginAt(context.band, context.guard, zone, drift.high)));
+  const zoneEdgeMargin = hz(
+    Math.min(
+      zoneEdgeMarginAt(context.band, context.guard, zone, drift.low),
+      zoneEdgeMarginAt(context.band, context.guard, zone, drift.high),
+    ),
+  );
   const zonePass = image !== null && zoneEdgeMargin >= -EDGE_TOLERANCE * rate;
   const judged = scope === 'all' ? context.interferers : blockingInterferers(context.interferers);
   const checks = judged.map((i) => checkInterferer(context, i, rate, drift));
@@ -145,7 +160,12 @@ export function zoneEdgeMarginAt(band: Band, guard: Guard, zone: number, rate: H
   return hz(Math.min(below, above));
 }
 
-function checkInterferer(context: PlanContext, interferer: Interferer, rate: Hz, drift: { readonly low: Hz; readonly high: Hz }): CheckResult {
+function checkInterferer(
+  context: PlanContext,
+  interferer: Interferer,
+  rate: Hz,
+  drift: { readonly low: Hz; readonly high: Hz },
+): CheckResult {
   const margin = leastMargin(interferer, context.band, drift);
   const levelMargin = db(context.levelThreshold - interferer.level);
   const blocked = interferer.blocking && meetsOpen(drift, forbiddenRates(interferer, context.band, drift.low, drift.high));
@@ -182,7 +202,11 @@ export function leastMargin(interferer: Interferer, band: Band, range: { readonl
     const last = lastNearbyImage(rateMultiple, high - imageLow, range.low, range.high);
     for (let j = firstNearbyImage(rateMultiple, low - imageHigh, range.low, range.high); j <= last; j++) {
       const slope = j - rateMultiple;
-      least = Math.min(least, marginAt(low, high, imageLow, imageHigh, slope * range.low), marginAt(low, high, imageLow, imageHigh, slope * range.high));
+      least = Math.min(
+        least,
+        marginAt(low, high, imageLow, imageHigh, slope * range.low),
+        marginAt(low, high, imageLow, imageHigh, slope * range.high),
+      );
       if (slope === 0) continue;
       const bend = breakpointAt(low, high, imageLow, imageHigh, slope);
       if (bend > range.low && bend < range.high) least = Math.min(least, marginAt(low, high, imageLow, imageHigh, slope * bend));

@@ -81,7 +81,10 @@ export interface PlanRates extends FeasibleSet {
  * @returns the windows, the feasible intervals and the blocked ranges
  * @example planRates(handWorked).feasible.length // 4 ([20.4, 21], [25, 82/3], [35.5, 42], [50, 60] MHz)
  */
-export function planRates(plan: Pick<PlanContext, 'band' | 'guard' | 'limits' | 'interferers'>, limits: RateLimits = plan.limits): PlanRates {
+export function planRates(
+  plan: Pick<PlanContext, 'band' | 'guard' | 'limits' | 'interferers'>,
+  limits: RateLimits = plan.limits,
+): PlanRates {
   const windows = planWindows(plan, limits);
   return { windows, ...feasibleSet(windows, plan.interferers, plan.band) };
 }

@@ -67,7 +67,12 @@ export function jointFeasibleSet(bands: readonly Band[], spacing: Hz, limits: Ra
         const other = { rateMultiple: 0, low: bands[second]!.low, high: bands[second]!.high };
         for (const hole of closeImageRates(other, spacing, bands[first]!, window.minRate, searchedTo)) {
           holes.push(hole);
-          collisions.push({ first, second, minRate: hz(Math.max(hole.low, window.minRate)), maxRate: hz(Math.min(hole.high, window.maxRate)) });
+          collisions.push({
+            first,
+            second,
+            minRate: hz(Math.max(hole.low, window.minRate)),
+            maxRate: hz(Math.min(hole.high, window.maxRate)),
+          });
         }
       }
     }

@@ -22,8 +22,11 @@ export interface NextLimit {
  * @example nextLimit(evaluateRate(handWorked, hz(26e6), ppm(0)), hz(4e6))?.limitedBy // 'board tone 10M' (the rate/4 spur is the worst; the tone 5 MHz away is next)
  */
 export function nextLimit(evaluation: RateEvaluation, bandwidth: number): NextLimit | null {
-  const rows: { limit: Limit; margin: Hz; slack: number }[] = [{ limit: ZONE_EDGE, margin: evaluation.zoneEdgeMargin, slack: evaluation.zoneEdgeMargin }];
-  for (const c of evaluation.checks) if (c.blocking) rows.push({ limit: interfererLimit(c.label), margin: c.margin, slack: c.margin - c.requiredMargin });
+  const rows: { limit: Limit; margin: Hz; slack: number }[] = [
+    { limit: ZONE_EDGE, margin: evaluation.zoneEdgeMargin, slack: evaluation.zoneEdgeMargin },
+  ];
+  for (const c of evaluation.checks)
+    if (c.blocking) rows.push({ limit: interfererLimit(c.label), margin: c.margin, slack: c.margin - c.requiredMargin });
   const next = rows.filter((r) => r.slack > evaluation.worstSlack + tieAllowance(bandwidth)).sort((a, b) => a.slack - b.slack)[0];
   return next ? { limitedBy: limitText(next.limit), limitedByKind: next.limit.kind, margin: next.margin, slack: hz(next.slack) } : null;
 }

@@ -44,7 +44,11 @@ export function unfixableConflicts(context: PlanContext): Conflict[] {
     let nearest = Infinity;
     let always = true;
     for (const shift of shifts) {
-      const moved = { ...interferer, low: (interferer.low + interferer.shiftMultiple * shift) as Hz, high: (interferer.high + interferer.shiftMultiple * shift) as Hz };
+      const moved = {
+        ...interferer,
+        low: (interferer.low + interferer.shiftMultiple * shift) as Hz,
+        high: (interferer.high + interferer.shiftMultiple * shift) as Hz,
+      };
       const band: Band = { low: hz(context.band.low + shift), high: hz(context.band.high + shift) };
       const distance = stillDistance(moved, band);
       nearest = Math.min(nearest, distance);
@@ -52,7 +56,14 @@ export function unfixableConflicts(context: PlanContext): Conflict[] {
     }
     if (!always) continue;
     const excess = db(interferer.level - context.levelThreshold);
-    conflicts.push({ label: interferer.label, kind: interferer.kind, distance: hz(nearest), requiredMargin: interferer.requiredMargin, excess, sentence: conflictSentence(interferer, nearest, excess) });
+    conflicts.push({
+      label: interferer.label,
+      kind: interferer.kind,
+      distance: hz(nearest),
+      requiredMargin: interferer.requiredMargin,
+      excess,
+      sentence: conflictSentence(interferer, nearest, excess),
+    });
   }
   return conflicts;
 }
@@ -69,7 +80,10 @@ function stillDistance(interferer: Interferer, band: Band): number {
 }
 
 function conflictSentence(interferer: Interferer, distance: number, excess: number): string {
-  const where = distance < 0 ? `lies inside the wanted band (${formatFrequency(-distance)} from its nearer edge)` : `lies ${formatFrequency(distance)} from the wanted band`;
+  const where =
+    distance < 0
+      ? `lies inside the wanted band (${formatFrequency(-distance)} from its nearer edge)`
+      : `lies ${formatFrequency(distance)} from the wanted band`;
   const required = `where ${formatFrequency(interferer.requiredMargin)} is required`;
   const weaker = `${dbText(excess, 'dB')} less level would make it harmless`;
   const fixes = {

@@ -36,7 +36,14 @@ export interface LinearSlack {
  * @returns the slacks, t ≤ slope·r + offset, Hz
  * @example linearSlacks(handWorked.band, handWorked.guard, 2, [], { low: 30e6, high: 40e6 }, ppm(0)).length // 4 (two zone edges at each drift end)
  */
-export function linearSlacks(band: Band, guard: Guard, zone: number, blocking: readonly Interferer[], range: Interval, tolerancePpm: Ppm): LinearSlack[] {
+export function linearSlacks(
+  band: Band,
+  guard: Guard,
+  zone: number,
+  blocking: readonly Interferer[],
+  range: Interval,
+  tolerancePpm: Ppm,
+): LinearSlack[] {
   const { down, up } = driftFactors(tolerancePpm);
   const scales = [down, up];
   const middle = (range.low + range.high) / 2;
@@ -94,7 +101,15 @@ export function maximiseWorstSlack(slacks: readonly LinearSlack[], range: Interv
   const varying = slacks.filter((s) => Math.abs(s.slope * (range.high - range.low)) > 1e-9 * unit);
   const floor = first.worstSlack - 1e-6 * unit; // the solver rounds t* to 1e-8 units
   // Constant slacks are at t* or above by the first stage; only the varying ones need holding.
-  const second = varying.length > 0 ? solveStage(varying, varying.map((s) => ({ ...s, offset: s.offset - floor })), range, unit) : null;
+  const second =
+    varying.length > 0
+      ? solveStage(
+          varying,
+          varying.map((s) => ({ ...s, offset: s.offset - floor })),
+          range,
+          unit,
+        )
+      : null;
   return { rate: second ? second.rate : first.rate, worstSlack: first.worstSlack };
 }
 

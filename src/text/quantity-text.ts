@@ -171,7 +171,14 @@ function prefixOf(value: number): readonly [number, string] {
 }
 
 /** "low–high unit" when both take the same prefix and differ when written, "low unit – high unit" across prefixes; null when the digits merge them. */
-function pairText(low: number, high: number, digits: number, number: (v: number, d: number) => string, inUnit: (v: number, d: number) => string, exact = false): string | null {
+function pairText(
+  low: number,
+  high: number,
+  digits: number,
+  number: (v: number, d: number) => string,
+  inUnit: (v: number, d: number) => string,
+  exact = false,
+): string | null {
   const [scaleHigh, unitHigh] = prefixOf(high);
   // Zero takes the unit of the other end: "0–20 MHz".
   const [scaleLow, unitLow] = low === 0 ? [scaleHigh, unitHigh] : prefixOf(low);

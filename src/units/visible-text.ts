@@ -17,5 +17,8 @@ const NAMED: Readonly<Record<string, string>> = { '\n': '\\n', '\r': '\\r', '\t'
  * @example visibleText('Heron\u001b[2J') // 'Heron\\u001b[2J'
  */
 export function visibleText(text: string, keepLines = false): string {
-  return text.replace(keepLines ? CONTROL_BUT_LINES : CONTROL, (char) => NAMED[char] ?? `\\u${char.charCodeAt(0).toString(16).padStart(4, '0')}`);
+  return text.replace(
+    keepLines ? CONTROL_BUT_LINES : CONTROL,
+    (char) => NAMED[char] ?? `\\u${char.charCodeAt(0).toString(16).padStart(4, '0')}`,
+  );
 }

@@ -30,7 +30,9 @@ export function rateWindows(band: Band, limits: RateLimits = NO_LIMITS): RateWin
   if (!(width > 0) || band.low < 0) throw new RangeError(`a band needs 0 ≤ low < high, got ${band.low}–${band.high} Hz`);
   const { first, last } = zoneSpan(band, limits.minRate, limits.maxRate);
   if (last - first + 1 > MOST_WINDOWS) {
-    throw new RangeError(`the rate range holds ${last - first + 1} windows for this band, more than ${MOST_WINDOWS}; check windowCount first`);
+    throw new RangeError(
+      `the rate range holds ${last - first + 1} windows for this band, more than ${MOST_WINDOWS}; check windowCount first`,
+    );
   }
   const windows: RateWindow[] = [];
   for (let zone = first; zone <= last; zone++) {

@@ -62,22 +62,28 @@ describe('alias bands of a rate', () => {
     // Independent fold (common practice, no source): f shows at |f − r·round(f/r)|.
     const fold = (f: number, r: number) => Math.abs(f - r * Math.round(f / r));
     fc.assert(
-      fc.property(fc.integer({ min: 1, max: 400 }), fc.integer({ min: 1, max: 50 }), fc.integer({ min: 20, max: 300 }), fc.double({ min: 0, max: 1, noNaN: true }), (lowTenths, widthTenths, rateTenths, where) => {
-        const [low, high, rate] = [lowTenths / 10, (lowTenths + widthTenths) / 10, rateTenths / 10];
-        const folded = [fold(low, rate), fold(high, rate)];
-        // Only a channel whole in one zone has a contiguous alias.
-        if (Math.floor((2 * low) / rate) !== Math.floor((2 * high) / rate) || (2 * high) % rate === 0) return;
-        const [aliasLow, aliasHigh] = [Math.min(...folded), Math.max(...folded)];
-        const bandwidth = 4 * high + 10;
-        const bands = aliasBands({ low: hz(low), high: hz(high) }, hz(rate), hz(rate), hz(bandwidth));
-        const f = where * bandwidth;
-        const a = fold(f, rate);
-        const inside = (x: number, lo: number, hi: number) => x >= lo - 1e-9 && x <= hi + 1e-9;
-        const inBand = bands.some((b) => inside(f, b.low, b.high)) || inside(f, low, high);
-        const strictlyOutside = bands.every((b) => f < b.low - 1e-6 || f > b.high + 1e-6) && (f < low - 1e-6 || f > high + 1e-6);
-        if (inBand) expect(inside(a, aliasLow, aliasHigh)).toBe(true);
-        if (strictlyOutside) expect(a > aliasLow + 1e-9 && a < aliasHigh - 1e-9).toBe(false);
-      }),
+      fc.property(
+        fc.integer({ min: 1, max: 400 }),
+        fc.integer({ min: 1, max: 50 }),
+        fc.integer({ min: 20, max: 300 }),
+        fc.double({ min: 0, max: 1, noNaN: true }),
+        (lowTenths, widthTenths, rateTenths, where) => {
+          const [low, high, rate] = [lowTenths / 10, (lowTenths + widthTenths) / 10, rateTenths / 10];
+          const folded = [fold(low, rate), fold(high, rate)];
+          // Only a channel whole in one zone has a contiguous alias.
+          if (Math.floor((2 * low) / rate) !== Math.floor((2 * high) / rate) || (2 * high) % rate === 0) return;
+          const [aliasLow, aliasHigh] = [Math.min(...folded), Math.max(...folded)];
+          const bandwidth = 4 * high + 10;
+          const bands = aliasBands({ low: hz(low), high: hz(high) }, hz(rate), hz(rate), hz(bandwidth));
+          const f = where * bandwidth;
+          const a = fold(f, rate);
+          const inside = (x: number, lo: number, hi: number) => x >= lo - 1e-9 && x <= hi + 1e-9;
+          const inBand = bands.some((b) => inside(f, b.low, b.high)) || inside(f, low, high);
+          const strictlyOutside = bands.every((b) => f < b.low - 1e-6 || f > b.high + 1e-6) && (f < low - 1e-6 || f > high + 1e-6);
+          if (inBand) expect(inside(a, aliasLow, aliasHigh)).toBe(true);
+          if (strictlyOutside) expect(a > aliasLow + 1e-9 && a < aliasHigh - 1e-9).toBe(false);
+        },
+      ),
       { numRuns: 3000 },
     );
   });
@@ -111,7 +117,14 @@ describe('the anti-alias mask', () => {
   it('a table filter with a dip inside the band: the least is at the table point, not at either end', () => {
     // Points (100 MHz, 60 dB), (150 MHz, 20 dB), (200 MHz, 70 dB), linear in dB over log-frequency.
     // Ends: 120 MHz: 60 − 40·ln(1.2)/ln(1.5) = 42.02 dB; 190 MHz: 20 + 50·ln(190/150)/ln(4/3) = 61.08 dB; inside: 20 dB at 150 MHz.
-    const table = { kind: 'table', points: [{ frequency: hz(100e6), attenuation: db(60) }, { frequency: hz(150e6), attenuation: db(20) }, { frequency: hz(200e6), attenuation: db(70) }] } as const;
+    const table = {
+      kind: 'table',
+      points: [
+        { frequency: hz(100e6), attenuation: db(60) },
+        { frequency: hz(150e6), attenuation: db(20) },
+        { frequency: hz(200e6), attenuation: db(70) },
+      ],
+    } as const;
     const mask = filterMask([{ multiple: 1, sense: 'upright', low: hz(120e6), high: hz(190e6) }], table, db(-50), db(-80));
     expect(mask.bands[0]!.givenDb).toBe(20);
     expect(mask.worst?.marginDb).toBe(-10);

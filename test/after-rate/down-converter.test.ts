@@ -7,7 +7,15 @@ import { decimationPlan, NOT_AN_INTEGER } from '../../src/after-rate/decimation-
 describe('NCO tuning word', () => {
   it('the doc example: 10 MHz at 100 MHz with 8 bits', () => {
     // 10/100·256 = 25.6 → 26; 26·100/256 = 10.15625 MHz; error +156.25 kHz; −10 MHz: 256 − 26 = 230.
-    expect(ncoSetting(hz(10e6), hz(100e6), 8, false)).toEqual({ bits: 8, target: 10e6, word: 26, actual: 10.15625e6, error: 156.25e3, inverted: false, negativeWord: 230 });
+    expect(ncoSetting(hz(10e6), hz(100e6), 8, false)).toEqual({
+      bits: 8,
+      target: 10e6,
+      word: 26,
+      actual: 10.15625e6,
+      error: 156.25e3,
+      inverted: false,
+      negativeWord: 230,
+    });
   });
 
   it('17.12 MHz at 122.88 MHz with 32 bits, upright and inverted', () => {
@@ -46,7 +54,11 @@ describe('decimation to the output rate', () => {
   });
 
   it('a ratio that is not whole needs a fractional resampler', () => {
-    expect(decimationPlan(hz(100e6), hz(30.72e6), hz(5e6), 0.8, hz(0))).toMatchObject({ factor: null, refusal: NOT_AN_INTEGER, remainder: null });
+    expect(decimationPlan(hz(100e6), hz(30.72e6), hz(5e6), 0.8, hz(0))).toMatchObject({
+      factor: null,
+      refusal: NOT_AN_INTEGER,
+      remainder: null,
+    });
     expect(decimationPlan(hz(10e6), hz(30.72e6), hz(5e6), 0.8, hz(0)).refusal).toBe('the output rate is above the sample rate');
   });
 

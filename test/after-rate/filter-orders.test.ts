@@ -47,9 +47,12 @@ describe('low-pass prototype orders', () => {
     [1.05, 1, 40, 109, 19, 7],
     [10, 1, 80, 5, 4, 4],
     [1.2, 0.1, 100, 74, 23, 12],
-  ])('Ωs %f, Ap %f dB, As %f dB → Butterworth %i, Chebyshev I %i, elliptic %i (scipy.signal, analog)', (omega, ap, as, butterworth, chebyshev, elliptic) => {
-    expect(prototypeOrders(db(ap), db(as), omega)).toEqual({ butterworth, chebyshev, elliptic });
-  });
+  ])(
+    'Ωs %f, Ap %f dB, As %f dB → Butterworth %i, Chebyshev I %i, elliptic %i (scipy.signal, analog)',
+    (omega, ap, as, butterworth, chebyshev, elliptic) => {
+      expect(prototypeOrders(db(ap), db(as), omega)).toEqual({ butterworth, chebyshev, elliptic });
+    },
+  );
 
   it('a mask asking no more than the ripple needs no filter; bad masks are refused', () => {
     expect(prototypeOrders(db(1), db(0.5), 2)).toEqual({ butterworth: 0, chebyshev: 0, elliptic: 0 });
@@ -69,7 +72,11 @@ describe('low-pass prototype orders', () => {
 
 describe('band-pass orders from the channel and the nearest alias bands', () => {
   it('the doc example: 100–120 MHz, stop at 80 and 150 MHz, 1 dB / 60 dB → 7, 5, 4', () => {
-    expect(bandPassOrders({ low: hz(100e6), high: hz(120e6) }, hz(80e6), hz(150e6), db(1), db(60)).orders).toEqual({ butterworth: 7, chebyshev: 5, elliptic: 4 });
+    expect(bandPassOrders({ low: hz(100e6), high: hz(120e6) }, hz(80e6), hz(150e6), db(1), db(60)).orders).toEqual({
+      butterworth: 7,
+      chebyshev: 5,
+      elliptic: 4,
+    });
   });
 
   // Reference: scipy 1.17.1, scipy.signal.buttord / cheb1ord / ellipord(wp = [low, high], ws = [below, above], gpass, gstop, analog = True).
@@ -79,7 +86,11 @@ describe('band-pass orders from the channel and the nearest alias bands', () => 
     [65e6, 75e6, 40e6, 76e6, 1, 40, 32, 10, 6],
     [21e6, 25e6, 19e6, 55e6, 0.1, 70, 13, 8, 6],
   ])('pass %f–%f, stop %f / %f, Ap %f, As %f → %i, %i, %i (scipy.signal, analog band-pass)', (low, high, below, above, ap, as, b, c, e) => {
-    expect(bandPassOrders({ low: hz(low), high: hz(high) }, hz(below), hz(above), db(ap), db(as)).orders).toEqual({ butterworth: b, chebyshev: c, elliptic: e });
+    expect(bandPassOrders({ low: hz(low), high: hz(high) }, hz(below), hz(above), db(ap), db(as)).orders).toEqual({
+      butterworth: b,
+      chebyshev: c,
+      elliptic: e,
+    });
   });
 
   it('names the tightest side: Ω(f) = |f² − f0²|/(f·BW) of each stop edge, the smaller wins', () => {
@@ -105,6 +116,9 @@ describe('band-pass orders from the channel and the nearest alias bands', () => 
 
   it('a stop band reaching into the passband cannot be met (orders null); no stop band needs no filter', () => {
     expect(bandPassOrders({ low: hz(100e6), high: hz(120e6) }, hz(101e6), hz(150e6), db(1), db(60)).orders).toBeNull();
-    expect(bandPassOrders({ low: hz(100e6), high: hz(120e6) }, null, null, db(1), db(60))).toMatchObject({ orders: { butterworth: 0, chebyshev: 0, elliptic: 0 }, tightest: null });
+    expect(bandPassOrders({ low: hz(100e6), high: hz(120e6) }, null, null, db(1), db(60))).toMatchObject({
+      orders: { butterworth: 0, chebyshev: 0, elliptic: 0 },
+      tightest: null,
+    });
   });
 });

@@ -26,7 +26,7 @@ describe('adaptive Simpson quadrature', () => {
       const filter = { kind: 'butterworth', order, passLow: hz(90 * MHZ), passHigh: hz(110 * MHZ) } as const;
       const response = filterPowerResponse(filter);
       const { value } = integrate(response.power, 1, 20e9, 1e-3, response.cuts, 64);
-      const expected = 20 * MHZ * (Math.PI / (2 * order)) / Math.sin(Math.PI / (2 * order));
+      const expected = (20 * MHZ * (Math.PI / (2 * order))) / Math.sin(Math.PI / (2 * order));
       expect(value / expected).toBeCloseTo(1, 6);
     }
   });
@@ -55,7 +55,9 @@ describe('noise folding penalty', () => {
 
   it('a real filter lies between the two, and a steeper one folds in less', () => {
     const images = aliasBands(channel, hz(40 * MHZ), hz(40 * MHZ), hz(100 * MHZ));
-    const penalty = (order: number) => noiseFolding(filterPowerResponse({ kind: 'butterworth', order, passLow: hz(20 * MHZ), passHigh: hz(26 * MHZ) }), channel, images).penaltyDb;
+    const penalty = (order: number) =>
+      noiseFolding(filterPowerResponse({ kind: 'butterworth', order, passLow: hz(20 * MHZ), passHigh: hz(26 * MHZ) }), channel, images)
+        .penaltyDb;
     expect(penalty(2)).toBeGreaterThan(penalty(4));
     expect(penalty(4)).toBeGreaterThan(0);
     expect(penalty(2)).toBeLessThan(10 * Math.log10(5));
@@ -72,13 +74,21 @@ describe('noise folding penalty', () => {
     // Between two table points the attenuation is linear in dB over log-frequency, A(f) = a + s·ln(f/fa), so the power
     // 10^(−A/10) = 10^(−a/10)·(f/fa)^(−k) with k = s·ln 10 / 10, and ∫ from f1 to f2 = 10^(−a/10)·fa^k·(f2^(1−k) − f1^(1−k))/(1 − k).
     // Points (10 MHz, 60 dB), (50 MHz, 0 dB), (90 MHz, 0 dB), (400 MHz, 70 dB); channel 60–80 MHz in the flat part: 20 MHz.
-    const points = [[10e6, 60], [50e6, 0], [90e6, 0], [400e6, 70]] as const;
+    const points = [
+      [10e6, 60],
+      [50e6, 0],
+      [90e6, 0],
+      [400e6, 70],
+    ] as const;
     const table = { kind: 'table', points: points.map(([f, a]) => ({ frequency: hz(f), attenuation: db(a) })) } as const;
     const piece = (fa: number, a: number, fb: number, b: number, f1: number, f2: number) => {
       const k = ((b - a) / Math.log(fb / fa)) * (Math.LN10 / 10);
-      return 10 ** (-a / 10) * fa ** k * (f2 ** (1 - k) - f1 ** (1 - k)) / (1 - k);
+      return (10 ** (-a / 10) * fa ** k * (f2 ** (1 - k) - f1 ** (1 - k))) / (1 - k);
     };
-    const aliases = [{ low: hz(20e6), high: hz(40e6) }, { low: hz(100e6), high: hz(120e6) }];
+    const aliases = [
+      { low: hz(20e6), high: hz(40e6) },
+      { low: hz(100e6), high: hz(120e6) },
+    ];
     const expectedAlias = piece(10e6, 60, 50e6, 0, 20e6, 40e6) + piece(90e6, 0, 400e6, 70, 100e6, 120e6);
     const folding = noiseFolding(filterPowerResponse(table), { low: hz(60e6), high: hz(80e6) }, aliases);
     expect(folding.channelBandwidth / 20e6).toBeCloseTo(1, 12);

@@ -43,9 +43,17 @@ export default async function gridVsExact() {
     const context = contextFromScenario(readScenarioFile(file));
     const blocking = context.interferers.filter((i) => i.blocking).length;
     const exact = timeOf(() => planRates(context).feasible);
-    console.log(`${name}: ${context.interferers.length} interferers, ${blocking} blocking; rates ${mhz(context.limits.minRate)} – ${mhz(context.limits.maxRate)}`);
+    console.log(
+      `${name}: ${context.interferers.length} interferers, ${blocking} blocking; rates ${mhz(context.limits.minRate)} – ${mhz(context.limits.maxRate)}`,
+    );
     console.log(`  exact feasible set: ${exact.result.length} intervals in ${exact.ms.toFixed(3)} ms (median)`);
-    const problem = { band: context.band, guard: context.guard, minRate: context.limits.minRate, maxRate: context.limits.maxRate, interferers: context.interferers };
+    const problem = {
+      band: context.band,
+      guard: context.guard,
+      minRate: context.limits.minRate,
+      maxRate: context.limits.maxRate,
+      interferers: context.interferers,
+    };
     for (const step of STEPS) {
       const grid = timeOf(() => gridSweep(problem, step));
       const runs = passingRuns(grid.result);
@@ -53,12 +61,20 @@ export default async function gridVsExact() {
       const { missed, invented, merged, misEdged, largestEdgeError } = compareWithExact(exact.result, runs, step);
       const label = `${step / 1e3} kHz grid`;
       const target = step === 10e3 ? ` (target ≥ ${TARGET_RATIO}×)` : '';
-      console.log(`  ${label}: ${grid.result.rates.length.toLocaleString('en')} rates in ${grid.ms.toFixed(2)} ms, ${runs.length} runs; grid/exact ${ratio.toFixed(0)}×${target}`);
-      console.log(`    misses ${missed.length}, invents ${invented.length}, merges ${merged.length}, mis-edges ${misEdged.length}; largest edge error ${(largestEdgeError / 1e3).toFixed(3)} kHz`);
-      for (const f of missed) console.log(`    missed:   ${mhz(f.minRate)} – ${mhz(f.maxRate)} (${((f.maxRate - f.minRate) / 1e3).toFixed(3)} kHz wide, zone ${f.zone})`);
+      console.log(
+        `  ${label}: ${grid.result.rates.length.toLocaleString('en')} rates in ${grid.ms.toFixed(2)} ms, ${runs.length} runs; grid/exact ${ratio.toFixed(0)}×${target}`,
+      );
+      console.log(
+        `    misses ${missed.length}, invents ${invented.length}, merges ${merged.length}, mis-edges ${misEdged.length}; largest edge error ${(largestEdgeError / 1e3).toFixed(3)} kHz`,
+      );
+      for (const f of missed)
+        console.log(
+          `    missed:   ${mhz(f.minRate)} – ${mhz(f.maxRate)} (${((f.maxRate - f.minRate) / 1e3).toFixed(3)} kHz wide, zone ${f.zone})`,
+        );
       for (const r of invented) console.log(`    invented: ${mhz(r.low)} – ${mhz(r.high)}`);
       for (const r of merged) console.log(`    merged:   ${mhz(r.low)} – ${mhz(r.high)} spans several exact intervals`);
-      for (const { run, error } of misEdged) console.log(`    mis-edged: ${mhz(run.low)} – ${mhz(run.high)} off by ${(error / 1e3).toFixed(3)} kHz`);
+      for (const { run, error } of misEdged)
+        console.log(`    mis-edged: ${mhz(run.low)} – ${mhz(run.high)} off by ${(error / 1e3).toFixed(3)} kHz`);
       if (step === 10e3 && ratio < TARGET_RATIO) ok = false;
     }
   }

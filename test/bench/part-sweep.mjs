@@ -49,7 +49,9 @@ export default async function partSweep() {
   const ms = Number(process.hrtime.bigint() - start) / 1e6;
   const perSecond = judged / (ms / 1e3);
   console.log(`demo scenario: ${feasible.length} feasible intervals from ${context.interferers.length} interferers`);
-  console.log(`rates judged:   ${judged.toLocaleString('en')} (${REFERENCES} references × N 1..${N_MAX} × M 1..${M_MAX}, ±${TOLERANCE_PPM} ppm)`);
+  console.log(
+    `rates judged:   ${judged.toLocaleString('en')} (${REFERENCES} references × N 1..${N_MAX} × M 1..${M_MAX}, ±${TOLERANCE_PPM} ppm)`,
+  );
   console.log(`passing:        ${passing.toLocaleString('en')}`);
   console.log(`elapsed:        ${ms.toFixed(1)} ms (limit ${LIMIT_MS} ms)`);
   console.log(`judged per s:   ${Math.round(perSecond).toLocaleString('en')}`);

@@ -44,8 +44,12 @@ export default async function bench() {
     const median = times[ROUNDS >> 1];
     worst = Math.max(worst, median);
     const s = derived.summary;
-    console.log(`threshold ${s.threshold.toFixed(1)} dBFS: ${s.products} products listed, ${s.pruned} left out (strongest ${s.strongestPruned?.toFixed(1)} dBFS), ${derived.interferers.length} interferers in all`);
-    console.log(`  derivation: median ${median.toFixed(0)} ms of ${ROUNDS} (${times.map((t) => t.toFixed(0)).join(', ')}), limit ${LIMIT_MS} ms`);
+    console.log(
+      `threshold ${s.threshold.toFixed(1)} dBFS: ${s.products} products listed, ${s.pruned} left out (strongest ${s.strongestPruned?.toFixed(1)} dBFS), ${derived.interferers.length} interferers in all`,
+    );
+    console.log(
+      `  derivation: median ${median.toFixed(0)} ms of ${ROUNDS} (${times.map((t) => t.toFixed(0)).join(', ')}), limit ${LIMIT_MS} ms`,
+    );
   }
   return worst < LIMIT_MS;
 }

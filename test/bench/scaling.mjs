@@ -31,10 +31,18 @@ function measure(scenario) {
 }
 
 function measureFile(path) {
-  const run = spawnSync(process.execPath, [CHILD, 'solve', path, '--json'], { cwd: ROOT, encoding: 'utf8', timeout: TIMEOUT_MS, maxBuffer: 1 << 20 });
+  const run = spawnSync(process.execPath, [CHILD, 'solve', path, '--json'], {
+    cwd: ROOT,
+    encoding: 'utf8',
+    timeout: TIMEOUT_MS,
+    maxBuffer: 1 << 20,
+  });
   const line = (run.stderr ?? '').split('\n').find((l) => l.startsWith('MEASURE '));
   if (line) return JSON.parse(line.slice('MEASURE '.length));
-  const why = run.error?.code === 'ETIMEDOUT' ? `over ${TIMEOUT_MS / 1000} s` : `died (${run.signal ?? run.status}): ${(run.stderr ?? '').trim().split('\n').pop()}`;
+  const why =
+    run.error?.code === 'ETIMEDOUT'
+      ? `over ${TIMEOUT_MS / 1000} s`
+      : `died (${run.signal ?? run.status}): ${(run.stderr ?? '').trim().split('\n').pop()}`;
   return { failed: why };
 }
 
@@ -68,7 +76,9 @@ function series(title, sizes, variant) {
       break; // a larger case would fail too, and take longer
     }
     const note = m.error ? `  ${m.error}` : '';
-    console.log(`${String(n).padStart(7)} ${m.ms.toFixed(0).padStart(10)} ${m.peakRssMb.toFixed(0).padStart(9)} ${(m.outBytes / MB).toFixed(2).padStart(9)} ${String(m.exit).padStart(5)}${note}`);
+    console.log(
+      `${String(n).padStart(7)} ${m.ms.toFixed(0).padStart(10)} ${m.peakRssMb.toFixed(0).padStart(9)} ${(m.outBytes / MB).toFixed(2).padStart(9)} ${String(m.exit).padStart(5)}${note}`,
+    );
   }
   // Fitted where the work outweighs start-up: sizes of 10 and above.
   const fitted = rows.filter((r) => !r.m.failed && (r.m.exit === 0 || r.m.exit === 1) && r.n >= 10);
@@ -104,21 +114,34 @@ function base() {
 }
 
 export default async function scaling() {
-  const byNeighbours = series('Neighbours (6 clock parts):', [2, 5, 10, 20, 50, 100, 200], (n) => ({ ...base(), neighbours: neighbours(n) }));
+  const byNeighbours = series('Neighbours (6 clock parts):', [2, 5, 10, 20, 50, 100, 200], (n) => ({
+    ...base(),
+    neighbours: neighbours(n),
+  }));
   const byParts = series('Clock parts (20 neighbours):', [1, 3, 10, 30, 100, 300, 1000], (n) => ({ ...base(), clocks: clockParts(n) }));
   let ok = withinTargets('200 neighbours', byNeighbours.find((r) => r.n === 200)?.m);
   ok = withinTargets('1,000 clock parts', byParts.find((r) => r.n === 1000)?.m) && ok;
 
   // A synthesiser on a plan where no rate passes: no filter, 25 dB rejection (about 300 blocking interferers).
   const failing = { ...base(), filter: null, requirements: { ...base().requirements, rejection: 25 } };
-  failing.clocks = [{ label: 'SYN-X from 10M', frequency: '10M', tolerance: 2, jitter: '200 fs', derive: { kind: 'synthesiser', n: [1, 4096], m: [1, 16], d: [1, 8], vco: { low: '2G', high: '6G' } } }];
+  failing.clocks = [
+    {
+      label: 'SYN-X from 10M',
+      frequency: '10M',
+      tolerance: 2,
+      jitter: '200 fs',
+      derive: { kind: 'synthesiser', n: [1, 4096], m: [1, 16], d: [1, 8], vco: { low: '2G', high: '6G' } },
+    },
+  ];
   const synth = measure(failing);
   if (synth.failed) {
     console.log(`failing synthesiser search (N 1..4096, M 1..16, D 1..8): ${synth.failed} — LIMIT MISSED`);
     ok = false;
   } else {
     const fast = synth.ms <= SYNTH_LIMIT_MS;
-    console.log(`failing synthesiser search (N 1..4096, M 1..16, D 1..8): ${synth.ms.toFixed(0)} ms (≤ ${SYNTH_LIMIT_MS}), exit ${synth.exit}${fast ? '' : ' — LIMIT MISSED'}`);
+    console.log(
+      `failing synthesiser search (N 1..4096, M 1..16, D 1..8): ${synth.ms.toFixed(0)} ms (≤ ${SYNTH_LIMIT_MS}), exit ${synth.exit}${fast ? '' : ' — LIMIT MISSED'}`,
+    );
     ok = fast && ok;
   }
   return ok;

@@ -28,7 +28,11 @@ function median(values) {
 
 /** The demo's best rate, from `solve --json`. */
 function bestRate() {
-  const run = spawnSync(process.execPath, ['bin/ifzone', 'solve', FAMILY[0], '--json'], { cwd: ROOT, encoding: 'utf8', maxBuffer: 1 << 26 });
+  const run = spawnSync(process.execPath, ['bin/ifzone', 'solve', FAMILY[0], '--json'], {
+    cwd: ROOT,
+    encoding: 'utf8',
+    maxBuffer: 1 << 26,
+  });
   const report = JSON.parse(run.stdout);
   return report.candidates.find((c) => c.label === report.best).rate;
 }
@@ -57,7 +61,9 @@ export default async function startup() {
     const ratio = ms / bareMedian;
     const within = ratio <= c.limit;
     ok &&= within;
-    console.log(`${c.name.padEnd(26)} median ${ms.toFixed(1)} ms, ${ratio.toFixed(2)}× node -e 0 (limit ${c.limit}×)${within ? '' : ' — LIMIT MISSED'}`);
+    console.log(
+      `${c.name.padEnd(26)} median ${ms.toFixed(1)} ms, ${ratio.toFixed(2)}× node -e 0 (limit ${c.limit}×)${within ? '' : ' — LIMIT MISSED'}`,
+    );
   }
   return ok;
 }

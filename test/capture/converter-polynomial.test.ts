@@ -24,7 +24,9 @@ function toneAmplitudes(record: ArrayLike<number>): number[] {
 }
 
 function tones(list: ReadonlyArray<{ cycles: number; amplitude: number; phase: number }>): Float64Array {
-  return Float64Array.from({ length: N }, (_, n) => list.reduce((x, t) => x + t.amplitude * Math.cos((2 * Math.PI * ((t.cycles * n) % N)) / N + t.phase), 0));
+  return Float64Array.from({ length: N }, (_, n) =>
+    list.reduce((x, t) => x + t.amplitude * Math.cos((2 * Math.PI * ((t.cycles * n) % N)) / N + t.phase), 0),
+  );
 }
 
 describe('single-tone harmonics of the polynomial (power-reduction identities)', () => {
@@ -54,7 +56,14 @@ describe('fitPolynomial', () => {
   it('puts every stated harmonic exactly at its level for one tone at the reference level, with the higher powers accounted for', () => {
     // The Heron demo converter's figures (invented data): −75, −80, −88, −90 dBc at −1 dBFS.
     const reference = 10 ** (-1 / 20);
-    const targets = new Map([[2, -76], [3, -81], [4, -89], [5, -91]].map(([k, l]) => [k!, 10 ** (l! / 20)]));
+    const targets = new Map(
+      [
+        [2, -76],
+        [3, -81],
+        [4, -89],
+        [5, -91],
+      ].map(([k, l]) => [k!, 10 ** (l! / 20)]),
+    );
     const a = fitPolynomial(targets, reference, 5);
     const record = tones([{ cycles: 101, amplitude: reference, phase: 0.4 }]);
     applyPolynomial(record, a);
@@ -66,13 +75,29 @@ describe('fitPolynomial', () => {
   });
 
   it('reduces to the leading-order fit a_k = 2^(k−1)·T_k/A^k when no higher power shares a harmonic (orders 2 and 3)', () => {
-    const a = fitPolynomial(new Map([[2, 1e-4], [3, 3e-5]]), 0.9, 3);
+    const a = fitPolynomial(
+      new Map([
+        [2, 1e-4],
+        [3, 3e-5],
+      ]),
+      0.9,
+      3,
+    );
     expect(a[2]).toBeCloseTo((2 * 1e-4) / 0.9 ** 2, 15);
     expect(a[3]).toBeCloseTo((4 * 3e-5) / 0.9 ** 3, 15);
   });
 
-  it('takes each coefficient\'s sign so that |a_m| is the largest the figures allow (opposite to the higher powers\' share)', () => {
-    const a = fitPolynomial(new Map([[2, 1e-4], [3, 1e-4], [4, 1e-4], [5, 1e-4]]), 0.9, 5);
+  it("takes each coefficient's sign so that |a_m| is the largest the figures allow (opposite to the higher powers' share)", () => {
+    const a = fitPolynomial(
+      new Map([
+        [2, 1e-4],
+        [3, 1e-4],
+        [4, 1e-4],
+        [5, 1e-4],
+      ]),
+      0.9,
+      5,
+    );
     expect(Math.sign(a[4]!)).toBe(1);
     expect(Math.sign(a[2]!)).toBe(-1);
     expect(Math.abs(singleToneHarmonic(a, 0.9, 2))).toBeCloseTo(1e-4, 15);
@@ -85,7 +110,7 @@ describe('productAmplitude and enumerateProducts (multinomial expansion)', () =>
     expect(productBound(orderSupremums([0, 1, 0, 0.04], 1), [0.5, 0.5], [2, -1])).toBeCloseTo(0.75 * 0.04 * 0.125, 15);
   });
 
-  it('bounds the harmonics of one tone through a 15th-order fit by the stated figures\' sizes, though its coefficients are large', () => {
+  it("bounds the harmonics of one tone through a 15th-order fit by the stated figures' sizes, though its coefficients are large", () => {
     // Fifteen orders at −90 dBc: the exact fit's monomial coefficients reach O(1) and alternate, yet on |x| ≤ A the curve stays tame.
     const reference = 10 ** (-1 / 20);
     const a = fitPolynomial(new Map(Array.from({ length: 14 }, (_, i) => [i + 2, 10 ** (-91 / 20)] as const)), reference, 15);
@@ -109,7 +134,11 @@ describe('productAmplitude and enumerateProducts (multinomial expansion)', () =>
     const record = tones(list);
     applyPolynomial(record, a);
     const spectrum = toneAmplitudes(record);
-    const found = enumerateProducts(a, list.map((t) => t.amplitude), 1e-12);
+    const found = enumerateProducts(
+      a,
+      list.map((t) => t.amplitude),
+      1e-12,
+    );
     expect(found.complete).toBe(true);
     const products = found.products;
     // These cycle counts are chosen so that no two products of order ≤ 6 share a bin: each bin is one product.
@@ -124,7 +153,15 @@ describe('productAmplitude and enumerateProducts (multinomial expansion)', () =>
     for (const [bin, amplitude] of byBin) expect(spectrum[bin]).toBeCloseTo(amplitude, 12);
     // Every product stays under its derivative bound (orderSupremums), which the search prunes with.
     const bounds = orderSupremums(a, 0.75);
-    for (const p of products) expect(p.amplitude).toBeLessThanOrEqual(productBound(bounds, list.map((t) => t.amplitude), p.net) * (1 + 1e-12));
+    for (const p of products)
+      expect(p.amplitude).toBeLessThanOrEqual(
+        productBound(
+          bounds,
+          list.map((t) => t.amplitude),
+          p.net,
+        ) *
+          (1 + 1e-12),
+      );
     // ...and nothing the enumeration left out shows above its cutoff.
     spectrum.forEach((value, bin) => {
       if (!byBin.has(bin) && bin !== 0) expect(value, `bin ${bin}`).toBeLessThan(1e-11);

@@ -61,7 +61,10 @@ describe('interleaving images of a blocker: M cores with a mismatch, simulated i
   it('gain mismatch: every image k·R/M ± f of the blocker is where and as strong as the plan lists it (imageLevel −50 dBc)', () => {
     const epsilon = 10 ** (-50 / 20);
     const amplitude = 10 ** (BLOCKER_LEVEL / 20);
-    const samples = Array.from({ length: N }, (_, n) => (1 + (n % M === 0 ? (M - 1) * epsilon : -epsilon)) * amplitude * Math.cos((2 * Math.PI * BLOCKER_BIN * n) / N + 0.3));
+    const samples = Array.from(
+      { length: N },
+      (_, n) => (1 + (n % M === 0 ? (M - 1) * epsilon : -epsilon)) * amplitude * Math.cos((2 * Math.PI * BLOCKER_BIN * n) / N + 0.3),
+    );
     const measured = levels(samples);
     const planned = plannedImages({ ways: M, offsetSpur: db(-120), imageLevel: db(-50) });
     expect(planned).toHaveLength(2 * (M - 1));

@@ -56,8 +56,11 @@ describe('levelSpectrum and findPeaks', () => {
     expect(levels[0]).toBeCloseTo(20 * Math.log10(0.25), 9);
   });
 
-  it('finds one peak per tone, none on the window\'s skirts', () => {
-    const record = Float64Array.from({ length: N }, (_, n) => 0.5 * Math.cos((2 * Math.PI * 100 * n) / N) + 1e-3 * Math.cos((2 * Math.PI * 900 * n) / N));
+  it("finds one peak per tone, none on the window's skirts", () => {
+    const record = Float64Array.from(
+      { length: N },
+      (_, n) => 0.5 * Math.cos((2 * Math.PI * 100 * n) / N) + 1e-3 * Math.cos((2 * Math.PI * 900 * n) / N),
+    );
     const { levels } = levelSpectrum(record, window);
     expect(findPeaks(levels, -200)).toEqual([100, 900]);
   });

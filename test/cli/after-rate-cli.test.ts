@@ -25,10 +25,16 @@ describe('after-rate outputs', () => {
     const run = runBin('solve', BASE, '--json');
     expect(run.status).toBe(0);
     const plan = JSON.parse(run.stdout);
-    expect(plan.afterRateInputs).toMatchObject({ inputBandwidth: 650e6, outputRate: 30.72e6, settings: { driverNoiseDensity: -155, passbandRipple: 1 } });
+    expect(plan.afterRateInputs).toMatchObject({
+      inputBandwidth: 650e6,
+      outputRate: 30.72e6,
+      settings: { driverNoiseDensity: -155, passbandRipple: 1 },
+    });
     for (const c of plan.candidates) {
       expect(Object.keys(c.afterRate)).toEqual(['mask', 'design', 'noise', 'downConverter']);
-      expect(Object.keys(c.afterRate.mask)).toEqual(expect.arrayContaining(['outOfBandLevel', 'levelStated', 'threshold', 'requiredDb', 'bands', 'worst', 'pass']));
+      expect(Object.keys(c.afterRate.mask)).toEqual(
+        expect.arrayContaining(['outOfBandLevel', 'levelStated', 'threshold', 'requiredDb', 'bands', 'worst', 'pass']),
+      );
       for (const band of c.afterRate.mask.bands) {
         expect(band.low).toBeLessThanOrEqual(band.high);
         expect(band.high).toBeLessThanOrEqual(650e6);
@@ -49,19 +55,25 @@ describe('after-rate outputs', () => {
     expect(block).toMatch(/Noise folding: \+\d/);
     expect(block).toMatch(/NCO \(32-bit\): word \d+/);
     expect(block).toMatch(/Decimation to 30\.72 MHz: ÷\d+/);
-    const prose = block.split('\n\n')[0]!.split('\n').filter((line) => !/[│┌└├]/.test(line));
+    const prose = block
+      .split('\n\n')[0]!
+      .split('\n')
+      .filter((line) => !/[│┌└├]/.test(line));
     for (const line of prose) expect([...line].length, line).toBeLessThanOrEqual(100);
   });
 
   it('a stated out-of-band level that a 2nd-order filter cannot hold back blocks every rate: exit 1, the mask named', () => {
-    const weak = variant('weak.json', { filter: { kind: 'butterworth', order: 2, passLow: '128M', passHigh: '152M' }, filterMask: { outOfBandLevel: -20 } });
+    const weak = variant('weak.json', {
+      filter: { kind: 'butterworth', order: 2, passLow: '128M', passHigh: '152M' },
+      filterMask: { outOfBandLevel: -20 },
+    });
     const run = runBin('solve', weak);
     expect(run.status).toBe(1);
     // The verdict is prose wrapped to the width: read it as one line.
     expect(run.stdout.replace(/\s+/g, ' ')).toMatch(/No candidate passes\. Nearest: .*anti-alias mask: the filter gives/);
   });
 
-  it('compare: the filter orders each part\'s rate needs', () => {
+  it("compare: the filter orders each part's rate needs", () => {
     const run = runBin('compare', BASE, '--csv');
     expect(run.status).toBe(0);
     const [head, ...rows] = run.stdout.trim().split(/\r?\n/);

@@ -161,7 +161,11 @@ describe('bad input: exit 2, one line naming the option and the value, nothing o
     ['centre without width', ['windows', '--center', '70M'], ['--width']],
     ['edges and centre mixed', ['windows', '--low', '60M', '--high', '80M', '--center', '70M'], ['--low', '--center']],
     ['guard with one-sided guards', ['windows', '--low', '60M', '--high', '80M', '--guard', '2M', '--guard-low', '1M'], ['--guard', '2M']],
-    ['max rate below min rate', ['windows', '--low', '60M', '--high', '80M', '--min-rate', '100M', '--max-rate', '50M'], ['--max-rate', '50M']],
+    [
+      'max rate below min rate',
+      ['windows', '--low', '60M', '--high', '80M', '--min-rate', '100M', '--max-rate', '50M'],
+      ['--max-rate', '50M'],
+    ],
     ['zero rate', ['alias', '--rate', '0', '70M'], ['--rate', '0']],
     ['negative rate', ['alias', '--rate', '-7', '1'], ['--rate', '-7']],
     ['milli rate', ['alias', '--rate', '61.44m', '70M'], ['--rate', '61.44m']],

@@ -24,10 +24,26 @@ describe('ifzone compare --json: the contract', () => {
     const report = JSON.parse(run.stdout);
     expect(report.variants).toEqual(['Heron-4 base', 'Heron-4N narrowband', 'Heron-4W wideband', 'Heron-2L low IF']);
     for (const part of report.parts) {
-      expect(Object.keys(part)).toEqual(expect.arrayContaining(['label', 'frequency', 'tolerancePpm', 'jitter', 'perVariant', 'passesAll']));
+      expect(Object.keys(part)).toEqual(
+        expect.arrayContaining(['label', 'frequency', 'tolerancePpm', 'jitter', 'perVariant', 'passesAll']),
+      );
       expect(part.perVariant.map((v: { variant: string }) => v.variant)).toEqual(report.variants);
       for (const v of part.perVariant) {
-        expect(Object.keys(v)).toEqual(expect.arrayContaining(['variant', 'rate', 'settings', 'zone', 'inverted', 'worstMargin', 'limitedBy', 'headroomPpm', 'jitterSnrDb', 'channelSnrDb', 'pass']));
+        expect(Object.keys(v)).toEqual(
+          expect.arrayContaining([
+            'variant',
+            'rate',
+            'settings',
+            'zone',
+            'inverted',
+            'worstMargin',
+            'limitedBy',
+            'headroomPpm',
+            'jitterSnrDb',
+            'channelSnrDb',
+            'pass',
+          ]),
+        );
       }
       expect(part.passesAll).toBe(part.perVariant.every((v: { pass: boolean }) => v.pass));
     }

@@ -43,11 +43,30 @@ const BASE: Record<string, unknown> = {
   filterMask: { outOfBandLevel: -20, passbandRipple: 1 },
   driverNoiseDensity: -155,
   downConverter: { ncoBits: 32, outputRate: '7.68M', usableFraction: 0.8 },
-  filter: { kind: 'table', points: [['40M', 40], ['64M', 0], ['76M', 0], ['100M', 40]] },
+  filter: {
+    kind: 'table',
+    points: [
+      ['40M', 40],
+      ['64M', 0],
+      ['76M', 0],
+      ['100M', 40],
+    ],
+  },
   clocks: [
-    { label: 'oscillator part number', frequency: '92.16M', tolerance: { initial: 10, temperature: 10, ageing: 5 }, jitter: '150 fs', note: 'n' },
+    {
+      label: 'oscillator part number',
+      frequency: '92.16M',
+      tolerance: { initial: 10, temperature: 10, ageing: 5 },
+      jitter: '150 fs',
+      note: 'n',
+    },
     { label: 'divided part', frequency: '184.32M', tolerance: 20, derive: 'divider' },
-    { label: 'synthesised', frequency: '10M', tolerance: 2, derive: { kind: 'synthesiser', n: [80, 120], m: [1, 2], d: 1, vco: { low: '800M', high: '1.2G' } } },
+    {
+      label: 'synthesised',
+      frequency: '10M',
+      tolerance: 2,
+      derive: { kind: 'synthesiser', n: [80, 120], m: [1, 2], d: 1, vco: { low: '800M', high: '1.2G' } },
+    },
   ],
   goal: { kind: 'decimation', outputRate: '7.68M' },
   ifShift: { low: '-1M', high: '1M' },
@@ -150,10 +169,15 @@ const EDIT: fc.Arbitrary<Edit> = fc.oneof(
   },
 );
 
-function edited(document: unknown, path: Path, change: (holder: Record<string, unknown> | unknown[], key: string | number) => void): unknown {
+function edited(
+  document: unknown,
+  path: Path,
+  change: (holder: Record<string, unknown> | unknown[], key: string | number) => void,
+): unknown {
   const copy = structuredClone(document) as Record<string, unknown>;
   let holder: unknown = copy;
-  for (const step of path.slice(0, -1)) holder = typeof holder === 'object' && holder !== null ? (holder as Record<string | number, unknown>)[step] : undefined;
+  for (const step of path.slice(0, -1))
+    holder = typeof holder === 'object' && holder !== null ? (holder as Record<string | number, unknown>)[step] : undefined;
   if (typeof holder === 'object' && holder !== null) change(holder as Record<string, unknown>, path.at(-1)!);
   return copy;
 }
@@ -163,7 +187,8 @@ function documentText(edits: readonly Edit[]): string {
   let document: unknown = BASE;
   const textEdits: Extract<Edit, { kind: 'text' }>[] = [];
   for (const edit of edits) {
-    if (edit.kind === 'set') document = edited(document, edit.path, (holder, key) => void ((holder as Record<string | number, unknown>)[key] = edit.value));
+    if (edit.kind === 'set')
+      document = edited(document, edit.path, (holder, key) => void ((holder as Record<string | number, unknown>)[key] = edit.value));
     else if (edit.kind === 'drop') {
       document = edited(document, edit.path, (holder, key) => {
         if (Array.isArray(holder)) holder.splice(Number(key), 1);
@@ -171,7 +196,8 @@ function documentText(edits: readonly Edit[]): string {
       });
     } else if (edit.kind === 'add') {
       document = edited(document, [...edit.path, edit.key], (holder, key) => {
-        if (!Array.isArray(holder)) Object.defineProperty(holder, key, { value: edit.value, enumerable: true, writable: true, configurable: true });
+        if (!Array.isArray(holder))
+          Object.defineProperty(holder, key, { value: edit.value, enumerable: true, writable: true, configurable: true });
       });
     } else textEdits.push(edit);
   }
@@ -239,7 +265,29 @@ describe('fuzz: every scenario field through ifzone solve', () => {
 });
 
 const OPTION_VALUE = fc.oneof(
-  fc.constantFrom('70M', '140M', '20M', '1', '0', '-5M', '1e6k', '1e999', '1e-400', '5%', '200%', 'x', '', '1k', '2G', '1000G', '3', '1024', '65536', '7', '1e3'),
+  fc.constantFrom(
+    '70M',
+    '140M',
+    '20M',
+    '1',
+    '0',
+    '-5M',
+    '1e6k',
+    '1e999',
+    '1e-400',
+    '5%',
+    '200%',
+    'x',
+    '',
+    '1k',
+    '2G',
+    '1000G',
+    '3',
+    '1024',
+    '65536',
+    '7',
+    '1e3',
+  ),
   fc.string({ maxLength: 8 }),
 );
 
@@ -251,7 +299,15 @@ describe('fuzz: every command option', () => {
     async () => {
       const command = fc.oneof(
         fc
-          .record({ low: OPTION_VALUE, high: OPTION_VALUE, guard: OPTION_VALUE, min: OPTION_VALUE, max: OPTION_VALUE, json: fc.boolean(), centred: fc.boolean() })
+          .record({
+            low: OPTION_VALUE,
+            high: OPTION_VALUE,
+            guard: OPTION_VALUE,
+            min: OPTION_VALUE,
+            max: OPTION_VALUE,
+            json: fc.boolean(),
+            centred: fc.boolean(),
+          })
           .map((o) => [
             'windows',
             ...(o.centred ? ['--center', o.low, '--width', o.high] : ['--low', o.low, '--high', o.high]),
@@ -263,11 +319,27 @@ describe('fuzz: every command option', () => {
             o.max,
             ...(o.json ? ['--json'] : []),
           ]),
-        fc.record({ rate: OPTION_VALUE, tones: fc.array(OPTION_VALUE, { minLength: 1, maxLength: 3 }), k: OPTION_VALUE }).map((o) => ['alias', '--rate', o.rate, '--multiples', o.k, ...o.tones]),
-        fc.record({ goal: fc.constantFrom('widest-margin', 'lowest-rate', 'quarter-rate', 'decimation', 'fastest', ''), rate: OPTION_VALUE }).map((o) => ['solve', valid, '--goal', o.goal, '--output-rate', o.rate]),
-        fc.record({ json: fc.boolean(), csv: fc.boolean() }).map((o) => ['compare', valid, ...(o.json ? ['--json'] : []), ...(o.csv ? ['--csv'] : [])]),
-        fc.record({ rate: OPTION_VALUE, tones: OPTION_VALUE, samples: fc.constantFrom('1024', '2048', '1000', '0', 'x', '1048577', '') }).map((o) => ['verify', valid, '--rate', o.rate, '--tones', o.tones, '--samples', o.samples]),
-        fc.constantFrom<string[]>(['report', valid, '--html', join(dir, 'page.html'), '--force'], ['report', valid, '--html', dir], ['init', '--from', valid], ['init', join(dir, 'no-such-dir', 'x.json')]),
+        fc
+          .record({ rate: OPTION_VALUE, tones: fc.array(OPTION_VALUE, { minLength: 1, maxLength: 3 }), k: OPTION_VALUE })
+          .map((o) => ['alias', '--rate', o.rate, '--multiples', o.k, ...o.tones]),
+        fc
+          .record({
+            goal: fc.constantFrom('widest-margin', 'lowest-rate', 'quarter-rate', 'decimation', 'fastest', ''),
+            rate: OPTION_VALUE,
+          })
+          .map((o) => ['solve', valid, '--goal', o.goal, '--output-rate', o.rate]),
+        fc
+          .record({ json: fc.boolean(), csv: fc.boolean() })
+          .map((o) => ['compare', valid, ...(o.json ? ['--json'] : []), ...(o.csv ? ['--csv'] : [])]),
+        fc
+          .record({ rate: OPTION_VALUE, tones: OPTION_VALUE, samples: fc.constantFrom('1024', '2048', '1000', '0', 'x', '1048577', '') })
+          .map((o) => ['verify', valid, '--rate', o.rate, '--tones', o.tones, '--samples', o.samples]),
+        fc.constantFrom<string[]>(
+          ['report', valid, '--html', join(dir, 'page.html'), '--force'],
+          ['report', valid, '--html', dir],
+          ['init', '--from', valid],
+          ['init', join(dir, 'no-such-dir', 'x.json')],
+        ),
       );
       await fc.assert(
         fc.asyncProperty(command, async (args) => {

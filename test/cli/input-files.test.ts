@@ -63,7 +63,11 @@ describe('hostile files through ifzone solve: one line, exit 2', () => {
   it.each([
     ['extends /dev/zero', () => writeInto(dir, 'zero.json', { extends: '/dev/zero' }), '/dev/zero: a character device, not a regular file'],
     ['a FIFO as the file', () => join(dir, 'pipe.json'), 'a FIFO (named pipe), not a regular file'],
-    ['extends a FIFO', () => writeInto(dir, 'via-pipe.json', { extends: 'pipe.json' }), 'pipe.json: a FIFO (named pipe), not a regular file'],
+    [
+      'extends a FIFO',
+      () => writeInto(dir, 'via-pipe.json', { extends: 'pipe.json' }),
+      'pipe.json: a FIFO (named pipe), not a regular file',
+    ],
     ['a directory', () => dir, 'a directory, not a regular file'],
   ])('%s', async (_name, make, reason) => {
     const run = await ifzone('solve', make());

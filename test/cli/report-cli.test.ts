@@ -45,54 +45,68 @@ describe('ifzone report --html', () => {
   });
 
   // CI installs Chromium (.ci/run), so there a missing browser fails the test instead of skipping it.
-  it.skipIf(!hasChromium && !process.env['CI'])('opens in headless Chromium with its tables and pictures, no outside request and no error', async () => {
-    const out = join(dir, 'browse.html');
-    expect(runBin('report', ...VARIANTS, '--html', out).status).toBe(0);
-    const page = await browser!.newPage();
-    const requests: string[] = [];
-    const errors: string[] = [];
-    page.on('request', (request) => requests.push(request.url()));
-    page.on('console', (message) => {
-      if (message.type() === 'error') errors.push(message.text());
-    });
-    page.on('pageerror', (error) => errors.push(error.message));
-    const address = pathToFileURL(out).href;
-    await page.goto(address);
-    expect(requests).toEqual([address]);
-    expect(errors).toEqual([]);
-    const sections = await page.locator('h2').allTextContents();
-    expect(sections).toEqual(['Clock parts across the variants', 'Heron-4 base', 'Heron-4N narrowband', 'Heron-4W wideband', 'Heron-2L low IF']);
-    const captions = await page.locator('caption').allTextContents();
-    for (const caption of ['Legal windows', 'Feasible intervals', 'Candidates, best first', 'Alias bands up to the input bandwidth']) {
-      expect(captions.filter((c) => c.startsWith(caption)).length).toBe(4);
-    }
-    expect(await page.locator('figure svg').count()).toBe(16);
-    const boxes = await page.locator('figure svg').evaluateAll((svgs) => svgs.map((s) => s.getBoundingClientRect().height));
-    expect(Math.min(...boxes)).toBeGreaterThan(100);
-    await page.close();
-  }, 60_000);
-  it.skipIf(!hasChromium && !process.env['CI'])('uses the page at 1280 px: no number wrapped inside a cell, the content as wide as the window', async () => {
-    const out = join(dir, 'width.html');
-    expect(runBin('report', ...VARIANTS, '--html', out).status).toBe(0);
-    const page = await browser!.newPage({ viewport: { width: 1280, height: 900 } });
-    await page.goto(pathToFileURL(out).href);
-    const body = await page.locator('body').evaluate((element) => element.getBoundingClientRect().width);
-    // A cell's text occupies one line box per line it takes: count the distinct tops of its text's rectangles.
-    const lines = await page.locator('td.num').evaluateAll((cells) =>
-      cells.map((cell) => {
-        const range = cell.ownerDocument.createRange();
-        range.selectNodeContents(cell);
-        return { text: cell.textContent ?? '', lines: new Set([...range.getClientRects()].map((r) => Math.round(r.top))).size };
-      }),
-    );
-    const measured = { body, numbers: lines.length, wrapped: lines.filter((l) => l.lines > 1).map((l) => l.text) };
-    // Common practice (no source): a review page fills a wide window rather than a fixed column.
-    expect(measured.body).toBeGreaterThan(1180);
-    expect(measured.numbers).toBeGreaterThan(500);
-    expect(measured.wrapped).toEqual([]);
-    const shot = await page.screenshot({ fullPage: false });
-    // PNG header: width and height as 32-bit big-endian numbers at bytes 16 and 20 (PNG specification, IHDR).
-    expect([shot.readUInt32BE(16), shot.readUInt32BE(20)]).toEqual([1280, 900]);
-    await page.close();
-  }, 60_000);
+  it.skipIf(!hasChromium && !process.env['CI'])(
+    'opens in headless Chromium with its tables and pictures, no outside request and no error',
+    async () => {
+      const out = join(dir, 'browse.html');
+      expect(runBin('report', ...VARIANTS, '--html', out).status).toBe(0);
+      const page = await browser!.newPage();
+      const requests: string[] = [];
+      const errors: string[] = [];
+      page.on('request', (request) => requests.push(request.url()));
+      page.on('console', (message) => {
+        if (message.type() === 'error') errors.push(message.text());
+      });
+      page.on('pageerror', (error) => errors.push(error.message));
+      const address = pathToFileURL(out).href;
+      await page.goto(address);
+      expect(requests).toEqual([address]);
+      expect(errors).toEqual([]);
+      const sections = await page.locator('h2').allTextContents();
+      expect(sections).toEqual([
+        'Clock parts across the variants',
+        'Heron-4 base',
+        'Heron-4N narrowband',
+        'Heron-4W wideband',
+        'Heron-2L low IF',
+      ]);
+      const captions = await page.locator('caption').allTextContents();
+      for (const caption of ['Legal windows', 'Feasible intervals', 'Candidates, best first', 'Alias bands up to the input bandwidth']) {
+        expect(captions.filter((c) => c.startsWith(caption)).length).toBe(4);
+      }
+      expect(await page.locator('figure svg').count()).toBe(16);
+      const boxes = await page.locator('figure svg').evaluateAll((svgs) => svgs.map((s) => s.getBoundingClientRect().height));
+      expect(Math.min(...boxes)).toBeGreaterThan(100);
+      await page.close();
+    },
+    60_000,
+  );
+  it.skipIf(!hasChromium && !process.env['CI'])(
+    'uses the page at 1280 px: no number wrapped inside a cell, the content as wide as the window',
+    async () => {
+      const out = join(dir, 'width.html');
+      expect(runBin('report', ...VARIANTS, '--html', out).status).toBe(0);
+      const page = await browser!.newPage({ viewport: { width: 1280, height: 900 } });
+      await page.goto(pathToFileURL(out).href);
+      const body = await page.locator('body').evaluate((element) => element.getBoundingClientRect().width);
+      // A cell's text occupies one line box per line it takes: count the distinct tops of its text's rectangles.
+      const lines = await page.locator('td.num').evaluateAll((cells) =>
+        cells.map((cell) => {
+          const range = cell.ownerDocument.createRange();
+          range.selectNodeContents(cell);
+          return { text: cell.textContent ?? '', lines: new Set([...range.getClientRects()].map((r) => Math.round(r.top))).size };
+        }),
+      );
+      const measured = { body, numbers: lines.length, wrapped: lines.filter((l) => l.lines > 1).map((l) => l.text) };
+      // Common practice (no source): a review page fills a wide window rather than a fixed column.
+      expect(measured.body).toBeGreaterThan(1180);
+      expect(measured.numbers).toBeGreaterThan(500);
+      expect(measured.wrapped).toEqual([]);
+      const shot = await page.screenshot({ fullPage: false });
+      // PNG header: width and height as 32-bit big-endian numbers at bytes 16 and 20 (PNG specification, IHDR).
+      expect([shot.readUInt32BE(16), shot.readUInt32BE(20)]).toEqual([1280, 900]);
+      await page.close();
+    },
+    60_000,
+  );
 });

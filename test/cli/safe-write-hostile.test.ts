@@ -95,7 +95,12 @@ describe('a failed write names the user path and the system reason', () => {
     ['EACCES', 'permission denied (EACCES)'],
     ['ENOSPC', 'no space left on the device (ENOSPC)'],
   ])('%s at open', (code, words) => {
-    const shim: SafeWriteFs = { ...fs, openSync: () => { throw Object.assign(new Error(`${code}: simulated, open '.x.svg.1.tmp'`), { code }); } } as SafeWriteFs;
+    const shim: SafeWriteFs = {
+      ...fs,
+      openSync: () => {
+        throw Object.assign(new Error(`${code}: simulated, open '.x.svg.1.tmp'`), { code });
+      },
+    } as SafeWriteFs;
     const path = join(dir, 'x.svg');
     const error = refusal(() => writeFileSafely(path, 'x', { fs: shim }));
     expect(error.where).toBe(path);
@@ -123,7 +128,15 @@ describe('outputs are committed together or not at all', () => {
         return fs.linkSync(existing, made);
       }) as SafeWriteFs['linkSync'],
     };
-    const error = refusal(() => writeFilesSafely([{ path: kept, content: 'new picture' }, { path: fresh, content: 'table' }], { force: true, fs: shim }));
+    const error = refusal(() =>
+      writeFilesSafely(
+        [
+          { path: kept, content: 'new picture' },
+          { path: fresh, content: 'table' },
+        ],
+        { force: true, fs: shim },
+      ),
+    );
     expect(error.where).toBe(fresh);
     expect(links).toBe(1); // the old picture's second name
     expect(fs.readFileSync(kept, 'utf8')).toBe('old picture');

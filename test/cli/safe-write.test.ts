@@ -87,7 +87,12 @@ describe('writeFileSafely', () => {
   });
 
   it('leaves the old file and no temporary file when the rename fails', () => {
-    const shim: SafeWriteFs = { ...fs, renameSync: () => { throw Object.assign(new Error('EIO: simulated'), { code: 'EIO' }); } };
+    const shim: SafeWriteFs = {
+      ...fs,
+      renameSync: () => {
+        throw Object.assign(new Error('EIO: simulated'), { code: 'EIO' });
+      },
+    };
     // The refusal names the user's path and the system's reason, never the hidden temporary file.
     const error = refusal(() => writeFileSafely(target, 'new content', { force: true, fs: shim }));
     expect(error.where).toBe(target);
@@ -123,7 +128,11 @@ describe('writeFileSafely', () => {
   it('refuses, without force, a file that appears between the check and the write (no clobbering race)', () => {
     // The shim's first look says the path is free; the file is there all the same.
     let looks = 0;
-    const shim: SafeWriteFs = { ...fs, lstatSync: ((path: fs.PathLike, options?: fs.StatSyncOptions) => (++looks === 1 ? undefined : fs.lstatSync(path, options))) as SafeWriteFs['lstatSync'] };
+    const shim: SafeWriteFs = {
+      ...fs,
+      lstatSync: ((path: fs.PathLike, options?: fs.StatSyncOptions) =>
+        ++looks === 1 ? undefined : fs.lstatSync(path, options)) as SafeWriteFs['lstatSync'],
+    };
     const error = refusal(() => writeFileSafely(target, 'new content', { force: false, fs: shim }));
     expect(error.expected).toBe(EXISTS_EXPECTED);
     expect(fs.readFileSync(target).equals(old)).toBe(true);
@@ -131,7 +140,12 @@ describe('writeFileSafely', () => {
   });
 
   it('falls back to check-and-rename where the file system has no hard links', () => {
-    const shim: SafeWriteFs = { ...fs, linkSync: () => { throw Object.assign(new Error('EPERM: simulated'), { code: 'EPERM' }); } };
+    const shim: SafeWriteFs = {
+      ...fs,
+      linkSync: () => {
+        throw Object.assign(new Error('EPERM: simulated'), { code: 'EPERM' });
+      },
+    };
     const fresh = join(dir, 'fresh.svg');
     writeFileSafely(fresh, 'made', { force: false, fs: shim });
     expect(fs.readFileSync(fresh, 'utf8')).toBe('made');

@@ -32,7 +32,9 @@ describe('ifzone solve --json: the contract', () => {
     expect(plan.guard).toEqual({ low: 2e6, high: 2e6 });
     expect(plan.search).toEqual({ minRate: 40e6, maxRate: 250e6 });
     for (const i of plan.interferers) {
-      expect(Object.keys(i)).toEqual(expect.arrayContaining(['label', 'kind', 'order', 'rateMultiple', 'low', 'high', 'requiredMargin', 'blocking', 'level']));
+      expect(Object.keys(i)).toEqual(
+        expect.arrayContaining(['label', 'kind', 'order', 'rateMultiple', 'low', 'high', 'requiredMargin', 'blocking', 'level']),
+      );
       expect(['harmonic', 'spur', 'neighbour', 'intermod', 'converter']).toContain(i.kind);
     }
     const labels = plan.interferers.map((i: { label: string }) => i.label);
@@ -41,25 +43,44 @@ describe('ifzone solve --json: the contract', () => {
     expect(plan.candidates.length).toBeGreaterThan(0);
     expect(plan.interferersListed).toBe('all');
     expect(plan.interferersOmitted).toBe(0);
-    plan.candidates.forEach((c: { checks: { label: string }[]; checksListed: string; checksOmitted: number; limitedBy: string }, index: number) => {
-      expect(Object.keys(c)).toEqual(expect.arrayContaining(['label', 'rate', 'tolerancePpm', 'zone', 'inverted', 'center', 'nco', 'worstMargin', 'pass', 'checks', 'checksListed', 'checksOmitted']));
-      for (const k of c.checks) expect(Object.keys(k)).toEqual(expect.arrayContaining(['label', 'kind', 'alias', 'margin', 'level', 'levelMargin', 'pass']));
-      if (index === 0) {
-        // The first-ranked candidate is shown in full: every interferer's check.
-        expect(c.checksListed).toBe('all');
-        expect(c.checks.map((k) => k.label)).toEqual(labels);
-      } else {
-        // The others were judged on the blocking interferers: their limiting check (none when the zone edge limits).
-        expect(c.checksListed).toBe('limiting');
-        expect(c.checks.map((k) => k.label)).toEqual(labels.includes(c.limitedBy) ? [c.limitedBy] : []);
-      }
-      expect(c.checksOmitted).toBe(labels.length - c.checks.length);
-      // The mask's alias bands: all for the candidate shown in full, the worst one for the others.
-      const after = (c as unknown as { afterRate: { mask: { bands: unknown[]; worst: unknown } } | null; maskBandsOmitted: number }).afterRate;
-      const omitted = (c as unknown as { maskBandsOmitted: number }).maskBandsOmitted;
-      if (index === 0) expect(omitted).toBe(0);
-      else if (after !== null) expect(after.mask.bands).toEqual(after.mask.worst === null ? [] : [after.mask.worst]);
-    });
+    plan.candidates.forEach(
+      (c: { checks: { label: string }[]; checksListed: string; checksOmitted: number; limitedBy: string }, index: number) => {
+        expect(Object.keys(c)).toEqual(
+          expect.arrayContaining([
+            'label',
+            'rate',
+            'tolerancePpm',
+            'zone',
+            'inverted',
+            'center',
+            'nco',
+            'worstMargin',
+            'pass',
+            'checks',
+            'checksListed',
+            'checksOmitted',
+          ]),
+        );
+        for (const k of c.checks)
+          expect(Object.keys(k)).toEqual(expect.arrayContaining(['label', 'kind', 'alias', 'margin', 'level', 'levelMargin', 'pass']));
+        if (index === 0) {
+          // The first-ranked candidate is shown in full: every interferer's check.
+          expect(c.checksListed).toBe('all');
+          expect(c.checks.map((k) => k.label)).toEqual(labels);
+        } else {
+          // The others were judged on the blocking interferers: their limiting check (none when the zone edge limits).
+          expect(c.checksListed).toBe('limiting');
+          expect(c.checks.map((k) => k.label)).toEqual(labels.includes(c.limitedBy) ? [c.limitedBy] : []);
+        }
+        expect(c.checksOmitted).toBe(labels.length - c.checks.length);
+        // The mask's alias bands: all for the candidate shown in full, the worst one for the others.
+        const after = (c as unknown as { afterRate: { mask: { bands: unknown[]; worst: unknown } } | null; maskBandsOmitted: number })
+          .afterRate;
+        const omitted = (c as unknown as { maskBandsOmitted: number }).maskBandsOmitted;
+        if (index === 0) expect(omitted).toBe(0);
+        else if (after !== null) expect(after.mask.bands).toEqual(after.mask.worst === null ? [] : [after.mask.worst]);
+      },
+    );
     expect(plan.caution).toMatch(/paper design/);
   });
 
@@ -90,7 +111,9 @@ describe('ifzone solve --json: the contract', () => {
     }
     for (const c of plan.candidates.filter((x: { pass: boolean }) => x.pass)) {
       const drift = c.rate * c.tolerancePpm * 1e-6;
-      expect(plan.feasible.some((f: { minRate: number; maxRate: number }) => c.rate - drift >= f.minRate && c.rate + drift <= f.maxRate)).toBe(true);
+      expect(
+        plan.feasible.some((f: { minRate: number; maxRate: number }) => c.rate - drift >= f.minRate && c.rate + drift <= f.maxRate),
+      ).toBe(true);
     }
   });
 });
@@ -108,8 +131,22 @@ describe('ifzone solve --all-checks', () => {
       expect(c.checksOmitted).toBe(0);
       expect(c.checks.map((k) => k.label)).toEqual(labels);
       // The same candidate, verdict and margins; only what is listed differs (the checks, and the mask's alias bands).
-      const { checks: _full, checksListed: _a, checksOmitted: _b, afterRate: fullAfter, maskBandsOmitted: _e, ...summary } = c as Record<string, unknown>;
-      const { checks: _plain, checksListed: _c, checksOmitted: _d, afterRate: plainAfter, maskBandsOmitted: _f, ...plainSummary } = plain.candidates[index];
+      const {
+        checks: _full,
+        checksListed: _a,
+        checksOmitted: _b,
+        afterRate: fullAfter,
+        maskBandsOmitted: _e,
+        ...summary
+      } = c as Record<string, unknown>;
+      const {
+        checks: _plain,
+        checksListed: _c,
+        checksOmitted: _d,
+        afterRate: plainAfter,
+        maskBandsOmitted: _f,
+        ...plainSummary
+      } = plain.candidates[index];
       expect(summary).toEqual(plainSummary);
       const masks = [fullAfter, plainAfter].map((a) => (a as { mask: { worst: unknown; pass: boolean } } | null)?.mask);
       expect(masks[0]?.worst).toEqual(masks[1]?.worst);
@@ -150,7 +187,9 @@ describe('ifzone solve: exit statuses', () => {
     expect(run.status).toBe(1);
     expect(run.stderr).toBe('');
     // The verdict is prose, wrapped to the width: read it as one line.
-    expect(run.stdout.replace(/\n(?!\n)/g, ' ')).toMatch(/No candidate passes\. Nearest: .+ at .+: .+ lands .+ from the band where 30 MHz is required \(short by .+\)\./);
+    expect(run.stdout.replace(/\n(?!\n)/g, ' ')).toMatch(
+      /No candidate passes\. Nearest: .+ at .+: .+ lands .+ from the band where 30 MHz is required \(short by .+\)\./,
+    );
     const plan = JSON.parse(runBin('solve', impossible, '--json').stdout);
     expect(plan.best).toBeNull();
     expect(plan.conflicts).toEqual([]);
@@ -165,9 +204,14 @@ describe('ifzone solve: exit statuses', () => {
     expect(run.status).toBe(1);
     expect(run.stderr).toBe('');
     // Each sentence is a list item wrapped to the width, its continuation lines indented: read each as one line.
-    const sentences = run.stdout.replace(/\n {2}(?=\S)/g, ' ').split('\n').filter((line) => line.startsWith('- '));
+    const sentences = run.stdout
+      .replace(/\n {2}(?=\S)/g, ' ')
+      .split('\n')
+      .filter((line) => line.startsWith('- '));
     expect(sentences).toHaveLength(2);
-    expect(sentences[0]).toMatch(/^- Lower adjacent channel \(neighbour\) lies 5 MHz from the wanted band where 60 MHz is required; .*no sampling rate can clear it: more anti-alias filter rejection .* a different channel plan, or a smaller required margin for it/);
+    expect(sentences[0]).toMatch(
+      /^- Lower adjacent channel \(neighbour\) lies 5 MHz from the wanted band where 60 MHz is required; .*no sampling rate can clear it: more anti-alias filter rejection .* a different channel plan, or a smaller required margin for it/,
+    );
     expect(sentences[1]).toMatch(/^- Paging blocker 175M \(neighbour\) lies 24\.5 MHz from the wanted band/);
     expect(run.stdout).not.toMatch(/Nearest:/);
     const plan = JSON.parse(runBin('solve', impossible, '--json').stdout);
@@ -203,7 +247,8 @@ describe('ifzone solve: exit statuses', () => {
 
   it('under decimation a clock part passes only at a whole multiple of the output rate (exhaustive check of the synthesiser)', () => {
     const plan = JSON.parse(runBin('solve', BASE, '--output-rate', '30.72M', '--json').stdout);
-    for (const c of plan.candidates.filter((c: { origin: string; pass: boolean }) => c.origin === 'clock' && c.pass)) expect(Number.isInteger(c.decimationFactor), c.label).toBe(true);
+    for (const c of plan.candidates.filter((c: { origin: string; pass: boolean }) => c.origin === 'clock' && c.pass))
+      expect(Number.isInteger(c.decimationFactor), c.label).toBe(true);
     // SYN-1: 10 MHz × N / M ÷ D with N 1–512, M 1–16, D 1–8, VCO 10 MHz·N/M in 800 MHz–1.6 GHz (scenarios/heron-base.json).
     // Every setting enumerated, in integers (Hz): no rate in 40–250 MHz is a whole multiple of 30.72 MHz, so the part fails.
     const multiples: number[] = [];
@@ -263,6 +308,8 @@ describe('ifzone solve: exit statuses', () => {
     const chosen = plan.candidates.filter((c: { origin: string; pass: boolean }) => c.origin === 'interval' && c.pass);
     expect(chosen.length).toBeGreaterThan(0);
     // 4·fc/(2n − 1) with fc = 140 MHz: zone 2 → 186.667 MHz, inside the 171–194.5 MHz interval
-    expect(chosen.some((c: { rate: number; center: number }) => Math.abs(c.rate - 560e6 / 3) < 1 && Math.abs(c.center - c.rate / 4) < 1)).toBe(true);
+    expect(
+      chosen.some((c: { rate: number; center: number }) => Math.abs(c.rate - 560e6 / 3) < 1 && Math.abs(c.center - c.rate / 4) < 1),
+    ).toBe(true);
   });
 });

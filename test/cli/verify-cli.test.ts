@@ -36,7 +36,9 @@ async function verify(...args: string[]): Promise<Run> {
   let stderr = '';
   const io: Io = { out: (t) => (stdout += t), err: (t) => (stderr += t) };
   let status: ExitCode = EXIT.answered;
-  const program = new Command('ifzone').exitOverride().configureOutput({ writeOut: io.out, writeErr: io.err, outputError: (m, write) => write(`ifzone: ${m}`) });
+  const program = new Command('ifzone')
+    .exitOverride()
+    .configureOutput({ writeOut: io.out, writeErr: io.err, outputError: (m, write) => write(`ifzone: ${m}`) });
   addVerifyCommand(program, io, (code) => (status = code));
   try {
     await program.parseAsync(['verify', ...args], { from: 'user' });
@@ -69,7 +71,7 @@ describe('ifzone verify: exit statuses', () => {
     expect(run.stdout).not.toMatch(/Verdict: the capture contradicts/);
   });
 
-  it('exits 2 for a rate outside the converter\'s range, a bad record length or tone count, and a missing --rate', async () => {
+  it("exits 2 for a rate outside the converter's range, a bad record length or tone count, and a missing --rate", async () => {
     const outside = await verify(BASE, '--rate', '300M');
     expect(outside.status).toBe(2);
     expect(outside.stderr).toMatch(/--rate: a rate within the converter's range, 40 MHz to 250 MHz/);
@@ -77,7 +79,9 @@ describe('ifzone verify: exit statuses', () => {
     expect((await verify(BASE, '--rate', '184.32M', '--samples', '5000')).stderr).toMatch(/--samples: a power of two/);
     expect((await verify(BASE, '--rate', '184.32M', '--tones', '0')).status).toBe(2);
     expect((await verify(BASE, '--rate', '184.32M', '--tones', '6')).stderr).toMatch(/--tones: a whole number from 1 to 5/);
-    expect((await verify('scenarios/heron-narrow.json', '--rate', '245.76M', '--samples', '1024', '--tones', '5')).stderr).toMatch(/--samples: a record long enough/);
+    expect((await verify('scenarios/heron-narrow.json', '--rate', '245.76M', '--samples', '1024', '--tones', '5')).stderr).toMatch(
+      /--samples: a record long enough/,
+    );
     expect((await verify(BASE)).status).toBe(2);
     expect((await verify('no-such.json', '--rate', '184.32M')).status).toBe(2);
   });
@@ -88,7 +92,27 @@ describe('ifzone verify --json', () => {
     const run = await verify(BASE, '--rate', '184.32M', '--json');
     const result = JSON.parse(run.stdout);
     expect(Object.keys(result)).toEqual(
-      expect.arrayContaining(['scenario', 'rate', 'samples', 'binWidth', 'window', 'converter', 'levels', 'margin', 'wantedImage', 'tones', 'predictions', 'unlisted', 'intrusions', 'plan', 'notSimulated', 'contradictions', 'consistent', 'compared', 'caution']),
+      expect.arrayContaining([
+        'scenario',
+        'rate',
+        'samples',
+        'binWidth',
+        'window',
+        'converter',
+        'levels',
+        'margin',
+        'wantedImage',
+        'tones',
+        'predictions',
+        'unlisted',
+        'intrusions',
+        'plan',
+        'notSimulated',
+        'contradictions',
+        'consistent',
+        'compared',
+        'caution',
+      ]),
     );
     expect(result.rate).toBe(184.32e6);
     expect(result.samples).toBe(65536);
@@ -96,7 +120,22 @@ describe('ifzone verify --json', () => {
     expect(result.wantedTones).toBe(3);
     expect(result.window.coherentGain).toBe(0.35875);
     for (const p of result.predictions) {
-      expect(Object.keys(p)).toEqual(expect.arrayContaining(['check', 'kind', 'line', 'width', 'basis', 'predicted', 'planLevel', 'modelLevel', 'measured', 'binError', 'levelError', 'status']));
+      expect(Object.keys(p)).toEqual(
+        expect.arrayContaining([
+          'check',
+          'kind',
+          'line',
+          'width',
+          'basis',
+          'predicted',
+          'planLevel',
+          'modelLevel',
+          'measured',
+          'binError',
+          'levelError',
+          'status',
+        ]),
+      );
     }
     expect(result.caution).toMatch(/paper design/);
     expect(run.status).toBe(result.consistent ? 0 : 1);
@@ -104,7 +143,11 @@ describe('ifzone verify --json', () => {
 
   it('runVerify returns the same status as the command', () => {
     let out = '';
-    const code = runVerify(BASE, { rate: String(bad), tones: '1', samples: '65536', json: true }, { out: (t) => (out += t), err: () => {} });
+    const code = runVerify(
+      BASE,
+      { rate: String(bad), tones: '1', samples: '65536', json: true },
+      { out: (t) => (out += t), err: () => {} },
+    );
     // At the bad rate the plan fails and the capture confirms it: agreement, exit 0.
     expect(code).toBe(0);
     expect(JSON.parse(out).consistent).toBe(true);
@@ -119,7 +162,7 @@ describe('ifzone verify through runCli (registered in src/cli/main.ts)', () => {
     return { status, stdout, stderr };
   };
 
-  it('exits 0 at the solver\'s rate, and at the bad rate where the capture confirms the plan\'s failure', async () => {
+  it("exits 0 at the solver's rate, and at the bad rate where the capture confirms the plan's failure", async () => {
     expect((await run('verify', BASE, '--rate', String(good), '--tones', '1')).status).toBe(0);
     const failing = await run('verify', BASE, '--rate', String(bad), '--tones', '1', '--json');
     expect(failing.status).toBe(0);

@@ -14,7 +14,15 @@ interface JointJson {
   bands: { band: { low: number; high: number }; guard: { low: number; high: number }; guardedBand: { low: number; high: number } }[];
   spacing: number;
   limits: { minRate: number; maxRate: number | null };
-  intervals: { minRate: number; maxRate: number | null; zones: number[]; inverted: boolean[]; width: number | null; center: number | null; images: unknown[] | null }[];
+  intervals: {
+    minRate: number;
+    maxRate: number | null;
+    zones: number[];
+    inverted: boolean[];
+    width: number | null;
+    center: number | null;
+    images: unknown[] | null;
+  }[];
   minimumRate: number | null;
   minimumIsSingleRate: boolean;
   caution: string;
@@ -64,7 +72,9 @@ describe('ifzone windows with several --band', () => {
       [18e3, 20e3],
       [36e3, null],
     ]);
-    expect(json(runBin('windows', '--band', '10k:14k', '--band', '16k:18k', '--spacing', '1k', '--max-rate', '30k', '--json')).intervals).toHaveLength(1);
+    expect(
+      json(runBin('windows', '--band', '10k:14k', '--band', '16k:18k', '--spacing', '1k', '--max-rate', '30k', '--json')).intervals,
+    ).toHaveLength(1);
     // A 500 Hz guard each side: 9.5–14.5 and 15.5–16.5 kHz are the bands held.
     const guarded = json(runBin('windows', '--band', '10k:14k', '--band', '16k:18k', '--guard', '500', '--json'));
     expect(guarded.bands.map((b) => [b.guardedBand.low, b.guardedBand.high])).toEqual([

@@ -53,7 +53,9 @@ describe('the folding-work bound on the derived interferers', () => {
     for (const run of runs) {
       expect(run.status).toBe(2);
       expect(run.stdout).toBe('');
-      expect(run.stderr).toMatch(/^ifzone: [^\n]*strong-32\.json: maxOrder: expected blocking interferers that fold onto at most 200000 images[^\n]*lower maxOrder[^\n]*\n$/);
+      expect(run.stderr).toMatch(
+        /^ifzone: [^\n]*strong-32\.json: maxOrder: expected blocking interferers that fold onto at most 200000 images[^\n]*lower maxOrder[^\n]*\n$/,
+      );
     }
   }, 60_000);
 
@@ -63,7 +65,9 @@ describe('the folding-work bound on the derived interferers', () => {
     const path = variant('strong-200.json', { neighbours: neighbours(200, -5, 1), filter: null, maxOrder: 3 });
     const run = runBin('solve', path);
     expect(run.status).toBe(2);
-    expect(run.stderr).toMatch(/^ifzone: [^\n]*strong-200\.json: maxOrder: expected at most 40000 mixing products above the level threshold; lower maxOrder[^\n]*neighbours[^\n]*\n$/);
+    expect(run.stderr).toMatch(
+      /^ifzone: [^\n]*strong-200\.json: maxOrder: expected at most 40000 mixing products above the level threshold; lower maxOrder[^\n]*neighbours[^\n]*\n$/,
+    );
     expect(run.stderr).toContain('by order 2');
   }, 60_000);
 });

@@ -14,7 +14,9 @@ import { everySetting } from './part-fixtures.js';
  * judged by the exact evaluator. The demo files change as the catalogue
  * grows; these tests assert relations, not figures.
  */
-const files = readdirSync('scenarios').filter((name) => /^heron-.*\.json$/.test(name)).sort();
+const files = readdirSync('scenarios')
+  .filter((name) => /^heron-.*\.json$/.test(name))
+  .sort();
 
 describe.each(files)('the parts of %s', (file) => {
   const scenario = readScenarioFile(`scenarios/${file}`);

@@ -49,7 +49,10 @@ describe('the best integer N for the worst of linear slacks', () => {
     const shortfalls: number[] = [];
     fc.assert(
       fc.property(
-        fc.array(fc.tuple(fc.double({ min: -6, max: 6, noNaN: true }), fc.double({ min: -1, max: 1, noNaN: true })), { minLength: 1, maxLength: 12 }),
+        fc.array(fc.tuple(fc.double({ min: -6, max: 6, noNaN: true }), fc.double({ min: -1, max: 1, noNaN: true })), {
+          minLength: 1,
+          maxLength: 12,
+        }),
         fc.integer({ min: 1, max: 2000 }),
         fc.integer({ min: 0, max: 3000 }),
         fc.double({ min: 1e5, max: 2e7, noNaN: true }),
@@ -84,6 +87,8 @@ describe('the best integer N for the worst of linear slacks', () => {
       { numRuns: 300 },
     );
     expect(milps).toBe(300);
-    console.log(`MILP shortfall before the neighbour check, as a fraction of its allowance: max ${Math.max(...shortfalls).toExponential(2)}, ${shortfalls.filter((x) => x > 0).length} of ${shortfalls.length} above 0`);
+    console.log(
+      `MILP shortfall before the neighbour check, as a fraction of its allowance: max ${Math.max(...shortfalls).toExponential(2)}, ${shortfalls.filter((x) => x > 0).length} of ${shortfalls.length} above 0`,
+    );
   });
 });

@@ -5,7 +5,13 @@ import type { ClockPart, RateDerivation } from '../../src/scenario/scenario.js';
  * Clock parts for the clock-planning tests: invented demo parts of the
  * "Heron" receiver line (Saltmarsh Radio), not real products.
  */
-export function part(label: string, frequency: number, derivation: RateDerivation, tolerance = 20, jitter: number | null = null): ClockPart {
+export function part(
+  label: string,
+  frequency: number,
+  derivation: RateDerivation,
+  tolerance = 20,
+  jitter: number | null = null,
+): ClockPart {
   return {
     label,
     frequency: hz(frequency),
@@ -18,7 +24,12 @@ export function part(label: string, frequency: number, derivation: RateDerivatio
 }
 
 /** A synthesiser derivation with inclusive integer ranges and an optional VCO range, Hz. */
-export function synthesiser(n: [number, number], m: [number, number], d: [number, number], vco: [number, number] | null = null): RateDerivation {
+export function synthesiser(
+  n: [number, number],
+  m: [number, number],
+  d: [number, number],
+  vco: [number, number] | null = null,
+): RateDerivation {
   return {
     kind: 'synthesiser',
     n: { min: n[0], max: n[1] },
@@ -35,7 +46,13 @@ export function synthesiser(n: [number, number], m: [number, number], d: [number
  * every integer: the reference the planner's narrowed ranges are checked
  * against.
  */
-export function everySetting(p: ClockPart, dividers: readonly number[], low: number, high: number, drift: 'nominal' | 'whole drift' = 'nominal'): { N: number; M: number; D: number; rate: number }[] {
+export function everySetting(
+  p: ClockPart,
+  dividers: readonly number[],
+  low: number,
+  high: number,
+  drift: 'nominal' | 'whole drift' = 'nominal',
+): { N: number; M: number; D: number; rate: number }[] {
   const out: { N: number; M: number; D: number; rate: number }[] = [];
   const d = p.derivation;
   // 'nominal': the rate itself inside [low, high] (what partRates lists); 'whole drift': the part's drift

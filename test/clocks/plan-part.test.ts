@@ -59,7 +59,11 @@ describe('the best rate of a synthesiser on a plan worked on paper', () => {
 
   it('takes the better converter divider for a divider part: 120 MHz ÷ 2 = 60 MHz (slack 5) over ÷ 3 = 40 MHz (slack 1)', () => {
     // 60 MHz: min(21, 30 − 25, 10.5, 21 − 15 − 0.5) = 5 MHz (the hand-worked plan's best, zone 1).
-    const plan = planPart({ ...context, clocking: { ...CLOCKING, clockDividers: [1, 2, 3] } }, setOf(context), part('XO-D 120M', 120 * MHZ, { kind: 'divider' }, 0))!;
+    const plan = planPart(
+      { ...context, clocking: { ...CLOCKING, clockDividers: [1, 2, 3] } },
+      setOf(context),
+      part('XO-D 120M', 120 * MHZ, { kind: 'divider' }, 0),
+    )!;
     expect(plan.settings).toEqual({ N: 1, M: 1, D: 2 });
     expect(plan.evaluation.worstSlack).toBeCloseTo(5 * MHZ, 6);
   });
@@ -138,7 +142,9 @@ describe('every search path against exhaustive enumeration of every (N, M, D), r
       ),
       { numRuns: 1000 },
     );
-    console.log(`plans ${counts.plans}: ${counts.passing} with a passing rate, ${counts.failing} with none, ${counts.none} with no rate in range; ${counts.rates} rates enumerated`);
+    console.log(
+      `plans ${counts.plans}: ${counts.passing} with a passing rate, ${counts.failing} with none, ${counts.none} with no rate in range; ${counts.rates} rates enumerated`,
+    );
     expect(counts.passing).toBeGreaterThan(200);
     expect(counts.failing).toBeGreaterThan(120);
   });
@@ -170,6 +176,8 @@ describe('the sampled search when nothing passes and there are too many rates to
       { numRuns: 60 },
     );
     const exact = gaps.filter((g) => g === 0).length;
-    console.log(`sampled (budget 100 rates): ${exact} of ${gaps.length} plans found the best failing rate; largest shortfall ${Math.max(...gaps).toFixed(4)} bandwidths`);
+    console.log(
+      `sampled (budget 100 rates): ${exact} of ${gaps.length} plans found the best failing rate; largest shortfall ${Math.max(...gaps).toFixed(4)} bandwidths`,
+    );
   });
 });

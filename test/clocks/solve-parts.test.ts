@@ -9,7 +9,6 @@ import { planTable } from '../../src/output/plan-table.js';
 import { part, synthesiser } from './part-fixtures.js';
 import { handWorkedContext, MHZ } from '../helpers/hand-worked-plan.js';
 
-
 describe('solvePlan puts every clock part forward at its best rate', () => {
   // The plan worked on paper in test/solve/hand-worked.test.ts, with four invented Heron parts.
   const xo = part('XO-26 26M', 26 * MHZ, { kind: 'direct' }, 0, 1e-12);
@@ -27,7 +26,11 @@ describe('solvePlan puts every clock part forward at its best rate', () => {
     const clocks = result.candidates.filter((c) => c.origin === 'clock');
     expect(clocks.map((c) => c.label).sort()).toEqual(['SYN-H 10M', 'XO-26 26M', 'XO-D 120M']);
     for (const c of clocks) {
-      const plan = planPart(context, set, context.clocks.find((p) => p.label === c.label)!)!;
+      const plan = planPart(
+        context,
+        set,
+        context.clocks.find((p) => p.label === c.label)!,
+      )!;
       // The first-ranked candidate is judged again on every interferer: the same rate, verdict and margins.
       const { checks: _c, checkScope: _s, ...judged } = c.evaluation;
       const { checks: _p, checkScope: _t, ...planned } = plan.evaluation;

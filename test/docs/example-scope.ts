@@ -35,7 +35,10 @@ export async function exampleScope(): Promise<Record<string, unknown>> {
   return {
     ...api,
     heronBase,
-    heronBaseDocument: JSON.parse(readFileSync(join(root, 'scenarios', 'heron-base.json'), 'utf8')) as Record<string, Record<string, unknown>>,
+    heronBaseDocument: JSON.parse(readFileSync(join(root, 'scenarios', 'heron-base.json'), 'utf8')) as Record<
+      string,
+      Record<string, unknown>
+    >,
     heronNarrow,
     heronLowIf: scenario('heron-lowif'),
     heronWide: scenario('heron-wide'),

@@ -67,7 +67,12 @@ function readValue(r: Reader): Written {
     const open = /(?:\.\.\.|…)$/.exec(text);
     return open ? { kind: 'prefix', value: text.slice(0, open.index) } : { kind: 'plain', value: text };
   }
-  for (const [word, value] of [['true', true], ['false', false], ['null', null], ['undefined', undefined]] as const) {
+  for (const [word, value] of [
+    ['true', true],
+    ['false', false],
+    ['null', null],
+    ['undefined', undefined],
+  ] as const) {
     if (r.text.startsWith(word, r.at) && !/[\w$]/.test(r.text[r.at + word.length] ?? '')) {
       r.at += word.length;
       return { kind: 'plain', value };
@@ -78,7 +83,8 @@ function readValue(r: Reader): Written {
 
 function readNumber(r: Reader): Written {
   const match = /^([−-])?(?:(Infinity)|(\d+)(?:\.(\d+))?(?:e([+−-]?\d+))?)/.exec(r.text.slice(r.at));
-  if (!match || match[0] === '' || match[0] === '−' || match[0] === '-') throw new Error(`a value expected at ${JSON.stringify(r.text.slice(r.at))}`);
+  if (!match || match[0] === '' || match[0] === '−' || match[0] === '-')
+    throw new Error(`a value expected at ${JSON.stringify(r.text.slice(r.at))}`);
   r.at += match[0].length;
   const sign = match[1] ? -1 : 1;
   if (match[2]) return { kind: 'number', value: sign * Infinity, tolerance: 0 };
@@ -107,8 +113,7 @@ function readString(r: Reader): string {
     if (c === '\\') {
       const escaped = r.text[++r.at]!;
       out += escaped === 'n' ? '\n' : escaped === 't' ? '\t' : escaped;
-    }
-    else if (c === quote) {
+    } else if (c === quote) {
       r.at++;
       return out;
     } else out += c;

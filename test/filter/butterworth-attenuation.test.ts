@@ -155,7 +155,9 @@ describe('butterworthLeastAttenuation: exact, against a dense sweep', () => {
           const magnitudes = [Math.abs(low), Math.abs(high)];
           const f0Inside = (low <= f0 && f0 <= high) || (low <= -f0 && -f0 <= high);
           const step = width / steps;
-          const slack = f0Inside ? Math.max(direct(filter, f0 + step), direct(filter, f0 - step)) : 1e-9 * Math.max(1, ...magnitudes.map((m) => direct(filter, m)));
+          const slack = f0Inside
+            ? Math.max(direct(filter, f0 + step), direct(filter, f0 - step))
+            : 1e-9 * Math.max(1, ...magnitudes.map((m) => direct(filter, m)));
           expect(bruteMin - least).toBeLessThanOrEqual(slack + 1e-12);
         },
       ),

@@ -51,7 +51,12 @@ describe('a low-pass or high-pass scenario through every command', () => {
 
   it.each(Object.entries(filters))('%s: solve, compare, report and verify answer (exit 0 or 1)', async (name, filter) => {
     const file = writeInto(dir, `${name.replace(/\W+/g, '-')}.json`, { ...base, $schema: undefined, filter });
-    for (const args of [['solve', file], ['compare', file], ['report', file, '--html', `${file}.html`], ['verify', file, '--rate', '184.32M', '--samples', '8192']]) {
+    for (const args of [
+      ['solve', file],
+      ['compare', file],
+      ['report', file, '--html', `${file}.html`],
+      ['verify', file, '--rate', '184.32M', '--samples', '8192'],
+    ]) {
       const run = await ifzone(...args);
       expect(run.err).toBe('');
       expect([0, 1]).toContain(run.code);

@@ -6,7 +6,15 @@ import { sortedTable, tableAttenuation, tableLeastAttenuation, type AttenuationP
 const point = (frequency: number, attenuation: number): AttenuationPoint => ({ frequency: hz(frequency), attenuation: db(attenuation) });
 
 /** Invented response: a pass band 40–60 MHz, a notch at 20 MHz shallower than its surroundings. */
-const table = sortedTable([point(100e6, 50), point(1e6, 60), point(20e6, 35), point(30e6, 40), point(10e6, 45), point(40e6, 0.5), point(60e6, 1)]);
+const table = sortedTable([
+  point(100e6, 50),
+  point(1e6, 60),
+  point(20e6, 35),
+  point(30e6, 40),
+  point(10e6, 45),
+  point(40e6, 0.5),
+  point(60e6, 1),
+]);
 
 describe('tableAttenuation: linear in dB over log-frequency', () => {
   it('interpolates on the log axis (hand-worked)', () => {
@@ -16,7 +24,7 @@ describe('tableAttenuation: linear in dB over log-frequency', () => {
     // √10 MHz sits a quarter of the way: 10 dB.
     expect(tableAttenuation(two, hz(Math.sqrt(10) * 1e6))).toBeCloseTo(10, 12);
     // Linear in f would give 40·(10 − 1)/99 = 3.64 dB at 10 MHz: the log axis matters.
-    expect(tableAttenuation(two, hz(10e6))).not.toBeCloseTo(40 * 9 / 99, 1);
+    expect(tableAttenuation(two, hz(10e6))).not.toBeCloseTo((40 * 9) / 99, 1);
   });
 
   it('holds the end values flat beyond the table, and the first value at 0 Hz', () => {
@@ -66,31 +74,49 @@ describe('tableLeastAttenuation: exact, against a dense sweep', () => {
       for (let i = 1; i < points.length; i++) {
         const p = points[i - 1]!;
         const q = points[i]!;
-        if (a <= q.frequency) return p.attenuation + ((Math.log10(a) - Math.log10(p.frequency)) / (Math.log10(q.frequency) - Math.log10(p.frequency))) * (q.attenuation - p.attenuation);
+        if (a <= q.frequency)
+          return (
+            p.attenuation +
+            ((Math.log10(a) - Math.log10(p.frequency)) / (Math.log10(q.frequency) - Math.log10(p.frequency))) *
+              (q.attenuation - p.attenuation)
+          );
       }
       return points[points.length - 1]!.attenuation;
     };
     const tables = fc
       // Frequencies on a 1/200-decade lattice, 100 kHz–10 GHz: distinct points at least 1.2 % apart
       // (points a few ulps apart make any two log interpolations disagree in the last bits).
-      .uniqueArray(fc.integer({ min: 0, max: 1000 }).map((i) => 1e5 * 10 ** (i / 200)), { minLength: 1, maxLength: 8 })
-      .chain((fs) => fc.tuple(fc.constant(fs), fc.array(fc.double({ min: 0, max: 80, noNaN: true }), { minLength: fs.length, maxLength: fs.length })));
+      .uniqueArray(
+        fc.integer({ min: 0, max: 1000 }).map((i) => 1e5 * 10 ** (i / 200)),
+        { minLength: 1, maxLength: 8 },
+      )
+      .chain((fs) =>
+        fc.tuple(fc.constant(fs), fc.array(fc.double({ min: 0, max: 80, noNaN: true }), { minLength: fs.length, maxLength: fs.length })),
+      );
     fc.assert(
-      fc.property(tables, fc.double({ min: -1e10, max: 1e10, noNaN: true }), fc.double({ min: 0, max: 1e10, noNaN: true }), ([fs, as], low, width) => {
-        const points = sortedTable(fs.map((f, i) => point(f, as[i]!)));
-        const high = low + width;
-        const steps = 20000;
-        let bruteMin = Infinity;
-        for (let i = 0; i <= steps; i++) bruteMin = Math.min(bruteMin, reference(points, low + (width * i) / steps));
-        const least = tableLeastAttenuation(points, hz(low), hz(high));
-        expect(least).toBeLessThanOrEqual(bruteMin + 1e-9);
-        // The sweep misses a table point inside the extent by at most one step; take the
-        // reference's value one step either side of each inside point as the slack.
-        const step = width / steps;
-        const near = points.filter((p) => (p.frequency > low && p.frequency < high) || (-p.frequency > low && -p.frequency < high));
-        const slack = Math.max(0, ...near.map((p) => Math.max(reference(points, p.frequency + step), reference(points, p.frequency - step)) - p.attenuation));
-        expect(bruteMin - least).toBeLessThanOrEqual(slack + 1e-9);
-      }),
+      fc.property(
+        tables,
+        fc.double({ min: -1e10, max: 1e10, noNaN: true }),
+        fc.double({ min: 0, max: 1e10, noNaN: true }),
+        ([fs, as], low, width) => {
+          const points = sortedTable(fs.map((f, i) => point(f, as[i]!)));
+          const high = low + width;
+          const steps = 20000;
+          let bruteMin = Infinity;
+          for (let i = 0; i <= steps; i++) bruteMin = Math.min(bruteMin, reference(points, low + (width * i) / steps));
+          const least = tableLeastAttenuation(points, hz(low), hz(high));
+          expect(least).toBeLessThanOrEqual(bruteMin + 1e-9);
+          // The sweep misses a table point inside the extent by at most one step; take the
+          // reference's value one step either side of each inside point as the slack.
+          const step = width / steps;
+          const near = points.filter((p) => (p.frequency > low && p.frequency < high) || (-p.frequency > low && -p.frequency < high));
+          const slack = Math.max(
+            0,
+            ...near.map((p) => Math.max(reference(points, p.frequency + step), reference(points, p.frequency - step)) - p.attenuation),
+          );
+          expect(bruteMin - least).toBeLessThanOrEqual(slack + 1e-9);
+        },
+      ),
       { numRuns: 300 },
     );
   });

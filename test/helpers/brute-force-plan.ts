@@ -96,7 +96,13 @@ function distanceTo(x: number, interval: { low: number; high: number }): number 
  * the wanted alias interval, Hz, never negative (see the module comment for
  * its error: none with corners when positive, at most spacing/2 otherwise).
  */
-export function bruteLeastDistance(extent: BruteExtent, alias: { low: number; high: number }, rate: number, spacing: number, withCorners = true): number {
+export function bruteLeastDistance(
+  extent: BruteExtent,
+  alias: { low: number; high: number },
+  rate: number,
+  spacing: number,
+  withCorners = true,
+): number {
   const { low, high } = extentAt(extent, rate);
   let least = Infinity;
   for (const f of samplePoints(low, high, rate, spacing, withCorners)) least = Math.min(least, distanceTo(bruteAlias(f, rate), alias));
@@ -174,7 +180,10 @@ export function bruteClearingShift(extent: BruteExtent, alias: { low: number; hi
   const first = Math.floor((low - alias.high) / rate) - 1;
   const last = Math.ceil((high + alias.high) / rate) + 1;
   for (let k = first; k <= last; k++) {
-    for (const [p, q] of [[k * rate + alias.low, k * rate + alias.high], [k * rate - alias.high, k * rate - alias.low]] as const) {
+    for (const [p, q] of [
+      [k * rate + alias.low, k * rate + alias.high],
+      [k * rate - alias.high, k * rate - alias.low],
+    ] as const) {
       if (Math.min(high, q) - Math.max(low, p) > 0 || (p < low && high < q)) worst = Math.max(worst, Math.min(q - low, high - p));
     }
   }

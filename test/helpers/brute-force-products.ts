@@ -57,7 +57,13 @@ export function productKey(picks: ReadonlyArray<readonly [number, number]>): str
  * @param maxOrder highest mixing order
  * @param harmonicOrder highest single-signal harmonic order
  */
-export function bruteProducts(signals: readonly BruteSignal[], hdDbc: ReadonlyMap<number, number>, reference: number, maxOrder: number, harmonicOrder: number): BruteProduct[] {
+export function bruteProducts(
+  signals: readonly BruteSignal[],
+  hdDbc: ReadonlyMap<number, number>,
+  reference: number,
+  maxOrder: number,
+  harmonicOrder: number,
+): BruteProduct[] {
   const found = new Map<string, BruteProduct>();
   const picks: Array<[number, number]> = signals.map(() => [0, 0]);
   const record = () => {
@@ -76,7 +82,8 @@ export function bruteProducts(signals: readonly BruteSignal[], hdDbc: ReadonlyMa
       high += p * s.high - q * s.low;
     });
     const key = productKey(picks);
-    if (!found.has(key)) found.set(key, { picks: picks.map(([p, q]) => [p, q] as const), order, low, high, level: 20 * Math.log10(amplitude) });
+    if (!found.has(key))
+      found.set(key, { picks: picks.map(([p, q]) => [p, q] as const), order, low, high, level: 20 * Math.log10(amplitude) });
   };
   const highest = Math.max(maxOrder, harmonicOrder);
   const walk = (i: number, left: number) => {

@@ -11,7 +11,8 @@ export const ROOT = fileURLToPath(new URL('../../', import.meta.url));
  * bin/ifzone. `npm test` builds first.
  */
 export function ensureBuilt(): void {
-  if (existsSync(new URL('../../dist/cli/main.js', import.meta.url)) && existsSync(new URL('../../dist/bundle/main.js', import.meta.url))) return;
+  if (existsSync(new URL('../../dist/cli/main.js', import.meta.url)) && existsSync(new URL('../../dist/bundle/main.js', import.meta.url)))
+    return;
   execFileSync(process.execPath, ['node_modules/typescript/bin/tsc', '-p', 'tsconfig.json'], { cwd: ROOT, stdio: 'inherit' });
   execFileSync(process.execPath, ['scripts/bundle-cli.mjs'], { cwd: ROOT, stdio: 'inherit' });
 }

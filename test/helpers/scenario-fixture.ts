@@ -59,7 +59,12 @@ export function scenarioFixture(overrides: Partial<Scenario> = {}): Scenario {
     ],
     goal: { kind: 'widest-margin' },
     ifShift: null,
-    afterRate: { outOfBandLevel: null, passbandRipple: db(1), driverNoiseDensity: null, downConverter: { ncoBits: null, outputRate: null, usableFraction: 0.8 } },
+    afterRate: {
+      outOfBandLevel: null,
+      passbandRipple: db(1),
+      driverNoiseDensity: null,
+      downConverter: { ncoBits: null, outputRate: null, usableFraction: 0.8 },
+    },
     ...overrides,
   };
 }

@@ -116,8 +116,15 @@ describe('deriveInterferers: a hand-worked scenario', () => {
 
   it('derives exactly the interferers worked out on paper: spurs, neighbours, products, converter spurs, images', () => {
     const labels = derived.map((i) => i.label);
-    expect(labels.filter((l) => !isProduct(derived.find((i) => i.label === l)!.kind))).toEqual(expected.filter((e) => !isProduct(e[1])).map((e) => e[0]));
-    expect([...labels.filter((l) => isProduct(derived.find((i) => i.label === l)!.kind))].sort()).toEqual(expected.filter((e) => isProduct(e[1])).map((e) => e[0]).sort());
+    expect(labels.filter((l) => !isProduct(derived.find((i) => i.label === l)!.kind))).toEqual(
+      expected.filter((e) => !isProduct(e[1])).map((e) => e[0]),
+    );
+    expect([...labels.filter((l) => isProduct(derived.find((i) => i.label === l)!.kind))].sort()).toEqual(
+      expected
+        .filter((e) => isProduct(e[1]))
+        .map((e) => e[0])
+        .sort(),
+    );
     expect(summary.products).toBe(10);
     expect(summary.inBand).toBe(1);
     // Images left out: REF 10M, its H2, CLK 125M, ADJ-LO and the 10 products, 2 sides each.
@@ -136,7 +143,7 @@ describe('deriveInterferers: a hand-worked scenario', () => {
     expect(found.requiredMargin).toBe(0.5 * MHz);
   });
 
-  it('prunes the nearest misses and reports the strongest of them: ADJ-UP\'s own difference at −103.19 dBFS', () => {
+  it("prunes the nearest misses and reports the strongest of them: ADJ-UP's own difference at −103.19 dBFS", () => {
     expect(summary.strongestPruned!).toBeCloseTo(-69 + 20 * Math.log10(2) - 2 * 20.1072, 3);
     expect(derived.some((i) => i.label === 'ADJ-UP H2' || i.label === 'IM2 ADJ-UP difference')).toBe(false);
   });
@@ -167,7 +174,9 @@ describe('deriveInterferers: a hand-worked scenario', () => {
 
   it('board spur harmonics roll off as 1/h', () => {
     // −20·log10(3) = −9.5424 dB at h = 3, after the filter: no attenuation.
-    const s = scenarioFixture({ boardSpurs: [{ label: 'SW 1M', low: hz(1e6), high: hz(1e6), level: db(-40), coupling: 'after-filter', harmonics: 3 }] });
+    const s = scenarioFixture({
+      boardSpurs: [{ label: 'SW 1M', low: hz(1e6), high: hz(1e6), level: db(-40), coupling: 'after-filter', harmonics: 3 }],
+    });
     const h3 = deriveInterferers(s).find((i) => i.label === 'SW 1M H3')!;
     expect(h3.level).toBeCloseTo(-49.5424, 4);
     expect([h3.low, h3.high]).toEqual([3e6, 3e6]);
@@ -176,7 +185,14 @@ describe('deriveInterferers: a hand-worked scenario', () => {
 
 describe('blocking: at the threshold is weak enough, just above blocks', () => {
   // Fixture: weakest −60 dBFS, rejection 40 dB → threshold −100 dBFS.
-  const spur = (level: number) => ({ label: 'TEST', low: hz(1e6), high: hz(1e6), level: db(level), coupling: 'after-filter' as const, harmonics: 1 });
+  const spur = (level: number) => ({
+    label: 'TEST',
+    low: hz(1e6),
+    high: hz(1e6),
+    level: db(level),
+    coupling: 'after-filter' as const,
+    harmonics: 1,
+  });
 
   it('levelThreshold is weakestLevel − rejection', () => {
     expect(levelThreshold(scenarioFixture())).toBe(-100);
@@ -192,7 +208,15 @@ describe('blocking: at the threshold is weak enough, just above blocks', () => {
   });
 
   it('a wanted harmonic landing exactly on the threshold (−1 + −99 = −100) is non-blocking, so it is pruned and reported as the strongest pruned', () => {
-    const s = scenarioFixture({ harmonicOrder: 3, converter: converterFixture({ harmonics: new Map([[2, db(-99)], [3, db(-98.999)]]) }) });
+    const s = scenarioFixture({
+      harmonicOrder: 3,
+      converter: converterFixture({
+        harmonics: new Map([
+          [2, db(-99)],
+          [3, db(-98.999)],
+        ]),
+      }),
+    });
     const { interferers, summary } = deriveInterfererList(s);
     expect(interferers.some((i) => i.label === 'H2 wanted')).toBe(false);
     expect(summary.strongestPruned).toBe(-100);
@@ -204,7 +228,12 @@ describe('blocking: at the threshold is weak enough, just above blocks', () => {
 
 describe('labels are unique, even when the scenario repeats them', () => {
   it('many sources, colliding user labels', () => {
-    const neighbours = ['ADJ-UP', 'ADJ-LO', 'ALT-UP', 'ADJ-UP', 'DC'].map((label, i) => ({ label, low: hz((100 + 20 * i) * MHz), high: hz((110 + 20 * i) * MHz), level: db(-20) }));
+    const neighbours = ['ADJ-UP', 'ADJ-LO', 'ALT-UP', 'ADJ-UP', 'DC'].map((label, i) => ({
+      label,
+      low: hz((100 + 20 * i) * MHz),
+      high: hz((110 + 20 * i) * MHz),
+      level: db(-20),
+    }));
     const boardSpurs = [
       { label: 'REF 10M', low: hz(10 * MHz), high: hz(10 * MHz), level: db(-50), coupling: 'before-filter' as const, harmonics: 5 },
       { label: 'REF 10M', low: hz(10 * MHz), high: hz(10 * MHz), level: db(-60), coupling: 'after-filter' as const, harmonics: 3 },
@@ -215,8 +244,18 @@ describe('labels are unique, even when the scenario repeats them', () => {
       harmonicOrder: 7,
       neighbours,
       boardSpurs,
-      converter: converterFixture({ rateSpurs: { dc: db(-80), halfRate: db(-85), quarterRate: db(-90) }, interleave: { ways: 4, offsetSpur: db(-80), imageLevel: db(-65) } }),
-      filter: { kind: 'table', points: [{ frequency: hz(1e6), attenuation: db(60) }, { frequency: hz(70e6), attenuation: db(0) }, { frequency: hz(300e6), attenuation: db(50) }] },
+      converter: converterFixture({
+        rateSpurs: { dc: db(-80), halfRate: db(-85), quarterRate: db(-90) },
+        interleave: { ways: 4, offsetSpur: db(-80), imageLevel: db(-65) },
+      }),
+      filter: {
+        kind: 'table',
+        points: [
+          { frequency: hz(1e6), attenuation: db(60) },
+          { frequency: hz(70e6), attenuation: db(0) },
+          { frequency: hz(300e6), attenuation: db(50) },
+        ],
+      },
     });
     const derived = deriveInterferers(s);
     expect(derived.length).toBeGreaterThan(30);
@@ -228,6 +267,7 @@ describe('labels are unique, even when the scenario repeats them', () => {
     expect(derived.find((i) => i.label === 'DC #2')!.kind).toBe('converter');
     expect(derived.find((i) => i.label === 'H2 wanted')!.kind).toBe('spur');
     expect(derived.find((i) => i.label === 'H2 wanted #2')!.kind).toBe('harmonic');
-    for (const label of ['IL offset 1/4', 'IL offset 2/4', 'IL offset 3/4', 'IL image 3/4−', 'IL image 3/4+', 'rate/2', 'rate/4']) expect(labels).toContain(label);
+    for (const label of ['IL offset 1/4', 'IL offset 2/4', 'IL offset 3/4', 'IL image 3/4−', 'IL image 3/4+', 'rate/2', 'rate/4'])
+      expect(labels).toContain(label);
   });
 });

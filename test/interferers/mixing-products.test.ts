@@ -22,7 +22,12 @@ const BINS = [1000, 1370, 1730] as const;
 const AMPLITUDES = [0.2, 0.05, 0.1] as const;
 const aRef = 0.5;
 
-const tone = (label: string, bin: number, amplitude: number): Neighbour => ({ label, low: hz(bin * 1e5), high: hz(bin * 1e5), level: db(dbfs(amplitude)) });
+const tone = (label: string, bin: number, amplitude: number): Neighbour => ({
+  label,
+  low: hz(bin * 1e5),
+  high: hz(bin * 1e5),
+  level: db(dbfs(amplitude)),
+});
 const neighbours = BINS.map((bin, i) => tone(`N${i + 1}`, bin, AMPLITUDES[i]!));
 const threeTones = BINS.map((bin, i) => ({ bin, amplitude: AMPLITUDES[i]! }));
 
@@ -40,7 +45,16 @@ describe('mixing products of three tones against a simulated polynomial converte
   const [fundamental, h2, h3] = spectrumLevels([{ bin: 700, amplitude: aRef }], [700, 1400, 2100]);
   const hd2 = h2! - fundamental!;
   const hd3 = h3! - fundamental!;
-  const derived = deriveInterferers(threeToneScenario(converterFixture({ harmonics: new Map([[2, db(hd2)], [3, db(hd3)]]) })));
+  const derived = deriveInterferers(
+    threeToneScenario(
+      converterFixture({
+        harmonics: new Map([
+          [2, db(hd2)],
+          [3, db(hd3)],
+        ]),
+      }),
+    ),
+  );
   const find = (label: string) => {
     const found = derived.find((i) => i.label === label);
     if (!found) throw new Error(`${label} not derived; have ${derived.map((i) => i.label).join(', ')}`);
@@ -65,16 +79,18 @@ describe('mixing products of three tones against a simulated polynomial converte
 
   it('every product of order 1..3 of the three tones lands on its own bin (so each reads alone)', () => {
     const seen = new Map<number, string>();
-    for (let a = -3; a <= 3; a++) for (let b = -3; b <= 3; b++) for (let c = -3; c <= 3; c++) {
-      const order = Math.abs(a) + Math.abs(b) + Math.abs(c);
-      if (order === 0 || order > 3) continue;
-      const bin = Math.abs(a * BINS[0] + b * BINS[1] + c * BINS[2]);
-      const key = [a, b, c].join(',');
-      const negative = [-a, -b, -c].join(',');
-      const earlier = seen.get(bin);
-      expect(earlier === undefined || earlier === negative, `bin ${bin}: ${earlier} and ${key}`).toBe(true);
-      seen.set(bin, key);
-    }
+    for (let a = -3; a <= 3; a++)
+      for (let b = -3; b <= 3; b++)
+        for (let c = -3; c <= 3; c++) {
+          const order = Math.abs(a) + Math.abs(b) + Math.abs(c);
+          if (order === 0 || order > 3) continue;
+          const bin = Math.abs(a * BINS[0] + b * BINS[1] + c * BINS[2]);
+          const key = [a, b, c].join(',');
+          const negative = [-a, -b, -c].join(',');
+          const earlier = seen.get(bin);
+          expect(earlier === undefined || earlier === negative, `bin ${bin}: ${earlier} and ${key}`).toBe(true);
+          seen.set(bin, key);
+        }
   });
 
   it.each(cases)('%s at bin %i sits at the derived level, with the derived extent', (label, bin) => {
@@ -86,7 +102,10 @@ describe('mixing products of three tones against a simulated polynomial converte
 
   it('at equal drive: 2·f1 + f2 is 2·f1 − f2; a triple beat f1 + f2 − f3 is 6.02 dB above 2·f1 − f2', () => {
     const equal = [0.1, 0.1, 0.1];
-    const [im3, sum3, triple] = spectrumLevels(BINS.map((bin, i) => ({ bin, amplitude: equal[i]! })), [2 * 1000 - 1370, 2 * 1000 + 1370, 1000 + 1370 - 1730]);
+    const [im3, sum3, triple] = spectrumLevels(
+      BINS.map((bin, i) => ({ bin, amplitude: equal[i]! })),
+      [2 * 1000 - 1370, 2 * 1000 + 1370, 1000 + 1370 - 1730],
+    );
     // (3/4)·a3·A³ for both 2f1 ± f2, (6/4)·a3·A³ for f1 + f2 − f3 (multinomial counts 3 and 6; common practice, no source).
     expect(sum3! - im3!).toBeCloseTo(0, 6);
     expect(triple! - im3!).toBeCloseTo(20 * Math.log10(2), 6);
@@ -98,7 +117,14 @@ describe('the intercept law (common practice: the product of order n rises n dB 
   const iip3 = 10 * Math.log10(4 / (3 * a3));
   const iip2 = 30; // stated outright for the order-2 law below
   const [fundamental, h2] = spectrumLevels([{ bin: 700, amplitude: aRef }], [700, 1400]);
-  const converter = converterFixture({ harmonics: new Map([[2, db(h2! - fundamental!)]]), intercepts: new Map([[2, db(iip2)], [3, db(iip3)]]), intercept3: db(iip3) });
+  const converter = converterFixture({
+    harmonics: new Map([[2, db(h2! - fundamental!)]]),
+    intercepts: new Map([
+      [2, db(iip2)],
+      [3, db(iip3)],
+    ]),
+    intercept3: db(iip3),
+  });
   const derived = deriveInterferers(threeToneScenario(converter));
   const levelOf = (label: string) => derived.find((i) => i.label === label)!.level;
   const [p1, p2, p3] = AMPLITUDES.map(dbfs) as [number, number, number];
@@ -116,7 +142,7 @@ describe('the intercept law (common practice: the product of order n rises n dB 
     expect(levelOf('IM2 N1+N2')).toBeCloseTo(p1 + p2 - iip2, 9);
   });
 
-  it('the intercept stated for y = x + a3·x³ reproduces that converter\'s products (fft.js)', () => {
+  it("the intercept stated for y = x + a3·x³ reproduces that converter's products (fft.js)", () => {
     // The polynomial helper has a3 = A3: its third-order products are those of the intercept law at IIP3 above.
     const [im3, triple, sum3] = spectrumLevels(threeTones, [2 * 1000 - 1370, 1000 + 1370 - 1730, 2 * 1000 + 1370]);
     expect(Math.abs(levelOf('IM3 2·N1−N2') - im3!)).toBeLessThan(2e-3);

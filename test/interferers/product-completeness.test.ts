@@ -25,7 +25,14 @@ const signalArbitrary = fc.record({
 
 const scenarioArbitrary = fc.record({
   neighbours: fc.array(signalArbitrary, { maxLength: 4 }),
-  spurs: fc.array(fc.record({ centre: fc.integer({ min: 1, max: 100 }), level: fc.integer({ min: -90, max: -20 }), harmonics: fc.integer({ min: 1, max: 2 }) }), { maxLength: 2 }),
+  spurs: fc.array(
+    fc.record({
+      centre: fc.integer({ min: 1, max: 100 }),
+      level: fc.integer({ min: -90, max: -20 }),
+      harmonics: fc.integer({ min: 1, max: 2 }),
+    }),
+    { maxLength: 2 },
+  ),
   maxOrder: fc.integer({ min: 2, max: 4 }),
   extraHarmonics: fc.integer({ min: 0, max: 2 }),
   hd: fc.array(fc.integer({ min: -100, max: -50 }), { minLength: 6, maxLength: 6 }),
@@ -43,8 +50,20 @@ describe('the pruned generator lists every product above the threshold (brute fo
         const scenario: Scenario = scenarioFixture({
           wanted: { low: hz(65 * MHZ), high: hz(75 * MHZ), weakestLevel: db(p.weakest), strongestLevel: db(-1) },
           converter: converterFixture({ harmonics }),
-          neighbours: p.neighbours.map((n, i) => ({ label: `N${i}`, low: hz((n.centre - n.width / 2) * MHZ), high: hz((n.centre + n.width / 2) * MHZ), level: db(n.level) })),
-          boardSpurs: p.spurs.map((s, i) => ({ label: `S${i}`, low: hz(s.centre * MHZ), high: hz(s.centre * MHZ), level: db(s.level), coupling: 'after-filter' as const, harmonics: s.harmonics })),
+          neighbours: p.neighbours.map((n, i) => ({
+            label: `N${i}`,
+            low: hz((n.centre - n.width / 2) * MHZ),
+            high: hz((n.centre + n.width / 2) * MHZ),
+            level: db(n.level),
+          })),
+          boardSpurs: p.spurs.map((s, i) => ({
+            label: `S${i}`,
+            low: hz(s.centre * MHZ),
+            high: hz(s.centre * MHZ),
+            level: db(s.level),
+            coupling: 'after-filter' as const,
+            harmonics: s.harmonics,
+          })),
           maxOrder: p.maxOrder,
           harmonicOrder: Math.max(2, p.maxOrder + p.extraHarmonics),
           requirements: { ...scenarioFixture().requirements, rejection: db(p.rejection) },
@@ -54,7 +73,14 @@ describe('the pruned generator lists every product above the threshold (brute fo
         const signals: BruteSignal[] = [
           { low: 65 * MHZ, high: 75 * MHZ, amplitude: 10 ** (-1 / 20), wanted: true },
           ...scenario.neighbours.map((n) => ({ low: n.low, high: n.high, amplitude: 10 ** (n.level / 20), wanted: false })),
-          ...p.spurs.flatMap((s) => Array.from({ length: s.harmonics }, (_, k) => ({ low: (k + 1) * s.centre * MHZ, high: (k + 1) * s.centre * MHZ, amplitude: 10 ** (s.level / 20) / (k + 1), wanted: false }))),
+          ...p.spurs.flatMap((s) =>
+            Array.from({ length: s.harmonics }, (_, k) => ({
+              low: (k + 1) * s.centre * MHZ,
+              high: (k + 1) * s.centre * MHZ,
+              amplitude: 10 ** (s.level / 20) / (k + 1),
+              wanted: false,
+            })),
+          ),
         ];
         const slot = (term: { signal: string; index: number; harmonic: number }) => {
           if (term.signal === 'wanted') return 0;
@@ -82,7 +108,9 @@ describe('the pruned generator lists every product above the threshold (brute fo
           expect(found!.level).toBeCloseTo(b.level, 6);
           expect(found!.order).toBe(b.order);
           // The same frequencies, up to the sign of the whole product.
-          const same = Math.abs(found!.low - b.low) + Math.abs(found!.high - b.high) < 1e-3 || Math.abs(found!.low + b.high) + Math.abs(found!.high + b.low) < 1e-3;
+          const same =
+            Math.abs(found!.low - b.low) + Math.abs(found!.high - b.high) < 1e-3 ||
+            Math.abs(found!.low + b.high) + Math.abs(found!.high + b.low) < 1e-3;
           expect(same, `${found!.label}: [${found!.low}, ${found!.high}] vs [${b.low}, ${b.high}]`).toBe(true);
         }
         expect(derived.summary.pruned).toBe(below.length);

@@ -13,7 +13,9 @@ describe('after-rate words', () => {
   });
 
   it('filter orders as B/C/E, "none" when no filter can meet the mask, "–" when not computed', () => {
-    expect(filterOrdersText({ rate: hz(1e8), filterOrders: { butterworth: 6, chebyshev: 5, elliptic: 4 }, maskMarginDb: db(3) })).toBe('6/5/4');
+    expect(filterOrdersText({ rate: hz(1e8), filterOrders: { butterworth: 6, chebyshev: 5, elliptic: 4 }, maskMarginDb: db(3) })).toBe(
+      '6/5/4',
+    );
     expect(filterOrdersText({ rate: hz(1e8), filterOrders: null, maskMarginDb: db(-3) })).toBe('none');
     expect(filterOrdersText({ rate: null, filterOrders: null, maskMarginDb: null })).toBe('–');
   });

@@ -43,8 +43,15 @@ describe('visibleText', () => {
 
 describe('scenario text through the commands', () => {
   const dir = scratchDirectory('injection');
-  const base = JSON.parse(readFileSync(new URL('../../scenarios/heron-base.json', import.meta.url), 'utf8')) as Record<string, unknown> & { clocks: Record<string, unknown>[] };
-  const hostile = { ...base, $schema: undefined, name: 'Heron \u001b]0;owned\u0007\u001b[2J', clocks: [{ ...base.clocks[0], label: '=HYPERLINK("http://x.invalid","part")' }] };
+  const base = JSON.parse(readFileSync(new URL('../../scenarios/heron-base.json', import.meta.url), 'utf8')) as Record<string, unknown> & {
+    clocks: Record<string, unknown>[];
+  };
+  const hostile = {
+    ...base,
+    $schema: undefined,
+    name: 'Heron \u001b]0;owned\u0007\u001b[2J',
+    clocks: [{ ...base.clocks[0], label: '=HYPERLINK("http://x.invalid","part")' }],
+  };
   const file = writeInto(dir, 'hostile.json', hostile);
 
   it('compare --csv: the label arrives as text, not as a formula', async () => {

@@ -18,7 +18,10 @@ export const TEXT_EXAMPLES: ReadonlyArray<readonly [string, readonly string[]]> 
   ['solve-rates.txt', ['solve', scenario('heron-base'), '--rate', '200M', '184.32M']],
   ['compare-heron-base.txt', ['compare', scenario('heron-base')]],
   ['compare-family.txt', ['compare', scenario('heron-base'), scenario('heron-lowif'), scenario('heron-narrow'), scenario('heron-wide')]],
-  ['compare-family.csv', ['compare', scenario('heron-base'), scenario('heron-lowif'), scenario('heron-narrow'), scenario('heron-wide'), '--csv']],
+  [
+    'compare-family.csv',
+    ['compare', scenario('heron-base'), scenario('heron-lowif'), scenario('heron-narrow'), scenario('heron-wide'), '--csv'],
+  ],
   ['verify-heron-base.txt', ['verify', scenario('heron-base'), '--rate', '184.32M']],
   ['verify-failing-rate.txt', ['verify', scenario('heron-base'), '--rate', '245.76M']],
 ];
@@ -33,6 +36,9 @@ export const FILE_EXAMPLES: ReadonlyArray<readonly [string, readonly string[]]> 
 /** Runs bin/ifzone with standard output a pipe (so 100 columns) and a fixed date for the HTML page. */
 export function runExample(args: readonly string[], file?: string) {
   const argv = args.map((a) => (a === '{out}' ? file! : a));
-  return spawnSync(process.execPath, ['bin/ifzone', ...argv], { cwd: ROOT, encoding: 'utf8', env: { ...process.env, SOURCE_DATE_EPOCH: '1790000000' } });
+  return spawnSync(process.execPath, ['bin/ifzone', ...argv], {
+    cwd: ROOT,
+    encoding: 'utf8',
+    env: { ...process.env, SOURCE_DATE_EPOCH: '1790000000' },
+  });
 }
-

@@ -38,7 +38,12 @@ describe('toJson', () => {
 
 describe('writeJson', () => {
   it('sends a large report in pieces of bounded size that join to the whole text', () => {
-    const report = { candidates: Array.from({ length: 2000 }, (_, i) => ({ rate: 1e9 + i, checks: [{ label: `check ${i}`, margin: i === 7 ? Infinity : i }] })) };
+    const report = {
+      candidates: Array.from({ length: 2000 }, (_, i) => ({
+        rate: 1e9 + i,
+        checks: [{ label: `check ${i}`, margin: i === 7 ? Infinity : i }],
+      })),
+    };
     const pieces: string[] = [];
     writeJson(report, (text) => pieces.push(text));
     expect(pieces.join('')).toBe(reference(report));

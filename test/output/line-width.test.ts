@@ -41,7 +41,11 @@ describe('tables fit 100 columns when standard output is not a terminal', () => 
   });
 
   it('refuses a width that is not a whole number from 40 to 1000, and --wide with --width', () => {
-    for (const bad of [['--width', '20'], ['--width', 'wide'], ['--wide', '--width', '80']]) {
+    for (const bad of [
+      ['--width', '20'],
+      ['--width', 'wide'],
+      ['--wide', '--width', '80'],
+    ]) {
       const run = runBin('solve', 'scenarios/heron-base.json', ...bad);
       expect(run.status).toBe(2);
       expect(run.stdout).toBe('');
@@ -53,7 +57,14 @@ describe('tables fit 100 columns when standard output is not a terminal', () => 
 describe('a closed pipe ends the command quietly', () => {
   it('`ifzone solve … --json | head -c 100` exits 0 with nothing on stderr', () => {
     // The JSON is larger than a pipe's buffer, so the writer meets the closed pipe (EPIPE).
-    const run = spawnSync('bash', ['-c', 'set -o pipefail; node bin/ifzone solve scenarios/heron-base.json --json | head -c 100 >/dev/null; echo "status ${PIPESTATUS[0]}"'], { cwd: ROOT, encoding: 'utf8' });
+    const run = spawnSync(
+      'bash',
+      [
+        '-c',
+        'set -o pipefail; node bin/ifzone solve scenarios/heron-base.json --json | head -c 100 >/dev/null; echo "status ${PIPESTATUS[0]}"',
+      ],
+      { cwd: ROOT, encoding: 'utf8' },
+    );
     expect(run.stderr).toBe('');
     expect(run.stdout.trim()).toBe('status 0');
   });

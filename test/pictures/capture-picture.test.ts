@@ -73,7 +73,10 @@ describe('captureSvg', () => {
     const document = parseSvg(captureSvg(good.result, good.levels));
     const lines = elementsOf(document).filter((e) => e.localName === 'polyline' && e.getAttribute('class') === 'spectrum');
     expect(lines).toHaveLength(1);
-    const points = lines[0]!.getAttribute('points')!.split(' ').map((p) => p.split(',').map(Number));
+    const points = lines[0]!
+      .getAttribute('points')!
+      .split(' ')
+      .map((p) => p.split(',').map(Number));
     expect(points.length).toBeLessThanOrEqual(1200);
     expect(points.length).toBeGreaterThan(500);
     for (const [x, y] of points) {
@@ -114,22 +117,26 @@ describe('maxHoldColumns', () => {
   it('keeps every peak: each column is the maximum of its own bins, and the columns cover every bin once (fast-check)', () => {
     // Reference: Math.max over the column's bins (property test with fast-check, a library from the npm registry).
     fc.assert(
-      fc.property(fc.array(fc.double({ min: -200, max: 10, noNaN: true }), { minLength: 1, maxLength: 3000 }), fc.integer({ min: 1, max: 1300 }), (levels, columns) => {
-        const out = maxHoldColumns(levels, columns);
-        expect(out.length).toBe(Math.min(columns, levels.length));
-        let next = 0;
-        for (const c of out) {
-          expect(c.first).toBe(next);
-          expect(c.last).toBeGreaterThanOrEqual(c.first);
-          expect(c.level).toBe(Math.max(...levels.slice(c.first, c.last + 1)));
-          next = c.last + 1;
-        }
-        expect(next).toBe(levels.length);
-        // Hence no peak vanishes: the highest bin is some column's level.
-        expect(Math.max(...out.map((c) => c.level))).toBe(Math.max(...levels));
-        const runs = out.map((c) => c.last - c.first + 1);
-        expect(Math.max(...runs) - Math.min(...runs)).toBeLessThanOrEqual(1);
-      }),
+      fc.property(
+        fc.array(fc.double({ min: -200, max: 10, noNaN: true }), { minLength: 1, maxLength: 3000 }),
+        fc.integer({ min: 1, max: 1300 }),
+        (levels, columns) => {
+          const out = maxHoldColumns(levels, columns);
+          expect(out.length).toBe(Math.min(columns, levels.length));
+          let next = 0;
+          for (const c of out) {
+            expect(c.first).toBe(next);
+            expect(c.last).toBeGreaterThanOrEqual(c.first);
+            expect(c.level).toBe(Math.max(...levels.slice(c.first, c.last + 1)));
+            next = c.last + 1;
+          }
+          expect(next).toBe(levels.length);
+          // Hence no peak vanishes: the highest bin is some column's level.
+          expect(Math.max(...out.map((c) => c.level))).toBe(Math.max(...levels));
+          const runs = out.map((c) => c.last - c.first + 1);
+          expect(Math.max(...runs) - Math.min(...runs)).toBeLessThanOrEqual(1);
+        },
+      ),
       { numRuns: 300 },
     );
   });

@@ -20,7 +20,10 @@ import { inkStatistics, renderPng } from './render-png.js';
 const OUT = join(tmpdir(), 'ifzone-pictures');
 mkdirSync(OUT, { recursive: true });
 
-const withLevel = (scenario: Scenario, outOfBandLevel: number | null): Scenario => ({ ...scenario, afterRate: { ...scenario.afterRate, outOfBandLevel: outOfBandLevel === null ? null : db(outOfBandLevel) } });
+const withLevel = (scenario: Scenario, outOfBandLevel: number | null): Scenario => ({
+  ...scenario,
+  afterRate: { ...scenario.afterRate, outOfBandLevel: outOfBandLevel === null ? null : db(outOfBandLevel) },
+});
 
 function check(name: string, scenario: Scenario): { texts: string[]; stops: number; bands: number; tightest: number } {
   const report = planScenario(scenario);
@@ -39,7 +42,8 @@ function check(name: string, scenario: Scenario): { texts: string[]; stops: numb
   expect(ink.distinct).toBeGreaterThan(8);
   const groups = document.getElementsByTagName('g');
   let stops = 0;
-  for (let i = 0; i < groups.length; i++) if (groups.item(i)!.getAttribute('class') === 'stop-regions') stops = groups.item(i)!.getElementsByTagName('rect').length;
+  for (let i = 0; i < groups.length; i++)
+    if (groups.item(i)!.getAttribute('class') === 'stop-regions') stops = groups.item(i)!.getElementsByTagName('rect').length;
   const mask = report.candidates.find((c) => c.label === label)!.afterRate!.mask;
   return { texts: textsOf(document), stops, bands: mask.bands.length, tightest: mask.worst!.marginDb };
 }
@@ -58,7 +62,15 @@ describe('filter-mask picture', () => {
   });
 
   it('a stated level and a table filter: the level in the heading, a shortfall labelled', () => {
-    const table = { kind: 'table', points: [{ frequency: hz(40e6), attenuation: db(50) }, { frequency: hz(63e6), attenuation: db(0) }, { frequency: hz(77e6), attenuation: db(0) }, { frequency: hz(110e6), attenuation: db(45) }] } as const;
+    const table = {
+      kind: 'table',
+      points: [
+        { frequency: hz(40e6), attenuation: db(50) },
+        { frequency: hz(63e6), attenuation: db(0) },
+        { frequency: hz(77e6), attenuation: db(0) },
+        { frequency: hz(110e6), attenuation: db(45) },
+      ],
+    } as const;
     const { texts, tightest } = check('filter-mask-table', withLevel({ ...heronBoardScenario(), filter: table }, -10));
     expect(texts.join('\n')).toContain('out-of-band level −10 dBFS (stated)');
     expect(tightest).toBeLessThan(0);

@@ -9,14 +9,24 @@ import { textElement } from '../../src/pictures/svg-element.js';
 /** Label placement: what is placed never overlaps (the property the pictures rely on). */
 describe('packLabels', () => {
   const requests = fc.array(
-    fc.record({ x: fc.double({ min: 0, max: 900, noNaN: true }), text: fc.string({ minLength: 1, maxLength: 30 }), span: fc.tuple(fc.double({ min: 0, max: 900, noNaN: true }), fc.double({ min: 0, max: 60, noNaN: true })) }),
+    fc.record({
+      x: fc.double({ min: 0, max: 900, noNaN: true }),
+      text: fc.string({ minLength: 1, maxLength: 30 }),
+      span: fc.tuple(fc.double({ min: 0, max: 900, noNaN: true }), fc.double({ min: 0, max: 60, noNaN: true })),
+    }),
     { maxLength: 40 },
   );
 
   it('never overlaps two labels, or a label and another bracket, in one row; stays inside the bounds', () => {
     fc.assert(
       fc.property(requests, fc.integer({ min: 1, max: 5 }), (raw, rows) => {
-        const withSpans = raw.map((r, i) => ({ x: r.x, text: r.text, short: String(i + 1), spans: [[r.span[0], r.span[0] + r.span[1]] as const], item: i }));
+        const withSpans = raw.map((r, i) => ({
+          x: r.x,
+          text: r.text,
+          short: String(i + 1),
+          spans: [[r.span[0], r.span[0] + r.span[1]] as const],
+          item: i,
+        }));
         const placed = packLabels(withSpans, rows, [0, 960], 10);
         for (const p of placed) {
           expect(p.row).toBeLessThan(rows);
@@ -26,7 +36,8 @@ describe('packLabels', () => {
           for (const b of placed) {
             if (a === b || a.row !== b.row) continue;
             const boxes = (p: typeof a) => [[p.x - p.width / 2, p.x + p.width / 2], ...withSpans[p.item]!.spans];
-            for (const [a0, a1] of boxes(a)) for (const [b0, b1] of boxes(b)) expect(a0 < b1 && a1 > b0, `${a.text} / ${b.text}`).toBe(false);
+            for (const [a0, a1] of boxes(a))
+              for (const [b0, b1] of boxes(b)) expect(a0 < b1 && a1 > b0, `${a.text} / ${b.text}`).toBe(false);
           }
         }
       }),
@@ -46,7 +57,15 @@ describe('packLabels', () => {
       10,
     );
     expect(placed.map((p) => [p.item, p.text])).toEqual([['a', long]]);
-    const wide = packLabels([{ x: 100, text: long, item: 'a' }, { x: 300, text: 'x'.repeat(60), short: 'k', item: 'b' }], 1, [0, 960], 10);
+    const wide = packLabels(
+      [
+        { x: 100, text: long, item: 'a' },
+        { x: 300, text: 'x'.repeat(60), short: 'k', item: 'b' },
+      ],
+      1,
+      [0, 960],
+      10,
+    );
     expect(wide.map((p) => p.text)).toEqual([long, 'k']);
   });
 
@@ -62,7 +81,10 @@ describe('spreadApart and wrapPhrases', () => {
   });
 
   it('breaks between phrases only', () => {
-    expect(wrapPhrases(['1 = H2 wanted', '2 = LO leak 92M', '3 = SMPS 1.2M'], 200, 10, '; ')).toEqual(['1 = H2 wanted; 2 = LO leak 92M', '3 = SMPS 1.2M']);
+    expect(wrapPhrases(['1 = H2 wanted', '2 = LO leak 92M', '3 = SMPS 1.2M'], 200, 10, '; ')).toEqual([
+      '1 = H2 wanted; 2 = LO leak 92M',
+      '3 = SMPS 1.2M',
+    ]);
   });
 });
 

@@ -27,18 +27,24 @@ describe('linearTicks', () => {
 
   it('keeps ticks inside the range, 1-2-5 steps, about the wanted count, each printing as a short decimal', () => {
     fc.assert(
-      fc.property(fc.double({ min: -1e10, max: 1e10, noNaN: true }), fc.double({ min: 1e-6, max: 1e10, noNaN: true }), fc.integer({ min: 2, max: 12 }), (low, span, count) => {
-        const high = low + span;
-        // Spans of at least a millionth of their values: an axis, not a few ulps (that case is tested above).
-        fc.pre(high > low && span >= 1e-6 * Math.abs(low));
-        const ticks = linearTicks(low, high, count);
-        expect([1, 2, 5]).toContain(ticks.step.mantissa);
-        for (const v of ticks.values) expect(v >= low - 1e-9 * span && v <= high + 1e-9 * span).toBe(true);
-        expect(ticks.values.length).toBeGreaterThanOrEqual(Math.floor(count / 2.5));
-        expect(ticks.values.length).toBeLessThanOrEqual(count + 2);
-        // Each tick is the double nearest its decimal k·m·10^e, as the JavaScript number parser reads it.
-        for (const [i, v] of ticks.values.entries()) expect(v).toBe(Number(`${ticks.multiples[i]! * ticks.step.mantissa}e${ticks.step.exponent}`));
-      }),
+      fc.property(
+        fc.double({ min: -1e10, max: 1e10, noNaN: true }),
+        fc.double({ min: 1e-6, max: 1e10, noNaN: true }),
+        fc.integer({ min: 2, max: 12 }),
+        (low, span, count) => {
+          const high = low + span;
+          // Spans of at least a millionth of their values: an axis, not a few ulps (that case is tested above).
+          fc.pre(high > low && span >= 1e-6 * Math.abs(low));
+          const ticks = linearTicks(low, high, count);
+          expect([1, 2, 5]).toContain(ticks.step.mantissa);
+          for (const v of ticks.values) expect(v >= low - 1e-9 * span && v <= high + 1e-9 * span).toBe(true);
+          expect(ticks.values.length).toBeGreaterThanOrEqual(Math.floor(count / 2.5));
+          expect(ticks.values.length).toBeLessThanOrEqual(count + 2);
+          // Each tick is the double nearest its decimal k·m·10^e, as the JavaScript number parser reads it.
+          for (const [i, v] of ticks.values.entries())
+            expect(v).toBe(Number(`${ticks.multiples[i]! * ticks.step.mantissa}e${ticks.step.exponent}`));
+        },
+      ),
       { numRuns: 500, seed: 5 },
     );
   });

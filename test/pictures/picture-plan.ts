@@ -51,7 +51,7 @@ export function heronLowPassScenario(): Scenario {
 export function heronHighIfScenario(): Scenario {
   return scenarioFixture({
     name: 'Heron-9 high IF',
-    wanted: { low: hz(1.40e9), high: hz(1.41e9), weakestLevel: db(-60), strongestLevel: db(-1) },
+    wanted: { low: hz(1.4e9), high: hz(1.41e9), weakestLevel: db(-60), strongestLevel: db(-1) },
     guard: guardBands(hz(1e6), hz(1e6)),
     converter: converterFixture({ minRate: hz(20e6), maxRate: hz(3e9), inputBandwidth: hz(3e9) }),
     clocks: [directClock('XO-H 245.76M', 245.76e6)],

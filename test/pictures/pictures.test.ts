@@ -149,7 +149,9 @@ describe('band-position chart', () => {
     // fH/B = 1411/12 = 117.58; the x axis ends at the next 20 (140): zones 1..139.
     expect(document.getElementsByTagName('polygon').length).toBe(139);
     const texts = checkPicture('band-position-high-if-one', svg, 900);
-    expect(texts.filter((t) => /^(best in|centre of|[A-Z]+-)[^:]*: /.test(t))).toEqual([`${high.best!}: ${texts.find((t) => t.startsWith(`${high.best!}: `))!.slice(high.best!.length + 2)}`]);
+    expect(texts.filter((t) => /^(best in|centre of|[A-Z]+-)[^:]*: /.test(t))).toEqual([
+      `${high.best!}: ${texts.find((t) => t.startsWith(`${high.best!}: `))!.slice(high.best!.length + 2)}`,
+    ]);
   });
 });
 
@@ -159,7 +161,9 @@ describe('edge cases', () => {
     const clock = report.candidates.find((c) => c.label === 'XO-S 140M')!;
     expect(clock.zone).toBeNull();
     expect(checkPicture('rate-map-straddle', rateMapSvg(report), 960)).toContain('outside windows');
-    expect(checkPicture('spectrum-straddle', spectrumSvg(report, clock.label), 960)).toContain('wanted band folds onto itself (straddles a zone edge)');
+    expect(checkPicture('spectrum-straddle', spectrumSvg(report, clock.label), 960)).toContain(
+      'wanted band folds onto itself (straddles a zone edge)',
+    );
   });
 
   it('draws a low-pass band (guard down to DC) with fH/B = 1 on the band-position chart', () => {

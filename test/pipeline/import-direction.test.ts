@@ -78,7 +78,8 @@ describe('the pipeline as imports (order from DEVELOPERS.md)', () => {
           seenKnown.add(known.join(' -> '));
           continue;
         }
-        if (!(order.get(toFolder)! < order.get(fromFolder)!)) backEdges.push(`${from} imports ${target} (${fromFolder} ${order.get(fromFolder)}, ${toFolder} ${order.get(toFolder)})`);
+        if (!(order.get(toFolder)! < order.get(fromFolder)!))
+          backEdges.push(`${from} imports ${target} (${fromFolder} ${order.get(fromFolder)}, ${toFolder} ${order.get(toFolder)})`);
       }
     }
     expect(backEdges).toEqual([]);

@@ -9,7 +9,10 @@ import { scenarioFixture } from '../helpers/scenario-fixture.js';
  * The after-rate figures inside the solved plan, on a scenario of our own (the invented Heron test fixture:
  * 65–75 MHz, 2 MHz guards, 1 MHz margin, threshold −60 − 40 = −100 dBFS, 500 MHz input bandwidth).
  */
-const withSettings = (settings: Partial<ReturnType<typeof scenarioFixture>['afterRate']>, filter: ReturnType<typeof scenarioFixture>['filter'] = null) => {
+const withSettings = (
+  settings: Partial<ReturnType<typeof scenarioFixture>['afterRate']>,
+  filter: ReturnType<typeof scenarioFixture>['filter'] = null,
+) => {
   const base = scenarioFixture({ filter });
   return { ...base, afterRate: { ...base.afterRate, ...settings } };
 };
@@ -20,7 +23,7 @@ function solved(scenario: ReturnType<typeof scenarioFixture>) {
 }
 
 describe('after-rate figures in the plan report', () => {
-  it('without a stated level the mask is reported only: every verdict and the best are the solver\'s', () => {
+  it("without a stated level the mask is reported only: every verdict and the best are the solver's", () => {
     const { result, report } = solved(withSettings({}));
     expect(report.best).toBe(result.candidates.find((c) => c.evaluation.pass)?.label ?? null);
     for (const c of report.candidates) {
@@ -36,13 +39,24 @@ describe('after-rate figures in the plan report', () => {
     expect(report.best).toBeNull();
     expect(report.candidates.every((c) => !c.pass)).toBe(true);
     // The verdict is prose wrapped to the width: read it as one line.
-    expect(planTable(report, 100).replace(/\s+/g, ' ')).toMatch(/No candidate passes\. Nearest: .*anti-alias mask: the filter gives 0 dB at .* where 80 dB is needed \(short by 80 dB\)/);
+    expect(planTable(report, 100).replace(/\s+/g, ' ')).toMatch(
+      /No candidate passes\. Nearest: .*anti-alias mask: the filter gives 0 dB at .* where 80 dB is needed \(short by 80 dB\)/,
+    );
   });
 
-  it('a filter that holds the stated level keeps the solver\'s best; each candidate carries orders, noise and NCO settings', () => {
+  it("a filter that holds the stated level keeps the solver's best; each candidate carries orders, noise and NCO settings", () => {
     // A 7th-order Butterworth band-pass 63–77 MHz.
     const filter = { kind: 'butterworth', order: 7, passLow: hz(63e6), passHigh: hz(77e6) } as const;
-    const { result, report } = solved(withSettings({ outOfBandLevel: db(-60), driverNoiseDensity: db(-150), downConverter: { ncoBits: 24, outputRate: hz(15.36e6), usableFraction: 0.8 } }, filter));
+    const { result, report } = solved(
+      withSettings(
+        {
+          outOfBandLevel: db(-60),
+          driverNoiseDensity: db(-150),
+          downConverter: { ncoBits: 24, outputRate: hz(15.36e6), usableFraction: 0.8 },
+        },
+        filter,
+      ),
+    );
     const passing = report.candidates.filter((c) => c.pass);
     for (const c of passing) expect(c.afterRate!.mask.worst!.marginDb).toBeGreaterThanOrEqual(0);
     for (const c of report.candidates.filter((r) => !r.pass)) {
@@ -72,13 +86,20 @@ describe('after-rate figures in the plan report', () => {
   });
 
   it('the driver lowers the channel SNR as noise powers add: 80 dB and 80 dB make 76.99 dB', () => {
-    const noise = { channelBandwidth: hz(1), aliasBandwidth: hz(0), penaltyDb: db(0), accuracyDb: db(0), driverNoiseDensity: db(-80), driverSnrDb: db(80) };
+    const noise = {
+      channelBandwidth: hz(1),
+      aliasBandwidth: hz(0),
+      penaltyDb: db(0),
+      accuracyDb: db(0),
+      driverNoiseDensity: db(-80),
+      driverSnrDb: db(80),
+    };
     expect(channelSnrWithDriver(db(80), noise)).toBeCloseTo(80 - 10 * Math.log10(2), 9);
     expect(channelSnrWithDriver(null, noise)).toBeNull();
     expect(channelSnrWithDriver(db(80), { ...noise, driverNoiseDensity: null, driverSnrDb: null })).toBeNull();
   });
 
-  it('the down-converter\'s output rate falls back on the decimation goal', () => {
+  it("the down-converter's output rate falls back on the decimation goal", () => {
     const scenario = scenarioFixture({ goal: { kind: 'decimation', outputRate: hz(30.72e6) } });
     expect(afterRateInputs(scenario).outputRate).toBe(30.72e6);
     expect(afterRateInputs(scenario, { kind: 'widest-margin' }).outputRate).toBeNull();

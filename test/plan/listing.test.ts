@@ -53,7 +53,10 @@ describe('listedChecks', () => {
 
   it('for a candidate judged on the blocking interferers, lists its limiting check only', () => {
     const checks = [check(0, true, 5, -1), check(1, true, -2, -3), check(2, true, 9, -4)];
-    expect(listedChecks(checks, false, { kind: 'interferer', label: 'C1' }, 'bounded')).toEqual({ checks: [checks[1]], listed: 'limiting' });
+    expect(listedChecks(checks, false, { kind: 'interferer', label: 'C1' }, 'bounded')).toEqual({
+      checks: [checks[1]],
+      listed: 'limiting',
+    });
     expect(listedChecks(checks, false, { kind: 'zone edge' }, 'all')).toEqual({ checks: [], listed: 'limiting' });
   });
 });
@@ -81,7 +84,10 @@ describe('listedInterferers', () => {
     const all = Array.from({ length: 1200 }, (_, i) => interferer(i, i < 50, -50 - ((i * 37) % 1200) / 10));
     const { interferers, listed } = listedInterferers(all, 'bounded');
     expect(listed).toBe('nearest');
-    const strongest = all.slice(50).sort((a, b) => b.level - a.level).slice(0, MOST_LISTED - 50);
+    const strongest = all
+      .slice(50)
+      .sort((a, b) => b.level - a.level)
+      .slice(0, MOST_LISTED - 50);
     expect(new Set(interferers.map((i) => i.label))).toEqual(new Set([...all.slice(0, 50), ...strongest].map((i) => i.label)));
     expect(listedInterferers(all, 'all')).toEqual({ interferers: all, listed: 'all' });
   });

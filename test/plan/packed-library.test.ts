@@ -35,7 +35,11 @@ interface LockEntry {
 
 /** The consumer's lockfile: ifzone from the tarball, its run-time dependencies as this repository locks them. */
 function consumerLock(tarball: string): object {
-  const own = JSON.parse(readFileSync(join(ROOT, 'package.json'), 'utf8')) as { version: string; dependencies: Record<string, string>; bin: Record<string, string> };
+  const own = JSON.parse(readFileSync(join(ROOT, 'package.json'), 'utf8')) as {
+    version: string;
+    dependencies: Record<string, string>;
+    bin: Record<string, string>;
+  };
   const lock = JSON.parse(readFileSync(join(ROOT, 'package-lock.json'), 'utf8')) as { packages: Record<string, LockEntry> };
   const runtime = Object.entries(lock.packages).filter(([path, entry]) => path !== '' && entry.dev !== true);
   return {
@@ -84,13 +88,17 @@ describe('ifzone as a packed library', () => {
   });
 
   it('exposes the types beside the code (package.json types and exports)', () => {
-    const manifest = JSON.parse(readFileSync(join(project, 'node_modules', 'ifzone', 'package.json'), 'utf8')) as { types: string; exports: Record<string, unknown> };
+    const manifest = JSON.parse(readFileSync(join(project, 'node_modules', 'ifzone', 'package.json'), 'utf8')) as {
+      types: string;
+      exports: Record<string, unknown>;
+    };
     expect(readFileSync(join(project, 'node_modules', 'ifzone', manifest.types), 'utf8')).toMatch(/export \{ planScenario/);
     expect(Object.keys(manifest.exports)).toContain('.');
   });
 
   it('exports the functions the README names, as functions', () => {
-    const probe = "const m = await import('ifzone'); console.log(['planScenario', 'planFamily', 'planAtRate', 'readScenarioFile', 'rateWindows', 'foldFrequency'].filter((n) => typeof m[n] !== 'function').join(','))";
+    const probe =
+      "const m = await import('ifzone'); console.log(['planScenario', 'planFamily', 'planAtRate', 'readScenarioFile', 'rateWindows', 'foldFrequency'].filter((n) => typeof m[n] !== 'function').join(','))";
     const run = spawnSync(process.execPath, ['--input-type=module', '-e', probe], { cwd: project, encoding: 'utf8' });
     expect(run.stderr).toBe('');
     expect(run.stdout.trim()).toBe('');

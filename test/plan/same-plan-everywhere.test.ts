@@ -46,7 +46,7 @@ describe('the same plan in the JSON, the table and the HTML page', () => {
     }
   });
 
-  it('the IF-shift section: the best pair\'s shift centre and rate in all three', () => {
+  it("the IF-shift section: the best pair's shift centre and rate in all three", () => {
     expect(report.ifShift?.best).toBeTruthy();
     const pair = report.ifShift!.best!;
     for (const [name, text, t] of media()) {

@@ -32,10 +32,18 @@ function agreementScenario(imageReference: number | null): Scenario {
     converter: converterFixture({
       minRate: hz(40 * MHZ),
       maxRate: hz(160 * MHZ),
-      harmonics: new Map([[2, db(-75)], [3, db(-80)]]),
+      harmonics: new Map([
+        [2, db(-75)],
+        [3, db(-80)],
+      ]),
       intercept3: db(25),
       intercepts: new Map([[3, db(25)]]),
-      interleave: { ways: 4, offsetSpur: db(-90), imageLevel: db(-60), ...(imageReference === null ? {} : { imageReference: hz(imageReference) }) },
+      interleave: {
+        ways: 4,
+        offsetSpur: db(-90),
+        imageLevel: db(-60),
+        ...(imageReference === null ? {} : { imageReference: hz(imageReference) }),
+      },
     }),
     harmonicOrder: 3,
     maxOrder: 3,
@@ -46,7 +54,10 @@ function agreementScenario(imageReference: number | null): Scenario {
 }
 
 describe('verify and solve agree: interleaving, an intercept and three close blockers', () => {
-  for (const [name, reference] of [['gain mismatch (flat images)', null], ['timing skew (images quoted at 30 MHz)', 30 * MHZ]] as const) {
+  for (const [name, reference] of [
+    ['gain mismatch (flat images)', null],
+    ['timing skew (images quoted at 30 MHz)', 30 * MHZ],
+  ] as const) {
     const scenario = agreementScenario(reference);
     const rates = passingRates(scenario);
 
@@ -69,15 +80,21 @@ describe('verify and solve agree: interleaving, an intercept and three close blo
         expect(found.some((p) => p.check.startsWith('IM3 ') && /B\d.*B\d/.test(p.check))).toBe(true);
         for (const p of found.filter((row) => row.width === 'tone')) expect(Math.abs(p.binError!), p.check).toBeLessThanOrEqual(1);
         // Levels the plan states exactly (a blocker's image, one blocker's product with another): within 1 dB.
-        for (const p of found.filter((row) => row.basis === 'plan')) expect(Math.abs(p.levelError!), `${p.check}: ${p.note}`).toBeLessThanOrEqual(1);
-        console.info(`${name}, ${wantedTones} tone(s): ${result.predictions.length} lines, ${found.length} agree, ${result.unlisted.length} unlisted peaks (none above the threshold unexplained)`);
+        for (const p of found.filter((row) => row.basis === 'plan'))
+          expect(Math.abs(p.levelError!), `${p.check}: ${p.note}`).toBeLessThanOrEqual(1);
+        console.info(
+          `${name}, ${wantedTones} tone(s): ${result.predictions.length} lines, ${found.length} agree, ${result.unlisted.length} unlisted peaks (none above the threshold unexplained)`,
+        );
       });
     }
   }
 
   it('a neighbour that needs no margin (its own margin 0) 0.3 MHz beside the band: the plan passes and the capture agrees, judging its peak by its own margin', () => {
     const base = agreementScenario(null);
-    const scenario: Scenario = { ...base, neighbours: [...base.neighbours, { label: 'ADJ', low: hz(16.3 * MHZ), high: hz(16.3 * MHZ), level: db(-40), margin: hz(0) }] };
+    const scenario: Scenario = {
+      ...base,
+      neighbours: [...base.neighbours, { label: 'ADJ', low: hz(16.3 * MHZ), high: hz(16.3 * MHZ), level: db(-40), margin: hz(0) }],
+    };
     const rate = passingRates(scenario)[0]!;
     const result = verifyCapture(scenario, { rate, wantedTones: 1 });
     expect(result.plan.pass).toBe(true);
@@ -100,7 +117,8 @@ describe('verify and solve agree: interleaving, an intercept and three close blo
       if (e.pass || !e.image || !/^IM3 B\d\+B\d−B\d$/.test(limit)) continue;
       const interferer = context.interferers.find((x) => x.label === limit)!;
       const where = alias(interferer.low, rate);
-      if (where > e.image.low + 0.3 * MHZ && where < e.image.high - 0.3 * MHZ && Math.abs(where - alias(centre, rate)) > 0.3 * MHZ) chosen = { rate, label: limit };
+      if (where > e.image.low + 0.3 * MHZ && where < e.image.high - 0.3 * MHZ && Math.abs(where - alias(centre, rate)) > 0.3 * MHZ)
+        chosen = { rate, label: limit };
     }
     expect(chosen).not.toBeNull();
     const result = verifyCapture(scenario, { rate: hz(chosen!.rate), wantedTones: 1 });
@@ -111,6 +129,8 @@ describe('verify and solve agree: interleaving, an intercept and three close blo
     // The plan fails at this rate because of that very product: the capture confirms it, so the two agree.
     expect(result.contradictions.some((c) => c.includes('not clean'))).toBe(false);
     expect(result.consistent, result.contradictions.join('\n')).toBe(true);
-    console.info(`blocked rate ${(chosen!.rate / MHZ).toFixed(6)} MHz: ${chosen!.label} measured at ${line!.measured!.level.toFixed(1)} dBFS inside the image`);
+    console.info(
+      `blocked rate ${(chosen!.rate / MHZ).toFixed(6)} MHz: ${chosen!.label} measured at ${line!.measured!.level.toFixed(1)} dBFS inside the image`,
+    );
   });
 });

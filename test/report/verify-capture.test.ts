@@ -51,7 +51,9 @@ describe('verify: the fixture at the rates the solver passes (one wanted tone, p
       expect(result.consistent, result.contradictions.join('\n')).toBe(true);
       expect(result.plan.pass).toBe(true);
       const worst = Math.max(...rows.map((r) => Math.abs(r.levelError!)));
-      console.info(`fixture at ${(rate / MHZ).toFixed(6)} MHz: bins off ${rows.map((r) => r.binError).join(', ')}; worst level error ${worst.toFixed(3)} dB; floor ${result.levels.floor.toFixed(1)} dBFS; ${elapsed.toFixed(0)} ms`);
+      console.info(
+        `fixture at ${(rate / MHZ).toFixed(6)} MHz: bins off ${rows.map((r) => r.binError).join(', ')}; worst level error ${worst.toFixed(3)} dB; floor ${result.levels.floor.toFixed(1)} dBFS; ${elapsed.toFixed(0)} ms`,
+      );
     });
   }
 });
@@ -73,7 +75,9 @@ describe('verify: a deliberately bad rate (a harmonic on the band, per evaluateR
     // The plan fails at this rate because of that very harmonic: the capture agrees with it.
     expect(result.contradictions, result.contradictions.join('\n')).toEqual([]);
     expect(result.consistent).toBe(true);
-    console.info(`bad rate ${(rate / MHZ).toFixed(6)} MHz: H${order} at ${(row.measured!.frequency / MHZ).toFixed(6)} MHz, ${row.measured!.level.toFixed(2)} dBFS, inside the image`);
+    console.info(
+      `bad rate ${(rate / MHZ).toFixed(6)} MHz: H${order} at ${(row.measured!.frequency / MHZ).toFixed(6)} MHz, ${row.measured!.level.toFixed(2)} dBFS, inside the image`,
+    );
   });
 });
 
@@ -89,8 +93,16 @@ describe('verify: the demo scenarios (invented data) — every interferer stands
         expect(result.notSimulated).toEqual([]);
         // Every interferer of the plan has its lines looked for, or counted under the floor.
         // With one wanted tone the band's own differences have no line (W1 − W1 is DC); with three they must be looked for.
-        const accounted = new Set([...result.predictions.map((p) => p.check), ...result.underFloor.map((u) => u.check), ...(wantedTones === 1 ? ['IM2 wanted difference'] : [])]);
-        expect([...accounted].sort()).toEqual(contextFromScenario(scenario).interferers.map((i) => i.label).sort());
+        const accounted = new Set([
+          ...result.predictions.map((p) => p.check),
+          ...result.underFloor.map((u) => u.check),
+          ...(wantedTones === 1 ? ['IM2 wanted difference'] : []),
+        ]);
+        expect([...accounted].sort()).toEqual(
+          contextFromScenario(scenario)
+            .interferers.map((i) => i.label)
+            .sort(),
+        );
         if (wantedTones === 1) expect(result.predictions.some((p) => p.check === 'IM2 wanted difference')).toBe(false);
         for (const row of result.predictions.filter((p) => p.width === 'tone' && p.measured && p.status !== 'crowded')) {
           // A tone source is moved to a whole cycle and the plan re-derived there: the peak sits on the plan's alias.
@@ -100,7 +112,9 @@ describe('verify: the demo scenarios (invented data) — every interferer stands
         expect(result.consistent, result.contradictions.join('\n')).toBe(true);
         const judged = result.predictions.filter((p) => p.status === 'agrees' && p.basis === 'plan');
         const worst = Math.max(...judged.map((p) => Math.abs(p.levelError!)));
-        console.info(`${file} ${wantedTones} tone(s): ${result.predictions.length} lines, ${judged.length} judged on level (worst ${worst.toFixed(3)} dB), ${result.unlisted.length} unlisted peaks, ${elapsed.toFixed(0)} ms`);
+        console.info(
+          `${file} ${wantedTones} tone(s): ${result.predictions.length} lines, ${judged.length} judged on level (worst ${worst.toFixed(3)} dB), ${result.unlisted.length} unlisted peaks, ${elapsed.toFixed(0)} ms`,
+        );
       });
     }
   }
@@ -126,4 +140,3 @@ describe('verify: second-order products of the wanted tones', () => {
     expect(result.unlisted.filter((u) => /\(order 2\)/.test(u.explainedBy ?? ''))).toEqual([]);
   });
 });
-

@@ -25,13 +25,27 @@ const refusal = (fields: object): string => {
 
 describe('after-rate fields of the scenario file', () => {
   it('default so that a file without them loads as before: no level, 1 dB ripple, no density, no NCO, no output rate, 80 %', () => {
-    expect(load({}).afterRate).toEqual({ outOfBandLevel: null, passbandRipple: 1, driverNoiseDensity: null, downConverter: { ncoBits: null, outputRate: null, usableFraction: 0.8 } });
+    expect(load({}).afterRate).toEqual({
+      outOfBandLevel: null,
+      passbandRipple: 1,
+      driverNoiseDensity: null,
+      downConverter: { ncoBits: null, outputRate: null, usableFraction: 0.8 },
+    });
     expect(jsonSchemaAccepts(scenarioJsonSchema(), base)).toBe(true);
   });
 
   it('read as written, frequencies with prefixes', () => {
-    const fields = { filterMask: { outOfBandLevel: -25, passbandRipple: 0.5 }, driverNoiseDensity: -155, downConverter: { ncoBits: 32, outputRate: '30.72M', usableFraction: 0.75 } };
-    expect(load(fields).afterRate).toEqual({ outOfBandLevel: -25, passbandRipple: 0.5, driverNoiseDensity: -155, downConverter: { ncoBits: 32, outputRate: 30.72e6, usableFraction: 0.75 } });
+    const fields = {
+      filterMask: { outOfBandLevel: -25, passbandRipple: 0.5 },
+      driverNoiseDensity: -155,
+      downConverter: { ncoBits: 32, outputRate: '30.72M', usableFraction: 0.75 },
+    };
+    expect(load(fields).afterRate).toEqual({
+      outOfBandLevel: -25,
+      passbandRipple: 0.5,
+      driverNoiseDensity: -155,
+      downConverter: { ncoBits: 32, outputRate: 30.72e6, usableFraction: 0.75 },
+    });
     expect(jsonSchemaAccepts(scenarioJsonSchema(), { ...base, ...fields })).toBe(true);
   });
 

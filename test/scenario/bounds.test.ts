@@ -14,7 +14,9 @@ import { memoryFiles } from './memory-files.js';
  */
 const BASE = JSON.parse(readFileSync(new URL('../../scenarios/heron-base.json', import.meta.url), 'utf8')) as Record<string, unknown>;
 
-function firstIssue(variant: Record<string, unknown>): { path: string; expected: string; kind?: string; suggestion?: string | null } | null {
+function firstIssue(
+  variant: Record<string, unknown>,
+): { path: string; expected: string; kind?: string; suggestion?: string | null } | null {
   try {
     resolveScenario('v.json', memoryFiles({ 'v.json': { extends: 'b.json', ...variant }, 'b.json': BASE }));
     return null;
@@ -28,11 +30,39 @@ describe('levels bounded by meaning', () => {
   it.each([
     ['a harmonic at +75 dBc', { converter: { harmonics: { '2': 75 } } }, 'converter.harmonics["2"]', 'below 0'],
     ['a harmonic at 0 dBc', { converter: { harmonics: { '3': 0 } } }, 'converter.harmonics["3"]', 'below 0'],
-    ['an interleaving image at +60 dBc', { converter: { interleave: { ways: 2, offsetSpur: -80, imageLevel: 60 } } }, 'converter.interleave.imageLevel', 'below 0'],
+    [
+      'an interleaving image at +60 dBc',
+      { converter: { interleave: { ways: 2, offsetSpur: -80, imageLevel: 60 } } },
+      'converter.interleave.imageLevel',
+      'below 0',
+    ],
     ['a rate-tied spur above full scale', { converter: { rateSpurs: { dc: 3 } } }, 'converter.rateSpurs.dc', 'at most 0'],
-    ['a board spur at +40 dBFS at the converter', { boardSpurs: [{ label: 's', frequency: '10M', level: 40 }] }, 'boardSpurs[0].level', 'at most 0 dBFS'],
-    ['a neighbour at +140 dBFS', { neighbours: [{ label: 'n', center: '100M', width: '1M', level: 140 }] }, 'neighbours[0].level', 'from -300 to +100'],
-    ['a filter point of negative attenuation', { filter: { kind: 'table', points: [['1M', -3], ['2M', 40]] } }, 'filter.points[0][1]', 'from 0 to 300'],
+    [
+      'a board spur at +40 dBFS at the converter',
+      { boardSpurs: [{ label: 's', frequency: '10M', level: 40 }] },
+      'boardSpurs[0].level',
+      'at most 0 dBFS',
+    ],
+    [
+      'a neighbour at +140 dBFS',
+      { neighbours: [{ label: 'n', center: '100M', width: '1M', level: 140 }] },
+      'neighbours[0].level',
+      'from -300 to +100',
+    ],
+    [
+      'a filter point of negative attenuation',
+      {
+        filter: {
+          kind: 'table',
+          points: [
+            ['1M', -3],
+            ['2M', 40],
+          ],
+        },
+      },
+      'filter.points[0][1]',
+      'from 0 to 300',
+    ],
     ['a wanted level of -1000 dBFS', { wanted: { weakestLevel: -1000 } }, 'wanted.weakestLevel', 'at least -300'],
   ])('refuses %s', (_name, variant, path, words) => {
     const issue = firstIssue(variant);
@@ -50,16 +80,45 @@ describe('counts and frequencies bounded', () => {
   const many = (count: number, make: (i: number) => unknown) => Array.from({ length: count }, (_, i) => make(i));
 
   it.each([
-    ['257 neighbours', { neighbours: many(257, (i) => ({ label: `n${i}`, center: `${100 + i}M`, width: '100k', level: -30 })) }, 'neighbours', 'at most 256'],
-    ['1,025 clock parts', { clocks: many(1025, (i) => ({ label: `c${i}`, frequency: `${100 + i}M`, tolerance: 20 })) }, 'clocks', 'at most 1024'],
-    ['65 board spurs', { boardSpurs: many(65, (i) => ({ label: `s${i}`, frequency: `${i + 1}M`, level: -90 })) }, 'boardSpurs', 'at most 64'],
+    [
+      '257 neighbours',
+      { neighbours: many(257, (i) => ({ label: `n${i}`, center: `${100 + i}M`, width: '100k', level: -30 })) },
+      'neighbours',
+      'at most 256',
+    ],
+    [
+      '1,025 clock parts',
+      { clocks: many(1025, (i) => ({ label: `c${i}`, frequency: `${100 + i}M`, tolerance: 20 })) },
+      'clocks',
+      'at most 1024',
+    ],
+    [
+      '65 board spurs',
+      { boardSpurs: many(65, (i) => ({ label: `s${i}`, frequency: `${i + 1}M`, level: -90 })) },
+      'boardSpurs',
+      'at most 64',
+    ],
     ['a spur at 1e18 Hz', { boardSpurs: [{ label: 's', frequency: 1e18, level: -90 }] }, 'boardSpurs[0].frequency', 'at most 1 THz'],
     ['a spur at 1e308 Hz', { boardSpurs: [{ label: 's', frequency: '1e308', level: -90 }] }, 'boardSpurs[0].frequency', 'at most 1 THz'],
-    ['an exponent with a prefix (1e6k)', { boardSpurs: [{ label: 's', frequency: '1e6k', level: -90 }] }, 'boardSpurs[0].frequency', 'not both'],
-    ['a frequency that underflows', { boardSpurs: [{ label: 's', frequency: '1e-400 Hz', level: -90 }] }, 'boardSpurs[0].frequency', 'underflows'],
+    [
+      'an exponent with a prefix (1e6k)',
+      { boardSpurs: [{ label: 's', frequency: '1e6k', level: -90 }] },
+      'boardSpurs[0].frequency',
+      'not both',
+    ],
+    [
+      'a frequency that underflows',
+      { boardSpurs: [{ label: 's', frequency: '1e-400 Hz', level: -90 }] },
+      'boardSpurs[0].frequency',
+      'underflows',
+    ],
     [
       'a synthesiser with a million (M, D) pairs',
-      { clocks: [{ label: 'ref', frequency: '10M', tolerance: 10, derive: { kind: 'synthesiser', n: [1, 100], m: [1, 1000], d: [1, 1000] } }] },
+      {
+        clocks: [
+          { label: 'ref', frequency: '10M', tolerance: 10, derive: { kind: 'synthesiser', n: [1, 100], m: [1, 1000], d: [1, 1000] } },
+        ],
+      },
       'clocks[0].derive.m',
       'at most 4096',
     ],
@@ -113,7 +172,7 @@ describe('cases the fuzz suite found', () => {
     expect(issue?.expected).toContain('requirements.margin');
   });
 
-  it('a width below the centre\'s precision (2.2e-308 Hz at 140 MHz: edges round together) is refused at wanted.width', () => {
+  it("a width below the centre's precision (2.2e-308 Hz at 140 MHz: edges round together) is refused at wanted.width", () => {
     const issue = firstIssue({ wanted: { center: '140M', width: 2.2250738585072014e-308, low: null, high: null } });
     expect(issue?.path).toBe('wanted.width');
     expect(issue?.expected).toContain("a width the centre's precision can hold");
@@ -133,7 +192,11 @@ describe('misspelt words get the nearest one', () => {
   });
 
   it('a misspelt kind key is an unknown key with "kind" suggested, not a missing kind', () => {
-    const issue = firstIssue({ filter: { knid: 'butterworth', order: 5, passLow: '128M', passHigh: '152M' } }) as { path: string; suggestion?: string; kind?: string } | null;
+    const issue = firstIssue({ filter: { knid: 'butterworth', order: 5, passLow: '128M', passHigh: '152M' } }) as {
+      path: string;
+      suggestion?: string;
+      kind?: string;
+    } | null;
     expect(issue).toMatchObject({ kind: 'unknown-key', path: 'filter.knid', suggestion: 'kind' });
   });
 });

@@ -27,7 +27,11 @@ function write(name: string, content: unknown): string {
 
 describe('scenario refusals through ifzone solve', () => {
   it.each([
-    ['an unknown key', () => write('typo.json', { extends: base, converter: { bitz: 12 } }), 'converter.bitz: unknown key; did you mean "bits"?'],
+    [
+      'an unknown key',
+      () => write('typo.json', { extends: base, converter: { bitz: 12 } }),
+      'converter.bitz: unknown key; did you mean "bits"?',
+    ],
     ['a syntax error', () => write('broken.json', '{\n  "name": "x"\n  "wanted": {}\n}'), 'broken.json:3:3: JSON syntax error'],
     ['a missing base', () => write('orphan.json', { extends: 'no-such-base.json' }), 'no-such-base.json: no such file'],
     ['a missing file', () => join(dir, 'absent.json'), 'absent.json: expected a scenario file that can be read (got no such file)'],

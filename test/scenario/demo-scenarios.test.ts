@@ -17,7 +17,9 @@ const path = (name: string) => new URL(name, DIR).pathname;
 describe('demo scenarios', () => {
   it('has a base and at least three variants extending it', () => {
     expect(demoFiles).toContain('heron-base.json');
-    const variants = demoFiles.filter((name) => (JSON.parse(readFileSync(path(name), 'utf8')) as { extends?: string }).extends === 'heron-base.json');
+    const variants = demoFiles.filter(
+      (name) => (JSON.parse(readFileSync(path(name), 'utf8')) as { extends?: string }).extends === 'heron-base.json',
+    );
     expect(variants.length).toBeGreaterThanOrEqual(3);
   });
 
@@ -42,7 +44,12 @@ describe('demo scenarios', () => {
     ]);
     expect(base.converter.apertureJitter).toBe(80e-15);
     expect(base.converter.interleave).toBeNull();
-    expect(base.boardSpurs.find((s) => s.label === 'LO-1 leakage')).toMatchObject({ low: 760e6, high: 760e6, coupling: 'before-filter', harmonics: 1 });
+    expect(base.boardSpurs.find((s) => s.label === 'LO-1 leakage')).toMatchObject({
+      low: 760e6,
+      high: 760e6,
+      coupling: 'before-filter',
+      harmonics: 1,
+    });
     expect(base.neighbours.find((n) => n.label === 'Paging blocker 175M')).toMatchObject({ low: 174.5e6, high: 175.5e6 });
     expect(base.converter.clockDividers).toEqual([1, 2, 4]);
     expect(base.clocks.map((c) => c.frequency)).toEqual([122.88e6, 153.6e6, 184.32e6, 245.76e6, 61.44e6, 491.52e6, 10e6]);
@@ -53,10 +60,22 @@ describe('demo scenarios', () => {
   it('gives the base a catalogue of direct, divided and synthesised parts', () => {
     const base = readScenarioFile(path('heron-base.json'));
     const byLabel = new Map(base.clocks.map((part) => [part.label, part]));
-    expect(base.clocks.map((part) => part.derivation.kind)).toEqual(['direct', 'direct', 'direct', 'direct', 'direct', 'divider', 'synthesiser']);
+    expect(base.clocks.map((part) => part.derivation.kind)).toEqual([
+      'direct',
+      'direct',
+      'direct',
+      'direct',
+      'direct',
+      'divider',
+      'synthesiser',
+    ]);
     expect(byLabel.get('XO-A 122.88M')).toMatchObject({ tolerancePpm: 20, toleranceBreakdown: null, jitter: 120e-15 });
     // 3 + 5 + 2 ppm, listed separately.
-    expect(byLabel.get('VCXO-C 184.32M')).toMatchObject({ tolerancePpm: 10, toleranceBreakdown: { initial: 3, temperature: 5, ageing: 2 }, jitter: 70e-15 });
+    expect(byLabel.get('VCXO-C 184.32M')).toMatchObject({
+      tolerancePpm: 10,
+      toleranceBreakdown: { initial: 3, temperature: 5, ageing: 2 },
+      jitter: 70e-15,
+    });
     expect(byLabel.get('SYN-1 from TCXO-R 10M')?.derivation).toEqual({
       kind: 'synthesiser',
       n: { min: 1, max: 512 },
@@ -78,7 +97,9 @@ describe('demo scenarios', () => {
     const fL = base.wanted.low - base.guard.low;
     const fH = base.wanted.high + base.guard.high;
     const inSomeZone = (fs: number) =>
-      Array.from({ length: Math.floor(fH / (fH - fL)) }, (_, i) => i + 1).some((n) => 2 * fH / n <= fs && (n === 1 || fs <= (2 * fL) / (n - 1)));
+      Array.from({ length: Math.floor(fH / (fH - fL)) }, (_, i) => i + 1).some(
+        (n) => (2 * fH) / n <= fs && (n === 1 || fs <= (2 * fL) / (n - 1)),
+      );
     const { minRate, maxRate, clockDividers } = base.converter;
     for (const part of base.clocks) {
       if (part.derivation.kind === 'direct') expect(inSomeZone(part.frequency), part.label).toBe(true);
@@ -99,7 +120,8 @@ describe('demo scenarios', () => {
       for (let M = d.m.min; M <= d.m.max; M += 1) {
         const vco = (part.frequency * N) / M;
         if (d.vco && (vco < d.vco.low || vco > d.vco.high)) continue;
-        for (let D = d.d.min; D <= d.d.max; D += 1) if (vco / D >= base.converter.minRate && vco / D <= base.converter.maxRate) rates.push(vco / D);
+        for (let D = d.d.min; D <= d.d.max; D += 1)
+          if (vco / D >= base.converter.minRate && vco / D <= base.converter.maxRate) rates.push(vco / D);
       }
     }
     // VCO 0.8–1.6 GHz: D = 4..8 give 100–400 MHz, of which 100–250 MHz is inside the SR-QC14's limits (D ≤ 3 gives ≥ 266.7 MHz).

@@ -13,7 +13,8 @@ import { memoryFiles } from './memory-files.js';
  * in the derived interferers.
  */
 const BASE_TEXT = readFileSync(new URL('../../scenarios/heron-base.json', import.meta.url), 'utf8');
-const load = (fields: Record<string, unknown>) => resolveScenario('s/v.json', memoryFiles({ 's/heron-base.json': BASE_TEXT, 's/v.json': { extends: 'heron-base.json', ...fields } }));
+const load = (fields: Record<string, unknown>) =>
+  resolveScenario('s/v.json', memoryFiles({ 's/heron-base.json': BASE_TEXT, 's/v.json': { extends: 'heron-base.json', ...fields } }));
 const refused = (fields: Record<string, unknown>) => {
   try {
     load(fields);
@@ -34,14 +35,28 @@ describe('scenario keys of the interferer model', () => {
 
   it('intercepts by order; intercept3 is order 3, and the two may not disagree', () => {
     const scenario = load({ converter: { intercepts: { '2': 55, '3': 28 } } });
-    expect([...scenario.converter.intercepts!]).toEqual([[2, 55], [3, 28]]);
+    expect([...scenario.converter.intercepts!]).toEqual([
+      [2, 55],
+      [3, 28],
+    ]);
     expect(scenario.converter.intercept3).toBe(28);
     expect(load({ converter: { intercept3: 30 } }).converter.intercepts!.get(3)).toBe(30);
-    expect(refused({ converter: { intercept3: 30, intercepts: { '3': 28 } } })).toMatch(/converter\.intercept3: the same value as intercepts\["3"\]/);
+    expect(refused({ converter: { intercept3: 30, intercepts: { '3': 28 } } })).toMatch(
+      /converter\.intercept3: the same value as intercepts\["3"\]/,
+    );
   });
 
   it('rate spurs at fractions p/q of the rate become interferers at p/q·r', () => {
-    const scenario = load({ converter: { rateSpurs: { fractions: [{ fraction: '1/3', level: -88 }, { fraction: ' 3 / 8 ', level: -90 }] } } });
+    const scenario = load({
+      converter: {
+        rateSpurs: {
+          fractions: [
+            { fraction: '1/3', level: -88 },
+            { fraction: ' 3 / 8 ', level: -90 },
+          ],
+        },
+      },
+    });
     expect(scenario.converter.rateSpurs.fractions).toEqual([
       { numerator: 1, denominator: 3, level: -88 },
       { numerator: 3, denominator: 8, level: -90 },
@@ -50,7 +65,9 @@ describe('scenario keys of the interferer model', () => {
     expect(derived.find((i) => i.label === 'rate/3')!.rateMultiple).toBeCloseTo(1 / 3, 15);
     expect(derived.find((i) => i.label === '3·rate/8')!.rateMultiple).toBe(0.375);
     expect(refused({ converter: { rateSpurs: { fractions: [{ fraction: '1/0', level: -90 }] } } })).toMatch(/a denominator of 1 or more/);
-    expect(refused({ converter: { rateSpurs: { fractions: [{ fraction: 'r/3', level: -90 }] } } })).toMatch(/a fraction of the rate as "p\/q"/);
+    expect(refused({ converter: { rateSpurs: { fractions: [{ fraction: 'r/3', level: -90 }] } } })).toMatch(
+      /a fraction of the rate as "p\/q"/,
+    );
   });
 
   it('an image level quoted at a reference frequency rises 20 dB per decade for the images of each signal', () => {

@@ -34,7 +34,12 @@ function keywordHolds(keyword: string, argument: unknown, schema: Schema, value:
     case 'const':
       return argument === value;
     case 'properties':
-      return !object || Object.entries(argument as Schema).every(([key, sub]) => !Object.hasOwn(object, key) || jsonSchemaAccepts(sub as Schema, object[key]));
+      return (
+        !object ||
+        Object.entries(argument as Schema).every(
+          ([key, sub]) => !Object.hasOwn(object, key) || jsonSchemaAccepts(sub as Schema, object[key]),
+        )
+      );
     case 'required':
       return !object || (argument as string[]).every((key) => Object.hasOwn(object, key));
     case 'additionalProperties': {

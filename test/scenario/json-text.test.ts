@@ -43,7 +43,12 @@ describe('jsonSyntaxProblem', () => {
 
   it('agrees with JSON.parse on valid documents and on random edits of them', () => {
     const edited = fc
-      .tuple(fc.json({ maxDepth: 4 }), fc.nat(), fc.constantFrom('', ',', '}', ']', '"', ':', '{', '[', ' ', '0', '-', '.', 'e', '\\', '\n', 'x'), fc.boolean())
+      .tuple(
+        fc.json({ maxDepth: 4 }),
+        fc.nat(),
+        fc.constantFrom('', ',', '}', ']', '"', ':', '{', '[', ' ', '0', '-', '.', 'e', '\\', '\n', 'x'),
+        fc.boolean(),
+      )
       .map(([text, at, char, remove]) => {
         const i = text.length === 0 ? 0 : at % text.length;
         return remove ? text.slice(0, i) + text.slice(i + 1) : text.slice(0, i) + char + text.slice(i);

@@ -50,7 +50,8 @@ function allPaths(value: unknown, path: Path = []): Path[] {
   return here;
 }
 
-type Edit = { kind: 'set'; value: unknown } | { kind: 'drop' } | { kind: 'rename'; to: string } | { kind: 'add'; key: string; value: unknown };
+type Edit =
+  { kind: 'set'; value: unknown } | { kind: 'drop' } | { kind: 'rename'; to: string } | { kind: 'add'; key: string; value: unknown };
 
 /** A copy of the document with one edit at the path (edits that do not apply leave it as is). */
 function edited(document: unknown, path: Path, edit: Edit): unknown {
@@ -93,7 +94,29 @@ const baseEdit = fc.constantFrom(...basePaths).chain((path) =>
     edit: fc.oneof(
       fc.jsonValue({ maxDepth: 2 }).map((value): Edit => ({ kind: 'set', value })),
       fc
-        .constantFrom<unknown>(0, -1, '', 'x', '10 mhz', '10%', null, true, [], {}, 1e308, '1e400', '-5M', '2.5G', '80 fs', 1.5, [2, 1], [1, 2, 3], [1, 1], 'divider', 'synthesiser')
+        .constantFrom<unknown>(
+          0,
+          -1,
+          '',
+          'x',
+          '10 mhz',
+          '10%',
+          null,
+          true,
+          [],
+          {},
+          1e308,
+          '1e400',
+          '-5M',
+          '2.5G',
+          '80 fs',
+          1.5,
+          [2, 1],
+          [1, 2, 3],
+          [1, 1],
+          'divider',
+          'synthesiser',
+        )
         .map((value): Edit => ({ kind: 'set', value })),
       fc.constant<Edit>({ kind: 'drop' }),
       typo(String(path.at(-1) ?? 'name')).map((to): Edit => ({ kind: 'rename', to })),
@@ -103,40 +126,48 @@ const baseEdit = fc.constantFrom(...basePaths).chain((path) =>
 );
 
 describe('loader fuzz', () => {
-  it('random JSON documents: a scenario or a ScenarioError, never anything else', () => {
-    fc.assert(
-      fc.property(fc.jsonValue({ maxDepth: 4 }), (document) => {
-        const result = outcome(() => scenarioFromDocument(document, 'fuzz.json'));
-        if (result.accepted) expect(jsonSchemaAccepts(scenarioJsonSchema(), document)).toBe(true);
-      }),
-      { numRuns: 4000 },
-    );
-  }, FUZZ_TIMEOUT_MS);
+  it(
+    'random JSON documents: a scenario or a ScenarioError, never anything else',
+    () => {
+      fc.assert(
+        fc.property(fc.jsonValue({ maxDepth: 4 }), (document) => {
+          const result = outcome(() => scenarioFromDocument(document, 'fuzz.json'));
+          if (result.accepted) expect(jsonSchemaAccepts(scenarioJsonSchema(), document)).toBe(true);
+        }),
+        { numRuns: 4000 },
+      );
+    },
+    FUZZ_TIMEOUT_MS,
+  );
 
-  it('random edits of the demo base: accepted only what the JSON Schema accepts, each issue at a real place', () => {
-    let refused = 0;
-    let accepted = 0;
-    fc.assert(
-      fc.property(fc.array(baseEdit, { minLength: 1, maxLength: 3 }), (edits) => {
-        const document = edits.reduce<unknown>((doc, { path, edit }) => edited(doc, path, edit), EDIT_BASE);
-        const result = outcome(() => scenarioFromDocument(document, 'heron-base.json'));
-        if (result.accepted) {
-          accepted += 1;
-          expect(jsonSchemaAccepts(scenarioJsonSchema(), document)).toBe(true);
-          return;
-        }
-        refused += 1;
-        for (const issue of result.error.issues) {
-          expect(issue.file).toBe('heron-base.json');
-          if (issue.kind === 'unknown-key') expect(issue.path).not.toBe('');
-        }
-      }),
-      { numRuns: 4000 },
-    );
-    // Both sides exercised: many refusals, and enough acceptances for the schema comparison to mean something.
-    expect(refused).toBeGreaterThan(1000);
-    expect(accepted).toBeGreaterThan(100);
-  }, FUZZ_TIMEOUT_MS);
+  it(
+    'random edits of the demo base: accepted only what the JSON Schema accepts, each issue at a real place',
+    () => {
+      let refused = 0;
+      let accepted = 0;
+      fc.assert(
+        fc.property(fc.array(baseEdit, { minLength: 1, maxLength: 3 }), (edits) => {
+          const document = edits.reduce<unknown>((doc, { path, edit }) => edited(doc, path, edit), EDIT_BASE);
+          const result = outcome(() => scenarioFromDocument(document, 'heron-base.json'));
+          if (result.accepted) {
+            accepted += 1;
+            expect(jsonSchemaAccepts(scenarioJsonSchema(), document)).toBe(true);
+            return;
+          }
+          refused += 1;
+          for (const issue of result.error.issues) {
+            expect(issue.file).toBe('heron-base.json');
+            if (issue.kind === 'unknown-key') expect(issue.path).not.toBe('');
+          }
+        }),
+        { numRuns: 4000 },
+      );
+      // Both sides exercised: many refusals, and enough acceptances for the schema comparison to mean something.
+      expect(refused).toBeGreaterThan(1000);
+      expect(accepted).toBeGreaterThan(100);
+    },
+    FUZZ_TIMEOUT_MS,
+  );
 
   it('random damage to the text of a variant and its base: syntax errors carry a line and column', () => {
     const damage = fc.tuple(fc.nat(), fc.nat({ max: 3 }), fc.constantFrom('', ',', '}', '"', ':', '{', '[', 'x', '\n', '\\'));
@@ -163,7 +194,10 @@ describe('loader fuzz', () => {
 
   it('random extends graphs: cycles and missing files refused with their chain', () => {
     const names = ['a.json', 'b.json', 'c.json', 'd.json'];
-    const graph = fc.array(fc.option(fc.constantFrom(...names, 'gone.json', '../up.json'), { nil: undefined }), { minLength: 4, maxLength: 4 });
+    const graph = fc.array(fc.option(fc.constantFrom(...names, 'gone.json', '../up.json'), { nil: undefined }), {
+      minLength: 4,
+      maxLength: 4,
+    });
     fc.assert(
       fc.property(graph, fc.constantFrom(...names), (targets, start) => {
         const files: Record<string, unknown> = { 'up.json': BASE };

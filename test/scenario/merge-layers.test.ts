@@ -24,7 +24,10 @@ describe('mergeLayers', () => {
 
   it('keeps a key named __proto__ as data', () => {
     const sneaky = JSON.parse('{"__proto__": {"polluted": true}}') as Record<string, unknown>;
-    const merged = mergeLayers([{ file: 'x', document: sneaky }, { file: 'y', document: JSON.parse('{"__proto__": {"also": 1}}') as Record<string, unknown> }]);
+    const merged = mergeLayers([
+      { file: 'x', document: sneaky },
+      { file: 'y', document: JSON.parse('{"__proto__": {"also": 1}}') as Record<string, unknown> },
+    ]);
     expect(Object.hasOwn(merged, '__proto__')).toBe(true);
     expect((merged as { polluted?: unknown }).polluted).toBeUndefined();
     expect(({} as { polluted?: unknown }).polluted).toBeUndefined();
@@ -56,7 +59,12 @@ describe('fileOfPath', () => {
   });
 
   it('charges a comparison to the file that wrote either field last', () => {
-    expect(fileOfPaths(chain, [['a', 'y'], ['a', 'x']])).toBe('top.json');
+    expect(
+      fileOfPaths(chain, [
+        ['a', 'y'],
+        ['a', 'x'],
+      ]),
+    ).toBe('top.json');
     expect(fileOfPaths([mid, base], [['filter', 'q'], ['list']])).toBe('mid.json');
     expect(fileOfPaths([top, mid, base], [['filter', 'q']])).toBe('mid.json');
   });

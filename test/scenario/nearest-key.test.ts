@@ -28,7 +28,18 @@ describe('editDistance', () => {
 });
 
 describe('nearestKey', () => {
-  const converterKeys = ['label', 'minRate', 'maxRate', 'inputBandwidth', 'bits', 'harmonics', 'intercept3', 'rateSpurs', 'interleave', 'apertureJitter'];
+  const converterKeys = [
+    'label',
+    'minRate',
+    'maxRate',
+    'inputBandwidth',
+    'bits',
+    'harmonics',
+    'intercept3',
+    'rateSpurs',
+    'interleave',
+    'apertureJitter',
+  ];
 
   it.each([
     ['bitz', 'bits'],

@@ -59,7 +59,19 @@ describe('extends', () => {
   });
 
   it('replaces an object whose kind differs (a table filter over a Butterworth one)', () => {
-    const scenario = loadVariant(over({ filter: { kind: 'table', points: [['100M', 40], ['128M', 3], ['152M', 3], ['180M', 40]] } }));
+    const scenario = loadVariant(
+      over({
+        filter: {
+          kind: 'table',
+          points: [
+            ['100M', 40],
+            ['128M', 3],
+            ['152M', 3],
+            ['180M', 40],
+          ],
+        },
+      }),
+    );
     expect(scenario.filter).toEqual({
       kind: 'table',
       points: [
@@ -81,9 +93,16 @@ describe('extends', () => {
   });
 
   it('shows the chain when a base file is missing', () => {
-    const error = refusal(() => resolveScenario('s/v.json', memoryFiles({ 's/v.json': { extends: 'a.json' }, 's/a.json': { extends: 'sub/gone.json' } })));
+    const error = refusal(() =>
+      resolveScenario('s/v.json', memoryFiles({ 's/v.json': { extends: 'a.json' }, 's/a.json': { extends: 'sub/gone.json' } })),
+    );
     expect(error.issues).toHaveLength(1);
-    expect(error.issues[0]).toMatchObject({ kind: 'unreadable', file: 's/a.json', path: 'extends', chain: ['s/v.json', 's/a.json', 's/sub/gone.json'] });
+    expect(error.issues[0]).toMatchObject({
+      kind: 'unreadable',
+      file: 's/a.json',
+      path: 'extends',
+      chain: ['s/v.json', 's/a.json', 's/sub/gone.json'],
+    });
     expect(error.message).toBe(
       's/a.json: extends: expected a base file that can be read (got s/sub/gone.json: no such file); extends chain: s/v.json → s/a.json → s/sub/gone.json',
     );
@@ -95,7 +114,9 @@ describe('extends', () => {
   });
 
   it('shows the chain of a cycle, a.json → b.json → a.json', () => {
-    const error = refusal(() => resolveScenario('a.json', memoryFiles({ 'a.json': { extends: 'b.json' }, 'b.json': { extends: './a.json' } })));
+    const error = refusal(() =>
+      resolveScenario('a.json', memoryFiles({ 'a.json': { extends: 'b.json' }, 'b.json': { extends: './a.json' } })),
+    );
     expect(error.issues[0]).toMatchObject({ kind: 'cycle', file: 'b.json', path: 'extends', chain: ['a.json', 'b.json', 'a.json'] });
     expect(error.message).toContain('extends chain: a.json → b.json → a.json');
   });
@@ -107,12 +128,19 @@ describe('extends', () => {
 
   it('charges an error to the file that wrote the value', () => {
     const badBase = JSON.stringify({ ...BASE, converter: { ...(BASE.converter as object), bitz: 14 } });
-    const fromBase = refusal(() => resolveScenario('s/v.json', memoryFiles({ 's/heron-base.json': badBase, 's/v.json': over({ name: 'V' }) })));
+    const fromBase = refusal(() =>
+      resolveScenario('s/v.json', memoryFiles({ 's/heron-base.json': badBase, 's/v.json': over({ name: 'V' }) })),
+    );
     expect(fromBase.issues[0]).toMatchObject({ file: 's/heron-base.json', path: 'converter.bitz' });
     const fromVariant = refusal(() => loadVariant(over({ boardSpurs: [{ label: 'x', frequency: 'ten', level: -3 }] })));
     expect(fromVariant.issues[0]).toMatchObject({ file: 's/v.json', path: 'boardSpurs[0].frequency' });
     // A missing key in an object both files wrote is charged to the variant.
-    const missing = refusal(() => resolveScenario('s/v.json', memoryFiles({ 's/b.json': { name: 'B' }, 's/v.json': { extends: 'b.json', wanted: { low: 1, high: 2 } } })));
+    const missing = refusal(() =>
+      resolveScenario(
+        's/v.json',
+        memoryFiles({ 's/b.json': { name: 'B' }, 's/v.json': { extends: 'b.json', wanted: { low: 1, high: 2 } } }),
+      ),
+    );
     expect(missing.issues.map((issue) => `${issue.file} ${issue.path}`)).toContain('s/v.json wanted.weakestLevel');
     expect(missing.issues.map((issue) => `${issue.file} ${issue.path}`)).toContain('s/v.json converter');
   });
@@ -132,7 +160,12 @@ interface Case {
 
 /** One change each to a valid variant; the first issue must name this path and say these words. */
 const CASES: Record<string, Case> = {
-  'unknown key, with the nearest known key': { variant: { converter: { bitz: 12 } }, path: 'converter.bitz', kind: 'unknown-key', words: 'did you mean "bits"?' },
+  'unknown key, with the nearest known key': {
+    variant: { converter: { bitz: 12 } },
+    path: 'converter.bitz',
+    kind: 'unknown-key',
+    words: 'did you mean "bits"?',
+  },
   'unknown key in a list entry': {
     variant: { boardSpurs: [{ lable: 'x', frequency: '1M', level: -90 }] },
     path: 'boardSpurs[0].lable',
@@ -140,16 +173,34 @@ const CASES: Record<string, Case> = {
     words: 'did you mean "label"?',
   },
   'unknown top-level key': { variant: { neighbors: [] }, path: 'neighbors', kind: 'unknown-key', words: 'did you mean "neighbours"?' },
-  'unknown key in a union branch': { variant: { guard: { low: '1M', hgh: '1M' } }, path: 'guard.hgh', kind: 'unknown-key', words: 'did you mean "high"?' },
+  'unknown key in a union branch': {
+    variant: { guard: { low: '1M', hgh: '1M' } },
+    path: 'guard.hgh',
+    kind: 'unknown-key',
+    words: 'did you mean "high"?',
+  },
   'unknown key in a discriminated branch': {
     variant: { filter: { kind: 'butterworth', order: 5, passLow: '128M', passHigh: '152M', ordre: 3 } },
     path: 'filter.ordre',
     kind: 'unknown-key',
     words: 'did you mean "order"?',
   },
-  'unknown key with nothing near': { variant: { converter: { colour: 'blue' } }, path: 'converter.colour', kind: 'unknown-key', words: 'expected one of the keys label, minRate' },
-  'wrong type': { variant: { converter: { bits: '14' } }, path: 'converter.bits', words: 'expected a whole number from 1 to 32 (got "14")' },
-  'wrong type for a frequency': { variant: { converter: { maxRate: true } }, path: 'converter.maxRate', words: 'expected a frequency: hertz as a number, or text such as "70M"' },
+  'unknown key with nothing near': {
+    variant: { converter: { colour: 'blue' } },
+    path: 'converter.colour',
+    kind: 'unknown-key',
+    words: 'expected one of the keys label, minRate',
+  },
+  'wrong type': {
+    variant: { converter: { bits: '14' } },
+    path: 'converter.bits',
+    words: 'expected a whole number from 1 to 32 (got "14")',
+  },
+  'wrong type for a frequency': {
+    variant: { converter: { maxRate: true } },
+    path: 'converter.maxRate',
+    words: 'expected a frequency: hertz as a number, or text such as "70M"',
+  },
   'bad frequency text, naming its path': {
     variant: {
       boardSpurs: [
@@ -162,53 +213,144 @@ const CASES: Record<string, Case> = {
     words: "'m' is milli",
   },
   'negative frequency': { variant: { requirements: { margin: -1 } }, path: 'requirements.margin', words: 'not negative' },
-  'zero clock frequency': { variant: { clocks: [{ label: 'z', frequency: 0, tolerance: 1 }] }, path: 'clocks[0].frequency', words: 'a frequency above zero (got 0)' },
-  'negative tolerance': { variant: { clocks: [{ label: 'z', frequency: '1M', tolerance: -1 }] }, path: 'clocks[0].tolerance', words: 'not negative' },
+  'zero clock frequency': {
+    variant: { clocks: [{ label: 'z', frequency: 0, tolerance: 1 }] },
+    path: 'clocks[0].frequency',
+    words: 'a frequency above zero (got 0)',
+  },
+  'negative tolerance': {
+    variant: { clocks: [{ label: 'z', frequency: '1M', tolerance: -1 }] },
+    path: 'clocks[0].tolerance',
+    words: 'not negative',
+  },
   'bad time': { variant: { converter: { apertureJitter: '80 f' } }, path: 'converter.apertureJitter', words: 'e.g. 80 fs' },
-  'bad guard': { variant: { guard: 'wide' } , path: 'guard', words: 'a percentage of the wanted width' },
+  'bad guard': { variant: { guard: 'wide' }, path: 'guard', words: 'a percentage of the wanted width' },
   'bad guard type': { variant: { guard: true }, path: 'guard', words: 'a guard: a frequency or percentage for both sides' },
-  'harmonic order key below 2': { variant: { converter: { harmonics: { '1': -70 } } }, path: 'converter.harmonics["1"]', words: 'a whole number 2 or more' },
-  'harmonic level not a number': { variant: { converter: { harmonics: { '2': 'low' } } }, path: 'converter.harmonics["2"]', words: 'a number' },
+  'harmonic order key below 2': {
+    variant: { converter: { harmonics: { '1': -70 } } },
+    path: 'converter.harmonics["1"]',
+    words: 'a whole number 2 or more',
+  },
+  'harmonic level not a number': {
+    variant: { converter: { harmonics: { '2': 'low' } } },
+    path: 'converter.harmonics["2"]',
+    words: 'a number',
+  },
   'harmonicOrder out of range': { variant: { harmonicOrder: 16 }, path: 'harmonicOrder', words: 'a whole number from 2 to 15 (got 16)' },
-  'spur harmonics out of range': { variant: { boardSpurs: [{ label: 'a', frequency: '1M', level: -90, harmonics: 0 }] }, path: 'boardSpurs[0].harmonics', words: 'from 1 to 20' },
-  'bad coupling': { variant: { boardSpurs: [{ label: 'a', frequency: '1M', level: -90, coupling: 'inside' }] }, path: 'boardSpurs[0].coupling', words: '"before-filter", "after-filter"' },
+  'spur harmonics out of range': {
+    variant: { boardSpurs: [{ label: 'a', frequency: '1M', level: -90, harmonics: 0 }] },
+    path: 'boardSpurs[0].harmonics',
+    words: 'from 1 to 20',
+  },
+  'bad coupling': {
+    variant: { boardSpurs: [{ label: 'a', frequency: '1M', level: -90, coupling: 'inside' }] },
+    path: 'boardSpurs[0].coupling',
+    words: '"before-filter", "after-filter"',
+  },
   'blank label': { variant: { clocks: [{ label: ' ', frequency: '1M', tolerance: 1 }] }, path: 'clocks[0].label', words: 'not blank' },
   'missing key': { variant: { requirements: { rejection: null } }, path: 'requirements.rejection', words: 'a number (got null)' },
   'wanted level above full scale': { variant: { wanted: { weakestLevel: 3 } }, path: 'wanted.weakestLevel', words: 'at most 0' },
-  'bad goal word': { variant: { goal: 'fastest' }, path: 'goal', words: 'one of "widest-margin", "lowest-rate", "quarter-rate" (got "fastest")' },
-  'bad goal kind': { variant: { goal: { kind: 'decimate', outputRate: '30.72M' } }, path: 'goal.kind', kind: 'unknown-value', words: 'unknown value "decimate"; did you mean "decimation"?' },
+  'bad goal word': {
+    variant: { goal: 'fastest' },
+    path: 'goal',
+    words: 'one of "widest-margin", "lowest-rate", "quarter-rate" (got "fastest")',
+  },
+  'bad goal kind': {
+    variant: { goal: { kind: 'decimate', outputRate: '30.72M' } },
+    path: 'goal.kind',
+    kind: 'unknown-value',
+    words: 'unknown value "decimate"; did you mean "decimation"?',
+  },
   'decimation without its rate': { variant: { goal: { kind: 'decimation' } }, path: 'goal.outputRate', words: 'got nothing' },
-  'bad filter kind': { variant: { filter: { kind: 'elliptic' } }, path: 'filter.kind', words: 'one of "butterworth", "table" (got "elliptic")' },
+  'bad filter kind': {
+    variant: { filter: { kind: 'elliptic' } },
+    path: 'filter.kind',
+    words: 'one of "butterworth", "table" (got "elliptic")',
+  },
   'filter order out of range': { variant: { filter: { order: 21 } }, path: 'filter.order', words: 'from 1 to 20' },
   'table with one point': { variant: { filter: { kind: 'table', points: [['100M', 3]] } }, path: 'filter.points', words: 'at least 2' },
-  'table point not a pair': { variant: { filter: { kind: 'table', points: [['100M', 3], ['200M']] } }, path: 'filter.points[1]', words: 'a [frequency, attenuation dB] pair' },
+  'table point not a pair': {
+    variant: { filter: { kind: 'table', points: [['100M', 3], ['200M']] } },
+    path: 'filter.points[1]',
+    words: 'a [frequency, attenuation dB] pair',
+  },
   'table frequencies not increasing': {
-    variant: { filter: { kind: 'table', points: [['100M', 40], ['120M', 3], ['120M', 3]] } },
+    variant: {
+      filter: {
+        kind: 'table',
+        points: [
+          ['100M', 40],
+          ['120M', 3],
+          ['120M', 3],
+        ],
+      },
+    },
     path: 'filter.points[2][0]',
     words: 'above the point before (120 MHz)',
   },
-  'wanted high not above low': { variant: { wanted: { center: null, width: null, low: '150M', high: '130M' } }, path: 'wanted.high', words: 'above low (150 MHz) (got 130 MHz)' },
+  'wanted high not above low': {
+    variant: { wanted: { center: null, width: null, low: '150M', high: '130M' } },
+    path: 'wanted.high',
+    words: 'above low (150 MHz) (got 130 MHz)',
+  },
   'wanted band of no width': { variant: { wanted: { width: 0 } }, path: 'wanted.width', words: 'a width above zero' },
-  'wanted width over twice the centre': { variant: { wanted: { center: '5M', width: '20M' } }, path: 'wanted.width', words: 'at most twice the centre (5 MHz)' },
-  'wanted in two forms at once': { variant: { wanted: { low: '130M', high: '150M' } }, path: 'wanted', words: 'either low and high, or center and width, not a mix' },
-  'wanted edge missing': { variant: { wanted: { center: null, width: null, low: '130M' } }, path: 'wanted.high', words: 'a frequency (with low) (got nothing)' },
-  'spur with neither form': { variant: { boardSpurs: [{ label: 'a', level: -90 }] }, path: 'boardSpurs[0]', words: 'frequency, or low and high (got none of them)' },
-  'neighbour upside down': { variant: { neighbours: [{ label: 'n', low: '20M', high: '10M', level: -30 }] }, path: 'neighbours[0].high', words: 'above low (20 MHz)' },
+  'wanted width over twice the centre': {
+    variant: { wanted: { center: '5M', width: '20M' } },
+    path: 'wanted.width',
+    words: 'at most twice the centre (5 MHz)',
+  },
+  'wanted in two forms at once': {
+    variant: { wanted: { low: '130M', high: '150M' } },
+    path: 'wanted',
+    words: 'either low and high, or center and width, not a mix',
+  },
+  'wanted edge missing': {
+    variant: { wanted: { center: null, width: null, low: '130M' } },
+    path: 'wanted.high',
+    words: 'a frequency (with low) (got nothing)',
+  },
+  'spur with neither form': {
+    variant: { boardSpurs: [{ label: 'a', level: -90 }] },
+    path: 'boardSpurs[0]',
+    words: 'frequency, or low and high (got none of them)',
+  },
+  'neighbour upside down': {
+    variant: { neighbours: [{ label: 'n', low: '20M', high: '10M', level: -30 }] },
+    path: 'neighbours[0].high',
+    words: 'above low (20 MHz)',
+  },
   'wanted band above the input bandwidth': {
     variant: { wanted: { center: '700M' } },
     path: 'wanted.high',
     words: "at or below the converter's input bandwidth (converter.inputBandwidth 650 MHz) (got wanted band up to 710 MHz)",
   },
-  'minRate above maxRate': { variant: { converter: { minRate: '300M' } }, path: 'converter.maxRate', words: 'at or above minRate (300 MHz) (got 250 MHz)' },
-  'passLow not below passHigh': { variant: { filter: { passLow: '160M' } }, path: 'filter.passHigh', words: 'above passLow (160 MHz) (got 152 MHz)' },
-  'strongest below weakest': { variant: { wanted: { strongestLevel: -80 } }, path: 'wanted.strongestLevel', words: 'at or above weakestLevel (-70 dBFS) (got -80 dBFS)' },
+  'minRate above maxRate': {
+    variant: { converter: { minRate: '300M' } },
+    path: 'converter.maxRate',
+    words: 'at or above minRate (300 MHz) (got 250 MHz)',
+  },
+  'passLow not below passHigh': {
+    variant: { filter: { passLow: '160M' } },
+    path: 'filter.passHigh',
+    words: 'above passLow (160 MHz) (got 152 MHz)',
+  },
+  'strongest below weakest': {
+    variant: { wanted: { strongestLevel: -80 } },
+    path: 'wanted.strongestLevel',
+    words: 'at or above weakestLevel (-70 dBFS) (got -80 dBFS)',
+  },
   'label used twice across lists': {
     variant: { clocks: [{ label: 'LO-1 leakage', frequency: '100M', tolerance: 20 }] },
     path: 'clocks[0].label',
     words: 'boardSpurs[3].label is already "LO-1 leakage"',
   },
   'label used twice in one list': {
-    variant: { neighbours: [{ label: 'n', low: '1M', high: '2M', level: -3 }, { label: 'n', low: '3M', high: '4M', level: -3 }] },
+    variant: {
+      neighbours: [
+        { label: 'n', low: '1M', high: '2M', level: -3 },
+        { label: 'n', low: '3M', high: '4M', level: -3 },
+      ],
+    },
     path: 'neighbours[1].label',
     words: 'neighbours[0].label is already "n"',
   },
@@ -231,46 +373,108 @@ function CLOCK_CASES(): Record<string, Case> {
       path: 'clocks[0].tolerance.ageing',
       words: 'expected a number (got nothing)',
     },
-    'negative tolerance contribution': { variant: part({ tolerance: { initial: 1, temperature: -2, ageing: 0 } }), path: 'clocks[0].tolerance.temperature', words: 'not negative (got -2)' },
+    'negative tolerance contribution': {
+      variant: part({ tolerance: { initial: 1, temperature: -2, ageing: 0 } }),
+      path: 'clocks[0].tolerance.temperature',
+      words: 'not negative (got -2)',
+    },
     'unknown key in a tolerance breakdown': {
       variant: part({ tolerance: { initial: 1, temperature: 2, aging: 0 } }),
       path: 'clocks[0].tolerance.aging',
       kind: 'unknown-key',
       words: 'did you mean "ageing"?',
     },
-    'tolerance as text': { variant: part({ tolerance: '20 ppm' }), path: 'clocks[0].tolerance', words: 'a tolerance in ppm, or { "initial": ..., "temperature": ..., "ageing": ... }' },
+    'tolerance as text': {
+      variant: part({ tolerance: '20 ppm' }),
+      path: 'clocks[0].tolerance',
+      words: 'a tolerance in ppm, or { "initial": ..., "temperature": ..., "ageing": ... }',
+    },
     'bad jitter': { variant: part({ jitter: '90 f' }), path: 'clocks[0].jitter', words: 'a time with its unit, e.g. 90 fs (got "90 f")' },
     'note not text': { variant: part({ note: 3 }), path: 'clocks[0].note', words: 'expected text (got 3)' },
-    'bad derivation word': { variant: part({ derive: 'divided' }), path: 'clocks[0].derive', kind: 'unknown-value', words: 'unknown value "divided"; did you mean "divider"? (expected one of "direct", "divider")' },
-    'bad derivation kind': { variant: part({ derive: { kind: 'pll' } }), path: 'clocks[0].derive.kind', words: 'one of "direct", "divider", "synthesiser" (got "pll")' },
-    'derivation of the wrong type': { variant: part({ derive: 4 }), path: 'clocks[0].derive', words: 'a derivation: "direct", "divider" or { "kind": "synthesiser"' },
+    'bad derivation word': {
+      variant: part({ derive: 'divided' }),
+      path: 'clocks[0].derive',
+      kind: 'unknown-value',
+      words: 'unknown value "divided"; did you mean "divider"? (expected one of "direct", "divider")',
+    },
+    'bad derivation kind': {
+      variant: part({ derive: { kind: 'pll' } }),
+      path: 'clocks[0].derive.kind',
+      words: 'one of "direct", "divider", "synthesiser" (got "pll")',
+    },
+    'derivation of the wrong type': {
+      variant: part({ derive: 4 }),
+      path: 'clocks[0].derive',
+      words: 'a derivation: "direct", "divider" or { "kind": "synthesiser"',
+    },
     'unknown key in a synthesiser, with a suggestion': {
       variant: synth({ vcoo: { low: '1G', high: '2G' } }),
       path: 'clocks[0].derive.vcoo',
       kind: 'unknown-key',
       words: 'did you mean "vco"?',
     },
-    'unknown key in a VCO range': { variant: synth({ vco: { low: '1G', hihg: '2G' } }), path: 'clocks[0].derive.vco.hihg', kind: 'unknown-key', words: 'did you mean "high"?' },
+    'unknown key in a VCO range': {
+      variant: synth({ vco: { low: '1G', hihg: '2G' } }),
+      path: 'clocks[0].derive.vco.hihg',
+      kind: 'unknown-key',
+      words: 'did you mean "high"?',
+    },
     'synthesiser without N': { variant: part({ derive: { kind: 'synthesiser', m: 1 } }), path: 'clocks[0].derive.n', words: 'got nothing' },
     'setting of zero': { variant: synth({ n: 0 }), path: 'clocks[0].derive.n', words: 'a whole number 1 or more (got 0)' },
     'range end of zero': { variant: synth({ m: [0, 16] }), path: 'clocks[0].derive.m[0]', words: 'a whole number 1 or more (got 0)' },
-    'range not whole': { variant: synth({ d: 1.5 }), path: 'clocks[0].derive.d', words: 'a whole number 1 or more, or a [min, max] pair of them (got 1.5)' },
+    'range not whole': {
+      variant: synth({ d: 1.5 }),
+      path: 'clocks[0].derive.d',
+      words: 'a whole number 1 or more, or a [min, max] pair of them (got 1.5)',
+    },
     'range of three numbers': { variant: synth({ n: [1, 2, 3] }), path: 'clocks[0].derive.n', words: 'a list of at most 2 entries' },
     'range as text': { variant: synth({ n: '1-128' }), path: 'clocks[0].derive.n', words: 'a [min, max] pair of them (got "1-128")' },
-    'range min above max': { variant: synth({ n: [128, 1] }), path: 'clocks[0].derive.n[1]', words: 'a whole number at or above min (128) (got 1)' },
-    'VCO low equal to high': { variant: synth({ vco: { low: '2G', high: '2G' } }), path: 'clocks[0].derive.vco.high', words: 'a frequency above low (2 GHz) (got 2 GHz)' },
-    'VCO low above high': { variant: synth({ vco: { low: '2.4G', high: '1.2G' } }), path: 'clocks[0].derive.vco.high', words: 'a frequency above low (2.4 GHz) (got 1.2 GHz)' },
+    'range min above max': {
+      variant: synth({ n: [128, 1] }),
+      path: 'clocks[0].derive.n[1]',
+      words: 'a whole number at or above min (128) (got 1)',
+    },
+    'VCO low equal to high': {
+      variant: synth({ vco: { low: '2G', high: '2G' } }),
+      path: 'clocks[0].derive.vco.high',
+      words: 'a frequency above low (2 GHz) (got 2 GHz)',
+    },
+    'VCO low above high': {
+      variant: synth({ vco: { low: '2.4G', high: '1.2G' } }),
+      path: 'clocks[0].derive.vco.high',
+      words: 'a frequency above low (2.4 GHz) (got 1.2 GHz)',
+    },
     'VCO edge missing': { variant: synth({ vco: { low: '1G' } }), path: 'clocks[0].derive.vco.high', words: 'got nothing' },
     'repeated clock divider': {
       variant: { converter: { clockDividers: [1, 2, 4, 2] } },
       path: 'converter.clockDividers[3]',
       words: 'a divider not listed already (clockDividers[1] is 2) (got 2)',
     },
-    'clock divider of zero': { variant: { converter: { clockDividers: [0, 1] } }, path: 'converter.clockDividers[0]', words: 'a whole number 1 or more (got 0)' },
-    'fractional clock divider': { variant: { converter: { clockDividers: [1, 2.5] } }, path: 'converter.clockDividers[1]', words: 'a whole number 1 or more (got 2.5)' },
-    'no clock dividers': { variant: { converter: { clockDividers: [] } }, path: 'converter.clockDividers', words: 'at least one clock divider' },
-    'clock dividers not a list': { variant: { converter: { clockDividers: 2 } }, path: 'converter.clockDividers', words: 'a list of whole-number clock dividers' },
-    'IF shift low above high': { variant: { ifShift: { low: '2M', high: '-2M' } }, path: 'ifShift.high', words: 'a shift at or above low (2 MHz) (got -2 MHz)' },
+    'clock divider of zero': {
+      variant: { converter: { clockDividers: [0, 1] } },
+      path: 'converter.clockDividers[0]',
+      words: 'a whole number 1 or more (got 0)',
+    },
+    'fractional clock divider': {
+      variant: { converter: { clockDividers: [1, 2.5] } },
+      path: 'converter.clockDividers[1]',
+      words: 'a whole number 1 or more (got 2.5)',
+    },
+    'no clock dividers': {
+      variant: { converter: { clockDividers: [] } },
+      path: 'converter.clockDividers',
+      words: 'at least one clock divider',
+    },
+    'clock dividers not a list': {
+      variant: { converter: { clockDividers: 2 } },
+      path: 'converter.clockDividers',
+      words: 'a list of whole-number clock dividers',
+    },
+    'IF shift low above high': {
+      variant: { ifShift: { low: '2M', high: '-2M' } },
+      path: 'ifShift.high',
+      words: 'a shift at or above low (2 MHz) (got -2 MHz)',
+    },
     'IF shift with two signs': { variant: { ifShift: { low: '--5M', high: '5M' } }, path: 'ifShift.low', words: 'at most one sign' },
     'IF shift sign alone': { variant: { ifShift: { low: '-', high: '5M' } }, path: 'ifShift.low', words: 'a frequency such as 70M' },
     'IF shift in milli': { variant: { ifShift: { low: '-5m', high: '5M' } }, path: 'ifShift.low', words: "'m' is milli" },
@@ -286,7 +490,12 @@ function CLOCK_CASES(): Record<string, Case> {
       path: 'ifShift.high',
       words: "within the converter's input bandwidth (converter.inputBandwidth 650 MHz; at most 500 MHz) (got 501 MHz)",
     },
-    'unknown key in an IF shift': { variant: { ifShift: { low: 0, high: 0, center: 0 } }, path: 'ifShift.center', kind: 'unknown-key', words: 'expected one of the keys low, high' },
+    'unknown key in an IF shift': {
+      variant: { ifShift: { low: 0, high: 0, center: 0 } },
+      path: 'ifShift.center',
+      kind: 'unknown-key',
+      words: 'expected one of the keys low, high',
+    },
   };
 }
 
@@ -322,7 +531,8 @@ describe('validation errors', () => {
 });
 
 describe('clock parts, converter dividers and IF shift', () => {
-  const onePart = (fields: Record<string, unknown>) => loadVariant(over({ clocks: [{ label: 'P', frequency: '10M', tolerance: 2, ...fields }] })).clocks[0]!;
+  const onePart = (fields: Record<string, unknown>) =>
+    loadVariant(over({ clocks: [{ label: 'P', frequency: '10M', tolerance: 2, ...fields }] })).clocks[0]!;
 
   it('fills a part written with the least: direct, no jitter, no note, one tolerance figure', () => {
     expect(onePart({})).toEqual({
@@ -363,7 +573,9 @@ describe('clock parts, converter dividers and IF shift', () => {
       d: { min: 1, max: 1 },
       vco: null,
     });
-    expect(onePart({ derive: { kind: 'synthesiser', n: [1, 128], m: 2, d: [2, 2], vco: { low: '2.4G', high: '3.2G' } } }).derivation).toEqual({
+    expect(
+      onePart({ derive: { kind: 'synthesiser', n: [1, 128], m: 2, d: [2, 2], vco: { low: '2.4G', high: '3.2G' } } }).derivation,
+    ).toEqual({
       kind: 'synthesiser',
       n: { min: 1, max: 128 },
       m: { min: 2, max: 2 },
@@ -416,7 +628,7 @@ describe('JSON syntax errors', () => {
     const text = '{\n  "extends": "heron-base.json",\n  "name": "x"\n  "harmonicOrder": 3\n}\n';
     const error = refusal(() => loadVariant(text));
     expect(error.issues[0]).toMatchObject({ kind: 'syntax', file: 's/v.json', path: '4:3' });
-    expect(error.message).toBe('s/v.json:4:3: JSON syntax error: expected \',\' or \'}\' (got "\\"")');
+    expect(error.message).toBe("s/v.json:4:3: JSON syntax error: expected ',' or '}' (got \"\\\"\")");
   });
 
   it('give the end of the text for a cut-off file', () => {
@@ -425,7 +637,9 @@ describe('JSON syntax errors', () => {
   });
 
   it('come from the base file when the base is broken', () => {
-    const error = refusal(() => resolveScenario('s/v.json', memoryFiles({ 's/v.json': over({}), 's/heron-base.json': '{ "name": "b", }' })));
+    const error = refusal(() =>
+      resolveScenario('s/v.json', memoryFiles({ 's/v.json': over({}), 's/heron-base.json': '{ "name": "b", }' })),
+    );
     expect(error.issues[0]).toMatchObject({ kind: 'syntax', file: 's/heron-base.json', path: '1:16' });
   });
 

@@ -16,7 +16,12 @@ export function scenarioDocument(scenario: Scenario): Record<string, unknown> {
       ...converter,
       harmonics: Object.fromEntries([...converter.harmonics].map(([order, level]) => [String(order), level])),
       intercepts: Object.fromEntries([...(converter.intercepts ?? [])].map(([order, level]) => [String(order), level])),
-      rateSpurs: { ...converter.rateSpurs, ...(converter.rateSpurs.fractions ? { fractions: converter.rateSpurs.fractions.map((f) => ({ fraction: `${f.numerator}/${f.denominator}`, level: f.level })) } : {}) },
+      rateSpurs: {
+        ...converter.rateSpurs,
+        ...(converter.rateSpurs.fractions
+          ? { fractions: converter.rateSpurs.fractions.map((f) => ({ fraction: `${f.numerator}/${f.denominator}`, level: f.level })) }
+          : {}),
+      },
       interleave: converter.interleave && { ...converter.interleave },
       clockDividers: [...converter.clockDividers],
     },
@@ -24,10 +29,17 @@ export function scenarioDocument(scenario: Scenario): Record<string, unknown> {
     maxOrder: scenario.maxOrder,
     boardSpurs: scenario.boardSpurs.map((spur) => ({ ...spur })),
     neighbours: scenario.neighbours.map((neighbour) => ({ ...neighbour })),
-    filter: filter === null ? null : filter.kind === 'butterworth' ? { ...filter } : { kind: 'table', points: filter.points.map((p) => [p.frequency, p.attenuation]) },
+    filter:
+      filter === null
+        ? null
+        : filter.kind === 'butterworth'
+          ? { ...filter }
+          : { kind: 'table', points: filter.points.map((p) => [p.frequency, p.attenuation]) },
     requirements: {
       ...scenario.requirements,
-      ...(scenario.requirements.kindMargins ? { kindMargins: Object.fromEntries(Object.entries(scenario.requirements.kindMargins).filter(([, margin]) => margin !== null)) } : {}),
+      ...(scenario.requirements.kindMargins
+        ? { kindMargins: Object.fromEntries(Object.entries(scenario.requirements.kindMargins).filter(([, margin]) => margin !== null)) }
+        : {}),
     },
     clocks: scenario.clocks.map(clockDocument),
     goal: { ...scenario.goal },
@@ -49,7 +61,13 @@ export function clockDocument(part: ClockPart): Record<string, unknown> {
     note: part.note,
     derive:
       derivation.kind === 'synthesiser'
-        ? { kind: 'synthesiser', n: pair(derivation.n), m: pair(derivation.m), d: pair(derivation.d), vco: derivation.vco && { ...derivation.vco } }
+        ? {
+            kind: 'synthesiser',
+            n: pair(derivation.n),
+            m: pair(derivation.m),
+            d: pair(derivation.d),
+            vco: derivation.vco && { ...derivation.vco },
+          }
         : { kind: derivation.kind },
   };
 }

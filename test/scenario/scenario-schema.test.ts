@@ -110,29 +110,45 @@ describe('ifzone schema', () => {
 
 /** A shift of k kHz as a person may write it: signed text with a prefix (ASCII or Unicode minus), or a number of hertz. */
 const signedKilohertz = (k: number) =>
-  k < 0 ? fc.constantFrom<string | number>(k * 1e3, `-${-k}k`, `−${-k} kHz`, `- ${-k}k`) : fc.constantFrom<string | number>(k * 1e3, `${k}k`, `+${k}k`, `${k / 1000}M`);
+  k < 0
+    ? fc.constantFrom<string | number>(k * 1e3, `-${-k}k`, `−${-k} kHz`, `- ${-k}k`)
+    : fc.constantFrom<string | number>(k * 1e3, `${k}k`, `+${k}k`, `${k / 1000}M`);
 
 /** An integer range written as one number or as a pair, with the range it must read as. */
 const rangeArb = (most: number) =>
-  fc.tuple(fc.integer({ min: 1, max: most }), fc.integer({ min: 0, max: most })).chain(([min, extra]) =>
-    fc.constantFrom<{ written: number | [number, number]; range: { min: number; max: number } }>(
-      { written: [min, min + extra], range: { min, max: min + extra } },
-      ...(extra === 0 ? [{ written: min, range: { min, max: min } }] : []),
-    ),
-  );
+  fc
+    .tuple(fc.integer({ min: 1, max: most }), fc.integer({ min: 0, max: most }))
+    .chain(([min, extra]) =>
+      fc.constantFrom<{ written: number | [number, number]; range: { min: number; max: number } }>(
+        { written: [min, min + extra], range: { min, max: min + extra } },
+        ...(extra === 0 ? [{ written: min, range: { min, max: min } }] : []),
+      ),
+    );
 
 /** A clock part's fields as written (all but label and frequency), with what the loader must make of them. */
 const partArb = fc
   .record({
     mhz: fc.integer({ min: 1, max: 4000 }).map((n) => n / 4),
-    tolerance: fc.oneof(fc.integer({ min: 0, max: 100 }), fc.record({ initial: fc.integer({ min: 0, max: 50 }), temperature: fc.integer({ min: 0, max: 50 }), ageing: fc.integer({ min: 0, max: 20 }) })),
+    tolerance: fc.oneof(
+      fc.integer({ min: 0, max: 100 }),
+      fc.record({
+        initial: fc.integer({ min: 0, max: 50 }),
+        temperature: fc.integer({ min: 0, max: 50 }),
+        ageing: fc.integer({ min: 0, max: 20 }),
+      }),
+    ),
     jitterFs: fc.option(fc.integer({ min: 0, max: 2000 }), { nil: null }),
     note: fc.option(fc.string({ maxLength: 20 }), { nil: undefined }),
     derive: fc.oneof(
       fc.constantFrom('direct', 'divider', undefined).map((word) => ({ written: word, derivation: { kind: word ?? 'direct' } })),
       fc.constantFrom('direct', 'divider').map((kind) => ({ written: { kind }, derivation: { kind } })),
       fc
-        .record({ n: rangeArb(512), m: rangeArb(16), d: fc.option(rangeArb(8), { nil: undefined }), vco: fc.option(fc.tuple(fc.integer({ min: 1, max: 3000 }), fc.integer({ min: 1, max: 1000 })), { nil: undefined }) })
+        .record({
+          n: rangeArb(512),
+          m: rangeArb(16),
+          d: fc.option(rangeArb(8), { nil: undefined }),
+          vco: fc.option(fc.tuple(fc.integer({ min: 1, max: 3000 }), fc.integer({ min: 1, max: 1000 })), { nil: undefined }),
+        })
         .map(({ n, m, d, vco }) => ({
           written: {
             kind: 'synthesiser',
@@ -141,7 +157,13 @@ const partArb = fc
             ...(d ? { d: d.written } : {}),
             ...(vco ? { vco: { low: `${vco[0]}M`, high: `${vco[0] + vco[1]}M` } } : {}),
           },
-          derivation: { kind: 'synthesiser', n: n.range, m: m.range, d: d?.range ?? { min: 1, max: 1 }, vco: vco ? { low: vco[0] * 1e6, high: (vco[0] + vco[1]) * 1e6 } : null },
+          derivation: {
+            kind: 'synthesiser',
+            n: n.range,
+            m: m.range,
+            d: d?.range ?? { min: 1, max: 1 },
+            vco: vco ? { low: vco[0] * 1e6, high: (vco[0] + vco[1]) * 1e6 } : null,
+          },
         })),
     ),
   })
@@ -162,12 +184,15 @@ const partArb = fc
   }));
 
 describe('round trip', () => {
-  it.each(['heron-base.json', 'heron-narrow.json', 'heron-wide.json', 'heron-lowif.json'])('%s → document in Hz → the same scenario', (name) => {
-    const scenario = readScenarioFile(new URL(`../../scenarios/${name}`, import.meta.url).pathname);
-    const document = scenarioDocument(scenario);
-    expect(jsonSchemaAccepts(scenarioJsonSchema(), document)).toBe(true);
-    expect(scenarioFromDocument(JSON.parse(JSON.stringify(document)), name)).toEqual(scenario);
-  });
+  it.each(['heron-base.json', 'heron-narrow.json', 'heron-wide.json', 'heron-lowif.json'])(
+    '%s → document in Hz → the same scenario',
+    (name) => {
+      const scenario = readScenarioFile(new URL(`../../scenarios/${name}`, import.meta.url).pathname);
+      const document = scenarioDocument(scenario);
+      expect(jsonSchemaAccepts(scenarioJsonSchema(), document)).toBe(true);
+      expect(scenarioFromDocument(JSON.parse(JSON.stringify(document)), name)).toEqual(scenario);
+    },
+  );
 
   it('holds for random valid scenarios written with prefixes, percentages and times', () => {
     const mhz = fc.integer({ min: 1, max: 4000 }).map((n) => n / 4); // 0.25 MHz steps
@@ -215,7 +240,13 @@ describe('round trip', () => {
             harmonics: r.harmonics,
             apertureJitter: `${r.jitterFs} fs`,
           },
-          boardSpurs: r.spurs.map((s, i) => ({ label: `spur ${i}`, frequency: spurTexts[i], level: s.level, harmonics: s.harmonics, coupling: s.before ? 'before-filter' : 'after-filter' })),
+          boardSpurs: r.spurs.map((s, i) => ({
+            label: `spur ${i}`,
+            frequency: spurTexts[i],
+            level: s.level,
+            harmonics: s.harmonics,
+            coupling: s.before ? 'before-filter' : 'after-filter',
+          })),
           filter: { kind: 'butterworth', order: r.order, passLow: lowText, passHigh: `${r.low + r.width + 1}M` },
           requirements: { margin: '100k', rejection: 6 },
           goal: r.goal,

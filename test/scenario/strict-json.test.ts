@@ -40,7 +40,10 @@ describe('parseJsonText: strict JSON', () => {
   });
 
   it.each(['__proto__', 'constructor'])('refuses %s as a key, at any depth', (key) => {
-    expect(issuesOf(`{"converter": {"${key}": {"bits": 99}}}`)[0]).toMatchObject({ path: `converter.${key}`, received: `"${key}" at 1:16` });
+    expect(issuesOf(`{"converter": {"${key}": {"bits": 99}}}`)[0]).toMatchObject({
+      path: `converter.${key}`,
+      received: `"${key}" at 1:16`,
+    });
   });
 
   it.each([
@@ -56,7 +59,8 @@ describe('parseJsonText: strict JSON', () => {
   });
 
   it('keeps what a double holds: zero in any spelling, the extremes', () => {
-    for (const number of ['0', '-0', '0e-999', '0.000e5000', '1.7976931348623157e308', '2.2250738585072014e-308', '-5e-300']) expect(numberRangeProblem(number)).toBeNull();
+    for (const number of ['0', '-0', '0e-999', '0.000e5000', '1.7976931348623157e308', '2.2250738585072014e-308', '-5e-300'])
+      expect(numberRangeProblem(number)).toBeNull();
   });
 
   it('counts columns in characters across a line with astral characters', () => {
@@ -71,7 +75,9 @@ describe('strict JSON through ifzone solve', () => {
     const run = await ifzone('solve', file);
     expect(run.code).toBe(2);
     expect(run.out).toBe('');
-    expect(refusalLine(run)).toBe(`ifzone: ${file}: extends: expected each key once in an object (got "extends" again at 3:3, first at 2:3)`);
+    expect(refusalLine(run)).toBe(
+      `ifzone: ${file}: extends: expected each key once in an object (got "extends" again at 3:3, first at 2:3)`,
+    );
   });
 
   it('refuses 1e999 as an overflow at its line and column, not as "(got null)"', async () => {

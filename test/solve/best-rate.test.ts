@@ -28,7 +28,19 @@ describe('a candidate at the end of its drift-safe range', () => {
     guard: guardBands(hz(0), hz(0)),
     limits: { minRate: hz(10 * MHZ), maxRate: hz(60 * MHZ) },
     interferers: [
-      { label: 'tone', kind: 'spur', order: null, source: 'board tone', rateMultiple: 0, shiftMultiple: 0, low: hz(tone), high: hz(tone), level: db(-50), requiredMargin: hz(0.5 * MHZ), blocking: true },
+      {
+        label: 'tone',
+        kind: 'spur',
+        order: null,
+        source: 'board tone',
+        rateMultiple: 0,
+        shiftMultiple: 0,
+        low: hz(tone),
+        high: hz(tone),
+        level: db(-50),
+        requiredMargin: hz(0.5 * MHZ),
+        blocking: true,
+      },
     ],
     levelThreshold: db(-90),
     clocks: [],
@@ -91,7 +103,12 @@ describe('every goal: the best rate of a drift-safe interval passes (random plan
   // it, so the exact judge must pass it, and the brute force (definition of aliasing; common
   // practice, no source) must pass its nominal rate and both drift ends, unless within 1e-9
   // relative of an exact edge (a drift end usually sits on one, where rounding decides).
-  const goals: Goal[] = [{ kind: 'lowest-rate' }, { kind: 'quarter-rate' }, { kind: 'widest-margin' }, { kind: 'decimation', outputRate: hz(0.25 * MHZ) }];
+  const goals: Goal[] = [
+    { kind: 'lowest-rate' },
+    { kind: 'quarter-rate' },
+    { kind: 'widest-margin' },
+    { kind: 'decimation', outputRate: hz(0.25 * MHZ) },
+  ];
   for (const goal of goals) {
     it(`${goal.kind}`, () => {
       let judged = 0;
@@ -106,7 +123,8 @@ describe('every goal: the best rate of a drift-safe interval passes (random plan
             const interval = result.feasible.find((f) => rate >= f.minRate && rate <= f.maxRate);
             if (candidate.origin !== 'interval' || !interval || !driftSafeRange(interval, ppm(tolerance))) continue;
             expect(candidate.evaluation.pass, `${candidate.label} at ${rate} Hz ±${tolerance} ppm`).toBe(true);
-            for (const r of [rate, rate * (1 - epsilon), rate * (1 + epsilon)]) if (!nearAnEdge(r, edges)) expect(brutePasses(context, r), `brute force at ${r} Hz`).toBe(true);
+            for (const r of [rate, rate * (1 - epsilon), rate * (1 + epsilon)])
+              if (!nearAnEdge(r, edges)) expect(brutePasses(context, r), `brute force at ${r} Hz`).toBe(true);
             judged++;
           }
         }),

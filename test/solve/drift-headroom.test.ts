@@ -42,62 +42,70 @@ describe('drift headroom ± 1 ppm on random plans (fast-check)', () => {
   it('moved by the headroom plus 1 ppm the named check fails; by the headroom minus 1 ppm the rate passes', () => {
     const counts = { rates: 0, moves: 0, zoneEdge: 0, rateLimit: 0, interferer: 0, skippedNarrow: 0 };
     fc.assert(
-      fc.property(planArbitrary(), fc.array(fc.double({ min: 0.05, max: 0.95, noNaN: true }), { minLength: 1, maxLength: 3 }), (base, fractions) => {
-        const context: PlanContext = { ...base, clocking: { clockDividers: [1], bits: 12, apertureJitter: seconds(0) } };
-        const set = setOf(context);
-        for (const interval of set.feasible) {
-          if (interval.maxRate - interval.minRate < 8e-6 * interval.maxRate) continue; // too narrow for ±1 ppm steps inside
-          for (const u of fractions) {
-            const rate = interval.minRate + u * (interval.maxRate - interval.minRate);
-            const headroom = driftHeadroom(set, context.limits, hz(rate))!;
-            expect(headroom).not.toBeNull();
-            counts.rates++;
-            for (const [ppmAway, limit, sign] of [
-              [headroom.downPpm, headroom.downLimitedBy, -1],
-              [headroom.upPpm, headroom.upLimitedBy, 1],
-            ] as const) {
-              const label = limit.kind === 'interferer' ? limit.label : limit.kind;
-              // Inside by 1 ppm: passes, by the exact evaluator (tolerance 0) and by the independent brute force
-              // (test/helpers/brute-force-plan.ts: the definition of aliasing; common practice, no source).
-              const inside = rate * (1 + sign * (ppmAway - 1) * 1e-6);
-              expect(evaluateRate(context, hz(inside), ppm(0)).pass, `${inside} Hz, 1 ppm inside the ${label} limit`).toBe(true);
-              expect(brutePasses(context, inside)).toBe(true);
-              // Beyond by 1 ppm: the named check fails.
-              const beyond = rate * (1 + sign * (ppmAway + 1) * 1e-6);
-              const judged = evaluateRate(context, hz(beyond), ppm(0));
-              counts.moves++;
-              if (limit.kind === 'rate limit') {
-                counts.rateLimit++;
-                expect(sign < 0 ? beyond < context.limits.minRate : beyond > context.limits.maxRate).toBe(true);
-              } else if (limit.kind === 'zone edge') {
-                counts.zoneEdge++;
-                expect(judged.pass).toBe(false);
-                expect(judged.image === null || judged.zoneEdgeMargin < 0).toBe(true);
-                const guarded = bruteGuarded(context);
-                expect(wholeInOneZone(guarded.low, guarded.high, beyond)).toBe(false);
-              } else {
-                // A blocked range narrower than the 1 ppm step may be stepped over: skip those (counted).
-                const edge = sign < 0 ? interval.minRate : interval.maxRate;
-                const range = set.blocked.find((b) => b.label === label && b.zone === interval.zone && (sign < 0 ? b.maxRate === edge : b.minRate === edge))!;
-                expect(range, `a blocked range of ${label} at ${edge} Hz`).toBeDefined();
-                if (range.maxRate - range.minRate < 2e-6 * rate) {
-                  counts.skippedNarrow++;
-                  continue;
+      fc.property(
+        planArbitrary(),
+        fc.array(fc.double({ min: 0.05, max: 0.95, noNaN: true }), { minLength: 1, maxLength: 3 }),
+        (base, fractions) => {
+          const context: PlanContext = { ...base, clocking: { clockDividers: [1], bits: 12, apertureJitter: seconds(0) } };
+          const set = setOf(context);
+          for (const interval of set.feasible) {
+            if (interval.maxRate - interval.minRate < 8e-6 * interval.maxRate) continue; // too narrow for ±1 ppm steps inside
+            for (const u of fractions) {
+              const rate = interval.minRate + u * (interval.maxRate - interval.minRate);
+              const headroom = driftHeadroom(set, context.limits, hz(rate))!;
+              expect(headroom).not.toBeNull();
+              counts.rates++;
+              for (const [ppmAway, limit, sign] of [
+                [headroom.downPpm, headroom.downLimitedBy, -1],
+                [headroom.upPpm, headroom.upLimitedBy, 1],
+              ] as const) {
+                const label = limit.kind === 'interferer' ? limit.label : limit.kind;
+                // Inside by 1 ppm: passes, by the exact evaluator (tolerance 0) and by the independent brute force
+                // (test/helpers/brute-force-plan.ts: the definition of aliasing; common practice, no source).
+                const inside = rate * (1 + sign * (ppmAway - 1) * 1e-6);
+                expect(evaluateRate(context, hz(inside), ppm(0)).pass, `${inside} Hz, 1 ppm inside the ${label} limit`).toBe(true);
+                expect(brutePasses(context, inside)).toBe(true);
+                // Beyond by 1 ppm: the named check fails.
+                const beyond = rate * (1 + sign * (ppmAway + 1) * 1e-6);
+                const judged = evaluateRate(context, hz(beyond), ppm(0));
+                counts.moves++;
+                if (limit.kind === 'rate limit') {
+                  counts.rateLimit++;
+                  expect(sign < 0 ? beyond < context.limits.minRate : beyond > context.limits.maxRate).toBe(true);
+                } else if (limit.kind === 'zone edge') {
+                  counts.zoneEdge++;
+                  expect(judged.pass).toBe(false);
+                  expect(judged.image === null || judged.zoneEdgeMargin < 0).toBe(true);
+                  const guarded = bruteGuarded(context);
+                  expect(wholeInOneZone(guarded.low, guarded.high, beyond)).toBe(false);
+                } else {
+                  // A blocked range narrower than the 1 ppm step may be stepped over: skip those (counted).
+                  const edge = sign < 0 ? interval.minRate : interval.maxRate;
+                  const range = set.blocked.find(
+                    (b) => b.label === label && b.zone === interval.zone && (sign < 0 ? b.maxRate === edge : b.minRate === edge),
+                  )!;
+                  expect(range, `a blocked range of ${label} at ${edge} Hz`).toBeDefined();
+                  if (range.maxRate - range.minRate < 2e-6 * rate) {
+                    counts.skippedNarrow++;
+                    continue;
+                  }
+                  counts.interferer++;
+                  const check = judged.checks.find((c) => c.label === label)!;
+                  expect(check.pass, `${label} at ${beyond} Hz`).toBe(false);
+                  const extent = context.interferers.find((i) => i.label === label)!;
+                  const alias = wantedAlias(context, beyond);
+                  if (alias) expect(bruteLeastDistance(extent, alias, beyond, verdictSpacing(extent))).toBeLessThan(extent.requiredMargin);
                 }
-                counts.interferer++;
-                const check = judged.checks.find((c) => c.label === label)!;
-                expect(check.pass, `${label} at ${beyond} Hz`).toBe(false);
-                const extent = context.interferers.find((i) => i.label === label)!;
-                const alias = wantedAlias(context, beyond);
-                if (alias) expect(bruteLeastDistance(extent, alias, beyond, verdictSpacing(extent))).toBeLessThan(extent.requiredMargin);
               }
             }
           }
-        }
-      }),
+        },
+      ),
       { numRuns: 300 },
     );
-    console.log(`headroom: ${counts.rates} rates, ${counts.moves} moves beyond (${counts.zoneEdge} zone edge, ${counts.rateLimit} rate limit, ${counts.interferer} interferer, ${counts.skippedNarrow} skipped: blocked range under 2 ppm)`);
+    console.log(
+      `headroom: ${counts.rates} rates, ${counts.moves} moves beyond (${counts.zoneEdge} zone edge, ${counts.rateLimit} rate limit, ${counts.interferer} interferer, ${counts.skippedNarrow} skipped: blocked range under 2 ppm)`,
+    );
     expect(counts.zoneEdge).toBeGreaterThan(50);
     expect(counts.interferer).toBeGreaterThan(50);
     expect(counts.rateLimit).toBeGreaterThan(10);

@@ -31,7 +31,9 @@ describe('evaluateRate: a lower guard reaching below DC', () => {
   };
 
   it('passes at 20 MHz, as the feasible set and the brute force say', () => {
-    expect(planRates({ ...context, interferers: [] }).feasible).toEqual([{ zone: 1, inverted: false, minRate: 10 * MHZ, maxRate: 30 * MHZ }]);
+    expect(planRates({ ...context, interferers: [] }).feasible).toEqual([
+      { zone: 1, inverted: false, minRate: 10 * MHZ, maxRate: 30 * MHZ },
+    ]);
     // Independent brute-force evaluator (definition of aliasing; common practice, no source).
     expect(brutePasses(context, 20 * MHZ)).toBe(true);
     const judged = evaluateRate(context, hz(20 * MHZ), ppm(0));
@@ -81,7 +83,8 @@ describe('leastMargin without allocation', () => {
           let expected = Infinity;
           for (const term of nearbyImages(extent, context.band, hz(0), range.low, range.high)) {
             const inside = marginBreakpoints(extent, context.band, term).filter((r) => r > range.low && r < range.high);
-            for (const r of [range.low, range.high, ...inside]) expected = Math.min(expected, imageMargin(extent, context.band, term, hz(r)));
+            for (const r of [range.low, range.high, ...inside])
+              expected = Math.min(expected, imageMargin(extent, context.band, term, hz(r)));
           }
           expect(leastMargin(interferer, context.band, range)).toBe(expected);
         }

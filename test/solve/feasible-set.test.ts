@@ -54,7 +54,9 @@ describe('feasibleSet and evaluateRate against the brute force (random plans)', 
       }),
       { numRuns: 60, seed: 20261202, plugins: [fc.unbiased()] },
     );
-    console.info(`feasible-set agreement: ${tally.compared} rates compared (${tally.feasible} feasible), ${tally.skipped} skipped near an edge`);
+    console.info(
+      `feasible-set agreement: ${tally.compared} rates compared (${tally.feasible} feasible), ${tally.skipped} skipped near an edge`,
+    );
     // The sweep must actually see both verdicts, or the agreement proves little.
     expect(tally.feasible).toBeGreaterThan(0.05 * tally.compared);
     expect(tally.compared - tally.feasible).toBeGreaterThan(0.05 * tally.compared);

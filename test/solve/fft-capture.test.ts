@@ -40,7 +40,19 @@ const A3 = 0.02;
 const MARGIN = 0.5 * MHZ;
 
 function extent(label: string, kind: Interferer['kind'], order: number | null, low: number, high: number, isBlocking: boolean): Interferer {
-  return { label, kind, order, source: label, rateMultiple: 0, shiftMultiple: 0, low: hz(low), high: hz(high), level: db(isBlocking ? -60 : -120), requiredMargin: hz(MARGIN), blocking: isBlocking };
+  return {
+    label,
+    kind,
+    order,
+    source: label,
+    rateMultiple: 0,
+    shiftMultiple: 0,
+    low: hz(low),
+    high: hz(high),
+    level: db(isBlocking ? -60 : -120),
+    requiredMargin: hz(MARGIN),
+    blocking: isBlocking,
+  };
 }
 
 const context: PlanContext = {
@@ -104,7 +116,8 @@ function segmentsOf(evaluation: RateEvaluation, family: string): (readonly [numb
   return evaluation.checks.find((c) => c.label === family)!.alias.map(([lo, hi]) => [lo, hi] as const);
 }
 
-const inside = (f: number, segments: readonly (readonly [number, number])[], slack: number) => segments.some(([lo, hi]) => f >= lo - slack && f <= hi + slack);
+const inside = (f: number, segments: readonly (readonly [number, number])[], slack: number) =>
+  segments.some(([lo, hi]) => f >= lo - slack && f <= hi + slack);
 
 describe('simulated capture (fft.js): every harmonic and intermodulation peak where the solver says', () => {
   const result = solvePlan(context);
@@ -146,7 +159,8 @@ describe('simulated capture (fft.js): every harmonic and intermodulation peak wh
       const all = Object.keys(families).flatMap((f) => segmentsOf(evaluation, f));
       const peaks = spectrum.flatMap((mag, bin) => (mag > threshold ? [bin] : []));
       console.info(`${candidate.label}: ${peaks.length} bins above the threshold, all explained`);
-      for (const bin of peaks) if (bin !== 0) expect(inside(bin * binWidth, all, slack), `peak at bin ${bin} (${bin * binWidth} Hz)`).toBe(true);
+      for (const bin of peaks)
+        if (bin !== 0) expect(inside(bin * binWidth, all, slack), `peak at bin ${bin} (${bin * binWidth} Hz)`).toBe(true);
       // ...and the strongest three are the tones, inside the wanted image.
       const strongest = [...peaks].sort((a, b) => spectrum[b]! - spectrum[a]!).slice(0, 3);
       expect(strongest.sort((a, b) => a - b)).toEqual(m.map(foldBin).sort((a, b) => a - b));

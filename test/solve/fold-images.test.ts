@@ -1,6 +1,16 @@
 import { describe, expect, it } from 'vitest';
 import { hz } from '../../src/units/quantities.js';
-import { breakpointAt, firstNearbyImage, imageOffsetHigh, imageOffsetLow, lastNearbyImage, marginAt, normalisedHigh, normalisedLow, normalisedMultiple } from '../../src/solve/fold-images.js';
+import {
+  breakpointAt,
+  firstNearbyImage,
+  imageOffsetHigh,
+  imageOffsetLow,
+  lastNearbyImage,
+  marginAt,
+  normalisedHigh,
+  normalisedLow,
+  normalisedMultiple,
+} from '../../src/solve/fold-images.js';
 
 /**
  * The plain-number forms of the image algebra, on values worked by hand from

@@ -41,7 +41,9 @@ describe('IF shift: one list of interferers at every shift', () => {
 
   it('with the swept listing, every shift lists the same labels in the same order, and blocking products of either end are among them', () => {
     const swept = sweptScenario(scenario, scenario.ifShift!);
-    const lists = [-6, -3, 0, 2.5, 6].map((d) => contextFromScenario(shiftedScenario(scenario, hz(d * MHz)), swept).interferers.map((i) => i.label));
+    const lists = [-6, -3, 0, 2.5, 6].map((d) =>
+      contextFromScenario(shiftedScenario(scenario, hz(d * MHz)), swept).interferers.map((i) => i.label),
+    );
     for (const list of lists) expect(list).toEqual(lists[0]);
     for (const end of ends) for (const label of end) expect(lists[0]).toContain(label);
   });

@@ -114,7 +114,12 @@ describe('seedShifts and the plane LP', () => {
 
   it('solves a plane LP whose optimum is negative (javascript-lp-solver 1.0.3 calls the plain model infeasible)', () => {
     // max t: t ≤ −1 + 0.5·x, x in [0, 1]: t* = −0.5 at x = 1 (worked by hand); y is free and idle.
-    const answer = maximisePlaneSlack([{ rate: 0.5, shift: 0, offset: -1 }], [], { rate: { low: 0, high: 1 }, shift: { low: 0, high: 1 } }, hz(1));
+    const answer = maximisePlaneSlack(
+      [{ rate: 0.5, shift: 0, offset: -1 }],
+      [],
+      { rate: { low: 0, high: 1 }, shift: { low: 0, high: 1 } },
+      hz(1),
+    );
     expect(answer).not.toBeNull();
     expect(answer!.worstSlack).toBeCloseTo(-0.5, 7);
     expect(answer!.rate).toBeCloseTo(1, 7);
@@ -123,7 +128,15 @@ describe('seedShifts and the plane LP', () => {
   it('solves the two-variable example of its doc comment: r − δ = 28.75, t* = 3.75 (worked by hand)', () => {
     // t ≤ r − δ − 25, t ≤ 32.5 − r + δ (MHz): equal at r − δ = 28.75, t = 3.75; the box leaves a line of optima.
     const box = { rate: { low: 20e6, high: 40e6 }, shift: { low: -2e6, high: 2e6 } };
-    const answer = maximisePlaneSlack([{ rate: 1, shift: -1, offset: -25e6 }, { rate: -1, shift: 1, offset: 32.5e6 }], [], box, hz(4e6))!;
+    const answer = maximisePlaneSlack(
+      [
+        { rate: 1, shift: -1, offset: -25e6 },
+        { rate: -1, shift: 1, offset: 32.5e6 },
+      ],
+      [],
+      box,
+      hz(4e6),
+    )!;
     expect(Math.abs(answer.worstSlack - 3.75e6)).toBeLessThan(1);
     expect(Math.abs(answer.rate - answer.shift - 28.75e6)).toBeLessThan(1);
   });
@@ -169,7 +182,12 @@ describe('levels across the shift range (the filter stays put)', () => {
     const search = bestShiftAndRate(edge);
     const best = search.best!;
     // Judged again over the same interferers (a sampled rate is judged on the blocking ones only).
-    const again = evaluateRate(contextFromScenario(movedBy(edge, best.shift)), best.rate, edge.requirements.tolerancePpm, best.evaluation.checkScope);
+    const again = evaluateRate(
+      contextFromScenario(movedBy(edge, best.shift)),
+      best.rate,
+      edge.requirements.tolerancePpm,
+      best.evaluation.checkScope,
+    );
     expect(again).toEqual(best.evaluation);
   });
 });
@@ -206,7 +224,13 @@ interface BruteInterferer {
   readonly requiredMargin: number;
 }
 
-function bruteSlack(band: { low: number; high: number }, guard: { low: number; high: number }, blocking: readonly BruteInterferer[], rate: number, epsilon: number): number {
+function bruteSlack(
+  band: { low: number; high: number },
+  guard: { low: number; high: number },
+  blocking: readonly BruteInterferer[],
+  rate: number,
+  epsilon: number,
+): number {
   const guardedLow = Math.max(0, band.low - guard.low);
   const guardedHigh = band.high + guard.high;
   const zone = Math.max(1, Math.ceil((band.low + band.high) / rate));
@@ -280,12 +304,24 @@ const planArbitrary: fc.Arbitrary<Scenario> = fc
       converter: converterFixture({
         minRate: hz(minRate),
         maxRate: hz(minRate * (1.05 + 1.5 * p.span)),
-        harmonics: p.harmonics ? new Map([[2, db(-70)], [3, db(-75)]]) : new Map(),
+        harmonics: p.harmonics
+          ? new Map([
+              [2, db(-70)],
+              [3, db(-75)],
+            ])
+          : new Map(),
         rateSpurs: { dc: p.dc ? db(-80) : null, halfRate: null, quarterRate: null },
         interleave: p.interleave ? { ways: 2, offsetSpur: db(-85), imageLevel: db(-70) } : null,
       }),
       harmonicOrder: 3,
-      boardSpurs: p.tones.map((u, i) => ({ label: `T${i}`, low: hz(u * 4 * wanted.high), high: hz(u * 4 * wanted.high), level: db(-50), coupling: 'after-filter' as const, harmonics: 1 })),
+      boardSpurs: p.tones.map((u, i) => ({
+        label: `T${i}`,
+        low: hz(u * 4 * wanted.high),
+        high: hz(u * 4 * wanted.high),
+        level: db(-50),
+        coupling: 'after-filter' as const,
+        harmonics: 1,
+      })),
       neighbours,
       filter: null,
       requirements: { margin: hz(p.margin), rejection: db(40), tolerancePpm: ppm(p.tolerance) },
@@ -309,7 +345,10 @@ describe('bestShiftAndRate against a brute-force (δ, r) grid (random plans, fas
         const rateHigh = scenario.converter.maxRate / (1 + epsilon);
         const search = bestShiftAndRate(scenario); // throws on a failed re-check
         // The grid: every shift point's interferers derived afresh, every rate judged by the brute force.
-        const shifts = range.low === range.high ? [range.low] : Array.from({ length: SHIFT_POINTS }, (_, i) => range.low + ((range.high - range.low) * i) / (SHIFT_POINTS - 1));
+        const shifts =
+          range.low === range.high
+            ? [range.low]
+            : Array.from({ length: SHIFT_POINTS }, (_, i) => range.low + ((range.high - range.low) * i) / (SHIFT_POINTS - 1));
         const rates = Array.from({ length: RATE_POINTS }, (_, i) => rateLow + ((rateHigh - rateLow) * i) / (RATE_POINTS - 1));
         let gridBest = -Infinity;
         const judged = (shift: number) => {
@@ -329,7 +368,18 @@ describe('bestShiftAndRate against a brute-force (δ, r) grid (random plans, fas
         const bandTop = scenario.wanted.high + reachShift;
         const slopeShift = Math.max(1, ...base.map((i) => 1 + Math.abs(i.shiftMultiple)));
         const topZone = Math.ceil((2 * (bandTop + scenario.guard.high)) / (rateLow * (1 - epsilon)));
-        const slopeRate = (1 + epsilon) * Math.max(topZone / 2, ...base.map((i) => (Math.max(Math.abs(i.low), Math.abs(i.high)) + Math.abs(i.shiftMultiple) * reachShift + bandTop) / (rateLow * (1 - epsilon)) + 2 * Math.abs(i.rateMultiple) + 1));
+        const slopeRate =
+          (1 + epsilon) *
+          Math.max(
+            topZone / 2,
+            ...base.map(
+              (i) =>
+                (Math.max(Math.abs(i.low), Math.abs(i.high)) + Math.abs(i.shiftMultiple) * reachShift + bandTop) /
+                  (rateLow * (1 - epsilon)) +
+                2 * Math.abs(i.rateMultiple) +
+                1,
+            ),
+          );
         const width = scenario.wanted.high - scenario.wanted.low;
         // The brute force reads the drift at 5 points: it may miss the least by slopeRate·(spacing ε·r/2)/2.
         const driftError = slopeRate * ((epsilon * rateHigh) / 4);
@@ -346,15 +396,24 @@ describe('bestShiftAndRate against a brute-force (δ, r) grid (random plans, fas
         if (best) {
           if (best.origin === 'piece') counts.fromPieces++;
           // The exact re-check, done again here on the scenario moved by δ*.
-          const again = evaluateRate(contextFromScenario(movedBy(scenario, best.shift)), best.rate as Hz, scenario.requirements.tolerancePpm, best.evaluation.checkScope);
+          const again = evaluateRate(
+            contextFromScenario(movedBy(scenario, best.shift)),
+            best.rate as Hz,
+            scenario.requirements.tolerancePpm,
+            best.evaluation.checkScope,
+          );
           expect(again).toEqual(best.evaluation);
           // The brute force at the answer reads the least over a subset of the drift: never below the exact value.
           const { moved, blocking } = judged(best.shift);
           if (best.evaluation.worstSlack > 0) {
-            expect(bruteSlack(moved.wanted, moved.guard, blocking, best.rate, epsilon)).toBeGreaterThanOrEqual(best.evaluation.worstSlack - 1e-6 * width);
+            expect(bruteSlack(moved.wanted, moved.guard, blocking, best.rate, epsilon)).toBeGreaterThanOrEqual(
+              best.evaluation.worstSlack - 1e-6 * width,
+            );
           }
           // Upper side: within half a grid step of the answer a grid point keeps all but the slopes times the step.
-          const step = (slopeRate * (rateHigh - rateLow)) / (RATE_POINTS - 1) / 2 + (shifts.length > 1 ? (slopeShift * (range.high - range.low)) / (SHIFT_POINTS - 1) / 2 : 0);
+          const step =
+            (slopeRate * (rateHigh - rateLow)) / (RATE_POINTS - 1) / 2 +
+            (shifts.length > 1 ? (slopeShift * (range.high - range.low)) / (SHIFT_POINTS - 1) / 2 : 0);
           if (best.evaluation.worstSlack > step) {
             counts.upperChecked++;
             expect(gridBest).toBeGreaterThanOrEqual(best.evaluation.worstSlack - step - 1e-6 * width);
@@ -363,7 +422,9 @@ describe('bestShiftAndRate against a brute-force (δ, r) grid (random plans, fas
       }),
       { numRuns: Number(process.env.IFS_RUNS ?? 40), seed: Number(process.env.IFS_SEED ?? 2718) },
     );
-    console.info(`if shift vs grid: ${counts.plans} plans; lower side checked on ${counts.lowerChecked}, upper on ${counts.upperChecked}; answer from a piece LP on ${counts.fromPieces}`);
+    console.info(
+      `if shift vs grid: ${counts.plans} plans; lower side checked on ${counts.lowerChecked}, upper on ${counts.upperChecked}; answer from a piece LP on ${counts.fromPieces}`,
+    );
     expect(counts.lowerChecked).toBeGreaterThan(counts.plans / 4); // the property must not be vacuous
   }, 60_000);
 });

@@ -21,10 +21,15 @@ const RATES = 800;
 /** Two to four bands with edges on a 10 Hz grid, 1–120 kHz, 0.5–15 kHz wide (they may overlap), and a spacing of 0–2 kHz. */
 const bandSet = fc.record({
   bands: fc.array(
-    fc.record({ low: fc.integer({ min: 100, max: 12_000 }), width: fc.integer({ min: 50, max: 1_500 }) }).map(({ low, width }) => ({ low: low * 10, high: (low + width) * 10 })),
+    fc
+      .record({ low: fc.integer({ min: 100, max: 12_000 }), width: fc.integer({ min: 50, max: 1_500 }) })
+      .map(({ low, width }) => ({ low: low * 10, high: (low + width) * 10 })),
     { minLength: 2, maxLength: 4 },
   ),
-  spacing: fc.oneof(fc.constant(0), fc.integer({ min: 1, max: 200 }).map((s) => s * 10)),
+  spacing: fc.oneof(
+    fc.constant(0),
+    fc.integer({ min: 1, max: 200 }).map((s) => s * 10),
+  ),
 });
 
 const tally = { compared: 0, valid: 0, skipped: 0, points: 0 };
@@ -71,7 +76,9 @@ describe('jointFeasibleSet against a point-by-point fold of every band (random b
       }),
       { numRuns: 120, seed: 20261202 },
     );
-    console.info(`joint agreement: ${tally.compared} rates compared (${tally.valid} valid), ${tally.skipped} skipped near an edge, ${tally.points} single-rate answers`);
+    console.info(
+      `joint agreement: ${tally.compared} rates compared (${tally.valid} valid), ${tally.skipped} skipped near an edge, ${tally.points} single-rate answers`,
+    );
     // Both verdicts must be seen, and single-rate answers met, or the agreement proves little.
     expect(tally.valid).toBeGreaterThan(0.05 * tally.compared);
     expect(tally.compared - tally.valid).toBeGreaterThan(0.05 * tally.compared);

@@ -29,7 +29,14 @@ describe('the doc-comment examples', () => {
     // r − [10, 14] overlaps 3–5 when r − 14 < 5 and r − 10 > 3 (Akos et al. 1999 condition).
     expect(closeImageRates({ rateMultiple: 0, low: 3, high: 5 }, hz(0), band(10, 14), hz(14), hz(20))).toEqual([{ low: 13, high: 19 }]);
     const none = guardBands(hz(0), hz(0));
-    const report = jointWindowsReport([{ band: band(10e3, 14e3), guard: none }, { band: band(15e3, 16e3), guard: none }], hz(0), NO_LIMITS);
+    const report = jointWindowsReport(
+      [
+        { band: band(10e3, 14e3), guard: none },
+        { band: band(15e3, 16e3), guard: none },
+      ],
+      hz(0),
+      NO_LIMITS,
+    );
     expect([report.minimumRate, report.minimumIsSingleRate]).toEqual([10e3, true]);
     expect(bandFromPair('60M:80M', '--band')).toEqual({ low: 60e6, high: 80e6 });
   });
@@ -38,14 +45,29 @@ describe('the doc-comment examples', () => {
 describe('subtractOpenKeepingPoints', () => {
   it('keeps the point between two open intervals that meet, and an edge an open interval stops at', () => {
     // The doc comment's example; the pieces follow from the set algebra (closed minus open).
-    expect(subtractOpenKeepingPoints({ low: 0, high: 10 }, [{ low: 2, high: 4 }, { low: 4, high: 6 }])).toEqual([
+    expect(
+      subtractOpenKeepingPoints({ low: 0, high: 10 }, [
+        { low: 2, high: 4 },
+        { low: 4, high: 6 },
+      ]),
+    ).toEqual([
       { low: 0, high: 2 },
       { low: 4, high: 4 },
       { low: 6, high: 10 },
     ]);
-    expect(subtractOpenKeepingPoints({ low: 0, high: 10 }, [{ low: -1, high: 0 }, { low: 10, high: 11 }])).toEqual([{ low: 0, high: 10 }]);
+    expect(
+      subtractOpenKeepingPoints({ low: 0, high: 10 }, [
+        { low: -1, high: 0 },
+        { low: 10, high: 11 },
+      ]),
+    ).toEqual([{ low: 0, high: 10 }]);
     expect(subtractOpenKeepingPoints({ low: 0, high: 10 }, [{ low: -1, high: 10 }])).toEqual([{ low: 10, high: 10 }]);
-    expect(subtractOpenKeepingPoints({ low: 5, high: 5 }, [{ low: 1, high: 5 }, { low: 5, high: 9 }])).toEqual([{ low: 5, high: 5 }]);
+    expect(
+      subtractOpenKeepingPoints({ low: 5, high: 5 }, [
+        { low: 1, high: 5 },
+        { low: 5, high: 9 },
+      ]),
+    ).toEqual([{ low: 5, high: 5 }]);
     expect(subtractOpenKeepingPoints({ low: 5, high: 5 }, [{ low: 4, high: 6 }])).toEqual([]);
   });
 
@@ -54,19 +76,34 @@ describe('subtractOpenKeepingPoints', () => {
     const q = 0.3;
     expect(p).not.toBe(q);
     // Holes overlapping by rounding noise still leave the exact point between them.
-    expect(subtractOpenKeepingPoints({ low: 0, high: 1 }, [{ low: 0.1, high: p }, { low: q, high: 0.5 }])).toEqual([
+    expect(
+      subtractOpenKeepingPoints({ low: 0, high: 1 }, [
+        { low: 0.1, high: p },
+        { low: q, high: 0.5 },
+      ]),
+    ).toEqual([
       { low: 0, high: 0.1 },
       { low: p, high: p },
       { low: 0.5, high: 1 },
     ]);
     // Holes apart by rounding noise leave a point, not a sliver.
-    expect(subtractOpenKeepingPoints({ low: 0, high: 1 }, [{ low: 0.1, high: q }, { low: p, high: 0.5 }])).toEqual([
+    expect(
+      subtractOpenKeepingPoints({ low: 0, high: 1 }, [
+        { low: 0.1, high: q },
+        { low: p, high: 0.5 },
+      ]),
+    ).toEqual([
       { low: 0, high: 0.1 },
       { low: q, high: q },
       { low: 0.5, high: 1 },
     ]);
     // A point window whose edge a hole reaches by noise only is kept.
-    expect(subtractOpenKeepingPoints({ low: p, high: p }, [{ low: 1, high: p * (1 - 1e-15) }, { low: p * (1 + 1e-15), high: 5 }])).toEqual([{ low: p, high: p }]);
+    expect(
+      subtractOpenKeepingPoints({ low: p, high: p }, [
+        { low: 1, high: p * (1 - 1e-15) },
+        { low: p * (1 + 1e-15), high: 5 },
+      ]),
+    ).toEqual([{ low: p, high: p }]);
   });
 });
 

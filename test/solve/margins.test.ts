@@ -3,7 +3,16 @@ import fc from 'fast-check';
 import { hz, ppm } from '../../src/units/quantities.js';
 import { evaluateRate } from '../../src/solve/evaluate-rate.js';
 import { foldExtent } from '../../src/math/fold-extent.js';
-import { bruteAlias, bruteClearingShift, bruteLeastDistance, extentAt, foldedPieces, overlapWidth, unionOf, wantedAlias } from '../helpers/brute-force-plan.js';
+import {
+  bruteAlias,
+  bruteClearingShift,
+  bruteLeastDistance,
+  extentAt,
+  foldedPieces,
+  overlapWidth,
+  unionOf,
+  wantedAlias,
+} from '../helpers/brute-force-plan.js';
 import { planArbitrary, sweepRates } from './random-plan.js';
 
 /**
@@ -72,11 +81,17 @@ describe('evaluateRate margins against the brute force (random plans, tolerance 
               expect(Math.abs(-check.margin - depth), `${check.label} at ${rate} Hz: clearing shift`).toBeLessThanOrEqual(noise);
               if (low === high) {
                 const a = bruteAlias(low, rate);
-                expect(Math.abs(-check.margin - Math.min(a - alias.low, alias.high - a)), `${check.label} at ${rate} Hz: tone inside`).toBeLessThanOrEqual(noise);
+                expect(
+                  Math.abs(-check.margin - Math.min(a - alias.low, alias.high - a)),
+                  `${check.label} at ${rate} Hz: tone inside`,
+                ).toBeLessThanOrEqual(noise);
                 counts.toneInside++;
               }
               // Some part of the extent does land inside: the folded pieces overlap the alias.
-              expect(pieces.some((p) => overlapWidth(p, alias) > 0 || (p.low > alias.low && p.high < alias.high)), `${check.label} at ${rate} Hz: lands inside`).toBe(true);
+              expect(
+                pieces.some((p) => overlapWidth(p, alias) > 0 || (p.low > alias.low && p.high < alias.high)),
+                `${check.label} at ${rate} Hz: lands inside`,
+              ).toBe(true);
               if (pieces.length > 1) counts.straddling++;
             }
           });
@@ -84,7 +99,9 @@ describe('evaluateRate margins against the brute force (random plans, tolerance 
       }),
       { numRuns: 120, seed: 31, plugins: [fc.unbiased()] },
     );
-    console.info(`margins: ${counts.apart} apart, ${counts.overlapping} overlapping (${counts.straddling} of them straddling a fold edge, ${counts.toneInside} tones inside)`);
+    console.info(
+      `margins: ${counts.apart} apart, ${counts.overlapping} overlapping (${counts.straddling} of them straddling a fold edge, ${counts.toneInside} tones inside)`,
+    );
     expect(counts.apart).toBeGreaterThan(1000);
     expect(counts.overlapping).toBeGreaterThan(1000);
     expect(counts.straddling).toBeGreaterThan(100);

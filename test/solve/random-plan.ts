@@ -32,7 +32,15 @@ function interfererArbitrary(shape: Shape, index: number): fc.Arbitrary<Interfer
   const { low, high } = shape.band;
   const margin = logBetween(0.02 * MHZ, 1 * MHZ);
   const blocking = fc.integer({ min: 0, max: 4 }).map((n) => n > 0); // four in five block
-  const make = (kind: InterfererKind, order: number | null, rateMultiple: number, lo: number, hi: number, requiredMargin: number, isBlocking: boolean): Interferer => ({
+  const make = (
+    kind: InterfererKind,
+    order: number | null,
+    rateMultiple: number,
+    lo: number,
+    hi: number,
+    requiredMargin: number,
+    isBlocking: boolean,
+  ): Interferer => ({
     label: `I${index} ${kind}`,
     kind,
     order,
@@ -46,17 +54,19 @@ function interfererArbitrary(shape: Shape, index: number): fc.Arbitrary<Interfer
     blocking: isBlocking,
   });
   const tone = fc.tuple(unit, margin, blocking).map(([u, m, b]) => make('spur', null, 0, u * 4 * high, u * 4 * high, m, b));
-  const fixedBand = fc.tuple(unit, unit, margin, blocking).map(([u, w, m, b]) => make('neighbour', null, 0, u * 3 * high, u * 3 * high + w * 5 * MHZ, m, b));
+  const fixedBand = fc
+    .tuple(unit, unit, margin, blocking)
+    .map(([u, w, m, b]) => make('neighbour', null, 0, u * 3 * high, u * 3 * high + w * 5 * MHZ, m, b));
   const rateSpur = fc
     .tuple(fc.integer({ min: 2, max: 8 }), unit, margin, blocking)
     .map(([M, u, m, b]) => make('converter', null, Math.round(u * M) / M, 0, 0, m, b));
-  const rateImage = fc
-    .tuple(fc.integer({ min: 2, max: 8 }), unit, fc.boolean(), margin, blocking)
-    .map(([M, u, below, m, b]) => {
-      const k = 1 + Math.round(u * (M - 2)); // 1..M−1: k = 0 or M would be the band's own image
-      return below ? make('converter', null, k / M, -high, -low, m, b) : make('converter', null, k / M, low, high, m, b);
-    });
-  const harmonic = fc.tuple(fc.integer({ min: 2, max: 5 }), margin, blocking).map(([k, m, b]) => make('harmonic', k, 0, k * low, k * high, m, b));
+  const rateImage = fc.tuple(fc.integer({ min: 2, max: 8 }), unit, fc.boolean(), margin, blocking).map(([M, u, below, m, b]) => {
+    const k = 1 + Math.round(u * (M - 2)); // 1..M−1: k = 0 or M would be the band's own image
+    return below ? make('converter', null, k / M, -high, -low, m, b) : make('converter', null, k / M, low, high, m, b);
+  });
+  const harmonic = fc
+    .tuple(fc.integer({ min: 2, max: 5 }), margin, blocking)
+    .map(([k, m, b]) => make('harmonic', k, 0, k * low, k * high, m, b));
   return fc.oneof(tone, fixedBand, rateSpur, rateImage, harmonic);
 }
 
@@ -83,19 +93,17 @@ export function planArbitrary(tolerancePpm = 0): fc.Arbitrary<PlanContext> {
       const minRate = lowest + p.start * (2.3 * guardedHigh - lowest);
       const maxRate = minRate * (1.05 + 2 * p.span);
       const interferers = Array.from({ length: p.count }, (_, i) => interfererArbitrary({ band }, i));
-      return fc.tuple(...interferers).map(
-        (list): PlanContext => ({
-          band: { low: hz(band.low), high: hz(band.high) },
-          guard: guardBands(hz(p.guardLow), hz(p.guardHigh)),
-          limits: { minRate: hz(minRate), maxRate: hz(maxRate) },
-          interferers: list,
-          levelThreshold: db(-90),
-          clocks: [],
-          clocking: PLAIN_CLOCKING,
-          goal: { kind: 'widest-margin' },
-          tolerancePpm: ppm(tolerancePpm),
-        }),
-      );
+      return fc.tuple(...interferers).map((list): PlanContext => ({
+        band: { low: hz(band.low), high: hz(band.high) },
+        guard: guardBands(hz(p.guardLow), hz(p.guardHigh)),
+        limits: { minRate: hz(minRate), maxRate: hz(maxRate) },
+        interferers: list,
+        levelThreshold: db(-90),
+        clocks: [],
+        clocking: PLAIN_CLOCKING,
+        goal: { kind: 'widest-margin' },
+        tolerancePpm: ppm(tolerancePpm),
+      }));
     });
 }
 

@@ -31,9 +31,14 @@ describe('folding never moves two frequencies further apart (fast-check)', () =>
 
   it('and the definition of aliasing alone says the same (|f − r·round(f/r)|)', () => {
     fc.assert(
-      fc.property(fc.double({ min: 0, max: 1e9, noNaN: true }), fc.double({ min: -1e6, max: 1e6, noNaN: true }), fc.double({ min: 1e3, max: 5e8, noNaN: true }), (a, step, rate) => {
-        expect(Math.abs(bruteAlias(a + step, rate) - bruteAlias(a, rate))).toBeLessThanOrEqual(Math.abs(step) + 1e-9 * (a + rate));
-      }),
+      fc.property(
+        fc.double({ min: 0, max: 1e9, noNaN: true }),
+        fc.double({ min: -1e6, max: 1e6, noNaN: true }),
+        fc.double({ min: 1e3, max: 5e8, noNaN: true }),
+        (a, step, rate) => {
+          expect(Math.abs(bruteAlias(a + step, rate) - bruteAlias(a, rate))).toBeLessThanOrEqual(Math.abs(step) + 1e-9 * (a + rate));
+        },
+      ),
       { numRuns: 20_000, seed: 1730 },
     );
   });
@@ -71,7 +76,9 @@ describe('conflicts no rate can fix, found exactly before solving', () => {
     const [near] = unfixableConflicts(context([neighbour(70.2, 75, 0.5)]));
     expect(near!.distance).toBeCloseTo(0.2 * MHZ, 3);
     expect(near!.excess).toBe(60);
-    expect(near!.sentence).toMatch(/^N \(neighbour\) lies 200 kHz from the wanted band where 500 kHz is required; .*a different channel plan/);
+    expect(near!.sentence).toMatch(
+      /^N \(neighbour\) lies 200 kHz from the wanted band where 500 kHz is required; .*a different channel plan/,
+    );
     expect(unfixableConflicts(context([neighbour(70.5, 75, 0.5)]))).toEqual([]);
   });
 
@@ -93,18 +100,24 @@ describe('conflicts no rate can fix, found exactly before solving', () => {
   it('every conflict is too close at every rate, by the brute force (definition of aliasing, random sources and rates)', () => {
     let conflicts = 0;
     fc.assert(
-      fc.property(uniform(0, 150), uniform(0, 5), uniform(0.01, 20), fc.array(uniform(20, 300), { minLength: 20, maxLength: 20 }), (low, width, margin, rates) => {
-        const source = neighbour(low, low + width, margin);
-        const found = unfixableConflicts(context([source]));
-        if (found.length === 0) return;
-        conflicts++;
-        for (const r of rates) {
-          const rate = r * MHZ;
-          const alias = wantedAlias({ band, guard: { low: 0, high: 0 }, interferers: [] }, rate);
-          if (!alias) continue;
-          expect(bruteLeastDistance(source, alias, rate, Math.max(width * MHZ, 1) / 200)).toBeLessThan(source.requiredMargin);
-        }
-      }),
+      fc.property(
+        uniform(0, 150),
+        uniform(0, 5),
+        uniform(0.01, 20),
+        fc.array(uniform(20, 300), { minLength: 20, maxLength: 20 }),
+        (low, width, margin, rates) => {
+          const source = neighbour(low, low + width, margin);
+          const found = unfixableConflicts(context([source]));
+          if (found.length === 0) return;
+          conflicts++;
+          for (const r of rates) {
+            const rate = r * MHZ;
+            const alias = wantedAlias({ band, guard: { low: 0, high: 0 }, interferers: [] }, rate);
+            if (!alias) continue;
+            expect(bruteLeastDistance(source, alias, rate, Math.max(width * MHZ, 1) / 200)).toBeLessThan(source.requiredMargin);
+          }
+        },
+      ),
       { numRuns: 3000, seed: 77 },
     );
     expect(conflicts).toBeGreaterThan(100);

@@ -33,7 +33,10 @@ function slopeBound(context: PlanContext, zone: number, rangeLow: number, epsilo
   let bound = zone / 2;
   for (const i of context.interferers) {
     if (!i.blocking) continue;
-    bound = Math.max(bound, (Math.max(Math.abs(i.low), Math.abs(i.high)) + context.band.high + i.requiredMargin) / (rangeLow * (1 - epsilon)) + 1);
+    bound = Math.max(
+      bound,
+      (Math.max(Math.abs(i.low), Math.abs(i.high)) + context.band.high + i.requiredMargin) / (rangeLow * (1 - epsilon)) + 1,
+    );
   }
   return bound * (1 + epsilon);
 }
@@ -61,8 +64,12 @@ describe('widest-margin LP against a dense sweep (random plans)', () => {
             const r1 = Math.min(Math.max(r, low), high);
             best = Math.max(best, evaluateRate(context, hz(r1), ppm(tolerance)).worstSlack);
           }
-          const allowance = 1e-7 * slopeBound(context, interval.zone, low, epsilon) * (high - low) + 1e-7 * (context.band.high - context.band.low);
-          expect(chosen!.worstSlack, `LP at ${chosen!.rate} Hz vs sweep best ${best} Hz (allowance ${allowance} Hz)`).toBeGreaterThanOrEqual(best - allowance);
+          const allowance =
+            1e-7 * slopeBound(context, interval.zone, low, epsilon) * (high - low) + 1e-7 * (context.band.high - context.band.low);
+          expect(
+            chosen!.worstSlack,
+            `LP at ${chosen!.rate} Hz vs sweep best ${best} Hz (allowance ${allowance} Hz)`,
+          ).toBeGreaterThanOrEqual(best - allowance);
           counts.intervals++;
           if (chosen!.worstSlack >= best) counts.lpBetter++;
           else {

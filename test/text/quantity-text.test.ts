@@ -36,7 +36,7 @@ describe('quantityText: one way of writing each quantity', () => {
     expect(terminal.frequency(0)).toBe('0 Hz');
   });
 
-  it('extents: one frequency for a tone, low–high with the unit once, 0 takes the other end\'s unit', () => {
+  it("extents: one frequency for a tone, low–high with the unit once, 0 takes the other end's unit", () => {
     expect(terminal.extent(19.2e6, 19.2e6)).toBe('19.2 MHz');
     expect(terminal.extent(105e6, 125e6)).toBe('105–125 MHz');
     expect(terminal.extent(0, 20e6)).toBe('0–20 MHz');
@@ -87,7 +87,7 @@ describe('quantityText: one way of writing each quantity', () => {
 });
 
 describe('wrapProse', () => {
-  it('breaks at spaces within the width and keeps a list item\'s hanging indent', () => {
+  it("breaks at spaces within the width and keeps a list item's hanging indent", () => {
     expect(wrapProse('Best: VCXO-C at 184.32 MHz', 12)).toBe('Best: VCXO-C\nat 184.32\nMHz');
     expect(wrapProse('- one two three four', 10)).toBe('- one two\n  three\n  four');
   });
@@ -97,7 +97,12 @@ describe('wrapProse', () => {
       fc.property(fc.array(fc.stringMatching(/^[a-z]{1,12}$/), { maxLength: 40 }), fc.integer({ min: 12, max: 100 }), (words, width) => {
         const lines = wrapProse(words.join(' '), width).split('\n');
         for (const line of lines) expect(line.length).toBeLessThanOrEqual(width);
-        expect(lines.join(' ').split(/ +/).filter((w) => w !== '')).toEqual(words);
+        expect(
+          lines
+            .join(' ')
+            .split(/ +/)
+            .filter((w) => w !== ''),
+        ).toEqual(words);
       }),
       { numRuns: 300 },
     );

@@ -49,7 +49,10 @@ describe('a rate inside a listed window maps the band onto one contiguous image'
         const span = Math.abs(aliases[SAMPLES]! - aliases[0]!);
         expect(Math.abs(span - (band.high - band.low))).toBeLessThanOrEqual(1e-9 * Math.max(rate, band.high));
         // Interior points sit in the window's zone (edges may sit on a boundary, which belongs to the lower zone).
-        const strayZones = folds.slice(1, -1).filter((x) => x.zone !== w.zone).map((x) => x.zone);
+        const strayZones = folds
+          .slice(1, -1)
+          .filter((x) => x.zone !== w.zone)
+          .map((x) => x.zone);
         expect(strayZones).toEqual([]);
       }),
       { numRuns: 2000 },

@@ -25,26 +25,32 @@ function paperZonesMeeting(fL: number, fH: number, minRate: number, maxRate: num
 }
 
 describe('zoneSpan: the zones a rate range can meet', () => {
-  it('10–14 kHz with no limits: zones 1 to 3 (the paper\'s worked case)', () => {
+  it("10–14 kHz with no limits: zones 1 to 3 (the paper's worked case)", () => {
     expect(zoneSpan({ low: hz(10e3), high: hz(14e3) }, hz(0), hz(Infinity))).toEqual({ first: 1, last: 3 });
     expect(windowCount({ low: hz(10e3), high: hz(14e3) }, hz(0), hz(Infinity))).toBe(3);
   });
 
   it('covers every zone whose window meets the limits, and counts at most four more (fast-check)', () => {
     fc.assert(
-      fc.property(fc.integer({ min: 1, max: 100_000 }), fc.integer({ min: 1, max: 5000 }), fc.integer({ min: 1, max: 400 }), fc.integer({ min: 1, max: 400 }), (low, width, a, b) => {
-        const fL = low * 1e3;
-        const fH = fL + width * 100;
-        const [minRate, maxRate] = [Math.min(a, b) * 1e5, Math.max(a, b) * 1e5];
-        const expected = paperZonesMeeting(fL, fH, minRate, maxRate);
-        const span = zoneSpan({ low: hz(fL), high: hz(fH) }, hz(minRate), hz(maxRate));
-        for (const zone of expected) expect(zone >= span.first && zone <= span.last).toBe(true);
-        expect(windowCount({ low: hz(fL), high: hz(fH) }, hz(minRate), hz(maxRate))).toBeLessThanOrEqual(expected.length + 4);
-        const found = rateWindows({ low: hz(fL), high: hz(fH) }, { minRate: hz(minRate), maxRate: hz(maxRate) })
-          .filter((w) => w.maxRate > w.minRate)
-          .map((w) => w.zone);
-        expect(found).toEqual(expected);
-      }),
+      fc.property(
+        fc.integer({ min: 1, max: 100_000 }),
+        fc.integer({ min: 1, max: 5000 }),
+        fc.integer({ min: 1, max: 400 }),
+        fc.integer({ min: 1, max: 400 }),
+        (low, width, a, b) => {
+          const fL = low * 1e3;
+          const fH = fL + width * 100;
+          const [minRate, maxRate] = [Math.min(a, b) * 1e5, Math.max(a, b) * 1e5];
+          const expected = paperZonesMeeting(fL, fH, minRate, maxRate);
+          const span = zoneSpan({ low: hz(fL), high: hz(fH) }, hz(minRate), hz(maxRate));
+          for (const zone of expected) expect(zone >= span.first && zone <= span.last).toBe(true);
+          expect(windowCount({ low: hz(fL), high: hz(fH) }, hz(minRate), hz(maxRate))).toBeLessThanOrEqual(expected.length + 4);
+          const found = rateWindows({ low: hz(fL), high: hz(fH) }, { minRate: hz(minRate), maxRate: hz(maxRate) })
+            .filter((w) => w.maxRate > w.minRate)
+            .map((w) => w.zone);
+          expect(found).toEqual(expected);
+        },
+      ),
       { numRuns: 2000, seed: 1414 },
     );
   });

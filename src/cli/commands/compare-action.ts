@@ -21,7 +21,14 @@ export function runCompare(files: readonly string[], options: CompareOptions, io
   const force = options.force === true;
   const { plans, comparison: report, inputs } = planVariants(files, io, { paths: outputs, force });
   // Standard output takes the JSON in pieces; a file gets it whole (the safe write swaps in complete files).
-  const text = options.json && options.output === undefined ? null : options.json ? toJson(report) : options.csv ? compareCsv(report) : compareTable(report, width);
+  const text =
+    options.json && options.output === undefined
+      ? null
+      : options.json
+        ? toJson(report)
+        : options.csv
+          ? compareCsv(report)
+          : compareTable(report, width);
   const written: OutputFile[] = [];
   if (options.svg !== undefined) {
     const maps = plans.map((plan) => rateMapFigure(plan));

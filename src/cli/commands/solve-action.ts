@@ -69,7 +69,14 @@ function everyCheck({ context, result, shift, report }: ReturnType<typeof solveS
       `${result.candidates.length.toLocaleString('en')} candidates × ${context.interferers.length.toLocaleString('en')} interferers = ${count.toLocaleString('en')} checks`,
     );
   }
-  return planReport(report.scenario, context, { ...result, candidates: withFullChecks(context, result.candidates) }, shift, report.afterRateInputs, 'all');
+  return planReport(
+    report.scenario,
+    context,
+    { ...result, candidates: withFullChecks(context, result.candidates) },
+    shift,
+    report.afterRateInputs,
+    'all',
+  );
 }
 
 const GOALS = ['widest-margin', 'lowest-rate', 'quarter-rate', 'decimation'] as const;
@@ -85,7 +92,8 @@ function goalFromOptions(options: SolveOptions, scenario: Scenario): Goal {
     return { kind };
   }
   const fromScenario = scenario.goal.kind === 'decimation' ? scenario.goal.outputRate : undefined;
-  if (options.outputRate === undefined && fromScenario === undefined) throw new InputError('--output-rate', 'an output rate for --goal decimation', 'nothing');
+  if (options.outputRate === undefined && fromScenario === undefined)
+    throw new InputError('--output-rate', 'an output rate for --goal decimation', 'nothing');
   const outputRate = options.outputRate === undefined ? fromScenario! : parseFrequency(options.outputRate, '--output-rate');
   if (outputRate <= 0) throw new InputError('--output-rate', 'a rate above zero', options.outputRate ?? '');
   return { kind, outputRate };
@@ -93,6 +101,7 @@ function goalFromOptions(options: SolveOptions, scenario: Scenario): Goal {
 
 function ppmOption(text: string) {
   const value = Number(text);
-  if (text.trim() === '' || !Number.isFinite(value) || value < 0 || value >= 1e6) throw new InputError('--ppm', 'a drift in ppm, 0 or more and under 1 000 000', text);
+  if (text.trim() === '' || !Number.isFinite(value) || value < 0 || value >= 1e6)
+    throw new InputError('--ppm', 'a drift in ppm, 0 or more and under 1 000 000', text);
   return ppm(value);
 }

@@ -55,8 +55,14 @@ export function addSolveCommand(program: Command, io: Io, settle: (code: ExitCod
     .option('--rate <freq...>', 'judge these rates instead of searching: every check and a verdict for each')
     .option('--ppm <ppm>', "drift judged with --rate, ±ppm (default: the scenario's tolerance)")
     .option('--json', 'print JSON for programs')
-    .option('--all-checks', 'judge every candidate on every interferer and list them all (default: the first candidate in full, the others on the blocking interferers)')
-    .option('--svg <file>', 'also draw the rate map, the spectrum of the best candidate, the band-position chart and its anti-alias filter mask')
+    .option(
+      '--all-checks',
+      'judge every candidate on every interferer and list them all (default: the first candidate in full, the others on the blocking interferers)',
+    )
+    .option(
+      '--svg <file>',
+      'also draw the rate map, the spectrum of the best candidate, the band-position chart and its anti-alias filter mask',
+    )
     .option('--force', 'let --svg replace an existing file')
     .addHelpText('after', COLUMNS_HELP)
     .action(async (file: string, options: SolveOptions) => {

@@ -36,14 +36,22 @@ export function runVerify(file: string, options: VerifyOptions, io: Io): ExitCod
   const rate = positiveFrequency(options.rate, '--rate');
   const { minRate, maxRate } = scenario.converter;
   if (rate < minRate || rate > maxRate) {
-    throw new InputError('--rate', `a rate within the converter's range, ${formatFrequency(minRate)} to ${formatFrequency(maxRate)}`, options.rate);
+    throw new InputError(
+      '--rate',
+      `a rate within the converter's range, ${formatFrequency(minRate)} to ${formatFrequency(maxRate)}`,
+      options.rate,
+    );
   }
   const wantedTones = wholeNumber(options.tones, '--tones', 1, MOST_TONES);
   const samples = wholeNumber(options.samples, '--samples', 1024, 1048576);
   if ((samples & (samples - 1)) !== 0) throw new InputError('--samples', 'a power of two, e.g. 65536', options.samples);
   const bandBins = ((scenario.wanted.high - scenario.wanted.low) * samples) / rate;
   if (bandBins < BINS_PER_TONE * wantedTones) {
-    throw new InputError('--samples', `a record long enough for ${wantedTones} tone(s) in the wanted band (${BINS_PER_TONE} bins each; the band spans ${bandBins.toFixed(1)})`, options.samples);
+    throw new InputError(
+      '--samples',
+      `a record long enough for ${wantedTones} tone(s) in the wanted band (${BINS_PER_TONE} bins each; the band spans ${bandBins.toFixed(1)})`,
+      options.samples,
+    );
   }
   if (options.svg !== undefined) checkOutputPaths([options.svg], { force: options.force === true, inputs });
   const { result, levels } = verifyCaptureWithSpectrum(scenario, { rate, samples, wantedTones });

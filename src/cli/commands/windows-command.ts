@@ -39,7 +39,7 @@ export function addWindowsCommand(program: Command, io: Io, settle: (code: ExitC
     .option('--min-rate <freq>', 'lowest rate to consider')
     .option('--max-rate <freq>', 'highest rate to consider')
     .option('--band <low:high>', 'a band as LOW:HIGH, e.g. 1574.4M:1576.4M; give it again for each band sampled with it', collect)
-    .option('--spacing <freq>', 'with several --band: least distance kept between two bands\' aliases (default 0)')
+    .option('--spacing <freq>', "with several --band: least distance kept between two bands' aliases (default 0)")
     .option('--json', 'print JSON for programs')
     .action((options: WindowsOptions) => {
       const bands = bandsFromOptions(options);
@@ -53,7 +53,11 @@ export function addWindowsCommand(program: Command, io: Io, settle: (code: ExitC
         const count = windowCount(guarded, minRate, maxRate);
         if (count > MOST_WINDOWS) {
           const words = `a rate range holding at most ${MOST_WINDOWS} windows; raise --min-rate${options.maxRate === undefined ? ' or give --max-rate' : ' or lower --max-rate'}`;
-          throw new InputError('--min-rate', words, `${options.minRate ?? '0'}: the range holds about ${count} windows for this ${formatFrequency(guarded.high - guarded.low)} band`);
+          throw new InputError(
+            '--min-rate',
+            words,
+            `${options.minRate ?? '0'}: the range holds about ${count} windows for this ${formatFrequency(guarded.high - guarded.low)} band`,
+          );
         }
       }
       if (bands.length > 1) {

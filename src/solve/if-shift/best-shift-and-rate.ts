@@ -126,7 +126,10 @@ export function bestShiftAndRate(scenario: Scenario, options: ShiftSearchOptions
       }
     }
   }
-  const best = found.reduce<ShiftedRate | null>((champion, next) => (champion === null || better(next, champion, unit) ? next : champion), null);
+  const best = found.reduce<ShiftedRate | null>(
+    (champion, next) => (champion === null || better(next, champion, unit) ? next : champion),
+    null,
+  );
   return { range, best, atNoShift, seedShifts: shifts.map(hz), piecesSolved: solved.size };
 }
 
@@ -167,7 +170,11 @@ function solvePiece(piece: ShiftPiece, contextAt: (shift: number) => PlanContext
   if (!safe) return null;
   const rate = Math.min(Math.max(answer.rate, safe.low), safe.high);
   const evaluation = evaluateRate(context, hz(rate), context.tolerancePpm);
-  const allowance = 1e-6 * (largest(piece.bounds, 'rate') * (piece.box.rate.high - piece.box.rate.low) + largest(piece.bounds, 'shift') * (piece.box.shift.high - piece.box.shift.low) + unit);
+  const allowance =
+    1e-6 *
+    (largest(piece.bounds, 'rate') * (piece.box.rate.high - piece.box.rate.low) +
+      largest(piece.bounds, 'shift') * (piece.box.shift.high - piece.box.shift.low) +
+      unit);
   if (evaluation.worstSlack < answer.worstSlack - allowance) {
     throw new Error(
       `IF-shift LP promised ${answer.worstSlack} Hz at shift ${shift} Hz, rate ${rate} Hz (zone ${piece.zone}); ` +

@@ -51,7 +51,12 @@ export function slackAt(slack: PlaneSlack, rate: Hz, shift: Hz): Hz {
  * @returns the point and t*, or null when the held slacks leave nothing in the box
  * @example maximisePlaneSlack([{ rate: 1, shift: -1, offset: -25e6 }, { rate: -1, shift: 1, offset: 32.5e6 }], [], { rate: { low: 25e6, high: 35e6 }, shift: { low: -2e6, high: 2e6 } }, hz(4e6)).worstSlack // 3.75e6 (r − δ = 28.75 MHz)
  */
-export function maximisePlaneSlack(bounds: readonly PlaneSlack[], held: readonly PlaneSlack[], box: PlaneBox, unit: Hz): PlaneAnswer | null {
+export function maximisePlaneSlack(
+  bounds: readonly PlaneSlack[],
+  held: readonly PlaneSlack[],
+  box: PlaneBox,
+  unit: Hz,
+): PlaneAnswer | null {
   const first = solveStage(bounds, held, box, unit);
   if (!first) return null;
   const rateWidth = box.rate.high - box.rate.low;

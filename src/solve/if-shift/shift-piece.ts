@@ -73,14 +73,26 @@ export interface PieceInputs {
 export function shiftPieces(inputs: PieceInputs, zone: number, seed: { readonly shift: Hz; readonly rate: Hz }): ShiftPiece[] {
   const range = inputs.shifts;
   const dcShift = inputs.guard.low - inputs.band.low; // the shift at which the lower guard reaches DC
-  const parts = range.low < dcShift && dcShift < range.high ? [{ low: range.low, high: dcShift }, { low: dcShift, high: range.high }] : [range];
+  const parts =
+    range.low < dcShift && dcShift < range.high
+      ? [
+          { low: range.low, high: dcShift },
+          { low: dcShift, high: range.high },
+        ]
+      : [range];
   return parts.flatMap((shifts) => {
     const piece = pieceOver(inputs, zone, seed, shifts, shifts.high <= dcShift);
     return piece ? [piece] : [];
   });
 }
 
-function pieceOver(inputs: PieceInputs, zone: number, seed: { readonly shift: Hz; readonly rate: Hz }, shifts: Interval, atDc: boolean): ShiftPiece | null {
+function pieceOver(
+  inputs: PieceInputs,
+  zone: number,
+  seed: { readonly shift: Hz; readonly rate: Hz },
+  shifts: Interval,
+  atDc: boolean,
+): ShiftPiece | null {
   const { band, guard, limits, tolerancePpm } = inputs;
   const lowerGuardEdge = band.low - guard.low; // fL − gL: the guarded band's lower edge at δ = 0
   const { down, up } = driftFactors(tolerancePpm);
@@ -95,7 +107,9 @@ function pieceOver(inputs: PieceInputs, zone: number, seed: { readonly shift: Hz
 
   const held: PlaneSlack[] = [];
   for (const k of [down, up]) {
-    held.push(atDc ? { rate: (-(zone - 1) * k) / 2, shift: 0, offset: 0 } : { rate: (-(zone - 1) * k) / 2, shift: 1, offset: lowerGuardEdge });
+    held.push(
+      atDc ? { rate: (-(zone - 1) * k) / 2, shift: 0, offset: 0 } : { rate: (-(zone - 1) * k) / 2, shift: 1, offset: lowerGuardEdge },
+    );
     held.push({ rate: (zone * k) / 2, shift: -1, offset: -(band.high + guard.high) });
   }
   const bounds: PlaneSlack[] = [...held];
@@ -132,7 +146,9 @@ function pieceOver(inputs: PieceInputs, zone: number, seed: { readonly shift: Hz
         const above = origin + image.low - h >= l - (origin + image.high);
         sides.push(above ? '+' : '-');
         for (const k of [down, up]) {
-          const slack = above ? { rate: c * k, shift: e, offset: image.low - h - reach } : { rate: -c * k, shift: -e, offset: l - image.high - reach };
+          const slack = above
+            ? { rate: c * k, shift: e, offset: image.low - h - reach }
+            : { rate: -c * k, shift: -e, offset: l - image.high - reach };
           if (least(slack) <= ceiling) bounds.push(slack);
         }
       }

@@ -13,7 +13,11 @@ import type { Scenario } from '../../scenario/scenario.js';
  * @example shiftedScenario(s, hz(-2e6)).wanted // { low: 63e6, high: 73e6 }
  */
 export function shiftedScenario(scenario: Scenario, shift: Hz): Scenario {
-  const move = <T extends { readonly low: Hz; readonly high: Hz }>(band: T): T => ({ ...band, low: (band.low + shift) as Hz, high: (band.high + shift) as Hz });
+  const move = <T extends { readonly low: Hz; readonly high: Hz }>(band: T): T => ({
+    ...band,
+    low: (band.low + shift) as Hz,
+    high: (band.high + shift) as Hz,
+  });
   return { ...scenario, wanted: move(scenario.wanted), neighbours: scenario.neighbours.map(move), ifShift: null };
 }
 
@@ -31,6 +35,10 @@ export function shiftedScenario(scenario: Scenario, shift: Hz): Scenario {
  * @example sweptScenario(heronNarrow, { low: hz(-2e6), high: hz(2e6) }).neighbours[0] // { low: 141e6, high: 150e6 } (143–148 MHz swept ±2 MHz)
  */
 export function sweptScenario(scenario: Scenario, range: { readonly low: Hz; readonly high: Hz }): Scenario {
-  const widen = <T extends { readonly low: Hz; readonly high: Hz }>(band: T): T => ({ ...band, low: (band.low + range.low) as Hz, high: (band.high + range.high) as Hz });
+  const widen = <T extends { readonly low: Hz; readonly high: Hz }>(band: T): T => ({
+    ...band,
+    low: (band.low + range.low) as Hz,
+    high: (band.high + range.high) as Hz,
+  });
   return { ...scenario, neighbours: scenario.neighbours.map(widen), ifShift: null };
 }
