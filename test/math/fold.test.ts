@@ -75,7 +75,7 @@ describe('foldFrequency: agrees with the reference folding rule', () => {
 
 describe('zone boundaries', () => {
   it('belong to the lower zone; DC is zone 1', () => {
-    // Issue 2: zone n spans ((n−1)·fs/2, n·fs/2]; a boundary belongs to the lower zone.
+    // Convention: zone n spans ((n−1)·fs/2, n·fs/2]; a boundary belongs to the lower zone.
     expect(foldFrequency(hz(0), hz(100e6))).toEqual({ alias: 0, zone: 1, inverted: false });
     expect(foldFrequency(hz(50e6), hz(100e6))).toEqual({ alias: 50e6, zone: 1, inverted: false });
     expect(foldFrequency(hz(100e6), hz(100e6))).toEqual({ alias: 0, zone: 2, inverted: true });

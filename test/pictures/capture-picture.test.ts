@@ -1,6 +1,8 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { mkdirSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import { hz } from '../../src/units/quantities.js';
 import { readScenarioFile } from '../../src/cli/read-scenario.js';
 import { verifyCapture, verifyCaptureWithSpectrum, type VerifiedCapture } from '../../src/report/verify-capture.js';
@@ -14,11 +16,11 @@ import { inkStatistics, renderPng } from './render-png.js';
  * The picture of `ifzone verify` on the invented Heron demo scenario, at a
  * rate the solver passes and at one where a wanted harmonic lands in the
  * band: parsed by two registry XML readers (resvg's and @xmldom/xmldom),
- * rendered with @resvg/resvg-js; PNGs left in /tmp/ifzone-pictures. The
+ * rendered with @resvg/resvg-js; PNGs left in ifzone-pictures under the system's temporary folder. The
  * max-hold reduction is checked against a plain maximum over fast-check's
  * generated spectra.
  */
-const OUT = '/tmp/ifzone-pictures';
+const OUT = join(tmpdir(), 'ifzone-pictures');
 const base = readScenarioFile('scenarios/heron-base.json');
 let good: VerifiedCapture;
 let bad: VerifiedCapture;

@@ -1,5 +1,7 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { mkdirSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import { hz } from '../../src/units/quantities.js';
 import { InputError } from '../../src/units/input-error.js';
 import type { PlanReport } from '../../src/plan/plan-report.js';
@@ -18,10 +20,10 @@ import { inkStatistics, renderPng } from './render-png.js';
  * test/pictures/picture-plan.ts): each parses as XML with @xmldom/xmldom,
  * states its size, carries the labels it must, refers to nothing outside
  * itself, and renders with @resvg/resvg-js to a picture that is not blank.
- * The PNGs are left in /tmp/ifzone-pictures for a person to look at.
+ * The PNGs are left in ifzone-pictures under the system's temporary folder for a person to look at.
  */
 
-const OUT = '/tmp/ifzone-pictures';
+const OUT = join(tmpdir(), 'ifzone-pictures');
 let board: PlanReport;
 let high: PlanReport;
 let empty: PlanReport;

@@ -74,7 +74,7 @@ describe('parseFrequency: every notation the README lists (SI prefixes; common p
 
 describe('parseFrequency: refusals name the value and where it was found', () => {
   it('refuses a lower-case m (milli) with the hint "write 70M"', () => {
-    // Issue 2: 'm' is milli, nearly always a typo for M on a frequency.
+    // 'm' is milli, nearly always a typo for M on a frequency.
     const error = refusal('70m', '--center');
     expect(error.where).toBe('--center');
     expect(error.received).toBe('70m');
