@@ -33,9 +33,10 @@ export function tiedGroups(candidates: readonly ReportedCandidate[], medium: Med
     if (end - start > 1) {
       const run = candidates.slice(start, end);
       const first = run[0]!;
-      const next = run
-        .map((c) => `${start + 1 + run.indexOf(c)}. ${c.next ? `${t.frequency(c.next.margin)} (${c.next.limitedBy})` : 'none'}`)
-        .join('; ');
+      const next = rankRuns(
+        run.map((c) => (c.next ? `${t.frequency(c.next.margin)} (${c.next.limitedBy})` : 'none')),
+        start + 1,
+      );
       sentences.push(
         `Candidates ${start + 1}–${end} tie on worst margin (${t.frequency(first.worstMargin)}, ${first.limitedBy}); ranked by the next-tightest check's margin beyond its requirement: ${next}.`,
       );
@@ -43,4 +44,24 @@ export function tiedGroups(candidates: readonly ReportedCandidate[], medium: Med
     start = end;
   }
   return sentences;
+}
+
+/**
+ * Ranks with the same text written once as a range ("1–12. 11.97 MHz (…)"),
+ * so a long tie that the next check cannot break reads as one clause.
+ *
+ * @param texts one text per rank, in rank order
+ * @param first the rank of the first text
+ * @returns the clauses joined by '; '
+ * @example rankRuns(['5 MHz', '5 MHz', '2 MHz'], 1) // '1–2. 5 MHz; 3. 2 MHz'
+ */
+export function rankRuns(texts: readonly string[], first: number): string {
+  const clauses: string[] = [];
+  for (let i = 0; i < texts.length;) {
+    let j = i + 1;
+    while (j < texts.length && texts[j] === texts[i]) j++;
+    clauses.push(`${j - i > 1 ? `${first + i}–${first + j - 1}` : `${first + i}`}. ${texts[i]}`);
+    i = j;
+  }
+  return clauses.join('; ');
 }
