@@ -5,7 +5,7 @@ import { spectrumSvg } from '../pictures/spectrum.js';
 import { bandPositionSvg } from '../pictures/band-position.js';
 import type { PlanReport, ReportedCandidate } from '../plan/plan-report.js';
 import type { CompareReport } from '../plan/compare-report.js';
-import { factorText, goalText, zoneText } from './plan-table.js';
+import { candidateTailCells, goalText, zoneText } from './plan-table.js';
 import { orderedChecks, tiedGroups } from './plan-order.js';
 import { htmlTable } from './html-table.js';
 import { shiftParts } from './shift-table.js';
@@ -197,14 +197,7 @@ function candidatesTable(report: PlanReport): string {
     T.frequency(c.worstMargin),
     c.limitedBy,
     c.pass ? verdictCell(true) : ([candidateVerdict(c), 'fail'] as const),
-    ...(goal === 'decimation' ? [factorText(c.decimationFactor)] : []),
-    ...(goal === 'quarter-rate' ? [c.quarterRateOffset === null ? '–' : T.signedFrequency(c.quarterRateOffset)] : []),
-    T.tolerance(c.tolerancePpm),
-    c.nco === null ? '–' : T.rate(c.nco),
-    T.settings(c.settings),
-    c.headroomPpm === null ? '–' : T.driftRoom(c.headroomPpm.down, c.headroomPpm.up),
-    c.jitterSnrDb === null ? '–' : T.decibels(c.jitterSnrDb),
-    c.channelSnrDb === null ? '–' : T.decibels(c.channelSnrDb),
+    ...candidateTailCells(c, goal, T),
   ]);
   const head = [
     '#',

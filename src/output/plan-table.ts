@@ -1,4 +1,4 @@
-import { quantityText } from '../text/quantity-text.js';
+import { quantityText, type QuantityText } from '../text/quantity-text.js';
 import { wrapProse } from './wrap-prose.js';
 import type { PlanReport, ReportedCandidate, ReportedCheck } from '../plan/plan-report.js';
 import { textTable, type TextColumn } from './text-table.js';
@@ -145,14 +145,7 @@ function candidatesSection(report: PlanReport, width: number): string {
     T.frequency(c.worstMargin),
     c.limitedBy,
     candidateVerdict(c),
-    ...(goal === 'decimation' ? [factorText(c.decimationFactor)] : []),
-    ...(goal === 'quarter-rate' ? [c.quarterRateOffset === null ? '–' : T.signedFrequency(c.quarterRateOffset)] : []),
-    T.tolerance(c.tolerancePpm),
-    c.nco === null ? '–' : T.rate(c.nco),
-    T.settings(c.settings),
-    c.headroomPpm === null ? '–' : T.driftRoom(c.headroomPpm.down, c.headroomPpm.up),
-    c.jitterSnrDb === null ? '–' : T.decibels(c.jitterSnrDb),
-    c.channelSnrDb === null ? '–' : T.decibels(c.channelSnrDb),
+    ...candidateTailCells(c, goal, T),
   ]);
   const more = report.candidates.length - shown.length;
   const lines = [
@@ -164,6 +157,31 @@ function candidatesSection(report: PlanReport, width: number): string {
   if (report.unplannedParts.length > 0)
     lines.push(wrapProse(`Not planned (no rate inside the converter's range): ${report.unplannedParts.join(', ')}.`, width));
   return lines.join('\n');
+}
+
+/**
+ * The cells after a candidate's verdict, the same in the terminal and on the
+ * page: the goal's own column (decimation factor, or the centre's distance
+ * from an odd multiple of rate/4), then tolerance, NCO, settings, drift room,
+ * jitter SNR and channel SNR.
+ *
+ * @param c a candidate
+ * @param goal the plan's goal
+ * @param text the quantity writer of the medium
+ * @returns the cell texts, '–' where a figure does not apply
+ * @example candidateTailCells(candidate, 'widest-margin', quantityText('terminal'))[0] // '±50 ppm' (the demo's best: the widest-margin rate of an interval, at the scenario's tolerance)
+ */
+export function candidateTailCells(c: ReportedCandidate, goal: string, text: QuantityText): string[] {
+  return [
+    ...(goal === 'decimation' ? [factorText(c.decimationFactor)] : []),
+    ...(goal === 'quarter-rate' ? [c.quarterRateOffset === null ? '–' : text.signedFrequency(c.quarterRateOffset)] : []),
+    text.tolerance(c.tolerancePpm),
+    c.nco === null ? '–' : text.rate(c.nco),
+    text.settings(c.settings),
+    c.headroomPpm === null ? '–' : text.driftRoom(c.headroomPpm.down, c.headroomPpm.up),
+    c.jitterSnrDb === null ? '–' : text.decibels(c.jitterSnrDb),
+    c.channelSnrDb === null ? '–' : text.decibels(c.channelSnrDb),
+  ];
 }
 
 /**
