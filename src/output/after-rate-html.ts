@@ -1,8 +1,10 @@
-import { formatFrequency } from '../units/format-frequency.js';
+import { quantityText } from '../text/quantity-text.js';
 import { escapeXml } from '../pictures/escape-xml.js';
 import type { ReportedCandidate } from '../plan/plan-report.js';
 import { htmlTable } from './html-table.js';
 import { designSentence, downConverterSentences, MASK_HEAD, maskRows, maskSentence, noiseSentence } from './after-rate-words.js';
+
+const HTML = quantityText('html');
 
 /**
  * The after-rate section of the review page for one candidate: the mask in
@@ -16,13 +18,13 @@ import { designSentence, downConverterSentences, MASK_HEAD, maskRows, maskSenten
 export function afterRateHtml(candidate: ReportedCandidate): string {
   const after = candidate.afterRate;
   if (after === null) return '';
-  const rows = maskRows(after).map((row) =>
+  const rows = maskRows(after, Infinity, HTML).map((row) =>
     row.map((cell, i) => (i === row.length - 1 && cell === 'FAIL' ? ([cell, 'fail'] as const) : cell)),
   );
-  const paragraphs = [designSentence(after), noiseSentence(after, candidate), ...downConverterSentences(after)];
+  const paragraphs = [designSentence(after, HTML), noiseSentence(after, candidate, HTML), ...downConverterSentences(after, HTML)];
   return (
-    `<h3>${escapeXml(`After the rate, at ${candidate.label} (${formatFrequency(candidate.rate)})`)}</h3>` +
-    `<p>${escapeXml(maskSentence(after))}</p>` +
+    `<h3>${escapeXml(`After the rate, at ${candidate.label} (${HTML.rate(candidate.rate)})`)}</h3>` +
+    `<p>${escapeXml(maskSentence(after, HTML))}</p>` +
     (rows.length > 0 ? htmlTable(MASK_HEAD, rows, 'Alias bands up to the input bandwidth, tightest first') : '') +
     paragraphs.map((p) => `<p>${escapeXml(p)}</p>`).join('')
   );

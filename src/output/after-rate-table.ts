@@ -1,4 +1,4 @@
-import { formatFrequency } from '../units/format-frequency.js';
+import { quantityText } from '../text/quantity-text.js';
 import type { ReportedCandidate } from '../plan/plan-report.js';
 import { textTable } from './text-table.js';
 import { designSentence, downConverterSentences, MASK_HEAD, maskRows, maskSentence, noiseSentence, wrapText } from './after-rate-words.js';
@@ -15,7 +15,7 @@ const TIGHTEST_SHOWN = 4;
  * @param detail list every alias band instead of the tightest few
  * @param width characters per line
  * @returns text, no trailing newline; '' when the candidate has no after-rate figures
- * @example afterRateSection(report.candidates[0]) // 'After the rate, at best in 171–194.5 MHz (186.6635556 MHz):\n...'
+ * @example afterRateSection(report.candidates[0]) // 'After the rate, at best in 171–194.5 MHz (186.663556 MHz):\n...'
  */
 export function afterRateSection(candidate: ReportedCandidate, detail = false, width = 100): string {
   const after = candidate.afterRate;
@@ -23,7 +23,7 @@ export function afterRateSection(candidate: ReportedCandidate, detail = false, w
   const rows = maskRows(after, detail ? Infinity : TIGHTEST_SHOWN);
   const more = after.mask.bands.length - rows.length;
   const lines = [
-    `After the rate, at ${candidate.label} (${formatFrequency(candidate.rate)}):`,
+    `After the rate, at ${candidate.label} (${quantityText('terminal').rate(candidate.rate)}):`,
     wrapText(maskSentence(after), width),
     rows.length > 0
       ? textTable(

@@ -1,4 +1,5 @@
-import { formatFrequency, trimmed } from '../units/format-frequency.js';
+import { formatFrequency } from '../units/format-frequency.js';
+import { quantityText, type QuantityText } from '../text/quantity-text.js';
 import type { AfterRate } from '../after-rate/after-rate.js';
 import { MASK_CHECK, type MaskBand } from '../after-rate/filter-mask.js';
 import type { ReportedCandidate } from '../plan/plan-report.js';
@@ -6,8 +7,13 @@ import type { VariantVerdict } from '../plan/compare-report.js';
 
 /*
  * The after-rate figures in words and table rows, shared by the text table
- * and the HTML page so that both say the same thing the same way.
+ * and the HTML page so that both say the same thing the same way. Every
+ * quantity goes through the text layer of the medium (TERMINAL by default);
+ * the NCO frequencies alone keep 10–12 digits, since the error they show is
+ * a fraction of a hertz.
  */
+
+const TERMINAL = quantityText('terminal');
 
 /** Column heads of the alias-band table. */
 export const MASK_HEAD = ['alias band (input)', 'image', 'needs dB', 'filter gives dB', 'margin dB', 'verdict'] as const;
@@ -20,22 +26,22 @@ export const MASK_HEAD = ['alias band (input)', 'image', 'needs dB', 'filter giv
  * @returns rows of MASK_HEAD's columns
  * @example maskRows(after, 3).length // 3
  */
-export function maskRows(after: AfterRate, most = Infinity): string[][] {
+export function maskRows(after: AfterRate, most = Infinity, text: QuantityText = TERMINAL): string[][] {
   const ordered = [...after.mask.bands].sort((a, b) => a.marginDb - b.marginDb).slice(0, most);
   return ordered.map((band) => [
-    range(band.low, band.high, 7),
-    imageText(band),
-    trimmed(after.mask.requiredDb, 4),
-    trimmed(band.givenDb, 4),
-    trimmed(band.marginDb, 4),
+    text.extent(band.low, band.high),
+    imageText(band, text),
+    text.decibels(after.mask.requiredDb),
+    text.decibels(band.givenDb),
+    text.decibels(band.marginDb),
     band.marginDb >= 0 ? 'holds' : after.mask.levelStated ? 'FAIL' : 'short',
   ]);
 }
 
 /** "2·r − channel" or "r + channel". */
-function imageText(band: MaskBand): string {
+function imageText(band: MaskBand, text: QuantityText): string {
   const multiple = band.multiple === 1 ? 'r' : `${band.multiple}·r`;
-  return band.sense === 'upright' ? `${multiple} + channel` : `${multiple} − channel`;
+  return band.sense === 'upright' ? `${multiple} + channel` : `${multiple} ${text.minus} channel`;
 }
 
 /**
@@ -43,15 +49,17 @@ function imageText(band: MaskBand): string {
  *
  * @example maskSentence(after) // 'Anti-alias mask: ...'
  */
-export function maskSentence(after: AfterRate): string {
+export function maskSentence(after: AfterRate, text: QuantityText = TERMINAL): string {
   const { mask } = after;
   const level = mask.levelStated
-    ? `${trimmed(mask.outOfBandLevel, 4)} dBFS (stated: a shortfall blocks the rate)`
-    : `${trimmed(mask.outOfBandLevel, 4)} dBFS (full scale; no level stated, so reported only)`;
-  const worst = mask.worst ? ` Least margin ${trimmed(mask.worst.marginDb, 4)} dB at ${range(mask.worst.low, mask.worst.high, 7)}.` : '';
+    ? `${text.level(mask.outOfBandLevel)} dBFS (stated: a shortfall blocks the rate)`
+    : `${text.level(mask.outOfBandLevel)} dBFS (full scale; no level stated, so reported only)`;
+  const worst = mask.worst
+    ? ` Least margin ${text.decibels(mask.worst.marginDb)} dB at ${text.extent(mask.worst.low, mask.worst.high)}.`
+    : '';
   return (
-    `Anti-alias mask: an out-of-band signal at ${level} must reach the converter at or below ${trimmed(mask.threshold, 4)} dBFS, ` +
-    `so the filter needs ${trimmed(mask.requiredDb, 4)} dB over each of the ${mask.bands.length} alias bands (images of the channel widened by the required margin, over the rate's ±ppm).${worst}`
+    `Anti-alias mask: an out-of-band signal at ${level} must reach the converter at or below ${text.level(mask.threshold)} dBFS, ` +
+    `so the filter needs ${text.decibels(mask.requiredDb)} dB over each of the ${mask.bands.length} alias bands (images of the channel widened by the required margin, over the rate's ±ppm).${worst}`
   );
 }
 
@@ -60,14 +68,15 @@ export function maskSentence(after: AfterRate): string {
  *
  * @example designSentence(after) // 'Filter that would do ...'
  */
-export function designSentence(after: AfterRate): string {
+export function designSentence(after: AfterRate, text: QuantityText = TERMINAL): string {
   const d = after.design;
   const stops = [
-    d.stopBelow === null ? null : `from ${formatFrequency(d.stopBelow, 7)} down`,
-    d.stopAbove === null ? null : `from ${formatFrequency(d.stopAbove, 7)} up`,
+    // Stopband edges are a specification for the filter maker: written to 1 Hz, like a rate, not rounded to 4 digits.
+    d.stopBelow === null ? null : `from ${text.rate(d.stopBelow)} down`,
+    d.stopAbove === null ? null : `from ${text.rate(d.stopAbove)} up`,
   ].filter((s) => s !== null);
-  const mask = `${trimmed(d.passbandRippleDb, 4)} dB ripple over the channel, ${trimmed(d.stopbandDb, 4)} dB ${stops.length > 0 ? stops.join(' and ') : 'nowhere (no alias band below the input bandwidth)'}`;
-  const side = d.tightest === null || d.selectivity === null ? '' : `; tightest side: ${d.tightest}, Ωs ${trimmed(d.selectivity, 4)}`;
+  const mask = `${text.decibels(d.passbandRippleDb)} dB ripple over the channel, ${text.decibels(d.stopbandDb)} dB ${stops.length > 0 ? stops.join(' and ') : 'nowhere (no alias band below the input bandwidth)'}`;
+  const side = d.tightest === null || d.selectivity === null ? '' : `; tightest side: ${d.tightest}, Ωs ${text.number(d.selectivity, 4)}`;
   if (d.orders === null) return `Filter that would do (${mask}${side}): none, an alias band reaches into the channel.`;
   const { butterworth, chebyshev, elliptic } = d.orders;
   if (butterworth === 0) return `Filter that would do (${mask}${side}): no filter needed.`;
@@ -82,17 +91,17 @@ export function designSentence(after: AfterRate): string {
  *
  * @example noiseSentence(after, candidate) // 'Noise folding: ...'
  */
-export function noiseSentence(after: AfterRate, candidate: ReportedCandidate): string {
+export function noiseSentence(after: AfterRate, candidate: ReportedCandidate, text: QuantityText = TERMINAL): string {
   const noise = after.noise;
   if (noise === null) return 'Noise folding: not computed, the filter stops the whole channel.';
   const penalty =
     `Noise folding: +${noise.penaltyDb.toFixed(3)} dB (quadrature error below ${noise.accuracyDb.toPrecision(1)} dB): wideband noise from the alias bands ` +
     "on top of the channel's own through the filter (with no filter it would be 10·log10 of the zones up to the input bandwidth).";
   if (noise.driverNoiseDensity === null || noise.driverSnrDb === null) return `${penalty} No driver noise density stated.`;
-  const driver = ` Driver at ${trimmed(noise.driverNoiseDensity, 4)} dBFS/Hz leaves ${trimmed(noise.driverSnrDb, 4)} dB`;
+  const driver = ` Driver at ${text.level(noise.driverNoiseDensity)} dBFS/Hz leaves ${text.decibels(noise.driverSnrDb)} dB`;
   const lowered =
     candidate.channelSnrDb !== null && candidate.channelSnrWithDriverDb !== null
-      ? `; channel SNR ${trimmed(candidate.channelSnrDb, 4)} dB → ${trimmed(candidate.channelSnrWithDriverDb, 4)} dB with it.`
+      ? `; channel SNR ${text.decibels(candidate.channelSnrDb)} dB → ${text.decibels(candidate.channelSnrWithDriverDb)} dB with it.`
       : ' (no channel SNR to lower: not a clock part).';
   return penalty + driver + lowered;
 }
@@ -102,22 +111,22 @@ export function noiseSentence(after: AfterRate, candidate: ReportedCandidate): s
  *
  * @example downConverterSentences(after)[0] // 'NCO ...'
  */
-export function downConverterSentences(after: AfterRate): string[] {
+export function downConverterSentences(after: AfterRate, text: QuantityText = TERMINAL): string[] {
   const { nco, decimation } = after.downConverter;
   const sentences: string[] = [];
   if (nco) {
-    const tuned = `NCO (${nco.bits}-bit): word ${nco.word} (0x${nco.word.toString(16).toUpperCase()}) gives ${formatFrequency(nco.actual, 12)}, ${signedHz(nco.error)} from ${formatFrequency(nco.target, 10)}`;
+    const tuned = `NCO (${nco.bits}-bit): word ${nco.word} (0x${nco.word.toString(16).toUpperCase()}) gives ${formatFrequency(nco.actual, 12)}, ${text.signedFrequency(nco.error)} from ${formatFrequency(nco.target, 10)}`;
     sentences.push(
       nco.inverted
-        ? `${tuned}; the channel is inverted: load ${nco.negativeWord} (0x${nco.negativeWord.toString(16).toUpperCase()}) for −${formatFrequency(nco.target, 10)} (error ${signedHz(-nco.error)}), or conjugate the output.`
+        ? `${tuned}; the channel is inverted: load ${nco.negativeWord} (0x${nco.negativeWord.toString(16).toUpperCase()}) for ${text.minus}${formatFrequency(nco.target, 10)} (error ${text.signedFrequency(-nco.error)}), or conjugate the output.`
         : `${tuned}.`,
     );
   }
   if (decimation) {
     const d = decimation;
     const how = d.factor === null ? `${d.refusal}` : `÷${d.factor} = ${stagesText(d.halfBandStages, d.remainder ?? 1)}`;
-    const fit = `the channel ${d.fits ? 'fits' : 'does not fit'} in ${formatFrequency(d.usableBandwidth, 7)} usable (${signedHz(d.fitSlack)} each side)`;
-    sentences.push(`Decimation to ${formatFrequency(d.outputRate)}: ${how}; ${fit}.`);
+    const fit = `the channel ${d.fits ? 'fits' : 'does not fit'} in ${text.frequency(d.usableBandwidth)} usable (${text.signedFrequency(d.fitSlack)} each side)`;
+    sentences.push(`Decimation to ${text.rate(d.outputRate)}: ${how}; ${fit}.`);
   }
   return sentences;
 }
@@ -128,21 +137,6 @@ function stagesText(halfBand: number, remainder: number): string {
     remainder > 1 ? `a ÷${remainder} stage` : null,
   ].filter((p) => p !== null);
   return parts.length > 0 ? parts.join(' then ') : 'no decimation';
-}
-
-function signedHz(value: number): string {
-  return value >= 0 ? `+${formatFrequency(value, 4)}` : `−${formatFrequency(-value, 4)}`;
-}
-
-/**
- * A frequency range for people, one frequency when low = high.
- *
- * @param low, high Hz
- * @param significant digits kept (default 10)
- * @example range(217.63631e6, 239.64369e6, 7) // '217.6363 MHz – 239.6437 MHz'
- */
-export function range(low: number, high: number, significant = 10): string {
-  return low === high ? formatFrequency(low, significant) : `${formatFrequency(low, significant)} – ${formatFrequency(high, significant)}`;
 }
 
 const UNIT_WORD = /^(?:[kMG]?Hz|dB|dBFS|dBFS\/Hz|dBc)[.,;:)]*$/;
@@ -180,11 +174,11 @@ export function wrapText(text: string, width = 100): string {
  *
  * @example maskShortfall(candidate) // null (the mask holds at the best rate)
  */
-export function maskShortfall(candidate: ReportedCandidate): string | null {
+export function maskShortfall(candidate: ReportedCandidate, text: QuantityText = TERMINAL): string | null {
   const mask = candidate.afterRate?.mask;
   if (!mask || mask.pass || mask.worst === null) return null;
   const w = mask.worst;
-  return `${MASK_CHECK}: the filter gives ${trimmed(w.givenDb, 4)} dB at ${range(w.low, w.high, 7)} where ${trimmed(w.requiredDb, 4)} dB is needed (short by ${trimmed(-w.marginDb, 4)} dB)`;
+  return `${MASK_CHECK}: the filter gives ${text.decibels(w.givenDb)} dB at ${text.extent(w.low, w.high)} where ${text.decibels(w.requiredDb)} dB is needed (short by ${text.decibels(-w.marginDb)} dB)`;
 }
 
 /**

@@ -255,7 +255,7 @@ function shiftHtml(shift: NonNullable<PlanReport['ifShift']>): string {
 function verdictLine(report: PlanReport, focus: ReportedCandidate | undefined): string {
   if (!focus) return 'No candidate: no legal window inside the rate range.';
   if (report.best === null) {
-    const mask = candidateVerdict(focus) === 'FAIL: mask' ? maskShortfall(focus) : null;
+    const mask = candidateVerdict(focus) === 'FAIL: mask' ? maskShortfall(focus, T) : null;
     return `No candidate passes; the nearest is ${focus.label} at ${T.rate(focus.rate)}, ${mask ?? `limited by ${focus.limitedBy}`}.`;
   }
   return `Best: ${focus.label} at ${T.rate(focus.rate)}, zone ${zoneText(focus)}, worst margin ${T.frequency(focus.worstMargin)} (${focus.limitedBy}).`;
