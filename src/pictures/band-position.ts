@@ -88,7 +88,8 @@ export function bandPositionFigure(report: PlanReport, candidateLabel?: string):
       'font-weight': 'bold',
     }),
   );
-  parts.push(candidatePoints(report, focus, B, design, x, y));
+  const marked = markedCandidates(report, focus, B, yMax);
+  parts.push(candidatePoints(report, marked, focus, B, design, x, y));
   parts.push(
     verticalAxis(
       y,
@@ -108,11 +109,11 @@ export function bandPositionFigure(report: PlanReport, candidateLabel?: string):
   );
   const legend = legendRows(
     [
-      { swatch: boxSwatch('#dcdcdc'), text: 'allowed, upright zone' },
-      { swatch: boxSwatch(FILL.inverted), text: 'allowed, inverted zone' },
+      { swatch: boxSwatch('#dcdcdc'), text: 'allowed, upright zone', drawn: wedges.some((w) => !w.inverted) },
+      { swatch: boxSwatch(FILL.inverted), text: 'allowed, inverted zone', drawn: wedges.some((w) => w.inverted) },
       { swatch: boxSwatch('#fff'), text: 'aliasing' },
-      { swatch: (a, b) => passMarker(a, b), text: 'candidate passes' },
-      { swatch: (a, b) => failMarker(a, b), text: 'candidate fails' },
+      { swatch: (a, b) => passMarker(a, b), text: 'candidate passes', drawn: marked.some((c) => c.pass) },
+      { swatch: (a, b) => failMarker(a, b), text: 'candidate fails', drawn: marked.some((c) => !c.pass) },
     ],
     24,
     BOTTOM + 56,
@@ -208,11 +209,23 @@ function searchLines(report: PlanReport, B: number, x: Scale, y: Scale, yMax: nu
   return element('g', { class: 'search' }, parts.join(''));
 }
 
-function candidatePoints(report: PlanReport, focus: ReportedCandidate | null, B: number, design: number, x: Scale, y: Scale): string {
+/** The candidates drawn as markers: the one in focus, else every one whose fs/B is inside the chart. */
+function markedCandidates(report: PlanReport, focus: ReportedCandidate | null, B: number, yMax: number): ReportedCandidate[] {
+  return focus ? [focus] : report.candidates.filter((c) => c.rate / B <= yMax);
+}
+
+function candidatePoints(
+  report: PlanReport,
+  marked: readonly ReportedCandidate[],
+  focus: ReportedCandidate | null,
+  B: number,
+  design: number,
+  x: Scale,
+  y: Scale,
+): string {
   const parts: string[] = [];
   const at = x.at(design);
   const inChart = (c: ReportedCandidate) => c.rate / B <= y.domain[1];
-  const marked = focus ? [focus] : report.candidates.filter(inChart);
   if (focus) {
     for (const c of report.candidates.filter((c) => c !== focus && inChart(c)))
       parts.push(element('circle', { cx: at, cy: y.at(c.rate / B), r: 1.8, fill: '#777' }));

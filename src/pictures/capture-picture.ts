@@ -266,19 +266,25 @@ function legendEntries(r: VerifyResult, intrusionBins: ReadonlySet<number>): Leg
   const line = (dash: string | undefined, width: number) => (cx: number, cy: number) =>
     element('line', { x1: cx - 11, y1: cy, x2: cx + 11, y2: cy, stroke: '#000', 'stroke-width': width, 'stroke-dasharray': dash });
   const unlisted = r.unlisted.filter((u) => !intrusionBins.has(u.bin)).length;
+  const contradicting = r.predictions.filter(contradicts).length;
   return [
     { swatch: line(undefined, 0.8), text: 'measured (max-hold, one column per pixel)' },
-    { swatch: boxSwatch(FILL.wanted), text: 'wanted image' },
-    { swatch: boxSwatch(FILL.guard), text: `margin ${T.frequency(r.margin)}` },
+    { swatch: boxSwatch(FILL.wanted), text: 'wanted image', drawn: r.wantedImage.length > 0 },
+    { swatch: boxSwatch(FILL.guard), text: `margin ${T.frequency(r.margin)}`, drawn: r.wantedImage.length > 0 && r.margin > 0 },
     { swatch: line('8 3 2 3', 1), text: 'threshold' },
     { swatch: line('4 3', 1), text: 'peak floor' },
-    { swatch: (cx, cy) => predictionMarker(false, cx, cy), text: `predicted line (${r.predictions.length})` },
+    {
+      swatch: (cx, cy) => predictionMarker(false, cx, cy),
+      text: `predicted line (${r.predictions.length})`,
+      drawn: r.predictions.some((p) => !contradicts(p)),
+    },
     {
       swatch: (cx, cy) => predictionMarker(true, cx, cy),
-      text: `predicted, contradicts the plan (${r.predictions.filter(contradicts).length})`,
+      text: `predicted, contradicts the plan (${contradicting})`,
+      drawn: contradicting > 0,
     },
-    { swatch: unlistedMarker, text: `unlisted peak (${unlisted})` },
-    { swatch: failMarker, text: `intrusion into the margin (${r.intrusions.length})` },
+    { swatch: unlistedMarker, text: `unlisted peak (${unlisted})`, drawn: unlisted > 0 },
+    { swatch: failMarker, text: `intrusion into the margin (${r.intrusions.length})`, drawn: r.intrusions.length > 0 },
   ];
 }
 

@@ -157,7 +157,11 @@ export function filterMaskFigure(report: PlanReport, candidateLabel: string): Fi
   parts.push(horizontalAxis(x, ticks, plotBottom, `input frequency (${unit.unit}), up to the converter's input bandwidth`));
   const legend = legendRows(
     [
-      { swatch: boxSwatch(FILL.blocked), text: `alias band: the filter must give ${trimmed(mask.requiredDb, 4)} dB or more` },
+      {
+        swatch: boxSwatch(FILL.blocked),
+        text: `alias band: the filter must give ${trimmed(mask.requiredDb, 4)} dB or more`,
+        drawn: mask.bands.length > 0,
+      },
       { swatch: boxSwatch(FILL.wanted), text: 'channel (passband)' },
       {
         swatch: (cx, cy) => element('line', { x1: cx - 11, y1: cy, x2: cx + 11, y2: cy, stroke: '#000', 'stroke-width': 2 }),
@@ -168,6 +172,7 @@ export function filterMaskFigure(report: PlanReport, candidateLabel: string): Fi
       {
         swatch: (cx, cy) => element('rect', { x: cx - 11, y: cy - 1.5, width: 22, height: 3, fill: '#000', stroke: '#000' }),
         text: 'its least attenuation over a band (open: short)',
+        drawn: mask.bands.length > 0,
       },
     ],
     24,

@@ -5,6 +5,8 @@ import { textWidth } from './label-packing.js';
 export interface LegendEntry {
   readonly swatch: (x: number, y: number) => string;
   readonly text: string;
+  /** False when the picture draws nothing of this kind: the entry is left out. */
+  readonly drawn?: boolean;
 }
 
 export const LEGEND_FONT = 10.5;
@@ -12,14 +14,18 @@ const ROW = 17;
 const SWATCH = 22;
 
 /**
- * Legend entries laid out left to right, wrapping to a new row at `right`.
+ * Legend entries laid out left to right, wrapping to a new row at `right`;
+ * an entry whose kind the picture does not draw (drawn: false) is left out,
+ * so the legend keys only what is there.
  *
  * @param entries in reading order
  * @param left, top the legend's top-left corner, px
  * @param right px the entries must not pass
- * @returns the markup and the height used, px
+ * @returns the markup and the height used, px (0 when no entry is drawn)
+ * @example legendRows([{ swatch: boxSwatch('#fff'), text: 'window', drawn: false }], 24, 0, 900).height // 0
  */
-export function legendRows(entries: readonly LegendEntry[], left: number, top: number, right: number): { markup: string; height: number } {
+export function legendRows(all: readonly LegendEntry[], left: number, top: number, right: number): { markup: string; height: number } {
+  const entries = all.filter((entry) => entry.drawn !== false);
   const parts: string[] = [];
   let x = left;
   let y = top + ROW / 2;

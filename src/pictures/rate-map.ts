@@ -47,7 +47,8 @@ interface Lane {
  * is left out when even that has none), its feasible intervals solid, and
  * the candidates as markers (disc: passes; crossed square: fails). The axis
  * zooms onto the windows drawn and turns logarithmic for long spans (see
- * rateMapView); a legend lists every blocking label with its key.
+ * rateMapView); the legend keys only the kinds drawn, and lists every
+ * blocking label with its key.
  *
  * @param report the solved plan
  * @returns the figure (width 960 px, height from the lanes)
@@ -71,7 +72,10 @@ export function rateMapFigure(report: PlanReport): Figure {
   );
   const others = report.candidates.filter((c) => (c.zone === null || !zonesWithWindow.has(c.zone)) && inAxis(c.rate));
   if (others.length > 0) lanes.push(lane('outside windows', null, others, [], scale, report));
-  const drawnCandidates = lanes.reduce((n, l) => n + l.markers.length, 0);
+  const markers = lanes.flatMap((l) => l.markers);
+  const drawnCandidates = markers.length;
+  // The zones whose windows are drawn: only their blocked and feasible ranges are.
+  const drawnZones = new Set(view.windows.map((w) => w.zone));
 
   const parts: string[] = [heading(report)];
   let y = TOP;
@@ -95,12 +99,12 @@ export function rateMapFigure(report: PlanReport): Figure {
   y += 60;
   const legend = legendRows(
     [
-      { swatch: boxSwatch('#fff'), text: 'window, upright zone' },
-      { swatch: boxSwatch(FILL.inverted), text: 'window, inverted zone (inv)' },
-      { swatch: boxSwatch(FILL.blocked), text: 'blocked' },
-      { swatch: boxSwatch(FILL.feasible), text: 'feasible' },
-      { swatch: (x, yy) => passMarker(x, yy), text: 'candidate passes' },
-      { swatch: (x, yy) => failMarker(x, yy), text: 'candidate fails' },
+      { swatch: boxSwatch('#fff'), text: 'window, upright zone', drawn: view.windows.some((w) => !w.inverted) },
+      { swatch: boxSwatch(FILL.inverted), text: 'window, inverted zone (inv)', drawn: view.windows.some((w) => w.inverted) },
+      { swatch: boxSwatch(FILL.blocked), text: 'blocked', drawn: report.blocked.some((r) => drawnZones.has(r.zone)) },
+      { swatch: boxSwatch(FILL.feasible), text: 'feasible', drawn: report.feasible.some((r) => drawnZones.has(r.zone)) },
+      { swatch: (x, yy) => passMarker(x, yy), text: 'candidate passes', drawn: markers.some((c) => c.pass) },
+      { swatch: (x, yy) => failMarker(x, yy), text: 'candidate fails', drawn: markers.some((c) => !c.pass) },
     ],
     LEFT - 100,
     y,

@@ -30,7 +30,8 @@ const SMALL = 9.5;
  * zone is inverted), each interferer's aliased segments as bars as tall as
  * its level in dBFS (blocking and passing: grey; blocking and failing:
  * cross-hatched; not blocking: dashed outline, no fill), the blocking
- * threshold, and the DC, rate/4 and rate/2 marks. Bars carry their label,
+ * threshold and the weakest wanted level as named lines, and the DC, rate/4
+ * and rate/2 marks; the legend keys only the kinds drawn. Bars carry their label,
  * level and margin above the plot where there is room, else their key
  * number; the table below lists every check by key.
  *
@@ -59,7 +60,7 @@ export function spectrumFigure(report: PlanReport, candidateLabel: string): Figu
   const drawOrder = checks.map((c, i) => ({ c, key: i + 1 })).sort((a, b) => b.c.level - a.c.level);
   for (const { c } of drawOrder) parts.push(bars(c, x, y, bottom));
   parts.push(wanted.outline);
-  if (threshold !== null) parts.push(thresholdLine(threshold, y));
+  parts.push(levelLines(threshold, report.weakestLevel, candidate, x, y, plotTop));
   parts.push(marks(candidate, x, plotTop, plotBottom));
   parts.push(labelLeaders(placed, x, y, bottom, top));
   parts.push(
@@ -74,7 +75,7 @@ export function spectrumFigure(report: PlanReport, candidateLabel: string): Figu
   const unit = frequencyUnit(half);
   const freqTicks = linearTicks(0, half, 8).values.map((v) => ({ value: v, label: inUnit(v, unit) }));
   parts.push(horizontalAxis(x, freqTicks, plotBottom, `frequency after sampling (${unit.unit})`));
-  const below = legendAndTable(checks, plotBottom + 56);
+  const below = legendAndTable(checks, wanted.guarded, plotBottom + 56);
   parts.push(below.markup);
   return {
     width: WIDTH,
@@ -128,23 +129,51 @@ function checkLabels(checks: ReportedCandidate['checks'], x: Scale, plotX: reado
   );
 }
 
-/** The blocking threshold: a dash-dot line across the plot, named at its right end. */
-function thresholdLine(threshold: number, y: Scale): string {
-  const text = `blocking threshold ${T.level(threshold)} dBFS`;
-  const w = textWidth(text, SMALL) + 6;
-  return (
-    element('line', {
-      x1: LEFT,
-      y1: y.at(threshold),
-      x2: WIDTH - RIGHT,
-      y2: y.at(threshold),
-      stroke: '#000',
-      'stroke-width': 1,
-      'stroke-dasharray': '8 3 2 3',
-    }) +
-    element('rect', { x: WIDTH - RIGHT - 2 - w, y: y.at(threshold) + 2, width: w, height: 12, fill: '#fff', opacity: 0.9 }) +
-    textElement(WIDTH - RIGHT - 2 - w / 2, y.at(threshold) + 11, text, { 'text-anchor': 'middle', 'font-size': SMALL })
-  );
+interface Box {
+  readonly left: number;
+  readonly top: number;
+  readonly right: number;
+  readonly bottom: number;
+}
+
+const overlaps = (a: Box, b: Box) => a.left < b.right && b.left < a.right && a.top < b.bottom && b.top < a.bottom;
+
+/**
+ * The blocking threshold (black, dash-dot) and the weakest wanted level
+ * (blue, dashed) as lines across the plot, each named on a white box. The
+ * threshold's name sits under its line at the right end; the weakest level's
+ * takes the first of right-above, right-below, left-above, left-below that
+ * keeps clear of the threshold's name and of the DC, fs/4 and fs/2 marks'
+ * names (the weakest level lies at or above the threshold, by the rejection).
+ */
+function levelLines(threshold: number | null, weakest: number | null, c: ReportedCandidate, x: Scale, y: Scale, plotTop: number): string {
+  const parts: string[] = [];
+  const taken: Box[] = markBoxes(c, x, plotTop);
+  const named = (level: number, text: string, stroke: string, dash: string, places: ReadonlyArray<readonly ['left' | 'right', -1 | 1]>) => {
+    const at = y.at(level);
+    const w = textWidth(text, SMALL) + 6;
+    const boxAt = ([end, side]: readonly ['left' | 'right', -1 | 1]): Box => {
+      const left = end === 'right' ? WIDTH - RIGHT - 2 - w : LEFT + 2;
+      const top = side === 1 ? at + 2 : at - 14;
+      return { left, top, right: left + w, bottom: top + 12 };
+    };
+    const box = places.map(boxAt).find((b) => !taken.some((t) => overlaps(b, t))) ?? boxAt(places[0]!);
+    taken.push(box);
+    parts.push(
+      element('line', { x1: LEFT, y1: at, x2: WIDTH - RIGHT, y2: at, stroke, 'stroke-width': 1, 'stroke-dasharray': dash }) +
+        element('rect', { x: box.left, y: box.top, width: w, height: 12, fill: '#fff', opacity: 0.9 }) +
+        textElement(box.left + w / 2, box.top + 9, text, { 'text-anchor': 'middle', 'font-size': SMALL, fill: stroke === '#000' ? undefined : stroke }),
+    );
+  };
+  if (threshold !== null) named(threshold, `blocking threshold ${T.level(threshold)} dBFS`, '#000', '8 3 2 3', [['right', 1]]);
+  if (weakest !== null)
+    named(weakest, `weakest wanted level ${T.level(weakest)} dBFS`, '#1f4e79', '5 3', [
+      ['right', -1],
+      ['right', 1],
+      ['left', -1],
+      ['left', 1],
+    ]);
+  return element('g', { class: 'levels' }, parts.join(''));
 }
 
 /** Each placed label in its row, with a dotted leader down to the top of its bar (failing checks in bold). */
@@ -167,14 +196,16 @@ function labelLeaders(placed: ReturnType<typeof checkLabels>, x: Scale, y: Scale
 }
 
 /** The legend and the table of checks under the plot, from `top`; returns the markup and where it ends. */
-function legendAndTable(checks: ReportedCandidate['checks'], top: number): { markup: string; bottom: number } {
+function legendAndTable(checks: ReportedCandidate['checks'], guarded: boolean, top: number): { markup: string; bottom: number } {
+  // A check is drawn when it has an aliased segment (bars draws one box per segment).
+  const drawn = checks.filter((c) => c.alias.length > 0);
   const legend = legendRows(
     [
       { swatch: boxSwatch(FILL.wanted), text: 'wanted image' },
-      { swatch: boxSwatch(FILL.guard), text: 'guard' },
-      { swatch: boxSwatch(FILL.passing), text: 'blocking check, passes' },
-      { swatch: boxSwatch(FILL.failing), text: 'blocking check, FAILS' },
-      { swatch: boxSwatch('none', true), text: 'below the threshold (does not block)' },
+      { swatch: boxSwatch(FILL.guard), text: 'guard', drawn: guarded },
+      { swatch: boxSwatch(FILL.passing), text: 'blocking check, passes', drawn: drawn.some((c) => c.blocking && c.pass) },
+      { swatch: boxSwatch(FILL.failing), text: 'blocking check, FAILS', drawn: drawn.some((c) => c.blocking && !c.pass) },
+      { swatch: boxSwatch('none', true), text: 'below the threshold (does not block)', drawn: drawn.some((c) => !c.blocking) },
     ],
     24,
     top,
@@ -238,11 +269,13 @@ function wantedImage(
   x: ReturnType<typeof linearScale>,
   top: number,
   bottom: number,
-): { fill: string; outline: string } {
+): { fill: string; outline: string; guarded: boolean } {
   const half = c.rate / 2;
   const fills: string[] = [];
   const outlines: string[] = [];
+  let guarded = false;
   const box = (a: number, b: number, fill: string) => {
+    if (fill === FILL.guard) guarded = true;
     const shape = { x: x.at(a), y: top, width: Math.max(x.at(b) - x.at(a), 1.5), height: bottom - top };
     fills.push(element('rect', { ...shape, fill }));
     outlines.push(element('rect', { ...shape, fill: 'none', stroke: '#1f4e79', 'stroke-width': 1.2 }));
@@ -266,7 +299,11 @@ function wantedImage(
     for (const s of foldExtent(report.band.low, report.band.high, c.rate)) box(s.low, s.high, FILL.wanted);
     label((x.range[0] + x.range[1]) / 2, 'wanted band folds onto itself (straddles a zone edge)');
   }
-  return { fill: element('g', { class: 'wanted' }, fills.join('')), outline: element('g', { class: 'wanted-outline' }, outlines.join('')) };
+  return {
+    fill: element('g', { class: 'wanted' }, fills.join('')),
+    outline: element('g', { class: 'wanted-outline' }, outlines.join('')),
+    guarded,
+  };
 }
 
 function bars(c: ReportedCheck, x: ReturnType<typeof linearScale>, y: ReturnType<typeof linearScale>, bottom: number): string {
@@ -290,22 +327,36 @@ function bars(c: ReportedCheck, x: ReturnType<typeof linearScale>, y: ReturnType
     .join('');
 }
 
-function marks(c: ReportedCandidate, x: ReturnType<typeof linearScale>, top: number, bottom: number): string {
-  const half = c.rate / 2;
-  const quarter = c.rate / 4;
-  const mark = (f: number, text: string, anchor: 'start' | 'middle' | 'end') => {
+/** The DC, fs/4 and fs/2 marks: where each is and the box its name takes at the plot's top. */
+function markPlaces(c: ReportedCandidate, x: Scale, top: number): Array<{ at: number; text: string; box: Box }> {
+  const places: ReadonlyArray<readonly [number, string, 'start' | 'middle' | 'end']> = [
+    [0, 'DC', 'start'],
+    [c.rate / 4, `fs/4 = ${T.rate(c.rate / 4)}`, 'middle'],
+    [c.rate / 2, 'fs/2', 'end'],
+  ];
+  return places.map(([f, text, anchor]) => {
     const at = x.at(f);
     const w = textWidth(text, SMALL) + 6;
-    const boxLeft = anchor === 'start' ? at + 1 : anchor === 'end' ? at - 1 - w : at - w / 2;
-    return (
-      element('line', { x1: at, y1: top, x2: at, y2: bottom, stroke: '#000', 'stroke-width': 1, 'stroke-dasharray': '6 2 1 2' }) +
-      element('rect', { x: boxLeft, y: top + 2, width: w, height: 13, fill: '#fff', opacity: 0.9 }) +
-      textElement(boxLeft + w / 2, top + 12, text, { 'text-anchor': 'middle', 'font-size': SMALL })
-    );
-  };
+    const left = anchor === 'start' ? at + 1 : anchor === 'end' ? at - 1 - w : at - w / 2;
+    return { at, text, box: { left, top: top + 2, right: left + w, bottom: top + 15 } };
+  });
+}
+
+function markBoxes(c: ReportedCandidate, x: Scale, top: number): Box[] {
+  return markPlaces(c, x, top).map((p) => p.box);
+}
+
+function marks(c: ReportedCandidate, x: Scale, top: number, bottom: number): string {
   return element(
     'g',
     { class: 'marks' },
-    mark(0, 'DC', 'start') + mark(quarter, `fs/4 = ${T.rate(quarter)}`, 'middle') + mark(half, 'fs/2', 'end'),
+    markPlaces(c, x, top)
+      .map(
+        ({ at, text, box }) =>
+          element('line', { x1: at, y1: top, x2: at, y2: bottom, stroke: '#000', 'stroke-width': 1, 'stroke-dasharray': '6 2 1 2' }) +
+          element('rect', { x: box.left, y: box.top, width: box.right - box.left, height: 13, fill: '#fff', opacity: 0.9 }) +
+          textElement((box.left + box.right) / 2, top + 12, text, { 'text-anchor': 'middle', 'font-size': SMALL }),
+      )
+      .join(''),
   );
 }

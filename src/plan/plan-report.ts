@@ -111,6 +111,8 @@ export interface PlanReport {
   readonly scenario: string;
   readonly band: Band;
   readonly guard: Guard;
+  /** Weakest wanted level at which the requirements apply, dBFS; null for a plan built by hand. */
+  readonly weakestLevel: Db | null;
   readonly search: { readonly minRate: Hz; readonly maxRate: Hz };
   readonly goal: Goal;
   /** Every interferer, or past a thousand the blocking ones and the strongest others (see interferersListed). */
@@ -176,6 +178,7 @@ export function planReport(
     scenario: name,
     band: context.band,
     guard: context.guard,
+    weakestLevel: context.weakestLevel ?? null,
     search: { minRate: context.limits.minRate, maxRate: context.limits.maxRate },
     goal: context.goal,
     interferers: listed.interferers,

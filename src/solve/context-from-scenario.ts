@@ -21,6 +21,7 @@ export function contextFromScenario(scenario: Scenario, listing: Scenario = scen
     interferers: derived.interferers,
     derivation: derived.summary,
     levelThreshold: levelThreshold(scenario),
+    weakestLevel: scenario.wanted.weakestLevel,
     clocks: scenario.clocks,
     clocking: {
       clockDividers: scenario.converter.clockDividers,

@@ -14,6 +14,8 @@ export interface PlanContext {
   readonly interferers: readonly Interferer[];
   /** Weakest wanted level minus the required rejection, dBFS. */
   readonly levelThreshold: Db;
+  /** Weakest wanted level at which the requirements apply, dBFS; absent for a plan built by hand. */
+  readonly weakestLevel?: Db;
   /** The clock parts to plan; each is put forward at its best rate (src/clocks/plan-part.ts). */
   readonly clocks: readonly ClockPart[];
   /** What the part planner needs of the converter: its clock dividers, resolution and aperture jitter. */

@@ -87,8 +87,9 @@ describe('captureSvg', () => {
       expect(Number.isFinite(y)).toBe(true);
     }
     const triangles = elementsOf(document).filter((e) => e.localName === 'path' && /^M[^L]*L[^L]*L[^L]*Z$/.test(e.getAttribute('d') ?? ''));
-    // One per prediction, plus the two legend swatches.
-    expect(triangles).toHaveLength(good.result.predictions.length + 2);
+    // One per prediction, plus the legend's open swatch: the capture agrees, so no line contradicts and the filled swatch is left out.
+    expect(good.result.contradictions).toHaveLength(0);
+    expect(triangles).toHaveLength(good.result.predictions.length + 1);
   });
 
   it('at a rate where a harmonic lands in the band, says the capture confirms the failing plan and lists the intrusion', () => {
