@@ -162,7 +162,11 @@ function levelLines(threshold: number | null, weakest: number | null, c: Reporte
     parts.push(
       element('line', { x1: LEFT, y1: at, x2: WIDTH - RIGHT, y2: at, stroke, 'stroke-width': 1, 'stroke-dasharray': dash }) +
         element('rect', { x: box.left, y: box.top, width: w, height: 12, fill: '#fff', opacity: 0.9 }) +
-        textElement(box.left + w / 2, box.top + 9, text, { 'text-anchor': 'middle', 'font-size': SMALL, fill: stroke === '#000' ? undefined : stroke }),
+        textElement(box.left + w / 2, box.top + 9, text, {
+          'text-anchor': 'middle',
+          'font-size': SMALL,
+          fill: stroke === '#000' ? undefined : stroke,
+        }),
     );
   };
   if (threshold !== null) named(threshold, `blocking threshold ${T.level(threshold)} dBFS`, '#000', '8 3 2 3', [['right', 1]]);

@@ -66,7 +66,10 @@ function keyedExactlyWhenDrawn(svg: string, rules: ReadonlyArray<readonly [strin
   const seen: Record<string, boolean> = {};
   for (const [key, draws] of rules) {
     const isDrawn = drawn.some(draws);
-    expect(keys.some((k) => k.startsWith(key)), `${key}: drawn ${isDrawn}`).toBe(isDrawn);
+    expect(
+      keys.some((k) => k.startsWith(key)),
+      `${key}: drawn ${isDrawn}`,
+    ).toBe(isDrawn);
     seen[key] = isDrawn;
   }
   return seen;
