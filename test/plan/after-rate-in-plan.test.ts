@@ -40,7 +40,7 @@ describe('after-rate figures in the plan report', () => {
     expect(report.candidates.every((c) => !c.pass)).toBe(true);
     // The verdict is prose wrapped to the width: read it as one line.
     expect(planTable(report, 100).replace(/\s+/g, ' ')).toMatch(
-      /No candidate passes\. Nearest: .*anti-alias mask: the filter gives 0 dB at .* where 80 dB is needed \(short by 80 dB\)/,
+      /No candidate passes\. Nearest: .*anti-alias mask: the filter gives 0\.0 dB at .* where 80\.0 dB is needed \(short by 80\.0 dB\)/,
     );
   });
 
