@@ -1,5 +1,5 @@
 import { beforeAll, describe, expect, it } from 'vitest';
-import { ensureBuilt, runBin, type Run } from '../helpers/run-bin.js';
+import { ensureBuilt, expectRefusal, runBin, type Run } from '../helpers/run-bin.js';
 import { runCli } from '../../src/cli/main.js';
 
 /**
@@ -24,17 +24,6 @@ interface ToneJson {
   zone: number;
   inverted: boolean;
   lookalikes: number[];
-}
-
-/** A refusal: exit 2, one `ifzone: ` line on stderr naming every given word, nothing on stdout, no stack. */
-function expectRefusal(run: Run, ...named: string[]): void {
-  expect(run.status, run.stderr).toBe(2);
-  expect(run.stdout).toBe('');
-  const lines = run.stderr.split('\n').filter((l) => l !== '');
-  expect(lines, run.stderr).toHaveLength(1);
-  expect(lines[0]!.startsWith('ifzone: ')).toBe(true);
-  for (const word of named) expect(lines[0]).toContain(word);
-  expect(run.stderr).not.toMatch(/^\s+at /m);
 }
 
 describe('ifzone windows --json', () => {

@@ -4,7 +4,7 @@ import { join } from 'node:path';
 import { pathToFileURL } from 'node:url';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { checkOutputPaths, writeFileSafely, writeFilesSafely, type SafeWriteFs } from '../../src/cli/safe-write.js';
-import { InputError } from '../../src/units/input-error.js';
+import { thrownInputError } from '../helpers/thrown-input-error.js';
 import { ensureBuilt, ROOT } from '../helpers/run-bin.js';
 import { ifzone, refusalLine, scratchDirectory } from '../helpers/run-in-process.js';
 
@@ -27,22 +27,12 @@ const canMakeDevices = spawnSync('mknod', ['--version']).status === 0 && process
 
 const listing = () => fs.readdirSync(dir).sort();
 
-function refusal(action: () => void): InputError {
-  try {
-    action();
-  } catch (error) {
-    if (error instanceof InputError) return error;
-    throw error;
-  }
-  throw new Error('not refused');
-}
-
 describe('--force replaces only a regular file', () => {
   // A device node of our own in the scratch folder (the same device as /dev/null), never the system's
   // /dev/null: a regression here would otherwise replace the machine's /dev/null with a regular file.
   it.skipIf(!canMakeDevices)('refuses a character device, and leaves it as it was', () => {
     const path = scratchDevice();
-    const error = refusal(() => writeFileSafely(path, 'x', { force: true }));
+    const error = thrownInputError(() => writeFileSafely(path, 'x', { force: true }));
     expect(error.where).toBe(path);
     expect(error.expected).toBe('a regular file to replace');
     expect(error.received).toBe('a character device');
@@ -62,7 +52,7 @@ describe('--force replaces only a regular file', () => {
     ],
   ])('refuses %s, and leaves it as it was', (_name, make, kind) => {
     const path = make();
-    const error = refusal(() => writeFileSafely(path, 'x', { force: true }));
+    const error = thrownInputError(() => writeFileSafely(path, 'x', { force: true }));
     expect(error.where).toBe(path);
     expect(error.expected).toBe('a regular file to replace');
     expect(error.received).toBe(kind);
@@ -73,7 +63,7 @@ describe('--force replaces only a regular file', () => {
     fs.writeFileSync(other, 'precious');
     const link = join(dir, 'link.svg');
     fs.symlinkSync(other, link);
-    const error = refusal(() => writeFileSafely(link, 'x', { force: true }));
+    const error = thrownInputError(() => writeFileSafely(link, 'x', { force: true }));
     expect(error.expected).toContain('not a symbolic link (ifzone does not write through links');
     expect(error.received).toBe(`a link to ${fs.realpathSync(other)}`);
     expect(fs.readFileSync(other, 'utf8')).toBe('precious');
@@ -102,14 +92,14 @@ describe('a failed write names the user path and the system reason', () => {
       },
     } as SafeWriteFs;
     const path = join(dir, 'x.svg');
-    const error = refusal(() => writeFileSafely(path, 'x', { fs: shim }));
+    const error = thrownInputError(() => writeFileSafely(path, 'x', { fs: shim }));
     expect(error.where).toBe(path);
     expect(error.received).toBe(words);
     expect(error.message).not.toContain('.tmp');
   });
 
   it('a directory that does not exist is refused before any work', () => {
-    const error = refusal(() => checkOutputPaths([join(dir, 'no-such-dir', 'plan.svg')]));
+    const error = thrownInputError(() => checkOutputPaths([join(dir, 'no-such-dir', 'plan.svg')]));
     expect(error.expected).toBe('a path in an existing directory');
   });
 });
@@ -128,7 +118,7 @@ describe('outputs are committed together or not at all', () => {
         return fs.linkSync(existing, made);
       }) as SafeWriteFs['linkSync'],
     };
-    const error = refusal(() =>
+    const error = thrownInputError(() =>
       writeFilesSafely(
         [
           { path: kept, content: 'new picture' },

@@ -5,6 +5,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { EXISTS_EXPECTED, INPUT_EXPECTED, writeFileSafely, type SafeWriteFs } from '../../src/cli/safe-write.js';
 import { InputError } from '../../src/units/input-error.js';
+import { thrownInputError } from '../helpers/thrown-input-error.js';
 
 /**
  * Safe writes on a real temporary directory: refused writes leave the old
@@ -30,16 +31,6 @@ afterEach(() => {
 
 const listing = () => fs.readdirSync(dir).sort();
 
-function refusal(action: () => void): InputError {
-  try {
-    action();
-  } catch (error) {
-    if (error instanceof InputError) return error;
-    throw error;
-  }
-  throw new Error('the write was not refused');
-}
-
 describe('writeFileSafely', () => {
   it('writes a new file whole and leaves nothing else', () => {
     const fresh = join(dir, 'new.svg');
@@ -49,7 +40,7 @@ describe('writeFileSafely', () => {
   });
 
   it('refuses an existing file without force and leaves it byte for byte', () => {
-    const error = refusal(() => writeFileSafely(target, 'new content', { force: false }));
+    const error = thrownInputError(() => writeFileSafely(target, 'new content', { force: false }));
     expect(error.where).toBe(target);
     expect(error.expected).toBe(EXISTS_EXPECTED);
     expect(error.message).toContain('add --force to replace it');
@@ -70,7 +61,7 @@ describe('writeFileSafely', () => {
     fs.linkSync(input, join(dir, 'hard.json'));
     fs.mkdirSync(join(dir, 'sub'));
     for (const path of [input, join(dir, 'sub', '..', 'heron.json'), join(dir, 'link.json'), join(dir, 'hard.json')]) {
-      const error = refusal(() => writeFileSafely(path, 'oops', { force: true, inputs: [input] }));
+      const error = thrownInputError(() => writeFileSafely(path, 'oops', { force: true, inputs: [input] }));
       expect(error.expected).toBe(INPUT_EXPECTED);
       expect(error.where).toBe(path);
     }
@@ -94,7 +85,7 @@ describe('writeFileSafely', () => {
       },
     };
     // The refusal names the user's path and the system's reason, never the hidden temporary file.
-    const error = refusal(() => writeFileSafely(target, 'new content', { force: true, fs: shim }));
+    const error = thrownInputError(() => writeFileSafely(target, 'new content', { force: true, fs: shim }));
     expect(error.where).toBe(target);
     expect(error.received).toBe('an input/output error (EIO)');
     expect(fs.readFileSync(target).equals(old)).toBe(true);
@@ -133,7 +124,7 @@ describe('writeFileSafely', () => {
       lstatSync: ((path: fs.PathLike, options?: fs.StatSyncOptions) =>
         ++looks === 1 ? undefined : fs.lstatSync(path, options)) as SafeWriteFs['lstatSync'],
     };
-    const error = refusal(() => writeFileSafely(target, 'new content', { force: false, fs: shim }));
+    const error = thrownInputError(() => writeFileSafely(target, 'new content', { force: false, fs: shim }));
     expect(error.expected).toBe(EXISTS_EXPECTED);
     expect(fs.readFileSync(target).equals(old)).toBe(true);
     expect(listing()).toEqual(['plan.svg']);

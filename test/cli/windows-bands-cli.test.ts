@@ -1,5 +1,5 @@
 import { beforeAll, describe, expect, it } from 'vitest';
-import { ensureBuilt, runBin, type Run } from '../helpers/run-bin.js';
+import { ensureBuilt, expectRefusal, runBin, type Run } from '../helpers/run-bin.js';
 
 /**
  * `ifzone windows --band LOW:HIGH --band LOW:HIGH …` end to end through the
@@ -28,15 +28,6 @@ interface JointJson {
   caution: string;
 }
 const json = (run: Run) => JSON.parse(run.stdout) as JointJson;
-
-function expectRefusal(run: Run, ...named: string[]): void {
-  expect(run.status, run.stderr).toBe(2);
-  expect(run.stdout).toBe('');
-  const lines = run.stderr.split('\n').filter((l) => l !== '');
-  expect(lines, run.stderr).toHaveLength(1);
-  expect(lines[0]!.startsWith('ifzone: ')).toBe(true);
-  for (const word of named) expect(lines[0]).toContain(word);
-}
 
 describe('ifzone windows with several --band', () => {
   it('JSON: the intervals worked on paper, each band’s zone and inversion, the single lowest rate', () => {
