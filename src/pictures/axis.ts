@@ -2,6 +2,7 @@ import { element, px, textElement } from './svg-element.js';
 import { textWidth } from './label-packing.js';
 import type { Scale } from './scale.js';
 import { withMinus } from './typography.js';
+import { trimmed } from '../units/format-frequency.js';
 
 /** One tick: where it sits in data units and what it reads. */
 export interface Tick {
@@ -81,4 +82,15 @@ export function verticalAxis(scale: Scale, ticks: readonly Tick[], x: number, ti
     }),
   );
   return element('g', { class: 'axis-y' }, parts.join(''));
+}
+
+/**
+ * Ticks labelled by their value as a plain number (levels in dBFS, attenuation in dB), to 6 significant digits.
+ *
+ * @param values the tick values
+ * @returns one tick per value
+ * @example numberTicks([-20, 0])[0].label // '-20'
+ */
+export function numberTicks(values: readonly number[]): Tick[] {
+  return values.map((value) => ({ value, label: trimmed(value, 6) }));
 }

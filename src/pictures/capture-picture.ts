@@ -1,10 +1,9 @@
 import type { PeakRow, PredictionRow, VerifyResult } from '../report/verify-result.js';
 import { CONTRADICTING } from '../report/verify-result.js';
-import { trimmed } from '../units/format-frequency.js';
 import { quantityText } from '../text/quantity-text.js';
 
 const T = quantityText('svg');
-import { horizontalAxis, verticalAxis } from './axis.js';
+import { horizontalAxis, numberTicks, verticalAxis } from './axis.js';
 import { frequencyUnit, inUnit } from './frequency-unit.js';
 import { packLabels, textWidth } from './label-packing.js';
 import { boxSwatch, legendRows, type LegendEntry } from './legend.js';
@@ -78,15 +77,7 @@ export function captureFigure(result: VerifyResult, levels: ArrayLike<number>): 
 
   const parts: string[] = [heading(result)];
   parts.push(wantedImage(result, x, plotTop, plotBottom));
-  parts.push(
-    verticalAxis(
-      y,
-      levelTicks.values.map((v) => ({ value: v, label: trimmed(v, 6) })),
-      LEFT,
-      'level (dBFS)',
-      WIDTH - RIGHT,
-    ),
-  );
+  parts.push(verticalAxis(y, numberTicks(levelTicks.values), LEFT, 'level (dBFS)', WIDTH - RIGHT));
   const binWidth = result.binWidth;
   const points = columns.map((c) => [x.at(((c.first + c.last) / 2) * binWidth), y.at(clamp(c.level))] as const);
   parts.push(

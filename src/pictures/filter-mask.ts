@@ -3,7 +3,7 @@ import type { MaskBand } from '../after-rate/filter-mask.js';
 import { filterAttenuation } from '../filter/filter-attenuation.js';
 import { formatFrequency, trimmed } from '../units/format-frequency.js';
 import { hz } from '../units/quantities.js';
-import { horizontalAxis, verticalAxis } from './axis.js';
+import { horizontalAxis, numberTicks, verticalAxis } from './axis.js';
 import { frequencyUnit, inUnit } from './frequency-unit.js';
 import { packLabels, textWidth } from './label-packing.js';
 import { boxSwatch, legendRows } from './legend.js';
@@ -143,15 +143,7 @@ export function filterMaskFigure(report: PlanReport, candidateLabel: string): Fi
   parts.push(element('rect', { x: LEFT + 2, y: clampY(mask.requiredDb) - 14, width: w, height: 12, fill: '#fff', opacity: 0.9 }));
   parts.push(textElement(LEFT + 2 + w / 2, clampY(mask.requiredDb) - 5, required, { 'text-anchor': 'middle', 'font-size': SMALL }));
 
-  parts.push(
-    verticalAxis(
-      y,
-      levelTicks.values.map((v) => ({ value: v, label: trimmed(v, 6) })),
-      LEFT,
-      'attenuation (dB)',
-      WIDTH - RIGHT,
-    ),
-  );
+  parts.push(verticalAxis(y, numberTicks(levelTicks.values), LEFT, 'attenuation (dB)', WIDTH - RIGHT));
   const unit = frequencyUnit(span);
   const ticks = linearTicks(0, span, 10).values.map((v) => ({ value: v, label: inUnit(v, unit) }));
   parts.push(horizontalAxis(x, ticks, plotBottom, `input frequency (${unit.unit}), up to the converter's input bandwidth`));

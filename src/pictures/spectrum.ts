@@ -1,11 +1,10 @@
 import type { PlanReport, ReportedCandidate, ReportedCheck } from '../plan/plan-report.js';
 import { foldExtent } from '../math/fold-extent.js';
-import { trimmed } from '../units/format-frequency.js';
 import { quantityText } from '../text/quantity-text.js';
 
 const T = quantityText('svg');
 import { InputError } from '../units/input-error.js';
-import { horizontalAxis, verticalAxis } from './axis.js';
+import { horizontalAxis, numberTicks, verticalAxis } from './axis.js';
 import { checkTable } from './check-table.js';
 import { frequencyUnit, inUnit } from './frequency-unit.js';
 import { packLabels, textWidth } from './label-packing.js';
@@ -63,15 +62,7 @@ export function spectrumFigure(report: PlanReport, candidateLabel: string): Figu
   parts.push(levelLines(threshold, report.weakestLevel, candidate, x, y, plotTop));
   parts.push(marks(candidate, x, plotTop, plotBottom));
   parts.push(labelLeaders(placed, x, y, bottom, top));
-  parts.push(
-    verticalAxis(
-      y,
-      levelTicks.values.map((v) => ({ value: v, label: trimmed(v, 6) })),
-      LEFT,
-      'level (dBFS)',
-      WIDTH - RIGHT,
-    ),
-  );
+  parts.push(verticalAxis(y, numberTicks(levelTicks.values), LEFT, 'level (dBFS)', WIDTH - RIGHT));
   const unit = frequencyUnit(half);
   const freqTicks = linearTicks(0, half, 8).values.map((v) => ({ value: v, label: inUnit(v, unit) }));
   parts.push(horizontalAxis(x, freqTicks, plotBottom, `frequency after sampling (${unit.unit})`));
