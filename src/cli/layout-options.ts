@@ -53,3 +53,15 @@ export function layoutWidth(options: LayoutOptions, io: Io): number {
   }
   return io.columns !== undefined && io.columns >= 40 ? io.columns : DEFAULT_WIDTH;
 }
+
+/**
+ * Characters per line for the glossary under --help: the terminal's width
+ * when standard output is one, held between 60 and 100.
+ *
+ * @param io tells the terminal's width, when there is one
+ * @returns characters per line
+ * @example helpWidth({ out: () => undefined, err: () => undefined, columns: 80 }) // 80
+ */
+export function helpWidth(io: Io): number {
+  return Math.min(DEFAULT_WIDTH, Math.max(60, io.columns ?? DEFAULT_WIDTH));
+}

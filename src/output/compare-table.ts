@@ -52,7 +52,7 @@ export function compareTable(report: CompareReport, width = 100): string {
     { head: 'tolerance', align: 'right', role: 'detail' },
     { head: 'jitter SNR dB', align: 'right', role: 'detail' },
     { head: 'channel SNR dB', align: 'right', role: 'detail' },
-    { head: 'filter B/C/E', align: 'right', role: 'detail' },
+    { head: 'filter orders B/C/E', align: 'right', role: 'detail' },
   ];
   const lines = [
     wrapProse(`Clock parts compared on ${report.variants.join(', ')} (margins and verdicts hold over each part's whole tolerance):`, width),
@@ -66,7 +66,7 @@ export function compareTable(report: CompareReport, width = 100): string {
 }
 
 const FILTER_ORDERS_NOTE =
-  'filter B/C/E: the least Butterworth / Chebyshev I / elliptic order (low-pass prototype) of an anti-alias filter ' +
+  'filter orders B/C/E: the least Butterworth / Chebyshev I / elliptic order (low-pass prototype) of an anti-alias filter ' +
   "that meets the mask at the part's rate; a shortfall of the scenario's filter fails the part only where an " +
   'out-of-band level is stated.';
 

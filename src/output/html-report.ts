@@ -12,6 +12,7 @@ import { shiftParts } from './shift-table.js';
 import { afterRateHtml } from './after-rate-html.js';
 import { candidateVerdict, filterOrdersText, maskShortfall } from './after-rate-words.js';
 import { filterMaskSvg } from '../pictures/filter-mask.js';
+import { glossarySection } from './html-glossary.js';
 
 const T = quantityText('html');
 
@@ -27,6 +28,7 @@ td.num { white-space: nowrap; text-align: right; } figure svg { max-width: 100%;
 td.fail { font-weight: bold; text-decoration: underline; } td.pass { font-style: italic; }
 .caution { border: 2px solid #000; padding: 0.6em 1em; margin: 1em 0; }
 figure { margin: 1em 0; page-break-inside: avoid; } svg { max-width: 100%; height: auto; }
+dl.glossary { display: grid; grid-template-columns: max-content 1fr; gap: 0.15em 1.2em; font-size: 9pt; } dl.glossary dt { font-weight: bold; } dl.glossary dd { margin: 0; }
 @media print { body { margin: 0; } h2 { page-break-before: always; } h2:first-of-type { page-break-before: avoid; } }
 `;
 
@@ -55,8 +57,10 @@ export function reviewPage(contents: ReviewContents): string {
     `<p class="caution"><strong>Caution.</strong> ${escapeXml(caution)} Converter spur levels vary with the part, the input level, temperature and the clock.</p>`,
     contents.comparison ? comparisonSection(contents.comparison) : '',
     ...contents.plans.map(planSection),
-    `<p>Made by ifzone ${escapeXml(contents.version)} on ${escapeXml(contents.generated)}. Every margin names the two extents it was measured between; the JSON output of <code>ifzone solve</code> carries every figure.</p>`,
   ];
+  const footer = `<p>Made by ifzone ${escapeXml(contents.version)} on ${escapeXml(contents.generated)}. Every margin names the two extents it was measured between; the JSON output of <code>ifzone solve</code> carries every figure.</p>`;
+  // The legend explains what the page shows: its column headers and abbreviations.
+  sections.push(glossarySection([...sections, footer].join('\n')), footer);
   return `<!DOCTYPE html>\n<html lang="en"><head><meta charset="utf-8"><title>${escapeXml(`Frequency plan review: ${names}`)}</title><style>${STYLE}</style></head><body>${sections.join('\n')}</body></html>\n`;
 }
 

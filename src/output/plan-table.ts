@@ -131,7 +131,7 @@ function candidatesSection(report: PlanReport, width: number): string {
     ...(goal === 'decimation' ? [{ head: 'decimation factor', align: 'right' } as const] : []),
     ...(goal === 'quarter-rate' ? [{ head: 'centre from odd·rate/4', align: 'right' } as const] : []),
     { head: 'tolerance', align: 'right', role: 'detail' },
-    { head: 'NCO (centre after sampling)', align: 'right', role: 'detail' },
+    { head: 'NCO', align: 'right', role: 'detail' },
     { head: 'settings', role: 'detail' },
     { head: 'drift room', align: 'right', role: 'detail' },
     { head: 'jitter SNR dB', align: 'right', role: 'detail' },

@@ -58,7 +58,7 @@ function tonesSection(r: VerifyResult, width: number): string {
     { head: 'synthesised', align: 'right' },
     { head: 'moved', align: 'right' },
     { head: 'bin', align: 'right' },
-    { head: 'dBFS', align: 'right' },
+    { head: 'level dBFS', align: 'right' },
   ];
   return wrapProse('Tones synthesised (moved to whole cycles of the record):', width) + '\n' + textTable(columns, rows, width);
 }
@@ -124,7 +124,7 @@ function peaksSection(peaks: readonly PeakRow[], width: number): string | null {
   ]);
   const columns: TextColumn[] = [
     { head: 'frequency', role: 'key', align: 'right' },
-    { head: 'dBFS', align: 'right' },
+    { head: 'level dBFS', align: 'right' },
     { head: 'from band', align: 'right' },
     { head: 'what the model says', wrap: true },
     { head: 'bin', align: 'right', role: 'detail' },

@@ -79,7 +79,7 @@ describe('after-rate outputs', () => {
     const [head, ...rows] = run.stdout.trim().split(/\r?\n/);
     expect(head).toMatch(/butterworth_order,chebyshev_order,elliptic_order,mask_margin_db$/);
     expect(rows.some((row) => /,\d+,\d+,\d+,-?[\d.]+$/.test(row))).toBe(true);
-    expect(runBin('compare', BASE).stdout).toContain('filter B/C/E');
+    expect(runBin('compare', BASE).stdout).toContain('filter orders B/C/E');
   });
 
   it('refuses a bad after-rate field with one line and exit 2', () => {

@@ -69,6 +69,7 @@ describe('ifzone report --html', () => {
         'Heron-4N narrowband',
         'Heron-4W wideband',
         'Heron-2L low IF',
+        'Words and abbreviations on this page',
       ]);
       const captions = await page.locator('caption').allTextContents();
       for (const caption of ['Legal windows', 'Feasible intervals', 'Candidates, best first', 'Alias bands up to the input bandwidth']) {

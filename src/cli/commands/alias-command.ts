@@ -1,10 +1,11 @@
 import type { Command } from 'commander';
+import { glossaryHelp } from '../../output/glossary-text.js';
 import { parseFrequency } from '../../units/parse-frequency.js';
 import { aliasReport } from '../../report/alias-report.js';
 import { aliasTable } from '../../output/alias-table.js';
 import { writeJson } from '../../output/json.js';
 import { EXIT, type ExitCode, type Io } from '../io.js';
-import { layoutWidth, withLayoutOptions, type LayoutOptions } from '../layout-options.js';
+import { helpWidth, layoutWidth, withLayoutOptions, type LayoutOptions } from '../layout-options.js';
 import { positiveFrequency, wholeNumber } from '../option-values.js';
 
 interface AliasOptions extends LayoutOptions {
@@ -21,6 +22,7 @@ export function addAliasCommand(program: Command, io: Io, settle: (code: ExitCod
     .requiredOption('--rate <freq>', 'sampling rate, e.g. 61.44M')
     .option('--multiples <k>', 'list lookalikes k·rate ± alias up to this k', '2')
     .option('--json', 'print JSON for programs')
+    .addHelpText('after', () => glossaryHelp('alias', helpWidth(io)))
     .action((frequencies: string[], options: AliasOptions) => {
       const rate = positiveFrequency(options.rate, '--rate');
       const multiples = wholeNumber(options.multiples, '--multiples', 1, 1000);

@@ -1,6 +1,7 @@
 import type { Command } from 'commander';
+import { glossaryHelp } from '../../output/glossary-text.js';
 import type { ExitCode, Io } from '../io.js';
-import { withLayoutOptions, type LayoutOptions } from '../layout-options.js';
+import { helpWidth, withLayoutOptions, type LayoutOptions } from '../layout-options.js';
 
 export interface CompareOptions extends LayoutOptions {
   json?: boolean;
@@ -24,6 +25,7 @@ export function addCompareCommand(program: Command, io: Io, settle: (code: ExitC
     .option('-o, --output <file>', 'write the table, JSON or CSV to a file instead of standard output')
     .option('--svg <file>', "also draw each variant's rate map with the parts marked")
     .option('--force', 'let --output and --svg replace existing files')
+    .addHelpText('after', () => glossaryHelp('compare', helpWidth(io)))
     .action(async (files: string[], options: CompareOptions) => {
       const { runCompare } = await import('./compare-action.js');
       settle(runCompare(files, options, io));

@@ -1,6 +1,7 @@
 import type { Command } from 'commander';
+import { glossaryHelp } from '../../output/glossary-text.js';
 import type { ExitCode, Io } from '../io.js';
-import { withLayoutOptions, type LayoutOptions } from '../layout-options.js';
+import { helpWidth, withLayoutOptions, type LayoutOptions } from '../layout-options.js';
 
 export interface SolveOptions extends LayoutOptions {
   goal?: string;
@@ -12,28 +13,6 @@ export interface SolveOptions extends LayoutOptions {
   svg?: string;
   force?: boolean;
 }
-
-/** What the candidate table's columns and words mean, for --help. */
-const COLUMNS_HELP = `
-Columns of the candidate table:
-  candidate      a clock part by its label, "best in A–B MHz" (the goal's best rate of that
-                 feasible interval), or a rate given with --rate
-  rate           the nominal sampling rate, to 1 Hz
-  zone           Nyquist zone of the wanted band; "inv": the band arrives inverted
-  worst margin   least distance, over the whole tolerance, from any blocking interferer's
-                 alias (or a zone edge) to the wanted band's alias; negative: overlap width
-  limited by     the check with the least margin beyond its requirement
-  decimation factor      rate ÷ output rate (decimation goal); parts must give a whole one
-  centre from odd·rate/4 input centre minus the nearest odd multiple of rate/4 (quarter-rate)
-  tolerance      the clock's ±drift judged; ppm up to 10 000, per cent beyond
-  NCO            where the band's centre lands after sampling: the digital down-converter's tuning
-  settings       rate = f × N / M ÷ D: "direct", "÷D" (divider), "×N ÷D" or "×N/M ÷D" (synthesiser)
-  drift room     how far the nominal rate may move down / up before its first check fails
-  jitter SNR     −20·log10(2π·f·σ) at the band's top edge, part and aperture jitter combined
-  channel SNR    jitter and quantisation SNR with the processing gain of decimating to the channel
-Checks: margin is the least distance over the tolerance (negative: overlap); level dBFS at the
-converter, "< −200" for lower; level margin = threshold − level (≥ 0: too weak to block);
-blocks: strong enough to count.`;
 
 /**
  * `ifzone solve FILE`: the full plan of one scenario, or with --rate the
@@ -64,7 +43,7 @@ export function addSolveCommand(program: Command, io: Io, settle: (code: ExitCod
       'also draw the rate map, the spectrum of the best candidate, the band-position chart and its anti-alias filter mask',
     )
     .option('--force', 'let --svg replace an existing file')
-    .addHelpText('after', COLUMNS_HELP)
+    .addHelpText('after', () => glossaryHelp('solve', helpWidth(io)))
     .action(async (file: string, options: SolveOptions) => {
       const { runSolve } = await import('./solve-action.js');
       settle(await runSolve(file, options, io));

@@ -1,6 +1,7 @@
 import type { Command } from 'commander';
+import { glossaryHelp } from '../../output/glossary-text.js';
 import type { ExitCode, Io } from '../io.js';
-import { withLayoutOptions, type LayoutOptions } from '../layout-options.js';
+import { helpWidth, withLayoutOptions, type LayoutOptions } from '../layout-options.js';
 
 export interface VerifyOptions extends LayoutOptions {
   rate: string;
@@ -32,6 +33,7 @@ export function addVerifyCommand(program: Command, io: Io, settle: (code: ExitCo
     .option('--json', 'print JSON for programs')
     .option('--svg <file>', 'also draw the measured spectrum with the predicted lines, the threshold, the peak floor and the wanted image')
     .option('--force', 'let --svg replace an existing file')
+    .addHelpText('after', () => glossaryHelp('verify', helpWidth(io)))
     .action(async (file: string, options: VerifyOptions) => {
       const { runVerify } = await import('./verify-action.js');
       settle(runVerify(file, options, io));

@@ -1,4 +1,5 @@
 import type { Command } from 'commander';
+import { glossaryHelp } from '../../output/glossary-text.js';
 import { hz } from '../../units/quantities.js';
 import { parseFrequency } from '../../units/parse-frequency.js';
 import { InputError } from '../../units/input-error.js';
@@ -11,7 +12,7 @@ import { writeJson } from '../../output/json.js';
 import { jointWindowsReport } from '../../report/joint-windows-report.js';
 import { jointWindowsTable } from '../../output/joint-windows-table.js';
 import { EXIT, type ExitCode, type Io } from '../io.js';
-import { layoutWidth, withLayoutOptions, type LayoutOptions } from '../layout-options.js';
+import { helpWidth, layoutWidth, withLayoutOptions, type LayoutOptions } from '../layout-options.js';
 import { bandFromOptions, bandFromPair, guardFromOptions, type BandOptions, type GuardOptions } from '../option-values.js';
 
 interface WindowsOptions extends BandOptions, GuardOptions, LayoutOptions {
@@ -41,6 +42,7 @@ export function addWindowsCommand(program: Command, io: Io, settle: (code: ExitC
     .option('--band <low:high>', 'a band as LOW:HIGH, e.g. 1574.4M:1576.4M; give it again for each band sampled with it', collect)
     .option('--spacing <freq>', "with several --band: least distance kept between two bands' aliases (default 0)")
     .option('--json', 'print JSON for programs')
+    .addHelpText('after', () => glossaryHelp('windows', helpWidth(io)))
     .action((options: WindowsOptions) => {
       const bands = bandsFromOptions(options);
       const band = bands[0]!;
