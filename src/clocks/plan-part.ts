@@ -4,7 +4,7 @@ import { hz, type Hz, type Ppm } from '../units/quantities.js';
 import { planRates, type FeasibleInterval, type FeasibleSet } from '../solve/feasible-set.js';
 import type { PlanContext } from '../solve/plan-context.js';
 import { driftHeadroom, driftReach, driftSafeRange } from '../solve/drift.js';
-import { linearSlacks, maximiseWorstSlack, type LinearSlack } from '../solve/widest-margin-lp.js';
+import { maximiseWorstSlack, planSlacks, type LinearSlack } from '../solve/widest-margin-lp.js';
 import type { Interval } from '../math/interval-set.js';
 import { clockSnr } from './clock-snr.js';
 import { bestIntegerN, ENUMERATE_UP_TO, modelSlack } from './integer-widest-margin.js';
@@ -264,12 +264,11 @@ function driftFeasibleSet(context: PlanContext, tolerancePpm: Ppm): FeasibleSet 
 /** The feasible intervals wide enough for the part's drift, their linear slacks and LP bounds. */
 function feasiblePieces(context: PlanContext, set: FeasibleSet, part: ClockPart): Piece[] {
   const unit = hz(context.band.high - context.band.low);
-  const blocking = context.interferers.filter((i) => i.blocking);
   const pieces: Piece[] = [];
   for (const interval of set.feasible) {
     const range = driftSafeRange(interval, part.tolerancePpm);
     if (!range) continue;
-    const slacks = linearSlacks(context.band, context.guard, interval.zone, blocking, range, part.tolerancePpm);
+    const slacks = planSlacks(context, interval, range, part.tolerancePpm);
     let bound: number;
     if (range.low === range.high) {
       bound = modelSlack(slacks, hz(range.low));

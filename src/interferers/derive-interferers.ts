@@ -12,6 +12,8 @@ import { levelThreshold } from './level-threshold.js';
 import { mixingProducts } from './mixing-products.js';
 import { neighbourDraft } from './neighbours.js';
 import { uniqueLabels } from './unique-labels.js';
+import { channelView } from '../scenario/channel-view.js';
+import { dbText } from './words.js';
 
 /** The mixing order when a scenario states none. */
 export const DEFAULT_MAX_ORDER = 3;
@@ -54,14 +56,24 @@ export interface DerivedInterferers {
  * suffixed ` #2`, ...). A list whose blocking interferers would take too
  * long to search is refused here, before any solving (refuseTooManyImages).
  *
+ * With several channels the list is derived against one of them (`channel`,
+ * through channelView: its threshold, margins and requirements): every other
+ * channel is an interferer of kind 'channel' at its strongest level, always
+ * blocking, with the planned channel's channelSpacing (default: its margin) as
+ * its margin; the channels are input signals like any other, so their
+ * harmonics and the products among them come from the one generator.
+ *
  * @param scenario the validated scenario
  * @param listing the same scenario with its signals where they decide what is listed and which way round a product is written (default: the scenario itself): the IF-shift search passes the neighbours swept over the shift range, so that every shift lists the same interferers in the same order
+ * @param channel the channel the list is derived against, its index in scenario.channels (default 0)
  * @returns the interferers (extents rateMultiple·r + [low, high] in Hz, levels in dBFS) and the summary
  * @throws RangeError for a malformed filter (see leastAttenuation)
  * @throws WorkBoundError (an InputError) past MOST_PRODUCTS listed products, or MOST_IMAGES images of the blocking ones
  * @example deriveInterfererList(s).summary.pruned // 0
  */
-export function deriveInterfererList(scenario: Scenario, listing: Scenario = scenario): DerivedInterferers {
+export function deriveInterfererList(whole: Scenario, listed: Scenario = whole, channel = 0): DerivedInterferers {
+  const scenario = channelView(whole, channel);
+  const listing = listed === whole ? scenario : channelView(listed, channel);
   const threshold = levelThreshold(scenario);
   const signals = inputSignals(scenario);
   const listingSignals = listing === scenario ? signals : inputSignals(listing);
@@ -72,10 +84,12 @@ export function deriveInterfererList(scenario: Scenario, listing: Scenario = sce
     harmonicOrder: scenario.harmonicOrder,
     threshold,
     listing: listingSignals,
+    ownChannel: channel,
   };
   const products = mixingProducts({ ...request, signals });
   const sources = (s: Scenario, made: readonly InterfererDraft[]) => [
-    wantedDraft(s),
+    wantedDraft(s, channel),
+    ...otherChannelDrafts(s, channel),
     ...s.boardSpurs.flatMap((spur, i) => boardSpurDrafts(spur, i, s)),
     ...s.neighbours.map((n, i) => neighbourDraft(n, i, s)),
     ...made,
@@ -85,6 +99,7 @@ export function deriveInterfererList(scenario: Scenario, listing: Scenario = sce
     own,
     scenario,
     listing === scenario ? own : sources(listing, mixingProducts({ ...request, signals: listingSignals }).drafts),
+    channel,
   );
   const drafts = [...own.slice(1), ...converterSpurDrafts(scenario), ...images.drafts];
   const interferers = uniqueLabels(drafts).map((draft) => complete(draft, scenario));
@@ -104,8 +119,8 @@ export function deriveInterfererList(scenario: Scenario, listing: Scenario = sce
   };
 }
 
-/** The wanted band as an image source: at its strongest level, moving with the IF. */
-function wantedDraft(scenario: Scenario): InterfererDraft {
+/** The wanted band (the planned channel) as an image source: at its strongest level, moving with the IF. */
+function wantedDraft(scenario: Scenario, channel: number): InterfererDraft {
   return {
     label: 'wanted',
     kind: 'neighbour',
@@ -116,8 +131,33 @@ function wantedDraft(scenario: Scenario): InterfererDraft {
     low: scenario.wanted.low,
     high: scenario.wanted.high,
     level: scenario.wanted.strongestLevel,
-    mixing: [{ signal: 'wanted', index: 0, harmonic: 1, plus: 1, minus: 0 }],
+    mixing: [{ signal: 'wanted', index: channel, harmonic: 1, plus: 1, minus: 0 }],
   };
+}
+
+/** Every channel but the planned one, as interferers of kind 'channel' kept the planned channel's spacing away. */
+function otherChannelDrafts(scenario: Scenario, channel: number): InterfererDraft[] {
+  if (scenario.channels.length <= 1) return [];
+  const spacing = scenario.requirements.channelSpacing ?? scenario.requirements.margin;
+  return scenario.channels.flatMap((other, index): InterfererDraft[] =>
+    index === channel
+      ? []
+      : [
+          {
+            label: other.label,
+            kind: 'channel',
+            order: null,
+            source: `channel ${other.label} at its strongest level, ${dbText(other.strongestLevel, 'dBFS')}`,
+            rateMultiple: 0,
+            shiftMultiple: 1,
+            low: other.low,
+            high: other.high,
+            level: other.strongestLevel,
+            mixing: [{ signal: 'wanted', index, harmonic: 1, plus: 1, minus: 0 }],
+            ownMargin: spacing,
+          },
+        ],
+  );
 }
 
 /**

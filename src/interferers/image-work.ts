@@ -66,6 +66,8 @@ export function refuseTooManyImages(scenario: Scenario, interferers: readonly In
 /** The scenario field an interferer comes from, and what narrowing it means. */
 function fieldOf(interferer: Interferer): { path: DocumentPath; narrow: string } {
   const terms = interferer.mixing ?? [];
+  if (interferer.kind === 'channel')
+    return { path: ['wanted', terms[0]?.index ?? 0], narrow: 'raise converter.minRate or plan fewer channels together' };
   if (interferer.kind === 'intermod') {
     return {
       path: ['maxOrder'],

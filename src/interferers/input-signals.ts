@@ -20,7 +20,8 @@ export interface InputSignal {
 
 /**
  * Every signal at the converter input, in scenario order: the wanted band
- * at its strongest level, each neighbour at its level after the filter's
+ * (or each channel of a list, labelled by its own label) at its strongest
+ * level, each neighbour at its level after the filter's
  * least attenuation over its band, and each board spur with its own
  * harmonics (1/h roll-off, less the filter where coupled before it).
  *
@@ -29,17 +30,16 @@ export interface InputSignal {
  * @example inputSignals(s)[0] // { label: 'wanted', low: 65e6, high: 75e6, level: -1 }
  */
 export function inputSignals(scenario: Scenario): InputSignal[] {
-  const { wanted } = scenario;
-  const signals: InputSignal[] = [
-    {
-      ref: { signal: 'wanted', index: 0, harmonic: 1 },
-      label: 'wanted',
-      low: wanted.low,
-      high: wanted.high,
-      level: wanted.strongestLevel,
-      shiftMultiple: 1,
-    },
-  ];
+  // One channel is read from `wanted` itself: the IF-shift search moves it there.
+  const channels = scenario.channels.length > 1 ? scenario.channels : [{ ...scenario.wanted, label: 'wanted' }];
+  const signals: InputSignal[] = channels.map((channel, index) => ({
+    ref: { signal: 'wanted', index, harmonic: 1 },
+    label: channel.label,
+    low: channel.low,
+    high: channel.high,
+    level: channel.strongestLevel,
+    shiftMultiple: 1,
+  }));
   scenario.neighbours.forEach((n, index) => {
     signals.push({
       ref: { signal: 'neighbour', index, harmonic: 1 },

@@ -19,11 +19,14 @@ export type InterfererDraft = Omit<Interferer, 'requiredMargin' | 'blocking'> & 
  * @example requiredMarginOf({ kind: 'neighbour', ownMargin: hz(0) }, s) // 0 (its own margin wins over the scenario's)
  */
 export function requiredMarginOf(draft: InterfererDraft, scenario: Scenario): Hz {
-  return draft.ownMargin ?? scenario.requirements.kindMargins?.[draft.kind] ?? scenario.requirements.margin;
+  const kindMargin = draft.kind === 'channel' ? undefined : scenario.requirements.kindMargins?.[draft.kind];
+  return draft.ownMargin ?? kindMargin ?? scenario.requirements.margin;
 }
 
 /**
- * Completes a draft with its required margin (requiredMarginOf) and its blocking flag.
+ * Completes a draft with its required margin (requiredMarginOf) and its
+ * blocking flag. Another channel always blocks: channels' aliases must stay
+ * apart whatever their levels, as each must sit whole in a zone.
  *
  * @param draft label, kind, order, source, extent (Hz) and level (dBFS)
  * @param scenario the validated scenario
@@ -32,7 +35,7 @@ export function requiredMarginOf(draft: InterfererDraft, scenario: Scenario): Hz
  */
 export function complete(draft: InterfererDraft, scenario: Scenario): Interferer {
   const { ownMargin: _own, ...rest } = draft;
-  return { ...rest, requiredMargin: requiredMarginOf(draft, scenario), blocking: isBlocking(draft.level, scenario) };
+  return { ...rest, requiredMargin: requiredMarginOf(draft, scenario), blocking: draft.kind === 'channel' || isBlocking(draft.level, scenario) };
 }
 
 /** A fixed extent k·[low, high] for k ≥ 0, Hz. */

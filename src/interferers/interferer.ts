@@ -1,6 +1,7 @@
 import type { Db, Hz } from '../units/quantities.js';
 
-export type InterfererKind = 'harmonic' | 'spur' | 'neighbour' | 'intermod' | 'converter';
+/** What an interferer is; 'channel': another channel of the same scenario (a list of channels in `wanted`). */
+export type InterfererKind = 'harmonic' | 'spur' | 'neighbour' | 'intermod' | 'converter' | 'channel';
 
 /**
  * Anything that may alias onto the wanted band, as an input extent linear in
@@ -47,7 +48,7 @@ export interface Interferer {
 /** Which signal at the converter input a mixing term takes. */
 export interface SignalRef {
   readonly signal: 'wanted' | 'neighbour' | 'board spur';
-  /** Index among the scenario's neighbours or board spurs (0 for the wanted band). */
+  /** Index among the scenario's neighbours or board spurs; for 'wanted', among its channels (0: the wanted band, or the first channel). */
   readonly index: number;
   /** The board spur's own harmonic (1: the fundamental; 1 for other signals). */
   readonly harmonic: number;

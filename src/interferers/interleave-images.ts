@@ -40,6 +40,7 @@ export interface ImageList {
  * @param sources the drafts of the input signals and products (their `mixing` is kept, the image placed beside it)
  * @param scenario the validated scenario (interleave, threshold)
  * @param listing the same sources as they decide which images are listed (default: `sources`; see mixingProducts)
+ * @param ownChannel the channel planned (its index among the scenario's channels, default 0): its images are always listed and named as the wanted band's
  * @returns drafts labelled `IL image k/M−` / `IL image k/M+` for the wanted band, `IL image k/M− <source>` otherwise
  * @example interleaveImages([], s).drafts.length // 0
  */
@@ -47,6 +48,7 @@ export function interleaveImages(
   sources: readonly InterfererDraft[],
   scenario: Scenario,
   listing: readonly InterfererDraft[] = sources,
+  ownChannel = 0,
 ): ImageList {
   const interleave = scenario.converter.interleave;
   if (interleave === null) return { drafts: [], pruned: 0 };
@@ -56,8 +58,8 @@ export function interleaveImages(
   for (const [index, source] of sources.entries()) {
     if (source.rateMultiple !== 0) continue;
     const decides = listing[index]!;
-    const isWanted =
-      source.mixing?.length === 1 && source.mixing[0]!.signal === 'wanted' && source.mixing[0]!.plus === 1 && source.mixing[0]!.minus === 0;
+    const term = source.mixing?.length === 1 ? source.mixing[0]! : null;
+    const isWanted = term !== null && term.signal === 'wanted' && term.index === ownChannel && term.plus === 1 && term.minus === 0;
     const dbc = imageDbc(interleave, Math.max(Math.abs(source.low), Math.abs(source.high)));
     const level = db(source.level + dbc);
     const listed = db(decides.level + imageDbc(interleave, Math.max(Math.abs(decides.low), Math.abs(decides.high))));

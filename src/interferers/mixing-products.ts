@@ -31,6 +31,12 @@ export interface ProductRequest {
    * range, so that every shift lists the same products in the same order.
    */
   readonly listing?: readonly InputSignal[];
+  /**
+   * Which channel the products are listed against (its index among the
+   * 'wanted' signals, default 0): its own in-band distortion is counted, not
+   * listed; another channel's is an interferer like any product.
+   */
+  readonly ownChannel?: number;
 }
 
 /** The products listed, and what was left out. */
@@ -83,7 +89,8 @@ export function mixingProducts(request: ProductRequest): ProductList {
   let pruned = 0;
   let inBand = 0;
   let strongestPruned = -Infinity;
-  const wantedOnly = sorted.map((s) => s.ref.signal === 'wanted');
+  const ownChannel = request.ownChannel ?? 0;
+  const wantedOnly = sorted.map((s) => s.ref.signal === 'wanted' && s.ref.index === ownChannel);
   const prune = (count: number, level: number) => {
     pruned += count;
     if (count > 0) strongestPruned = Math.max(strongestPruned, level);
@@ -250,9 +257,11 @@ export function productDraft(
   const shiftMultiple = flip ? -shift : shift;
   if (single && single[2] === 0) {
     const signal = signals[single[0]]!;
-    const whose = signal.ref.signal === 'wanted' ? 'the wanted band' : `${signal.ref.signal} ${signal.label}`;
+    // One wanted band keeps its own words; a channel of a list is named by its label.
+    const wantedBand = signal.ref.signal === 'wanted' && signal.label === 'wanted';
+    const whose = wantedBand ? 'the wanted band' : `${signal.ref.signal === 'wanted' ? 'channel' : signal.ref.signal} ${signal.label}`;
     return {
-      label: signal.ref.signal === 'wanted' ? `H${n} wanted` : `${signal.label} H${n}`,
+      label: wantedBand ? `H${n} wanted` : `${signal.label} H${n}`,
       kind: 'harmonic',
       order: n,
       source: `${ordinal(n)} harmonic of ${whose}, made in the converter (${law.note})`,

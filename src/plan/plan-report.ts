@@ -3,11 +3,11 @@ import type { Band, Guard } from '../math/band.js';
 import { extentMagnitude } from '../math/fold-extent.js';
 import type { Goal } from '../scenario/scenario.js';
 import type { Interferer } from '../interferers/interferer.js';
-import type { PlanContext } from '../solve/plan-context.js';
+import { channelPlans, hasChannels, type PlanContext } from '../solve/plan-context.js';
 import { withFullChecks, type Candidate, type PlanResult } from './solve-plan.js';
-import type { CheckResult, RateEvaluation } from '../solve/evaluate-rate.js';
+import type { ChannelEvaluation, CheckResult, RateEvaluation } from '../solve/evaluate-rate.js';
 import type { ShiftSearch } from '../solve/if-shift/best-shift-and-rate.js';
-import { limitText, type LimitKind } from '../solve/limited-by.js';
+import { channelCheckLabel, limitText, type LimitKind } from '../solve/limited-by.js';
 import { nextLimit, type NextLimit } from '../solve/next-limit.js';
 import { PAPER_DESIGN_CAUTION } from './caution.js';
 import { shiftReport, type ShiftReport } from './shift-report.js';
@@ -33,6 +33,42 @@ export interface ReportedFeasible {
 export interface ReportedCheck extends CheckResult {
   /** Input frequencies at the candidate's nominal rate, Hz (magnitudes). */
   readonly input: readonly [Hz, Hz];
+}
+
+/** One channel of the plan as reported (one entry, labelled "wanted", for a single wanted band). */
+export interface ReportedChannel {
+  readonly label: string;
+  readonly low: Hz;
+  readonly high: Hz;
+  /** dBFS; null for a plan built by hand. */
+  readonly weakestLevel: Db | null;
+  readonly strongestLevel: Db | null;
+  /** Its guard bands below and above, Hz. */
+  readonly guard: { readonly below: Hz; readonly above: Hz };
+}
+
+/** One channel judged at a candidate's rate: its zone, image, NCO, worst check and the checks against it. */
+export interface ReportedChannelResult {
+  readonly label: string;
+  readonly zone: number | null;
+  readonly inverted: boolean | null;
+  /** Aliased centre of the channel, Hz; null when it straddles a zone edge. */
+  readonly center: Hz | null;
+  /** Frequency the channel's NCO is tuned to, Hz (its aliased centre). */
+  readonly nco: Hz | null;
+  /** The channel arrives inverted: conjugate its complex baseband output. */
+  readonly conjugate: boolean | null;
+  readonly image: { readonly low: Hz; readonly high: Hz } | null;
+  readonly zoneEdgeMargin: Hz;
+  readonly worstMargin: Hz;
+  readonly worstSlack: Hz;
+  /** The check with the least slack against this channel: an interferer's label (as in checks) or "zone edge". */
+  readonly limitedBy: string;
+  readonly limitedByKind: LimitKind;
+  /** Every check against this channel passes (the anti-alias mask is the candidate's, see pass there). */
+  readonly pass: boolean;
+  /** The checks against this channel, labelled as its own interferers are (listed as the candidate's checks are). */
+  readonly checks: readonly ReportedCheck[];
 }
 
 export interface ReportedCandidate {
@@ -104,18 +140,29 @@ export interface ReportedCandidate {
   readonly decimationFactor: number | null;
   /** Input centre minus the nearest odd multiple of rate/4, Hz (0: the band's centre lands on rate/4); null when the band straddles. */
   readonly quarterRateOffset: Hz | null;
+  /**
+   * Each channel judged on its own, in the scenario's order (one entry for a
+   * single wanted band). With several channels the fields above are the worst
+   * over them (worstMargin, worstSlack, pass, limitedBy written
+   * `channel: check`) or the first channel's (zone, inverted, center, nco,
+   * image), and `checks` holds every channel's, labelled `channel: check`.
+   */
+  readonly channels: readonly ReportedChannelResult[];
 }
 
 /** The solved plan for people and programs alike: the `solve` JSON contract. */
 export interface PlanReport {
   readonly scenario: string;
+  /** The wanted band; with several channels, the first one's. */
   readonly band: Band;
   readonly guard: Guard;
+  /** Every channel, in the scenario's order (one entry, labelled "wanted", for a single wanted band). */
+  readonly channels: readonly ReportedChannel[];
   /** Weakest wanted level at which the requirements apply, dBFS; null for a plan built by hand. */
   readonly weakestLevel: Db | null;
   readonly search: { readonly minRate: Hz; readonly maxRate: Hz };
   readonly goal: Goal;
-  /** Every interferer, or past a thousand the blocking ones and the strongest others (see interferersListed). */
+  /** Every interferer, or past a thousand the blocking ones and the strongest others (see interferersListed); with several channels, every channel's, labelled `channel: interferer`. */
   readonly interferers: readonly ReportedInterferer[];
   /** "all", or "nearest": the blocking interferers and the strongest of the others, a thousand in all. */
   readonly interferersListed: 'all' | 'nearest';
@@ -162,8 +209,9 @@ export function planReport(
   after: AfterRateInputs | null = null,
   listing: Listing = 'bounded',
 ): PlanReport {
-  const listed = listedInterferers(context.interferers, listing);
-  const byLabel = new Map(context.interferers.map((i) => [i.label, i]));
+  const all = everyInterferer(context);
+  const listed = listedInterferers(all, listing);
+  const byLabel = new Map(all.map((i) => [i.label, i]));
   const report = (c: Candidate) => reportedCandidate(context, byLabel, c, after, listing);
   // A candidate the mask fails moves behind the passing ones (stable: the solver's order is kept otherwise).
   const ordered = result.candidates
@@ -178,12 +226,20 @@ export function planReport(
     scenario: name,
     band: context.band,
     guard: context.guard,
+    channels: channelPlans(context).map((plan) => ({
+      label: plan.label ?? 'wanted',
+      low: plan.band.low,
+      high: plan.band.high,
+      weakestLevel: plan.weakestLevel ?? null,
+      strongestLevel: plan.strongestLevel ?? null,
+      guard: { below: plan.guard.low, above: plan.guard.high },
+    })),
     weakestLevel: context.weakestLevel ?? null,
     search: { minRate: context.limits.minRate, maxRate: context.limits.maxRate },
     goal: context.goal,
     interferers: listed.interferers,
     interferersListed: listed.listed,
-    interferersOmitted: context.interferers.length - listed.interferers.length,
+    interferersOmitted: all.length - listed.interferers.length,
     windows: result.windows,
     feasible: result.feasible.map((f) => {
       const width = hz(f.maxRate - f.minRate);
@@ -246,22 +302,74 @@ function reportedCandidate(
     jitterSnrDb: candidate.snr ? candidate.snr.jitterSnrDb : null,
     channelSnrDb,
     partSearch: candidate.partSearch,
-    checks: listed.checks.map((check) => {
-      const interferer = byLabel.get(check.label)!;
-      const offset = interferer.rateMultiple * e.rate;
-      const magnitude = extentMagnitude(hz(offset + interferer.low), hz(offset + interferer.high));
-      const input = [hz(magnitude.low), hz(magnitude.high)] as const;
-      return { ...check, input };
-    }),
+    checks: listed.checks.map((check) => reportedCheck(check, byLabel, e.rate)),
     afterRate: shownAfter,
     channelSnrWithDriverDb: channelSnrWithDriver(channelSnrDb, atRate?.noise ?? null),
     checksListed: listed.listed,
-    checksOmitted: context.interferers.length - listed.checks.length,
+    checksOmitted: byLabel.size - listed.checks.length,
     maskBandsOmitted: atRate === null || shownAfter === null ? 0 : atRate.mask.bands.length - shownAfter.mask.bands.length,
     next: nextLimit(e, context.band.high - context.band.low),
     decimationFactor: context.goal.kind === 'decimation' ? e.rate / context.goal.outputRate : null,
     quarterRateOffset: e.zone === null ? null : quarterRateOffset((context.band.low + context.band.high) / 2, e.rate),
+    channels: channelResults(context, e, listing),
   };
+}
+
+/** Each channel's result at the candidate's rate (the evaluation itself, labelled "wanted", for one band). */
+function channelResults(context: PlanContext, e: RateEvaluation, listing: Listing): ReportedChannelResult[] {
+  if (!e.channels) return [reportedChannelResult({ ...e, label: 'wanted' }, context, listing)];
+  const plans = channelPlans(context);
+  return e.channels.map((c, i) => reportedChannelResult(c, plans[i]!, listing));
+}
+
+/** One check with the interferer's input frequencies at the rate. */
+function reportedCheck(check: CheckResult, byLabel: ReadonlyMap<string, Interferer>, rate: Hz): ReportedCheck {
+  const interferer = byLabel.get(check.label)!;
+  const offset = interferer.rateMultiple * rate;
+  const magnitude = extentMagnitude(hz(offset + interferer.low), hz(offset + interferer.high));
+  return { ...check, input: [hz(magnitude.low), hz(magnitude.high)] as const };
+}
+
+/** A channel's own result at a candidate's rate, its checks listed as the candidate's are. */
+function reportedChannelResult(c: ChannelEvaluation, plan: PlanContext, listing: Listing): ReportedChannelResult {
+  const byLabel = labelsOf(plan.interferers);
+  const listed = listedChecks(c.checks, c.checkScope === 'all', c.limitedBy, listing);
+  return {
+    label: c.label,
+    zone: c.zone,
+    inverted: c.inverted,
+    center: c.center,
+    nco: c.center,
+    conjugate: c.inverted,
+    image: c.image,
+    zoneEdgeMargin: c.zoneEdgeMargin,
+    worstMargin: c.worstMargin,
+    worstSlack: c.worstSlack,
+    limitedBy: limitText(c.limitedBy),
+    limitedByKind: c.limitedBy.kind,
+    pass: c.pass,
+    checks: listed.checks.map((check) => reportedCheck(check, byLabel, c.rate)),
+  };
+}
+
+const labelMaps = new WeakMap<readonly Interferer[], ReadonlyMap<string, Interferer>>();
+
+/** An interferer list by label, built once per list (every candidate asks). */
+function labelsOf(interferers: readonly Interferer[]): ReadonlyMap<string, Interferer> {
+  let map = labelMaps.get(interferers);
+  if (!map) {
+    map = new Map(interferers.map((i) => [i.label, i]));
+    labelMaps.set(interferers, map);
+  }
+  return map;
+}
+
+/** Every interferer of the plan: its own list, or with several channels every channel's, labelled `channel: interferer`. */
+function everyInterferer(context: PlanContext): readonly Interferer[] {
+  if (!hasChannels(context)) return context.interferers;
+  return channelPlans(context).flatMap((plan) =>
+    plan.interferers.map((i) => ({ ...i, label: channelCheckLabel(plan.label ?? '', i.label) })),
+  );
 }
 
 /**

@@ -4,11 +4,11 @@ import * as z from 'zod';
 import { formatFrequency } from '../units/format-frequency.js';
 import { hz, type Hz } from '../units/quantities.js';
 import type { Band } from '../math/band.js';
-import type { Scenario } from './scenario.js';
+import type { Channel, Requirements, Scenario, WantedBand } from './scenario.js';
 import { refuseAt } from './band-forms.js';
 import { converterSchema } from './converter-schema.js';
 import { filterSchema } from './filter-schema.js';
-import { goalSchema, guardSchema, requirementsSchema, wantedSchema } from './plan-schema.js';
+import { goalSchema, guardSchema, requirementsSchema, wantedOrChannelsSchema, type ChannelDraft, type GuardSides } from './plan-schema.js';
 import { guardHz, wholeNumber } from './scenario-fields.js';
 import { boardSpurSchema, neighbourSchema } from './signals-schema.js';
 import { clockPartSchema } from './clock-part-schema.js';
@@ -48,7 +48,9 @@ export const scenarioFileSchema = z
       .meta({ description: 'A base scenario file, relative to this one; objects merge key by key, lists replace' }),
     name: z.string().regex(/\S/, { error: 'a name that is not blank' }).meta({ description: 'Variant name, e.g. "Heron-4 base"' }),
     description: z.string().default('').meta({ description: 'What this variant is, for people' }),
-    wanted: wantedSchema,
+    wanted: wantedOrChannelsSchema.meta({
+      description: 'The wanted IF band; or a list of channels digitised together, each with a label (see the README)',
+    }),
     guard: guardSchema.prefault(0),
     converter: converterSchema,
     harmonicOrder: wholeNumber(2, 15, 'Highest harmonic order checked of each signal at the converter input (default 5)').default(5),
@@ -80,8 +82,12 @@ export const scenarioFileSchema = z
     description: 'One receiver variant for the ifzone band-pass sampling frequency planner',
   })
   .transform((file, ctx): Scenario => {
-    const { wanted, converter } = file;
-    if (wanted.high > converter.inputBandwidth) {
+    const { converter } = file;
+    const listed = Array.isArray(file.wanted);
+    const channels = listed ? (file.wanted as ChannelDraft[]).map((draft) => channelOf(draft, file.guard, file.requirements)) : [];
+    const wanted: WantedBand = listed ? bandOnly(channels[0]!) : (file.wanted as WantedBand);
+    if (listed) channels.forEach((channel, i) => refuseChannelOutside(ctx, channel, i, converter.inputBandwidth, file.filter));
+    else if (wanted.high > converter.inputBandwidth) {
       refuseAt(
         ctx,
         ['wanted', 'high'],
@@ -90,19 +96,32 @@ export const scenarioFileSchema = z
         [['converter', 'inputBandwidth']],
       );
     }
-    if (file.ifShift) refuseShiftOutside(ctx, wanted, file.ifShift, converter.inputBandwidth);
+    if (file.ifShift && listed) {
+      refuseAt(
+        ctx,
+        ['ifShift'],
+        'no IF shift with a list of channels (the shift search plans one wanted band; give wanted as one object to use it)',
+        'an IF shift',
+        [['wanted']],
+      );
+    }
+    if (file.ifShift && !listed) refuseShiftOutside(ctx, wanted, file.ifShift, converter.inputBandwidth);
     refuseRepeatedLabels(ctx, [
+      ['wanted', channels],
       ['boardSpurs', file.boardSpurs],
       ['neighbours', file.neighbours],
       ['clocks', file.clocks],
     ]);
     const width = hz(wanted.high - wanted.low);
-    const guard = guardBands(guardHz(file.guard.low, width), guardHz(file.guard.high, width));
-    refuseTooMuchWork(ctx, { ...file, guard });
+    const guard = listed ? channels[0]!.guard : guardBands(guardHz(file.guard.low, width), guardHz(file.guard.high, width));
+    const requirements = listed ? channels[0]!.requirements : file.requirements;
+    for (const channel of listed ? channels : [{ ...wanted, guard, requirements }])
+      refuseTooMuchWork(ctx, { ...file, wanted: channel, guard: channel.guard, requirements: channel.requirements });
     return {
       name: file.name,
       description: file.description,
       wanted,
+      channels: listed ? channels : [{ label: 'wanted', ...wanted, guard, requirements }],
       guard,
       converter,
       harmonicOrder: file.harmonicOrder,
@@ -110,7 +129,7 @@ export const scenarioFileSchema = z
       boardSpurs: file.boardSpurs,
       neighbours: file.neighbours,
       filter: file.filter,
-      requirements: file.requirements,
+      requirements,
       clocks: file.clocks,
       goal: file.goal,
       ifShift: file.ifShift,
@@ -125,6 +144,62 @@ export type ScenarioFile = z.input<typeof scenarioFileSchema>;
 type Same<A, B> = (<T>() => T extends A ? 1 : 2) extends <T>() => T extends B ? 1 : 2 ? true : false;
 const outputIsScenario: Same<z.output<typeof scenarioFileSchema>, Scenario> = true;
 void outputIsScenario;
+
+/** A channel of a list resolved: its guard (percentages of its own width) and its requirements over the scenario's. */
+function channelOf(draft: ChannelDraft, scenarioGuard: GuardSides, scenarioRequirements: Requirements): Channel {
+  const width = hz(draft.high - draft.low);
+  const sides = draft.guard ?? scenarioGuard;
+  return {
+    label: draft.label,
+    ...bandOnly(draft),
+    guard: guardBands(guardHz(sides.low, width), guardHz(sides.high, width)),
+    requirements: { ...scenarioRequirements, ...draft.requirements },
+  };
+}
+
+/** The band and levels of a channel alone. */
+function bandOnly(channel: WantedBand): WantedBand {
+  return { low: channel.low, high: channel.high, weakestLevel: channel.weakestLevel, strongestLevel: channel.strongestLevel };
+}
+
+/** Each channel of a list must lie inside the converter's input bandwidth and a Butterworth filter's pass band. */
+function refuseChannelOutside(
+  ctx: z.RefinementCtx,
+  channel: Channel,
+  index: number,
+  inputBandwidth: Hz,
+  filter: Scenario['filter'],
+): void {
+  const name = `wanted[${index}] (${JSON.stringify(channel.label)})`;
+  if (channel.high > inputBandwidth) {
+    refuseAt(
+      ctx,
+      ['wanted', index, 'high'],
+      `a channel at or below the converter's input bandwidth (converter.inputBandwidth ${formatFrequency(inputBandwidth)})`,
+      `${name} up to ${formatFrequency(channel.high)}`,
+      [['converter', 'inputBandwidth']],
+    );
+  }
+  if (filter?.kind !== 'butterworth') return;
+  if (channel.low < filter.passLow) {
+    refuseAt(
+      ctx,
+      ['wanted', index, 'low'],
+      `a channel inside the filter's pass band (filter.passLow ${formatFrequency(filter.passLow)})`,
+      `${name} from ${formatFrequency(channel.low)}`,
+      [['filter', 'passLow']],
+    );
+  }
+  if (channel.high > filter.passHigh) {
+    refuseAt(
+      ctx,
+      ['wanted', index, 'high'],
+      `a channel inside the filter's pass band (filter.passHigh ${formatFrequency(filter.passHigh)})`,
+      `${name} up to ${formatFrequency(channel.high)}`,
+      [['filter', 'passHigh']],
+    );
+  }
+}
 
 function refuseRepeatedLabels(
   ctx: z.RefinementCtx,

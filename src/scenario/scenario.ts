@@ -11,8 +11,15 @@ export interface Scenario {
   /** Variant name, e.g. "Heron-4 base". */
   readonly name: string;
   readonly description: string;
-  /** The wanted IF band and the levels at which it is planned. */
+  /** The wanted IF band and the levels at which it is planned; with several channels, the first one. */
   readonly wanted: WantedBand;
+  /**
+   * Every channel digitised by the converter, in the file's order, at least
+   * one: a `wanted` object gives one channel labelled "wanted" (its guard and
+   * requirements the scenario's); a `wanted` list gives one per entry. The
+   * first is `wanted`, `guard` and `requirements`.
+   */
+  readonly channels: readonly Channel[];
   /** Guard bands for the anti-alias filter's transitions, Hz. */
   readonly guard: Guard;
   readonly converter: Converter;
@@ -64,6 +71,16 @@ export interface WantedBand extends Band {
   readonly weakestLevel: Db;
   /** Strongest wanted level, dBFS: the level at which harmonic figures are quoted. */
   readonly strongestLevel: Db;
+}
+
+/** One channel through the converter: its band, levels, guards and what it must keep. */
+export interface Channel extends WantedBand {
+  /** Unique among the channels, neighbours, board spurs and clock parts, e.g. "L1". */
+  readonly label: string;
+  /** Its guard bands, Hz (its own, or the scenario's with percentages of its own width). */
+  readonly guard: Guard;
+  /** Its requirements: the scenario's, with the fields it states replaced. */
+  readonly requirements: Requirements;
 }
 
 export interface Converter {
@@ -161,6 +178,8 @@ export interface Requirements {
   readonly tolerancePpm: Ppm;
   /** Margins by interferer kind, overriding `margin` for that kind (absent: none). */
   readonly kindMargins?: KindMargins;
+  /** Margin to keep between another channel's alias and this channel's alias, Hz (absent: `margin`). */
+  readonly channelSpacing?: Hz;
 }
 
 /** A clock part: a crystal, an oscillator, or a reference feeding a synthesiser. */

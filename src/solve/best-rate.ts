@@ -4,7 +4,7 @@ import { evaluateRate, type RateEvaluation } from './evaluate-rate.js';
 import type { FeasibleInterval } from './feasible-set.js';
 import type { PlanContext } from './plan-context.js';
 import { driftSafeRange } from './drift.js';
-import { linearSlacks, maximiseWorstSlack } from './widest-margin-lp.js';
+import { maximiseWorstSlack, planSlacks } from './widest-margin-lp.js';
 import { limitText } from './limited-by.js';
 
 /** Decimation ratios tried one by one inside an interval before falling back to the LP optimum's neighbours. */
@@ -47,8 +47,7 @@ function widestMargin(
   judge: (rate: number) => RateEvaluation,
 ): RateEvaluation {
   if (range.low === range.high) return judge(range.low);
-  const blocking = context.interferers.filter((i) => i.blocking);
-  const slacks = linearSlacks(context.band, context.guard, interval.zone, blocking, range, context.tolerancePpm);
+  const slacks = planSlacks(context, interval, range, context.tolerancePpm);
   const answer = maximiseWorstSlack(slacks, range, hz(context.band.high - context.band.low));
   if (!answer) throw new Error(`widest-margin LP infeasible on ${interval.minRate}–${interval.maxRate} Hz, a feasible interval`);
   const judged = judge(answer.rate);

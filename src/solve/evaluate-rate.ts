@@ -17,9 +17,9 @@ import {
 import { forbiddenRates } from './forbidden-rates.js';
 import { guardedBand } from '../windows/enumerate-windows.js';
 import type { Interferer, InterfererKind } from '../interferers/interferer.js';
-import type { PlanContext } from './plan-context.js';
+import { channelPlans, hasChannels, type PlanContext } from './plan-context.js';
 import { driftRange } from './drift.js';
-import { interfererLimit, ZONE_EDGE, type Limit } from './limited-by.js';
+import { channelCheckLabel, interfererLimit, limitInChannel, ZONE_EDGE, type Limit } from './limited-by.js';
 
 /** One interferer measured at one rate. */
 export interface CheckResult {
@@ -71,7 +71,18 @@ export interface RateEvaluation {
   /** That check's margin minus its requirement, Hz: the figure candidates are ranked by. */
   readonly worstSlack: Hz;
   readonly pass: boolean;
+  /**
+   * With several channels, each channel judged on its own, in order; the
+   * fields above are then the worst over them (worstMargin, worstSlack,
+   * zoneEdgeMargin, pass, limitedBy named `channel: check`), the first
+   * channel's (zone, inverted, center, image), and every channel's checks
+   * with labels `channel: check`. Absent for one wanted band.
+   */
+  readonly channels?: readonly ChannelEvaluation[];
 }
+
+/** One channel of a plan of several channels judged at a rate: its own zone, image, checks and worst. */
+export type ChannelEvaluation = Omit<RateEvaluation, 'channels'> & { readonly label: string };
 
 /**
  * Judges one sampling rate against every check, exactly, over the clock's
@@ -92,6 +103,7 @@ export interface RateEvaluation {
  * @example evaluateRate(handWorked, hz(26e6), ppm(0), 'blocking') // { pass: true, zone: 2, worstSlack: 1e6, checkScope: 'blocking' }
  */
 export function evaluateRate(context: PlanContext, rate: Hz, tolerancePpm: Ppm, scope: CheckScope = 'all'): RateEvaluation {
+  if (hasChannels(context)) return evaluateChannels(context, rate, tolerancePpm, scope);
   const drift = driftRange(rate, tolerancePpm);
   const image = bandImage(context.band, rate);
   const zone = image?.zone ?? wantedZone(context.band, rate);
@@ -126,6 +138,32 @@ export function evaluateRate(context: PlanContext, rate: Hz, tolerancePpm: Ppm, 
     worstMargin: hz(worstMargin),
     worstSlack: hz(worstSlack),
     pass: zonePass && checks.every((c) => c.pass),
+  };
+}
+
+/** Every channel judged on its own, and the plan judged on the worst of them (see RateEvaluation.channels). */
+function evaluateChannels(context: PlanContext, rate: Hz, tolerancePpm: Ppm, scope: CheckScope): RateEvaluation {
+  const channels: ChannelEvaluation[] = channelPlans(context).map((plan) => ({
+    label: plan.label ?? '',
+    ...evaluateRate(plan, rate, tolerancePpm, scope),
+  }));
+  const first = channels[0]!;
+  const worst = channels.reduce((a, b) => (b.worstSlack < a.worstSlack ? b : a));
+  return {
+    rate,
+    tolerancePpm,
+    zone: first.zone,
+    inverted: first.inverted,
+    center: first.center,
+    image: first.image,
+    zoneEdgeMargin: hz(Math.min(...channels.map((c) => c.zoneEdgeMargin))),
+    checks: channels.flatMap((c) => c.checks.map((check) => ({ ...check, label: channelCheckLabel(c.label, check.label) }))),
+    checkScope: scope,
+    limitedBy: limitInChannel(worst.limitedBy, worst.label),
+    worstMargin: worst.worstMargin,
+    worstSlack: worst.worstSlack,
+    pass: channels.every((c) => c.pass),
+    channels,
   };
 }
 

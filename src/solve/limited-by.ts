@@ -6,8 +6,8 @@
 export type Limit =
   /** A blocking interferer, by its label. */
   | { readonly kind: 'interferer'; readonly label: string }
-  /** The guarded band reaches a fold edge (0 or rate/2 of its zone). */
-  | { readonly kind: 'zone edge' }
+  /** The guarded band reaches a fold edge (0 or rate/2 of its zone); with several channels, the channel's label. */
+  | { readonly kind: 'zone edge'; readonly channel?: string }
   /** A feasible interval ends at the converter's slowest or fastest rate. */
   | { readonly kind: 'rate limit' }
   /** Under the decimation goal, a clock part none of whose rates is a whole multiple of the output rate. */
@@ -33,12 +33,42 @@ export function interfererLimit(label: string): Limit {
 
 /**
  * A limit in words, as the tables and the JSON's `limitedBy` text write it:
- * the interferer's label, or the kind.
+ * the interferer's label, or the kind (after its channel's label, when it has one).
  *
  * @param limit the tagged limit
  * @returns the text
  * @example limitText({ kind: 'zone edge' }) // 'zone edge'
+ * @example limitText({ kind: 'zone edge', channel: 'L5' }) // 'L5: zone edge'
  */
 export function limitText(limit: Limit): string {
-  return limit.kind === 'interferer' ? limit.label : limit.kind;
+  if (limit.kind === 'interferer') return limit.label;
+  return limit.kind === 'zone edge' && limit.channel !== undefined ? `${limit.channel}: ${limit.kind}` : limit.kind;
+}
+
+/**
+ * A check's label within a plan of several channels: the channel's label,
+ * a colon, the check's own label. One expression, so that a check, a blocked
+ * range and a limit name the same thing the same way.
+ *
+ * @param channel the channel's label
+ * @param label the check's label (an interferer's, or a kind)
+ * @returns the label
+ * @example channelCheckLabel('L5', 'L1 H3') // 'L5: L1 H3'
+ */
+export function channelCheckLabel(channel: string, label: string): string {
+  return `${channel}: ${label}`;
+}
+
+/**
+ * A channel's limit as the plan of several channels names it: an
+ * interferer's label after the channel's, the zone edge with its channel.
+ *
+ * @param limit the limit within the channel
+ * @param channel the channel's label
+ * @returns the limit within the whole plan
+ * @example limitText(limitInChannel(interfererLimit('L1 H3'), 'L5')) // 'L5: L1 H3'
+ */
+export function limitInChannel(limit: Limit, channel: string): Limit {
+  if (limit.kind === 'interferer') return interfererLimit(channelCheckLabel(channel, limit.label));
+  return limit.kind === 'zone edge' ? { kind: 'zone edge', channel } : limit;
 }

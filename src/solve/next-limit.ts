@@ -22,9 +22,11 @@ export interface NextLimit {
  * @example nextLimit(evaluateRate(handWorked, hz(26e6), ppm(0)), hz(4e6))?.limitedBy // 'board tone 10M' (the rate/4 spur is the worst; the tone 5 MHz away is next)
  */
 export function nextLimit(evaluation: RateEvaluation, bandwidth: number): NextLimit | null {
-  const rows: { limit: Limit; margin: Hz; slack: number }[] = [
-    { limit: ZONE_EDGE, margin: evaluation.zoneEdgeMargin, slack: evaluation.zoneEdgeMargin },
-  ];
+  // Several channels: each channel's zone edge is a check of its own.
+  const edges: { limit: Limit; margin: Hz }[] = evaluation.channels
+    ? evaluation.channels.map((c) => ({ limit: { kind: 'zone edge', channel: c.label }, margin: c.zoneEdgeMargin }))
+    : [{ limit: ZONE_EDGE, margin: evaluation.zoneEdgeMargin }];
+  const rows: { limit: Limit; margin: Hz; slack: number }[] = edges.map((e) => ({ ...e, slack: e.margin }));
   for (const c of evaluation.checks)
     if (c.blocking) rows.push({ limit: interfererLimit(c.label), margin: c.margin, slack: c.margin - c.requiredMargin });
   const next = rows.filter((r) => r.slack > evaluation.worstSlack + tieAllowance(bandwidth)).sort((a, b) => a.slack - b.slack)[0];

@@ -4,7 +4,8 @@ import type { Band } from '../math/band.js';
 import type { Interferer } from '../interferers/interferer.js';
 import { dbText } from '../interferers/words.js';
 import { imageMargin, normalisedExtent } from './fold-images.js';
-import type { PlanContext } from './plan-context.js';
+import { channelPlans, hasChannels, type PlanContext } from './plan-context.js';
+import { channelCheckLabel } from './limited-by.js';
 
 /** A blocking interferer that no sampling rate can clear, and what can. */
 export interface Conflict {
@@ -37,6 +38,13 @@ export interface Conflict {
  * @example unfixableConflicts(sContext) // []
  */
 export function unfixableConflicts(context: PlanContext): Conflict[] {
+  // Several channels: each channel's own conflicts, named as its checks are.
+  if (hasChannels(context)) return channelPlans(context).flatMap((plan) => conflictsOf(plan, plan.label ?? null));
+  return conflictsOf(context, null);
+}
+
+/** The conflicts of one band; with a channel's label, named `channel: interferer` and said of that channel. */
+function conflictsOf(context: PlanContext, channel: string | null): Conflict[] {
   const shifts = context.ifShift ? [context.ifShift.low, context.ifShift.high] : [0];
   const conflicts: Conflict[] = [];
   for (const interferer of context.interferers) {
@@ -57,12 +65,12 @@ export function unfixableConflicts(context: PlanContext): Conflict[] {
     if (!always) continue;
     const excess = db(interferer.level - context.levelThreshold);
     conflicts.push({
-      label: interferer.label,
+      label: channel === null ? interferer.label : channelCheckLabel(channel, interferer.label),
       kind: interferer.kind,
       distance: hz(nearest),
       requiredMargin: interferer.requiredMargin,
       excess,
-      sentence: conflictSentence(interferer, nearest, excess),
+      sentence: conflictSentence(interferer, nearest, excess, channel),
     });
   }
   return conflicts;
@@ -79,11 +87,12 @@ function stillDistance(interferer: Interferer, band: Band): number {
   return Math.min(...([1, -1] as const).map((side) => imageMargin(extent, band, { j: extent.rateMultiple, side, slope: 0 }, hz(0))));
 }
 
-function conflictSentence(interferer: Interferer, distance: number, excess: number): string {
+function conflictSentence(interferer: Interferer, distance: number, excess: number, channel: string | null): string {
+  const band = channel === null ? 'the wanted band' : `channel ${channel}`;
   const where =
     distance < 0
-      ? `lies inside the wanted band (${formatFrequency(-distance)} from its nearer edge)`
-      : `lies ${formatFrequency(distance)} from the wanted band`;
+      ? `lies inside ${band} (${formatFrequency(-distance)} from its nearer edge)`
+      : `lies ${formatFrequency(distance)} from ${band}`;
   const required = `where ${formatFrequency(interferer.requiredMargin)} is required`;
   const weaker = `${dbText(excess, 'dB')} less level would make it harmless`;
   const fixes = {
@@ -92,6 +101,7 @@ function conflictSentence(interferer: Interferer, distance: number, excess: numb
     harmonic: `a more linear converter or less drive (${weaker}), more filter rejection of the signals that make it, a different channel plan, or a smaller margin for harmonics (requirements.kindMargins.harmonic) can`,
     intermod: `a more linear converter or less drive (${weaker}), more filter rejection of the signals that make it, a different channel plan, or a smaller margin for mixing products (requirements.kindMargins.intermod) can`,
     converter: `a different channel plan, a converter with a lower spur (${weaker}), or a smaller margin for converter spurs (requirements.kindMargins.converter) can`,
+    channel: 'moving one of the two channels apart or a smaller spacing between channels (requirements.channelSpacing) can',
   }[interferer.kind];
   return `${interferer.label} (${interferer.kind}) ${where} ${required}; folding never moves two frequencies further apart, so no sampling rate can clear it: ${fixes}.`;
 }

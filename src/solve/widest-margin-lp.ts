@@ -6,6 +6,8 @@ import type { Interferer } from '../interferers/interferer.js';
 import { driftFactors } from './drift.js';
 import { hz, type Hz, type Ppm } from '../units/quantities.js';
 import { guardedBand } from '../windows/enumerate-windows.js';
+import { channelPlans, type PlanContext } from './plan-context.js';
+import type { FeasibleInterval } from './feasible-set.js';
 
 /**
  * javascript-lp-solver's solver. The package's typings describe its CommonJS
@@ -18,6 +20,32 @@ export const lpSolver = ('Solve' in lpModule ? lpModule : (lpModule as { default
 export interface LinearSlack {
   readonly slope: number;
   readonly offset: number;
+}
+
+/**
+ * The linear slacks of a whole plan inside one feasible interval: the
+ * plan's band in the interval's zone (linearSlacks); with several channels,
+ * every channel's, each in its own zone, together (the worst over channels is
+ * the least of them all).
+ *
+ * @param context the plan
+ * @param interval the feasible interval (its zone, or its channelZones)
+ * @param range the nominal rates allowed, Hz
+ * @param tolerancePpm ± drift of the rate, ppm
+ * @returns the slacks, t ≤ slope·r + offset, Hz
+ * @example planSlacks({ ...handWorked, interferers: [] }, { zone: 2, inverted: true, minRate: hz(30e6), maxRate: hz(40e6) }, { low: 30e6, high: 40e6 }, ppm(0)).length // 4
+ */
+export function planSlacks(context: PlanContext, interval: FeasibleInterval, range: Interval, tolerancePpm: Ppm): LinearSlack[] {
+  return channelPlans(context).flatMap((plan, i) =>
+    linearSlacks(
+      plan.band,
+      plan.guard,
+      interval.channelZones?.[i] ?? interval.zone,
+      plan.interferers.filter((interferer) => interferer.blocking),
+      range,
+      tolerancePpm,
+    ),
+  );
 }
 
 /**

@@ -1,8 +1,8 @@
 import { hz, type Hz, type Ppm } from '../units/quantities.js';
 import { wantedZone } from '../math/band.js';
-import type { PlanContext } from './plan-context.js';
+import { channelPlans, hasChannels, type PlanContext } from './plan-context.js';
 import { driftRange } from './drift.js';
-import { leastMargin, zoneEdgeMarginAt } from './evaluate-rate.js';
+import { blockingInterferers, leastMargin, zoneEdgeMarginAt } from './evaluate-rate.js';
 import type { Interferer } from '../interferers/interferer.js';
 
 /**
@@ -17,6 +17,9 @@ import type { Interferer } from '../interferers/interferer.js';
  * work, and the value returned is then some slack below the floor (an upper
  * bound of the worst slack), not the worst slack itself.
  *
+ * With several channels, the least over the channels, each on its own
+ * blocking interferers (`blocking` is then not read).
+ *
  * @param context the plan
  * @param blocking the plan's blocking interferers (filtered once by the caller)
  * @param rate nominal rate, Hz
@@ -27,6 +30,14 @@ import type { Interferer } from '../interferers/interferer.js';
  * @example worstSlackAt(handWorked, blocking, hz(26e6), ppm(0), hz(5e6)) // 1e6 (below the floor: the first check under it ends the screen)
  */
 export function worstSlackAt(context: PlanContext, blocking: readonly Interferer[], rate: Hz, tolerancePpm: Ppm, floor = -Infinity): Hz {
+  if (hasChannels(context)) {
+    let worst = Infinity;
+    for (const plan of channelPlans(context)) {
+      if (worst < floor) break;
+      worst = Math.min(worst, worstSlackAt(plan, blockingInterferers(plan.interferers), rate, tolerancePpm, floor));
+    }
+    return hz(worst);
+  }
   const drift = driftRange(rate, tolerancePpm);
   const { band, guard } = context;
   const zone = wantedZone(band, rate);

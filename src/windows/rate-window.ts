@@ -10,6 +10,8 @@ export interface RateWindow {
   readonly maxRate: Hz;
   /** Even zone: the band arrives spectrally inverted. */
   readonly inverted: boolean;
+  /** With several channels, the zone of each channel in order (`zone` is the first one's); absent for one band. */
+  readonly channelZones?: readonly number[];
 }
 
 /** Lower and upper bounds on the sampling rate, Hz (upper may be Infinity). */

@@ -35,7 +35,7 @@ export function converterFixture(overrides: Partial<Converter> = {}): Converter 
  * @example scenarioFixture({ harmonicOrder: 3, converter: converterFixture({ intercept3: db(30) }) })
  */
 export function scenarioFixture(overrides: Partial<Scenario> = {}): Scenario {
-  return {
+  const made: Omit<Scenario, 'channels'> & { channels?: Scenario['channels'] } = {
     name: 'Heron-test',
     description: 'Test fixture of the invented Heron receiver line',
     wanted: { low: hz(65e6), high: hz(75e6), weakestLevel: db(-60), strongestLevel: db(-1) },
@@ -67,4 +67,6 @@ export function scenarioFixture(overrides: Partial<Scenario> = {}): Scenario {
     },
     ...overrides,
   };
+  // One channel unless a list is given: the wanted band with the scenario's guard and requirements, as the file reader makes it.
+  return { ...made, channels: made.channels ?? [{ label: 'wanted', ...made.wanted, guard: made.guard, requirements: made.requirements }] };
 }

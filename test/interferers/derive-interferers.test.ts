@@ -50,6 +50,7 @@ const handWorked: Scenario = {
   description: 'hand-worked test scenario',
   wanted: { low: hz(40 * MHz), high: hz(50 * MHz), weakestLevel: db(-60), strongestLevel: db(-1) },
   guard: guardBands(hz(1 * MHz), hz(1 * MHz)),
+  channels: [], // one wanted band: every stage reads it from wanted
   converter: {
     label: 'Saltmarsh SR-12D',
     minRate: hz(20 * MHz),
