@@ -227,7 +227,7 @@ export function planReport(
     band: context.band,
     guard: context.guard,
     channels: channelPlans(context).map((plan) => ({
-      label: plan.label ?? 'wanted',
+      label: plan.label ?? context.channels?.[0]?.label ?? 'wanted',
       low: plan.band.low,
       high: plan.band.high,
       weakestLevel: plan.weakestLevel ?? null,
@@ -317,7 +317,7 @@ function reportedCandidate(
 
 /** Each channel's result at the candidate's rate (the evaluation itself, labelled "wanted", for one band). */
 function channelResults(context: PlanContext, e: RateEvaluation, listing: Listing): ReportedChannelResult[] {
-  if (!e.channels) return [reportedChannelResult({ ...e, label: 'wanted' }, context, listing)];
+  if (!e.channels) return [reportedChannelResult({ ...e, label: context.channels?.[0]?.label ?? 'wanted' }, context, listing)];
   const plans = channelPlans(context);
   return e.channels.map((c, i) => reportedChannelResult(c, plans[i]!, listing));
 }

@@ -135,7 +135,7 @@ export const wantedOrChannelsSchema = z.union([
     .min(1, { error: 'a list of at least one channel' })
     .max(MOST_CHANNELS, { error: `a list of at most ${MOST_CHANNELS} channels` })
     .meta({ description: `Several channels through one converter (at most ${MOST_CHANNELS}), each with a label` }),
-]);
+], { error: 'the wanted band as an object, or a list of channels each with a label' });
 
 const GOAL_KINDS = ['widest-margin', 'lowest-rate', 'quarter-rate'] as const;
 

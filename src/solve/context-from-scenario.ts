@@ -27,7 +27,7 @@ export function contextFromScenario(scenario: Scenario, listing: Scenario = scen
     levelThreshold: first.levelThreshold,
     weakestLevel: first.weakestLevel!,
     strongestLevel: first.strongestLevel!,
-    ...(channels ? { channels } : {}),
+    channels: channels ?? [first],
     clocks: scenario.clocks,
     clocking: {
       clockDividers: scenario.converter.clockDividers,
