@@ -77,7 +77,8 @@ export function deriveInterfererList(whole: Scenario, listed: Scenario = whole, 
   const threshold = levelThreshold(scenario);
   const signals = inputSignals(scenario);
   const listingSignals = listing === scenario ? signals : inputSignals(listing);
-  const reference = scenario.wanted.strongestLevel;
+  // The converter's harmonic figures are quoted at one level: the wanted band's, or the first channel's.
+  const reference = whole.wanted.strongestLevel;
   const request = {
     law: (order: number) => orderLaw(scenario.converter, order, reference),
     maxOrder: scenario.maxOrder ?? DEFAULT_MAX_ORDER,

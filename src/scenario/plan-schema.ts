@@ -107,7 +107,7 @@ export interface ChannelDraft extends WantedBand {
   readonly requirements: Partial<Pick<Requirements, 'margin' | 'rejection' | 'kindMargins' | 'channelSpacing'>>;
 }
 
-/** One channel of a `wanted` list. */
+/** One channel of a `wanted` list (the converter's harmonic figures are quoted at the first channel's strongestLevel). */
 export const channelSchema = z
   .strictObject({
     label: label.meta({ description: 'The channel\'s name, unique in the scenario, e.g. "L1"' }),
