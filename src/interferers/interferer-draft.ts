@@ -35,7 +35,11 @@ export function requiredMarginOf(draft: InterfererDraft, scenario: Scenario): Hz
  */
 export function complete(draft: InterfererDraft, scenario: Scenario): Interferer {
   const { ownMargin: _own, ...rest } = draft;
-  return { ...rest, requiredMargin: requiredMarginOf(draft, scenario), blocking: draft.kind === 'channel' || isBlocking(draft.level, scenario) };
+  return {
+    ...rest,
+    requiredMargin: requiredMarginOf(draft, scenario),
+    blocking: draft.kind === 'channel' || isBlocking(draft.level, scenario),
+  };
 }
 
 /** A fixed extent k·[low, high] for k ≥ 0, Hz. */

@@ -27,19 +27,12 @@ const wantedFields = {
 };
 
 /** The band and levels of a wanted band as written, checked: one band form, strongest at or above weakest. */
-function wantedBandOf(
-  written: z.output<z.ZodObject<typeof wantedFields>>,
-  ctx: z.RefinementCtx,
-): WantedBand | typeof z.NEVER {
+function wantedBandOf(written: z.output<z.ZodObject<typeof wantedFields>>, ctx: z.RefinementCtx): WantedBand | typeof z.NEVER {
   const band = bandFromForm(written, EDGES_OR_CENTRE, ctx, false);
   if (written.strongestLevel < written.weakestLevel) {
-    refuseAt(
-      ctx,
-      ['strongestLevel'],
-      `a level at or above weakestLevel (${written.weakestLevel} dBFS)`,
-      `${written.strongestLevel} dBFS`,
-      [['weakestLevel']],
-    );
+    refuseAt(ctx, ['strongestLevel'], `a level at or above weakestLevel (${written.weakestLevel} dBFS)`, `${written.strongestLevel} dBFS`, [
+      ['weakestLevel'],
+    ]);
   }
   if (!band) return z.NEVER;
   return { ...band, weakestLevel: written.weakestLevel, strongestLevel: written.strongestLevel };
@@ -93,7 +86,7 @@ export const requirementsSchema = z
 const channelRequirementsSchema = z
   .strictObject({
     margin: frequency("Frequency margin to keep between a blocking interferer's alias and this channel's alias").optional(),
-    rejection: decibels('An interferer this many dB below this channel\'s weakest level may land anywhere', 'a rejection').optional(),
+    rejection: decibels("An interferer this many dB below this channel's weakest level may land anywhere", 'a rejection').optional(),
     kindMargins: kindMarginsSchema.optional(),
     channelSpacing: frequency("Margin to keep between another channel's alias and this channel's alias").optional(),
   })
@@ -128,14 +121,17 @@ export const channelSchema = z
 export const MOST_CHANNELS = 16;
 
 /** The wanted band: one object (one channel), or a list of labelled channels. */
-export const wantedOrChannelsSchema = z.union([
-  wantedSchema,
-  z
-    .array(channelSchema)
-    .min(1, { error: 'a list of at least one channel' })
-    .max(MOST_CHANNELS, { error: `a list of at most ${MOST_CHANNELS} channels` })
-    .meta({ description: `Several channels through one converter (at most ${MOST_CHANNELS}), each with a label` }),
-], { error: 'the wanted band as an object, or a list of channels each with a label' });
+export const wantedOrChannelsSchema = z.union(
+  [
+    wantedSchema,
+    z
+      .array(channelSchema)
+      .min(1, { error: 'a list of at least one channel' })
+      .max(MOST_CHANNELS, { error: `a list of at most ${MOST_CHANNELS} channels` })
+      .meta({ description: `Several channels through one converter (at most ${MOST_CHANNELS}), each with a label` }),
+  ],
+  { error: 'the wanted band as an object, or a list of channels each with a label' },
+);
 
 const GOAL_KINDS = ['widest-margin', 'lowest-rate', 'quarter-rate'] as const;
 

@@ -163,13 +163,7 @@ function bandOnly(channel: WantedBand): WantedBand {
 }
 
 /** Each channel of a list must lie inside the converter's input bandwidth and a Butterworth filter's pass band. */
-function refuseChannelOutside(
-  ctx: z.RefinementCtx,
-  channel: Channel,
-  index: number,
-  inputBandwidth: Hz,
-  filter: Scenario['filter'],
-): void {
+function refuseChannelOutside(ctx: z.RefinementCtx, channel: Channel, index: number, inputBandwidth: Hz, filter: Scenario['filter']): void {
   const name = `wanted[${index}] (${JSON.stringify(channel.label)})`;
   if (channel.high > inputBandwidth) {
     refuseAt(

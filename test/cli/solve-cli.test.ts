@@ -137,6 +137,7 @@ describe('ifzone solve --all-checks', () => {
         checksOmitted: _b,
         afterRate: fullAfter,
         maskBandsOmitted: _e,
+        channels: fullChannels,
         ...summary
       } = c as Record<string, unknown>;
       const {
@@ -145,9 +146,13 @@ describe('ifzone solve --all-checks', () => {
         checksOmitted: _d,
         afterRate: plainAfter,
         maskBandsOmitted: _f,
+        channels: plainChannels,
         ...plainSummary
       } = plain.candidates[index];
       expect(summary).toEqual(plainSummary);
+      // Each channel's result too, but for its listed checks.
+      const withoutChecks = (channels: unknown) => (channels as { checks: unknown }[]).map(({ checks: _k, ...rest }) => rest);
+      expect(withoutChecks(fullChannels)).toEqual(withoutChecks(plainChannels));
       const masks = [fullAfter, plainAfter].map((a) => (a as { mask: { worst: unknown; pass: boolean } } | null)?.mask);
       expect(masks[0]?.worst).toEqual(masks[1]?.worst);
       expect(masks[0]?.pass).toEqual(masks[1]?.pass);

@@ -85,7 +85,9 @@ describe('a wanted list of channels', () => {
       'wanted[1].high: a frequency (with low)',
     ]);
     expect(issuesOf({ name: 'x', wanted: [] })).toEqual(['wanted: a list of at least one channel']);
-    expect(issuesOf({ name: 'x', wanted: 'L1' })).toEqual(['wanted: the wanted band as an object, or a list of channels each with a label']);
+    expect(issuesOf({ name: 'x', wanted: 'L1' })).toEqual([
+      'wanted: the wanted band as an object, or a list of channels each with a label',
+    ]);
     expect(issuesOf({ name: 'x', filter: wide, wanted: [TWO[0], { ...TWO[1], label: 'A' }] })).toEqual([
       'wanted[1].label: a label not used elsewhere (wanted[0].label is already "A")',
     ]);
@@ -99,7 +101,9 @@ describe('a wanted list of channels', () => {
 
   it('refuses a channel outside the filter pass band or the converter input bandwidth', () => {
     // heron-base's filter passes 128–152 MHz; B at 30–40 MHz lies below it.
-    expect(issuesOf({ name: 'x', wanted: TWO })).toEqual(["wanted[1].low: a channel inside the filter's pass band (filter.passLow 128 MHz)"]);
+    expect(issuesOf({ name: 'x', wanted: TWO })).toEqual([
+      "wanted[1].low: a channel inside the filter's pass band (filter.passLow 128 MHz)",
+    ]);
     expect(issuesOf({ name: 'x', filter: null, wanted: [TWO[0], { ...TWO[1], low: '640M', high: '660M' }] })).toEqual([
       "wanted[1].high: a channel at or below the converter's input bandwidth (converter.inputBandwidth 650 MHz)",
     ]);

@@ -149,4 +149,3 @@ describe('two channels worked on paper (Vaughan–Scott–White windows, Akos / 
     ]);
   });
 });
-
