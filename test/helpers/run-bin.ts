@@ -7,12 +7,15 @@ import { expect } from 'vitest';
 export const ROOT = fileURLToPath(new URL('../../', import.meta.url));
 
 /**
- * Builds dist/ (tsc) and the bundle bin/ifzone runs (dist/bundle/) when
+ * Builds dist/ (tsc) and the bundle bin/ifzone runs (dist/bundle/cli/) when
  * either is missing, so a test file run on its own still drives the real
  * bin/ifzone. `npm test` builds first.
  */
 export function ensureBuilt(): void {
-  if (existsSync(new URL('../../dist/cli/main.js', import.meta.url)) && existsSync(new URL('../../dist/bundle/main.js', import.meta.url)))
+  if (
+    existsSync(new URL('../../dist/cli/main.js', import.meta.url)) &&
+    existsSync(new URL('../../dist/bundle/cli/ifzone.cjs', import.meta.url))
+  )
     return;
   execFileSync(process.execPath, ['node_modules/typescript/bin/tsc', '-p', 'tsconfig.json'], { cwd: ROOT, stdio: 'inherit' });
   execFileSync(process.execPath, ['scripts/bundle-cli.mjs'], { cwd: ROOT, stdio: 'inherit' });

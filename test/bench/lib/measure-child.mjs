@@ -3,7 +3,9 @@
 // prints on standard error one line `MEASURE {"ms","peakRssMb","outBytes","exit","error"}`.
 // Used by the scaling benchmark: node test/bench/lib/measure-child.mjs solve FILE --json
 import { Buffer } from 'node:buffer';
-import { runCli } from '../../../dist/bundle/main.js';
+import { loadBundle } from '../../../bin/load-bundle.js';
+
+const { runCli } = loadBundle().exports;
 
 const start = process.hrtime.bigint();
 let outBytes = 0;
