@@ -1,5 +1,6 @@
 import { hz, type Hz } from '../units/quantities.js';
-import { lpSolver, type LinearSlack } from '../solve/widest-margin-lp.js';
+import { lpSolver } from '../solve/lp-solver.js';
+import type { LinearSlack } from '../solve/linear-slacks.js';
 
 /** Ranges of N at or below this many values are enumerated rather than handed to the MILP. */
 export const ENUMERATE_UP_TO = 64;

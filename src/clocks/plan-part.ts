@@ -4,7 +4,8 @@ import { hz, type Hz, type Ppm } from '../units/quantities.js';
 import { planRates, type FeasibleInterval, type FeasibleSet } from '../solve/feasible-set.js';
 import type { PlanContext } from '../solve/plan-context.js';
 import { driftHeadroom, driftReach, driftSafeRange } from '../solve/drift.js';
-import { maximiseWorstSlack, planSlacks, type LinearSlack } from '../solve/widest-margin-lp.js';
+import { planSlacks, type LinearSlack } from '../solve/linear-slacks.js';
+import { maximiseWorstSlack } from '../solve/widest-margin.js';
 import type { Interval } from '../math/interval-set.js';
 import { clockSnr } from './clock-snr.js';
 import { bestIntegerN, ENUMERATE_UP_TO, modelSlack } from './integer-widest-margin.js';
@@ -31,7 +32,7 @@ const SCREEN_UP_TO = 20_000;
  * How far short of the best passing rate the interval search may stop, as a
  * fraction of the wanted bandwidth: a feasible interval is passed over, and
  * the search ends, once the best found is within this of the interval's
- * continuous LP bound (the LP itself rounds to 1e-8 of the bandwidth).
+ * continuous bound (the widest margin over the interval, maximiseWorstSlack).
  */
 export const SEARCH_ALLOWANCE = 1e-6;
 
@@ -58,7 +59,8 @@ interface Judged {
  * Small parts have every rate judged exactly. Otherwise each feasible
  * interval is searched for the best integer N of each (M, D) (enumerated, or
  * a MILP with javascript-lp-solver), intervals taken in order of their
- * continuous LP bound and dropped once that bound cannot beat the best found;
+ * continuous bound (the widest margin over all its rates) and dropped once
+ * that bound cannot beat the best found;
  * every answer is re-checked by evaluateRate. The converter's range bounds
  * the nominal rate only (evaluateRate judges the drift against the checks),
  * so the intervals searched are those of windows widened by the drift.
@@ -216,7 +218,7 @@ interface Piece {
   readonly interval: FeasibleInterval;
   readonly range: Interval;
   readonly slacks: LinearSlack[];
-  /** The continuous LP optimum over the range: no rate inside does better, Hz. */
+  /** The widest margin over the whole range (maximiseWorstSlack): no rate inside does better, Hz. */
   readonly bound: number;
 }
 
@@ -261,7 +263,7 @@ function driftFeasibleSet(context: PlanContext, tolerancePpm: Ppm): FeasibleSet 
   return planRates(context, driftReach(context.limits, tolerancePpm));
 }
 
-/** The feasible intervals wide enough for the part's drift, their linear slacks and LP bounds. */
+/** The feasible intervals wide enough for the part's drift, their linear slacks and continuous bounds. */
 function feasiblePieces(context: PlanContext, set: FeasibleSet, part: ClockPart): Piece[] {
   const unit = hz(context.band.high - context.band.low);
   const pieces: Piece[] = [];
@@ -274,7 +276,10 @@ function feasiblePieces(context: PlanContext, set: FeasibleSet, part: ClockPart)
       bound = modelSlack(slacks, hz(range.low));
     } else {
       const answer = maximiseWorstSlack(slacks, range, unit);
-      if (!answer) throw new Error(`widest-margin LP infeasible on ${interval.minRate}–${interval.maxRate} Hz, a feasible interval`);
+      if (!answer)
+        throw new Error(
+          `widest margin: no slack bounds the worst slack on ${interval.minRate}–${interval.maxRate} Hz, a feasible interval`,
+        );
       bound = answer.worstSlack;
     }
     pieces.push({ interval, range, slacks, bound });

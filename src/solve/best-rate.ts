@@ -4,21 +4,23 @@ import { evaluateRate, type RateEvaluation } from './evaluate-rate.js';
 import type { FeasibleInterval } from './feasible-set.js';
 import type { PlanContext } from './plan-context.js';
 import { driftSafeRange } from './drift.js';
-import { maximiseWorstSlack, planSlacks } from './widest-margin-lp.js';
+import { planSlacks } from './linear-slacks.js';
+import { maximiseWorstSlack } from './widest-margin.js';
 import { limitText } from './limited-by.js';
 
-/** Decimation ratios tried one by one inside an interval before falling back to the LP optimum's neighbours. */
+/** Decimation ratios tried one by one inside an interval before falling back to the widest-margin optimum's neighbours. */
 const MOST_RATIOS_TRIED = 200;
 
 /**
  * The best rate of one feasible interval for the plan's goal, judged exactly.
- * The widest-margin goal is a linear program (every margin is linear inside
- * the interval); its answer is re-checked by the exact evaluator, and a
- * disagreement is thrown as a bug rather than hidden.
+ * The widest-margin goal is the maximum of the least of linear slacks (every
+ * margin is linear inside the interval), found exactly on their envelope
+ * (maximiseWorstSlack); its answer is re-checked by the exact evaluator, and
+ * a disagreement is thrown as a bug rather than hidden.
  *
  * @returns the evaluation, or null when the goal has no rate in this
  *   interval (decimation with no integer ratio inside it)
- * @throws Error when the LP's promise fails the exact re-check
+ * @throws Error when the promised worst slack fails the exact re-check
  * @example bestRateIn(handWorked, { zone: 2, inverted: true, minRate: hz(25e6), maxRate: hz(82e6 / 3) }).rate // 26e6 (the widest worst margin, 1 MHz)
  */
 export function bestRateIn(context: PlanContext, interval: FeasibleInterval): RateEvaluation | null {
@@ -49,12 +51,13 @@ function widestMargin(
   if (range.low === range.high) return judge(range.low);
   const slacks = planSlacks(context, interval, range, context.tolerancePpm);
   const answer = maximiseWorstSlack(slacks, range, hz(context.band.high - context.band.low));
-  if (!answer) throw new Error(`widest-margin LP infeasible on ${interval.minRate}–${interval.maxRate} Hz, a feasible interval`);
+  if (!answer)
+    throw new Error(`widest margin: no slack bounds the worst slack on ${interval.minRate}–${interval.maxRate} Hz, a feasible interval`);
   const judged = judge(answer.rate);
   const allowance = 1e-6 * (range.high + context.band.high - context.band.low);
   if (judged.worstSlack < answer.worstSlack - allowance) {
     throw new Error(
-      `widest-margin LP promised ${answer.worstSlack} Hz at ${answer.rate} Hz; the exact re-check found ${judged.worstSlack} Hz (${limitText(judged.limitedBy)})`,
+      `widest margin promised ${answer.worstSlack} Hz at ${answer.rate} Hz; the exact re-check found ${judged.worstSlack} Hz (${limitText(judged.limitedBy)})`,
     );
   }
   return judged;

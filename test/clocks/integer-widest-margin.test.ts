@@ -2,7 +2,7 @@ import { hz } from '../../src/units/quantities.js';
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { bestIntegerN, modelSlack } from '../../src/clocks/integer-widest-margin.js';
-import type { LinearSlack } from '../../src/solve/widest-margin-lp.js';
+import type { LinearSlack } from '../../src/solve/linear-slacks.js';
 
 /** Plain enumeration of every N: the reference (definition of the maximum; no source needed). */
 function exhaustive(slacks: readonly LinearSlack[], first: number, last: number, rateAt: (N: number) => number): number {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { hz } from '../../src/units/quantities.js';
-import { maximiseWorstSlack } from '../../src/solve/widest-margin-lp.js';
+import { maximiseWorstSlack } from '../../src/solve/widest-margin.js';
 
 // Worked by hand: on [171, 194.5] (MHz units) with slacks 4 (constant), r − 171
 // and 389 − 2r, the worst slack cannot exceed 4, and every r in [175, 192.5]

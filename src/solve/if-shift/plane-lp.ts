@@ -1,6 +1,6 @@
 import { hz, type Hz } from '../../units/quantities.js';
 import type { Interval } from '../../math/interval-set.js';
-import { lpSolver } from '../widest-margin-lp.js';
+import { lpSolver } from '../lp-solver.js';
 
 /** t ≤ rate·r + shift·δ + offset: one slack linear in the sampling rate r and the IF shift δ, Hz. */
 export interface PlaneSlack {
@@ -37,7 +37,7 @@ export function slackAt(slack: PlaneSlack, rate: Hz, shift: Hz): Hz {
 /**
  * Maximises t subject to t ≤ slackᵢ(r, δ) for every bound and 0 ≤ heldⱼ(r, δ)
  * for every held slack, over the box, with javascript-lp-solver. Two stages,
- * as in the one-variable widest-margin LP (maximiseWorstSlack): first the
+ * as in the one-variable widest margin (maximiseWorstSlack): first the
  * worst slack t*; then, holding every bound at t* or above, the worst of the
  * bounds that vary over the box, so that a slack constant over the box (a
  * neighbour moving in step with the band) does not leave the point to
@@ -75,7 +75,7 @@ export function maximisePlaneSlack(
  * that t' ≥ 0 never binds and no right-hand side of a bound is negative:
  * javascript-lp-solver 1.0.3 calls a model with an unrestricted variable and
  * a negative right-hand side infeasible (seen here: max t, t ≤ −1 + 0.5·x,
- * x ≤ 1 came back infeasible; a colleague met the same in the one-variable LP).
+ * x ≤ 1 came back infeasible; the one-variable problem, once an LP too, met the same).
  */
 function solveStage(bounds: readonly PlaneSlack[], held: readonly PlaneSlack[], box: PlaneBox, unit: Hz): PlaneAnswer | null {
   const rateWidth = box.rate.high - box.rate.low;

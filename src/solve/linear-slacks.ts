@@ -1,20 +1,12 @@
-import lpModule, { type SolverAPI } from 'javascript-lp-solver';
 import type { Band, Guard } from '../math/band.js';
 import type { Interval } from '../math/interval-set.js';
 import { imageOffsets, nearbyImages, normalisedExtent } from './fold-images.js';
 import type { Interferer } from '../interferers/interferer.js';
 import { driftFactors } from './drift.js';
-import { hz, type Hz, type Ppm } from '../units/quantities.js';
+import { hz, type Ppm } from '../units/quantities.js';
 import { guardedBand } from '../windows/enumerate-windows.js';
 import { channelPlans, type PlanContext } from './plan-context.js';
 import type { FeasibleInterval } from './feasible-set.js';
-
-/**
- * javascript-lp-solver's solver. The package's typings describe its CommonJS
- * build; Node's ESM import gets the solver itself as the default export.
- * Accept either shape.
- */
-export const lpSolver = ('Solve' in lpModule ? lpModule : (lpModule as { default: unknown }).default) as SolverAPI;
 
 /** t ≤ slope·r + offset: one slack that is linear in the rate inside an interval, Hz. */
 export interface LinearSlack {
@@ -98,73 +90,4 @@ export function linearSlacks(
     }
   }
   return slacks;
-}
-
-/** The LP's answer: the nominal rate and the worst slack it promises, Hz. */
-export interface LpAnswer {
-  readonly rate: number;
-  readonly worstSlack: number;
-}
-
-/**
- * Maximises t subject to t ≤ slopeᵢ·r + offsetᵢ for r in the range, with
- * javascript-lp-solver, lexicographically: first the worst slack t*; then,
- * holding every slack at t* or above, the worst of the slacks that vary with
- * the rate. Without the second stage a slack that is constant across the
- * interval (a neighbour folding in step with the band) makes every rate a
- * tie, and the solver returns an arbitrary end of the interval. The model is
- * scaled (r = low + x·width, t in units of `unit`) because that solver rounds
- * its answers to 1e-8 and loses precision on raw hertz coefficients.
- *
- * @param slacks linear bounds on t, Hz
- * @param range the rate range, Hz, low < high
- * @param unit scale for t, Hz (e.g. the wanted bandwidth)
- * @returns the chosen rate and the worst slack t* it keeps, or null when the
- *   LP is infeasible
- * @example maximiseWorstSlack([{ slope: 1, offset: -5 }, { slope: -1, offset: 9 }], { low: 0, high: 10 }, hz(1)) // { rate: 7, worstSlack: 2 } (where r − 5 = 9 − r)
- */
-export function maximiseWorstSlack(slacks: readonly LinearSlack[], range: Interval, unit: Hz): LpAnswer | null {
-  const first = solveStage(slacks, [], range, unit);
-  if (!first) return null;
-  const varying = slacks.filter((s) => Math.abs(s.slope * (range.high - range.low)) > 1e-9 * unit);
-  const floor = first.worstSlack - 1e-6 * unit; // the solver rounds t* to 1e-8 units
-  // Constant slacks are at t* or above by the first stage; only the varying ones need holding.
-  const second =
-    varying.length > 0
-      ? solveStage(
-          varying,
-          varying.map((s) => ({ ...s, offset: s.offset - floor })),
-          range,
-          unit,
-        )
-      : null;
-  return { rate: second ? second.rate : first.rate, worstSlack: first.worstSlack };
-}
-
-/**
- * max t: t ≤ bound(r) for each bound, 0 ≤ held(r) for each held, r in range.
- * t is solved as t + shift ≥ 0 with every right-hand side made positive:
- * javascript-lp-solver 1.0.3 calls a model with an unrestricted variable and
- * a negative right-hand side infeasible (seen: t + 0.1n ≤ −1, t ≤ 0, n ≤ 1).
- */
-function solveStage(bounds: readonly LinearSlack[], held: readonly LinearSlack[], range: Interval, unit: number): LpAnswer | null {
-  const width = range.high - range.low;
-  const atLow = (s: LinearSlack) => (s.slope * range.low + s.offset) / unit;
-  const shift = 1 + Math.max(0, ...bounds.map((s) => -atLow(s)));
-  const constraints: Record<string, { max: number }> = { span: { max: 1 } };
-  const t: Record<string, number> = {};
-  const x: Record<string, number> = { span: 1 };
-  bounds.forEach((s, i) => {
-    constraints[`b${i}`] = { max: atLow(s) + shift };
-    t[`b${i}`] = 1;
-    x[`b${i}`] = (-s.slope * width) / unit;
-  });
-  held.forEach((s, i) => {
-    constraints[`h${i}`] = { max: atLow(s) };
-    x[`h${i}`] = (-s.slope * width) / unit;
-  });
-  const solution = lpSolver.Solve({ optimize: 't', opType: 'max', constraints, variables: { t, x } }) as Record<string, unknown>;
-  if (solution['feasible'] !== true) return null;
-  const fraction = Math.min(Math.max(Number(solution['x'] ?? 0), 0), 1);
-  return { rate: range.low + fraction * width, worstSlack: (Number(solution['t'] ?? 0) - shift) * unit };
 }
