@@ -93,7 +93,13 @@ export function bestShiftAndRate(scenario: Scenario, options: ShiftSearchOptions
   const widest: Scenario = { ...scenario, goal: { kind: 'widest-margin' } };
   // Every shift lists the interferers that block somewhere in the range, in one order: the listing is decided on the swept scenario.
   const swept = sweptScenario(widest, { low: hz(range.low), high: hz(range.high) });
-  const contextAt = (shift: number): PlanContext => contextFromScenario(shiftedScenario(widest, hz(shift)), swept);
+  // Each shift's plan is derived once: pieces often end at a seed shift or a range end, and the derivation is the costly part.
+  const contexts = new Map<number, PlanContext>();
+  const contextAt = (shift: number): PlanContext => {
+    let context = contexts.get(shift);
+    if (context === undefined) contexts.set(shift, (context = contextFromScenario(shiftedScenario(widest, hz(shift)), swept)));
+    return context;
+  };
   const base = contextAt(0);
   const inputs: PieceInputs = {
     band: base.band,

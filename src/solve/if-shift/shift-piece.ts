@@ -115,13 +115,13 @@ function pieceOver(
   const bounds: PlaneSlack[] = [...held];
   const sides: string[] = [];
   const ceiling = (rate.high * up) / 4;
-  const corners = [
-    [rate.low, shifts.low],
-    [rate.low, shifts.high],
-    [rate.high, shifts.low],
-    [rate.high, shifts.high],
-  ] as const;
-  const least = (s: PlaneSlack) => Math.min(...corners.map(([r, d]) => slackAt(s, hz(r), hz(d))));
+  const least = (s: PlaneSlack) =>
+    Math.min(
+      slackAt(s, hz(rate.low), hz(shifts.low)),
+      slackAt(s, hz(rate.low), hz(shifts.high)),
+      slackAt(s, hz(rate.high), hz(shifts.low)),
+      slackAt(s, hz(rate.high), hz(shifts.high)),
+    );
   inputs.interferers.forEach((interferer, index) => {
     if (!inputs.blocking[index]) return;
     const flip = interferer.rateMultiple < 0; // fold −(…) instead: aliases are unchanged
