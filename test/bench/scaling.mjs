@@ -1,16 +1,20 @@
 // How `ifzone solve --json` grows on the direct-RF scenario (test/bench/direct-rf.json,
 // invented): time, peak memory and JSON size against the number of
-// neighbours (2 … 200, third-order intermodulation between every pair) and of
-// clock parts (1 … 1,000), each run in its own process through the bundle
-// bin/ifzone runs, with the growth exponent fitted on a log-log scale. Then
-// the synthesiser search on a plan where nothing passes.
+// neighbours (2 … 200, each one blocking: placed where the filter lets it
+// through, a few dB above the blocking threshold, with third-order
+// intermodulation between every pair judged) and of clock parts
+// (1 … 1,000), each run in its own process through the bundle bin/ifzone
+// runs, with the growth exponent fitted on a log-log scale. Then the
+// synthesiser search on a plan where nothing passes.
 // Targets: 1,000 parts and 200 neighbours each within 3 s and 500 MB, with
 // JSON under 5 MB; the failing synthesiser search within 1 s.
 import { spawnSync } from 'node:child_process';
 import { rmSync } from 'node:fs';
 import { dirname } from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
-import { clockParts, directRf, neighbours, writeScenario } from './lib/direct-rf.mjs';
+import { blockingNeighbours, clockParts, directRf, writeScenario } from './lib/direct-rf.mjs';
+import { scenarioFromDocument } from '../../dist/scenario/resolve-scenario.js';
+import { deriveInterferers } from '../../dist/interferers/derive-interferers.js';
 
 const ROOT = fileURLToPath(new URL('../../', import.meta.url));
 const CHILD = fileURLToPath(new URL('./lib/measure-child.mjs', import.meta.url));
@@ -63,21 +67,30 @@ function growthExponent(points) {
 
 const MB = 1024 * 1024;
 
+/** How many interferers the scenario derives, and how many of them block. */
+function interfererCounts(scenario) {
+  const list = deriveInterferers(scenarioFromDocument(scenario, 'scenario.json'));
+  return { all: list.length, blocking: list.filter((i) => i.blocking).length };
+}
+
 /** Runs one series, prints its table and fitted exponents; returns the measurement at each size. */
 function series(title, sizes, variant) {
   console.log(title);
-  console.log('      n    time ms   peak MB   JSON MB  exit');
+  console.log('      n  interferers (blocking)    time ms   peak MB   JSON MB  exit');
   const rows = [];
   for (const n of sizes) {
-    const m = measure(variant(n));
-    rows.push({ n, m });
+    const scenario = variant(n);
+    const counts = interfererCounts(scenario);
+    const m = measure(scenario);
+    rows.push({ n, m, counts });
+    const derived = `${counts.all} (${counts.blocking})`.padStart(23);
     if (m.failed) {
-      console.log(`${String(n).padStart(7)}  ${m.failed}`);
+      console.log(`${String(n).padStart(7)} ${derived}  ${m.failed}`);
       break; // a larger case would fail too, and take longer
     }
     const note = m.error ? `  ${m.error}` : '';
     console.log(
-      `${String(n).padStart(7)} ${m.ms.toFixed(0).padStart(10)} ${m.peakRssMb.toFixed(0).padStart(9)} ${(m.outBytes / MB).toFixed(2).padStart(9)} ${String(m.exit).padStart(5)}${note}`,
+      `${String(n).padStart(7)} ${derived} ${m.ms.toFixed(0).padStart(10)} ${m.peakRssMb.toFixed(0).padStart(9)} ${(m.outBytes / MB).toFixed(2).padStart(9)} ${String(m.exit).padStart(5)}${note}`,
     );
   }
   // Fitted where the work outweighs start-up: sizes of 10 and above.
@@ -85,7 +98,10 @@ function series(title, sizes, variant) {
   if (fitted.length >= 2) {
     const time = growthExponent(fitted.map((r) => ({ x: r.n, y: r.m.ms })));
     const memory = growthExponent(fitted.map((r) => ({ x: r.n, y: r.m.peakRssMb })));
-    console.log(`  fitted growth (n ≥ 10): time ∝ n^${time.toFixed(2)}, peak memory ∝ n^${memory.toFixed(2)}`);
+    const blocking = growthExponent(fitted.map((r) => ({ x: r.n, y: r.counts.blocking })));
+    console.log(
+      `  fitted growth (n ≥ 10): time ∝ n^${time.toFixed(2)}, peak memory ∝ n^${memory.toFixed(2)}, blocking interferers ∝ n^${blocking.toFixed(2)}`,
+    );
   }
   return rows;
 }
@@ -116,7 +132,7 @@ function base() {
 export default async function scaling() {
   const byNeighbours = series('Neighbours (6 clock parts):', [2, 5, 10, 20, 50, 100, 200], (n) => ({
     ...base(),
-    neighbours: neighbours(n),
+    neighbours: blockingNeighbours(n),
   }));
   const byParts = series('Clock parts (20 neighbours):', [1, 3, 10, 30, 100, 300, 1000], (n) => ({ ...base(), clocks: clockParts(n) }));
   let ok = withinTargets('200 neighbours', byNeighbours.find((r) => r.n === 200)?.m);
