@@ -55,7 +55,10 @@ const problem = fc
     unit: fc.double({ min: 1e4, max: 1e8, noNaN: true }),
     lines: fc.array(
       fc.record({
-        slope: fc.oneof(fc.constant(0), fc.integer({ min: -40, max: 40 }).map((j) => j / 2)),
+        slope: fc.oneof(
+          fc.constant(0),
+          fc.integer({ min: -40, max: 40 }).map((j) => j / 2),
+        ),
         drift: fc.constantFrom(1, 1 - 5e-5, 1 + 5e-5),
         /** The slack at the low end, in units. */
         atLow: fc.double({ min: -5, max: 5, noNaN: true }),
