@@ -58,11 +58,54 @@ export function compareTable(report: CompareReport, width = 100): string {
     wrapProse(`Clock parts compared on ${report.variants.join(', ')} (margins and verdicts hold over each part's whole tolerance):`, width),
     textTable(columns, rows, width),
   ];
+  if (hasChannels(report)) lines.push(channelsBlock(report, several, width));
   if (report.parts.some((p) => p.perVariant.some((v) => v.rate === null))) lines.push(wrapProse(`Not planned: ${NOT_PLANNED}.`, width));
   if (several) lines.push(wrapProse(familyText(report), width));
   if (report.parts.some((p) => p.perVariant.some((v) => v.filterOrders !== null))) lines.push(wrapProse(FILTER_ORDERS_NOTE, width));
   lines.push(wrapProse(report.caution, width));
   return lines.join('\n\n') + '\n';
+}
+
+/** Whether a compared variant has several channels. */
+function hasChannels(report: CompareReport): boolean {
+  return report.parts.some((p) => p.perVariant.some((v) => v.channels !== undefined));
+}
+
+/** Each channel of the variants with several, at each part's rate: zone, NCO, worst margin, limiting check, verdict. */
+function channelsBlock(report: CompareReport, several: boolean, width: number): string {
+  const rows = report.parts.flatMap((part, rank) => {
+    let first = true;
+    return part.perVariant.flatMap((v) =>
+      (v.channels ?? []).map((c, k) => {
+        const cells = [
+          first ? String(rank + 1) : '',
+          first ? part.label : '',
+          ...(several ? [k === 0 ? v.variant : ''] : []),
+          c.label,
+          zoneText(c),
+          c.nco === null ? '–' : T.rate(c.nco),
+          T.frequency(c.worstMargin),
+          c.limitedBy,
+          c.pass ? 'pass' : 'FAIL',
+        ];
+        first = false;
+        return cells;
+      }),
+    );
+  });
+  const columns: TextColumn[] = [
+    { head: '#', role: 'key', align: 'right' },
+    { head: 'part', role: 'key', wrap: true },
+    ...(several ? [{ head: 'variant', role: 'key', wrap: true } as const] : []),
+    { head: 'channel', role: 'key' },
+    { head: 'zone', align: 'right' },
+    { head: 'NCO', align: 'right' },
+    { head: 'worst margin', align: 'right' },
+    { head: 'limited by', wrap: true },
+    { head: 'verdict' },
+  ];
+  const title = 'Each channel at each part\'s rate (# as above; NCO: the channel\'s centre after sampling, "inv": conjugate its output):';
+  return wrapProse(title, width) + '\n' + textTable(columns, rows, width);
 }
 
 const FILTER_ORDERS_NOTE =
@@ -114,7 +157,9 @@ export function compareCsv(report: CompareReport): string {
     'chebyshev_order',
     'elliptic_order',
     'mask_margin_db',
+    ...(hasChannels(report) ? CHANNEL_CSV : []),
   ];
+  const channelCells = hasChannels(report);
   const rows = report.parts.flatMap((p) =>
     p.perVariant.map((v) => [
       p.label,
@@ -140,7 +185,33 @@ export function compareCsv(report: CompareReport): string {
       v.filterOrders?.chebyshev ?? null,
       v.filterOrders?.elliptic ?? null,
       v.maskMarginDb,
+      ...(channelCells ? channelCsvCells(v.channels) : []),
     ]),
   );
   return toCsv(head, rows);
+}
+
+/** With several channels, one column per figure, each channel's value in order, separated by ";" (full precision). */
+const CHANNEL_CSV = [
+  'channels',
+  'channel_zones',
+  'channel_inverted',
+  'channel_nco_hz',
+  'channel_worst_margin_hz',
+  'channel_limited_by',
+  'channel_pass',
+];
+
+function channelCsvCells(channels: ComparedPart['perVariant'][number]['channels']): (string | null)[] {
+  if (!channels) return CHANNEL_CSV.map(() => null);
+  const list = (values: readonly unknown[]) => values.map((x) => (x === null ? '' : String(x))).join(';');
+  return [
+    list(channels.map((c) => c.label)),
+    list(channels.map((c) => c.zone)),
+    list(channels.map((c) => c.inverted)),
+    list(channels.map((c) => c.nco)),
+    list(channels.map((c) => c.worstMargin)),
+    list(channels.map((c) => c.limitedBy)),
+    list(channels.map((c) => c.pass)),
+  ];
 }

@@ -31,12 +31,17 @@ export function planTable(report: PlanReport, width = 100): string {
     windowsSection(report, width),
     feasibleSection(report, width),
     candidatesSection(report, width),
+    ...(report.channels.length > 1 ? [channelsSection(report, width)] : []),
   ];
   // Rates given with --rate each get their checks; a search shows the first candidate's.
   const typed = report.candidates.length > 0 && report.candidates.every((c) => c.origin === 'typed');
   for (const focus of typed ? report.candidates : report.candidates.slice(0, 1)) {
     sections.push(checksSection(focus, width));
-    if (focus.afterRate) sections.push(afterRateSection(focus, false, width));
+    if (focus.afterRate) {
+      if (report.channels.length > 1)
+        sections.push(wrapProse(`(The figures after the rate are the first channel's, ${report.channels[0]!.label}.)`, width));
+      sections.push(afterRateSection(focus, false, width));
+    }
   }
   if (report.ifShift) sections.push(shiftSection(report.ifShift, width));
   sections.push(prose(verdict(report)), prose(report.caution));
@@ -46,9 +51,15 @@ export function planTable(report: PlanReport, width = 100): string {
 function heading(report: PlanReport, prose: (text: string) => string): string {
   const { band, guard, search } = report;
   const blocking = report.interferers.filter((i) => i.blocking).length;
+  const channels = report.channels.map(
+    (c) =>
+      `${c.label} ${T.extent(c.low, c.high)} (width ${T.frequency(c.high - c.low)}, guards ${T.frequency(c.guard.below)} below and ${T.frequency(c.guard.above)} above)`,
+  );
   return [
     `Scenario: ${report.scenario}`,
-    `Wanted band ${T.extent(band.low, band.high)} (width ${T.frequency(band.high - band.low)}), guards ${T.frequency(guard.low)} below and ${T.frequency(guard.high)} above.`,
+    report.channels.length > 1
+      ? `${report.channels.length} channels: ${channels.join('; ')}.`
+      : `Wanted band ${T.extent(band.low, band.high)} (width ${T.frequency(band.high - band.low)}), guards ${T.frequency(guard.low)} below and ${T.frequency(guard.high)} above.`,
     `Rates searched ${T.extent(search.minRate, search.maxRate)}; goal: ${goalText(report)}.`,
     `${report.interferers.length} interferers derived, ${blocking} strong enough to block.`,
     ...(report.derivation ? [derivationText(report.derivation)] : []),
@@ -81,40 +92,79 @@ export function goalText(report: PlanReport): string {
 
 function windowsSection(report: PlanReport, width: number): string {
   if (report.windows.length === 0) return 'Legal windows: none inside the rate range.';
+  const several = report.channels.length > 1;
   const rows = report.windows.map((w) => [
-    String(w.zone),
-    yesNo(w.inverted),
+    ...(several ? [channelZonesText(report, w.channelZones)] : [String(w.zone), yesNo(w.inverted)]),
     T.rateRange(w.minRate, w.maxRate),
     T.frequency(w.maxRate - w.minRate),
   ]);
   const columns: TextColumn[] = [
-    { head: 'zone', role: 'key', align: 'right' },
-    { head: 'inverted' },
+    ...(several ? [CHANNEL_ZONES] : ([{ head: 'zone', role: 'key', align: 'right' }, { head: 'inverted' }] as const)),
     { head: 'legal rates', align: 'right' },
     { head: 'width', align: 'right' },
   ];
-  return (
-    wrapProse('Legal windows (band with guards whole in one zone; rates rounded inward):', width) + '\n' + textTable(columns, rows, width)
-  );
+  const title = several
+    ? 'Legal windows (every channel with its guards whole in a zone; rates rounded inward):'
+    : 'Legal windows (band with guards whole in one zone; rates rounded inward):';
+  return wrapProse(title, width) + '\n' + textTable(columns, rows, width);
 }
 
 function feasibleSection(report: PlanReport, width: number): string {
   if (report.feasible.length === 0) return 'Feasible intervals: none; every legal rate is blocked.';
+  const several = report.channels.length > 1;
   const rows = report.feasible.map((f) => [
-    String(f.zone),
-    yesNo(f.inverted),
+    ...(several ? [channelZonesText(report, f.channelZones)] : [String(f.zone), yesNo(f.inverted)]),
     T.rateRange(f.minRate, f.maxRate),
     T.frequency(f.width),
     T.tolerance(f.widthPpm),
   ]);
   const columns: TextColumn[] = [
-    { head: 'zone', role: 'key', align: 'right' },
-    { head: 'inverted' },
+    ...(several ? [CHANNEL_ZONES] : ([{ head: 'zone', role: 'key', align: 'right' }, { head: 'inverted' }] as const)),
     { head: 'feasible rates', align: 'right' },
     { head: 'width', align: 'right' },
     { head: 'drift at centre', align: 'right' },
   ];
-  return wrapProse('Feasible intervals (nothing blocking lands near the band):', width) + '\n' + textTable(columns, rows, width);
+  const title = several
+    ? 'Feasible intervals (nothing blocking lands near any channel, no channel near another):'
+    : 'Feasible intervals (nothing blocking lands near the band):';
+  return wrapProse(title, width) + '\n' + textTable(columns, rows, width);
+}
+
+const CHANNEL_ZONES: TextColumn = { head: 'channel zones', role: 'key', wrap: true };
+
+/** Each channel's zone at a window or interval, by label: "IF-A 2 inv, IF-B 3". */
+function channelZonesText(report: PlanReport, zones: readonly number[] | undefined): string {
+  return report.channels
+    .map((c, i) => `${c.label} ${zoneText({ zone: zones?.[i] ?? null, inverted: (zones?.[i] ?? 1) % 2 === 0 })}`)
+    .join(', ');
+}
+
+/** With several channels: each channel at each candidate shown, its zone, NCO, worst margin, limiting check and verdict. */
+function channelsSection(report: PlanReport, width: number): string {
+  const shown = report.candidates.slice(0, MOST_CANDIDATES_SHOWN);
+  const columns: TextColumn[] = [
+    { head: '#', role: 'key', align: 'right' },
+    { head: 'channel', role: 'key' },
+    { head: 'zone', align: 'right' },
+    { head: 'NCO', align: 'right' },
+    { head: 'worst margin', align: 'right' },
+    { head: 'limited by', wrap: true },
+    { head: 'verdict' },
+  ];
+  const rows = shown.flatMap((c, i) =>
+    c.channels.map((ch, k) => [
+      k === 0 ? String(i + 1) : '',
+      ch.label,
+      zoneText(ch),
+      ch.nco === null ? '–' : T.rate(ch.nco),
+      T.frequency(ch.worstMargin),
+      ch.limitedBy,
+      ch.pass ? 'pass' : 'FAIL',
+    ]),
+  );
+  const title =
+    'Each channel at each candidate (# as above; NCO: the channel\'s centre after sampling, "inv": conjugate its output; the channel\'s own worst check):';
+  return wrapProse(title, width) + '\n' + textTable(columns, rows, width);
 }
 
 function candidatesSection(report: PlanReport, width: number): string {
@@ -214,10 +264,15 @@ function checksSection(candidate: ReportedCandidate, width: number): string {
   const inversion = candidate.conjugate
     ? '; the band arrives inverted: conjugate the complex output (or tune the NCO to the negative frequency)'
     : '';
+  const at = candidate.label === T.rate(candidate.rate) ? candidate.label : `${candidate.label} (${T.rate(candidate.rate)})`;
   const title =
-    `Checks at ${candidate.label === T.rate(candidate.rate) ? candidate.label : `${candidate.label} (${T.rate(candidate.rate)})`}: zone edge margin ${T.frequency(candidate.zoneEdgeMargin)}` +
-    (candidate.nco === null ? '' : `; NCO ${T.rate(candidate.nco)}${inversion}`) +
-    '. Blocking checks first, tightest first:';
+    candidate.channels.length > 1
+      ? `Checks at ${at}, named channel: check; zone edge margin ${candidate.channels
+          .map((c) => `${c.label} ${T.frequency(c.zoneEdgeMargin)}`)
+          .join(', ')}. Blocking checks first, tightest first:`
+      : `Checks at ${at}: zone edge margin ${T.frequency(candidate.zoneEdgeMargin)}` +
+        (candidate.nco === null ? '' : `; NCO ${T.rate(candidate.nco)}${inversion}`) +
+        '. Blocking checks first, tightest first:';
   const columns: TextColumn[] = [
     { head: 'check', role: 'key', wrap: true },
     { head: 'aliased to', wrap: true },

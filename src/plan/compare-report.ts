@@ -34,6 +34,21 @@ export interface VariantVerdict {
   /** The scenario filter's least margin over the rate's alias bands, dB; null as filterOrders or with no alias band. */
   readonly maskMarginDb: Db | null;
   readonly pass: boolean;
+  /** With several channels, each channel at the part's rate, in the scenario's order; absent for one wanted band or a part not planned. */
+  readonly channels?: readonly ChannelVerdict[];
+}
+
+/** One channel of a variant at a part's rate: its zone, NCO, worst check and verdict. */
+export interface ChannelVerdict {
+  readonly label: string;
+  readonly zone: number | null;
+  readonly inverted: boolean | null;
+  /** The channel's centre after sampling, the NCO frequency, Hz; null when it straddles. */
+  readonly nco: Hz | null;
+  readonly worstMargin: Hz;
+  readonly limitedBy: string;
+  readonly limitedByKind: LimitKind;
+  readonly pass: boolean;
 }
 
 export interface ComparedPart {
@@ -149,5 +164,19 @@ function verdict(variant: string, plan: PartPlan, inputs: AfterRateInputs | null
     filterOrders: after ? after.design.orders : null,
     maskMarginDb: after?.mask.worst ? after.mask.worst.marginDb : null,
     pass: plan.pass && (after === null || after.mask.pass),
+    ...(e.channels
+      ? {
+          channels: e.channels.map((c) => ({
+            label: c.label,
+            zone: c.zone,
+            inverted: c.inverted,
+            nco: c.center,
+            worstMargin: c.worstMargin,
+            limitedBy: limitText(c.limitedBy),
+            limitedByKind: c.limitedBy.kind,
+            pass: c.pass,
+          })),
+        }
+      : {}),
   };
 }

@@ -27,6 +27,10 @@ export interface ReportedFeasible {
   readonly width: Hz;
   /** Drift a rate at the interval's centre may take and stay inside, ±ppm. */
   readonly widthPpm: Ppm;
+  /** With several channels, each channel's zone (`zone` is the first one's); absent for one band. */
+  readonly channelZones?: readonly number[];
+  /** With several channels, whether each arrives inverted; absent for one band. */
+  readonly channelInverted?: readonly boolean[];
 }
 
 /** One check as reported: the evaluator's result with the interferer's input frequencies at the candidate's rate. */

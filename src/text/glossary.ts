@@ -202,7 +202,7 @@ export const GLOSSARY: readonly GlossaryEntry[] = [
     term: 'worst margin',
     kind: 'column',
     commands: PARTS,
-    csv: ['worst_margin_hz'],
+    csv: ['worst_margin_hz', 'channel_worst_margin_hz'],
     meaning:
       "the least distance, over the clock's whole tolerance, from any blocking interferer's alias (or a zone edge) to the band's alias; negative: they overlap, by the shift that would clear them",
     unit: 'Hz',
@@ -211,14 +211,14 @@ export const GLOSSARY: readonly GlossaryEntry[] = [
     term: 'limited by',
     kind: 'column',
     commands: PARTS,
-    csv: ['limited_by'],
+    csv: ['limited_by', 'channel_limited_by'],
     meaning: 'the check with the least margin beyond its requirement: an interferer\'s label, "zone edge" or "rate limit"',
   },
   {
     term: 'verdict',
     kind: 'column',
     commands: [...PARTS, 'verify'],
-    csv: ['pass'],
+    csv: ['pass', 'channel_pass'],
     meaning:
       'pass, or FAIL when a check, a zone edge or a stated anti-alias mask fails somewhere over the tolerance ("FAIL: mask": only the mask)',
   },
@@ -245,9 +245,25 @@ export const GLOSSARY: readonly GlossaryEntry[] = [
     unit: 'ppm, per cent above 10 000 ppm',
   },
   {
+    term: 'channel',
+    kind: 'column',
+    commands: PARTS,
+    csv: ['channels'],
+    meaning: 'with a list of channels in the scenario\'s wanted, one channel by its label (CSV: every label, separated by ";")',
+  },
+  {
+    term: 'channel zones',
+    kind: 'column',
+    commands: PARTS,
+    csv: ['channel_zones', 'channel_inverted'],
+    meaning:
+      'with several channels, the Nyquist zone of each channel by its label, "inv" where it arrives inverted (CSV: one value per channel, separated by ";")',
+  },
+  {
     term: 'NCO',
     kind: 'column',
-    commands: PLAN,
+    commands: PARTS,
+    csv: ['channel_nco_hz'],
     meaning:
       "numerically controlled oscillator of the digital down-converter; in the table, where the band's centre lands after sampling: the frequency to tune it to. Its tuning word is round(f·2^bits / rate), also written in hexadecimal (0x…)",
     unit: 'Hz',

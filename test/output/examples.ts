@@ -22,6 +22,9 @@ export const TEXT_EXAMPLES: ReadonlyArray<readonly [string, readonly string[]]> 
     'compare-family.csv',
     ['compare', scenario('heron-base'), scenario('heron-lowif'), scenario('heron-narrow'), scenario('heron-wide'), '--csv'],
   ],
+  ['solve-heron-dual.txt', ['solve', scenario('heron-dual')]],
+  ['compare-dual.txt', ['compare', scenario('heron-base'), scenario('heron-dual')]],
+  ['compare-dual.csv', ['compare', scenario('heron-base'), scenario('heron-dual'), '--csv']],
   ['verify-heron-base.txt', ['verify', scenario('heron-base'), '--rate', '184.32M']],
   ['verify-failing-rate.txt', ['verify', scenario('heron-base'), '--rate', '245.76M']],
 ];
