@@ -1,4 +1,3 @@
-import { formatFrequency } from '../units/format-frequency.js';
 import { quantityText, type QuantityText } from '../text/quantity-text.js';
 import type { AfterRate } from '../after-rate/after-rate.js';
 import { MASK_CHECK, type MaskBand } from '../after-rate/filter-mask.js';
@@ -9,8 +8,8 @@ import type { VariantVerdict } from '../plan/compare-report.js';
  * The after-rate figures in words and table rows, shared by the text table
  * and the HTML page so that both say the same thing the same way. Every
  * quantity goes through the text layer of the medium (TERMINAL by default);
- * the NCO frequencies alone keep 10–12 digits, since the error they show is
- * a fraction of a hertz.
+ * the NCO frequencies are written to 0.1 mHz (`tuned`), since the error they
+ * show is a fraction of a hertz.
  */
 
 const TERMINAL = quantityText('terminal');
@@ -95,7 +94,7 @@ export function noiseSentence(after: AfterRate, candidate: ReportedCandidate, te
   const noise = after.noise;
   if (noise === null) return 'Noise folding: not computed, the filter stops the whole channel.';
   const penalty =
-    `Noise folding: +${noise.penaltyDb.toFixed(3)} dB (quadrature error below ${noise.accuracyDb.toPrecision(1)} dB): wideband noise from the alias bands ` +
+    `Noise folding: +${text.decibels(noise.penaltyDb)} dB (${accuracyText(noise.accuracyDb, text)}): wideband noise from the alias bands ` +
     "on top of the channel's own through the filter (with no filter it would be 10·log10 of the zones up to the input bandwidth).";
   if (noise.driverNoiseDensity === null || noise.driverSnrDb === null) return `${penalty} No driver noise density stated.`;
   const driver = ` Driver at ${text.level(noise.driverNoiseDensity)} dBFS/Hz leaves ${text.decibels(noise.driverSnrDb)} dB`;
@@ -115,10 +114,10 @@ export function downConverterSentences(after: AfterRate, text: QuantityText = TE
   const { nco, decimation } = after.downConverter;
   const sentences: string[] = [];
   if (nco) {
-    const tuned = `NCO (${nco.bits}-bit): word ${nco.word} (0x${nco.word.toString(16).toUpperCase()}) gives ${formatFrequency(nco.actual, 12)}, ${text.signedFrequency(nco.error)} from ${formatFrequency(nco.target, 10)}`;
+    const tuned = `NCO (${nco.bits}-bit): word ${nco.word} (0x${nco.word.toString(16).toUpperCase()}) gives ${text.tuned(nco.actual)}, ${text.signedFrequency(nco.error)} from ${text.tuned(nco.target)}`;
     sentences.push(
       nco.inverted
-        ? `${tuned}; the channel is inverted: load ${nco.negativeWord} (0x${nco.negativeWord.toString(16).toUpperCase()}) for ${text.minus}${formatFrequency(nco.target, 10)} (error ${text.signedFrequency(-nco.error)}), or conjugate the output.`
+        ? `${tuned}; the channel is inverted: load ${nco.negativeWord} (0x${nco.negativeWord.toString(16).toUpperCase()}) for ${text.tuned(-nco.target)} (error ${text.signedFrequency(-nco.error)}), or conjugate the output.`
         : `${tuned}.`,
     );
   }
@@ -129,6 +128,11 @@ export function downConverterSentences(after: AfterRate, text: QuantityText = TE
     sentences.push(`Decimation to ${text.rate(d.outputRate)}: ${how}; ${fit}.`);
   }
   return sentences;
+}
+
+/** The quadrature's error bound, in the 0.1 dB the penalty is written to. */
+function accuracyText(accuracyDb: number, text: QuantityText): string {
+  return accuracyDb < 0.1 ? 'quadrature error below 0.1 dB' : `quadrature error up to ${text.decibels(accuracyDb)} dB`;
 }
 
 function stagesText(halfBand: number, remainder: number): string {

@@ -2,6 +2,7 @@ import { quantityText } from '../text/quantity-text.js';
 import { wrapProse } from './wrap-prose.js';
 import type { PeakRow, VerifyResult } from '../report/verify-result.js';
 import { textTable, type TextColumn } from './text-table.js';
+import { FIND_ABOVE_FLOOR } from '../report/judge-line.js';
 
 /** Unlisted peaks shown in the table; JSON carries them all. */
 const MOST_PEAKS_SHOWN = 25;
@@ -28,7 +29,7 @@ export function verifyTable(result: VerifyResult, width = 100): string {
 }
 
 function heading(r: VerifyResult, prose: (text: string) => string): string {
-  const coefficients = r.converter.coefficients.flatMap((a, k) => (k >= 2 ? [`a${k} = ${a.toExponential(3)}`] : [])).join(', ');
+  const coefficients = r.converter.coefficients.flatMap((a, k) => (k >= 2 ? [`a${k} = ${T.scientific(a, 4)}`] : [])).join(', ');
   const plan = r.plan.pass ? 'pass' : 'FAIL';
   return [
     `Simulated capture: ${r.scenario} at ${T.rate(r.rate)}`,
@@ -105,7 +106,10 @@ function linesSection(r: VerifyResult, width: number): string {
       : '';
   const rule = `Level rule: ±${tolerance} dB where the plan's level is the level the capture put there; ≤ +${tolerance} dB above it (when above the threshold) where it is a bound.`;
   return (
-    wrapProse(`Predicted lines beside the capture (looked for: the model puts them at least 3 dB above the floor). ${rule}`, width) +
+    wrapProse(
+      `Predicted lines beside the capture (looked for: the model puts them at least ${T.decibels(FIND_ABOVE_FLOOR)} dB above the floor). ${rule}`,
+      width,
+    ) +
     '\n' +
     table +
     note

@@ -1,8 +1,7 @@
 import { element, px, textElement } from './svg-element.js';
 import { textWidth } from './label-packing.js';
 import type { Scale } from './scale.js';
-import { withMinus } from './typography.js';
-import { trimmed } from '../units/format-frequency.js';
+import { quantityText } from '../text/quantity-text.js';
 
 /** One tick: where it sits in data units and what it reads. */
 export interface Tick {
@@ -19,7 +18,7 @@ const TICK = 5;
  * centred under them, and optional light grid lines up to `gridTop`.
  *
  * @param scale data → x, px
- * @param ticks ticks inside the scale's domain
+ * @param ticks ticks inside the scale's domain, labels as written (numberTicks, inUnit: the text layer's)
  * @param y the axis line, px
  * @param title e.g. 'sampling rate (MHz)'
  * @param gridTop y of the plot's top edge for grid lines, or undefined for none
@@ -37,7 +36,7 @@ export function horizontalAxis(scale: Scale, ticks: readonly Tick[], y: number, 
     const half = textWidth(tick.label, AXIS_FONT) / 2;
     if (x - half < lastRight + 6) continue;
     lastRight = x + half;
-    parts.push(textElement(x, y + TICK + AXIS_FONT + 2, withMinus(tick.label), { 'text-anchor': 'middle', 'font-size': AXIS_FONT }));
+    parts.push(textElement(x, y + TICK + AXIS_FONT + 2, tick.label, { 'text-anchor': 'middle', 'font-size': AXIS_FONT }));
   }
   parts.push(textElement((x0 + x1) / 2, y + TICK + 2 * AXIS_FONT + 10, title, { 'text-anchor': 'middle', 'font-size': AXIS_FONT + 1 }));
   return element('g', { class: 'axis-x' }, parts.join(''));
@@ -70,7 +69,7 @@ export function verticalAxis(scale: Scale, ticks: readonly Tick[], x: number, ti
     if (y + AXIS_FONT / 2 > lastTop - 2) continue;
     lastTop = y - AXIS_FONT / 2;
     widest = Math.max(widest, textWidth(tick.label, AXIS_FONT));
-    parts.push(textElement(x - TICK - 3, y + AXIS_FONT * 0.35, withMinus(tick.label), { 'text-anchor': 'end', 'font-size': AXIS_FONT }));
+    parts.push(textElement(x - TICK - 3, y + AXIS_FONT * 0.35, tick.label, { 'text-anchor': 'end', 'font-size': AXIS_FONT }));
   }
   const titleX = x - TICK - 3 - widest - 10;
   const titleY = (y0 + y1) / 2;
@@ -85,12 +84,15 @@ export function verticalAxis(scale: Scale, ticks: readonly Tick[], x: number, ti
 }
 
 /**
- * Ticks labelled by their value as a plain number (levels in dBFS, attenuation in dB), to 6 significant digits.
+ * Ticks labelled by their value as a plain number (levels in dBFS,
+ * attenuation in dB, ratios), written by the text layer for SVG: the
+ * decimals the set needs and the true minus.
  *
  * @param values the tick values
  * @returns one tick per value
- * @example numberTicks([-20, 0])[0].label // '-20'
+ * @example numberTicks([-20, -7.5, 0])[0].label // '−20.0'
  */
 export function numberTicks(values: readonly number[]): Tick[] {
-  return values.map((value) => ({ value, label: trimmed(value, 6) }));
+  const labels = quantityText('svg').ticks(values);
+  return values.map((value, i) => ({ value, label: labels[i]! }));
 }

@@ -1,9 +1,8 @@
 import type { PlanReport, ReportedCandidate } from '../plan/plan-report.js';
-import { trimmed } from '../units/format-frequency.js';
 import { quantityText } from '../text/quantity-text.js';
 
 const T = quantityText('svg');
-import { horizontalAxis, verticalAxis } from './axis.js';
+import { horizontalAxis, numberTicks, verticalAxis } from './axis.js';
 import { spreadApart, textWidth } from './label-packing.js';
 import { boxSwatch, legendRows } from './legend.js';
 import { candidateMarker, failMarker, passMarker } from './markers.js';
@@ -82,7 +81,7 @@ export function bandPositionFigure(report: PlanReport, candidateLabel?: string):
     }),
   );
   parts.push(
-    textElement(x.at(design), TOP - 6, `this design: fH/B = ${trimmed(design, 5)}`, {
+    textElement(x.at(design), TOP - 6, `this design: fH/B = ${T.number(design, 4)}`, {
       'text-anchor': design > (1 + xMax) / 2 ? 'end' : 'start',
       'font-size': SMALL,
       'font-weight': 'bold',
@@ -90,23 +89,8 @@ export function bandPositionFigure(report: PlanReport, candidateLabel?: string):
   );
   const marked = markedCandidates(report, focus, B, yMax);
   parts.push(candidatePoints(report, marked, focus, B, design, x, y));
-  parts.push(
-    verticalAxis(
-      y,
-      yTicks.values.map((v) => ({ value: v, label: trimmed(v, 6) })),
-      LEFT,
-      'sampling rate / bandwidth, fs/B',
-      PLOT_RIGHT,
-    ),
-  );
-  parts.push(
-    horizontalAxis(
-      x,
-      linearTicks(1, xMax, 8).values.map((v) => ({ value: v, label: trimmed(v, 6) })),
-      BOTTOM,
-      'upper band edge / bandwidth, fH/B',
-    ),
-  );
+  parts.push(verticalAxis(y, numberTicks(yTicks.values), LEFT, 'sampling rate / bandwidth, fs/B', PLOT_RIGHT));
+  parts.push(horizontalAxis(x, numberTicks(linearTicks(1, xMax, 8).values), BOTTOM, 'upper band edge / bandwidth, fH/B'));
   const legend = legendRows(
     [
       { swatch: boxSwatch('#dcdcdc'), text: 'allowed, upright zone', drawn: wedges.some((w) => !w.inverted) },
@@ -147,7 +131,7 @@ function heading(report: PlanReport, fL: number, fH: number, design: number): st
     textElement(
       24,
       40,
-      `zone n allows 2·fH/n ≤ fs ≤ 2·(fH − B)/(n − 1) (Vaughan, Scott & White 1991); guarded band ${T.extent(fL, fH)}, B = ${T.frequency(B)} (the guarded width: fs/B and fH/B divide by it), fH/B = ${trimmed(design, 6)}`,
+      `zone n allows 2·fH/n ≤ fs ≤ 2·(fH − B)/(n − 1) (Vaughan, Scott & White 1991); guarded band ${T.extent(fL, fH)}, B = ${T.frequency(B)} (the guarded width: fs/B and fH/B divide by it), fH/B = ${T.number(design, 4)}`,
       { 'font-size': 10.5 },
     )
   );
@@ -235,7 +219,7 @@ function candidatePoints(
   const placed = spreadApart(wanted, 12, TOP + 6, BOTTOM - 4);
   const labelX = Math.max(at, x.range[1]) + 76;
   labelled.forEach((c, i) => {
-    const text = `${c.label}: ${T.rate(c.rate)} = ${trimmed(c.rate / B, 5)}·B`;
+    const text = `${c.label}: ${T.rate(c.rate)} = ${T.number(c.rate / B, 4)}·B`;
     parts.push(
       element('path', {
         d: `M${at + 6} ${wanted[i]}L${labelX - 36} ${wanted[i]}L${labelX - 4} ${placed[i]}`,

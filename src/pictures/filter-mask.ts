@@ -1,7 +1,7 @@
 import type { PlanReport, ReportedCandidate } from '../plan/plan-report.js';
 import type { MaskBand } from '../after-rate/filter-mask.js';
 import { filterAttenuation } from '../filter/filter-attenuation.js';
-import { formatFrequency, trimmed } from '../units/format-frequency.js';
+import { quantityText } from '../text/quantity-text.js';
 import { hz } from '../units/quantities.js';
 import { horizontalAxis, numberTicks, verticalAxis } from './axis.js';
 import { frequencyUnit, inUnit } from './frequency-unit.js';
@@ -15,6 +15,7 @@ import { element, pointList, textElement } from './svg-element.js';
 import { withMinus } from './typography.js';
 import { svgDocument, type Figure } from './svg-document.js';
 
+const T = quantityText('svg');
 const WIDTH = 960;
 const LEFT = 84;
 const RIGHT = 28;
@@ -138,7 +139,7 @@ export function filterMaskFigure(report: PlanReport, candidateLabel: string): Fi
     );
   }
   parts.push(element('g', { class: 'margins' }, labels.join('')));
-  const required = `needed ${trimmed(mask.requiredDb, 4)} dB`;
+  const required = `needed ${T.decibels(mask.requiredDb)} dB`;
   const w = textWidth(required, SMALL) + 6;
   parts.push(element('rect', { x: LEFT + 2, y: clampY(mask.requiredDb) - 14, width: w, height: 12, fill: '#fff', opacity: 0.9 }));
   parts.push(textElement(LEFT + 2 + w / 2, clampY(mask.requiredDb) - 5, required, { 'text-anchor': 'middle', 'font-size': SMALL }));
@@ -151,14 +152,14 @@ export function filterMaskFigure(report: PlanReport, candidateLabel: string): Fi
     [
       {
         swatch: boxSwatch(FILL.blocked),
-        text: `alias band: the filter must give ${trimmed(mask.requiredDb, 4)} dB or more`,
+        text: `alias band: the filter must give ${T.decibels(mask.requiredDb)} dB or more`,
         drawn: mask.bands.length > 0,
       },
       { swatch: boxSwatch(FILL.wanted), text: 'channel (passband)' },
       {
         swatch: (cx, cy) => element('line', { x1: cx - 11, y1: cy, x2: cx + 11, y2: cy, stroke: '#000', 'stroke-width': 2 }),
         text: report.afterRateInputs?.filter
-          ? `the scenario's filter${curve.clipped ? ` (drawn up to ${trimmed(top, 6)} dB)` : ''}`
+          ? `the scenario's filter${curve.clipped ? ` (drawn up to ${T.decibels(top)} dB)` : ''}`
           : 'no filter stated (0 dB)',
       },
       {
@@ -191,23 +192,21 @@ export function filterMaskSvg(report: PlanReport, candidateLabel: string): strin
 }
 
 function marginText(band: MaskBand): string {
-  return `${band.marginDb >= 0 ? '+' : '-'}${trimmed(Math.abs(band.marginDb), 3)} dB`;
+  return `${T.signedDecibels(band.marginDb)} dB`;
 }
 
 function heading(report: PlanReport, c: ReportedCandidate): string {
   const mask = c.afterRate!.mask;
   const level = mask.levelStated
-    ? `out-of-band level ${trimmed(mask.outOfBandLevel, 4)} dBFS (stated)`
+    ? `out-of-band level ${T.level(mask.outOfBandLevel)} dBFS (stated)`
     : 'out-of-band level not stated: full scale assumed, reported only';
-  const worst = mask.worst
-    ? `; least margin ${trimmed(mask.worst.marginDb, 4)} dB at ${formatFrequency(mask.worst.low, 6)} – ${formatFrequency(mask.worst.high, 6)}`
-    : '';
+  const worst = mask.worst ? `; least margin ${T.decibels(mask.worst.marginDb)} dB at ${T.extent(mask.worst.low, mask.worst.high)}` : '';
   return (
-    textElement(24, 22, `Anti-alias filter mask at ${c.label} (${formatFrequency(c.rate)}): ${report.scenario}`, {
+    textElement(24, 22, `Anti-alias filter mask at ${c.label} (${T.rate(c.rate)}): ${report.scenario}`, {
       'font-size': 14,
       'font-weight': 'bold',
     }) +
-    textElement(24, 40, withMinus(`${level}; threshold ${trimmed(mask.threshold, 4)} dBFS${worst}`), { 'font-size': 11 }) +
+    textElement(24, 40, `${level}; threshold ${T.level(mask.threshold)} dBFS${worst}`, { 'font-size': 11 }) +
     textElement(
       24,
       56,

@@ -1,4 +1,5 @@
-import { formatFrequency, trimmed } from '../units/format-frequency.js';
+import { formatFrequency } from '../units/format-frequency.js';
+import { quantityText } from '../text/quantity-text.js';
 
 /** One SI unit for a whole frequency axis: the tick numbers are value / 10^power. */
 export interface FrequencyUnit {
@@ -26,13 +27,15 @@ export function frequencyUnit(largest: number): FrequencyUnit {
 }
 
 /**
- * A frequency as a number of the axis unit, for a tick label. Divides by the
- * exact power of ten once, so 2.5e8 Hz reads '250' (MHz).
+ * A frequency as a number of the axis unit, for a tick label, written by the
+ * text layer for SVG (a tick is an exact 1-2-5 multiple, so its digits are
+ * the fewest that write it). Divides by the exact power of ten once, so
+ * 2.5e8 Hz reads '250' (MHz).
  *
  * @param value Hz
  * @param unit the axis unit
  * @example inUnit(122.88e6, frequencyUnit(250e6)) // '122.88'
  */
 export function inUnit(value: number, unit: FrequencyUnit): string {
-  return trimmed(value / 10 ** unit.power, 10);
+  return quantityText('svg').number(value / 10 ** unit.power, 10);
 }

@@ -1,10 +1,13 @@
 import { db, hz } from '../units/quantities.js';
-import { formatFrequency } from '../units/format-frequency.js';
+import { quantityText } from '../text/quantity-text.js';
 import type { CheckResult } from '../solve/evaluate-rate.js';
 import { binDistance } from '../capture/coherent-bins.js';
 import type { LineDraft } from '../capture/family-lines.js';
 import type { ModelComponent } from '../capture/model-components.js';
 import type { LevelBasis, LineStatus, PredictionRow } from './verify-result.js';
+
+/** The notes are read in the terminal and the JSON: the terminal's way of writing numbers. */
+const T = quantityText('terminal');
 
 /** A line must stand this far above the floor to be looked for, dB. */
 export const FIND_ABOVE_FLOOR = 3;
@@ -91,25 +94,28 @@ export function judgeLine(setting: LineSetting, measurement: Measurement): Predi
   const row = (status: LineStatus, note: string): PredictionRow => ({ ...base, insidePlan, measured, binError, levelError, status, note });
 
   if (modelLevel < measurement.floor + FIND_ABOVE_FLOOR)
-    return row('below floor', `the model puts it at ${modelLevel.toFixed(1)} dBFS, under the floor ${measurement.floor.toFixed(1)} dBFS`);
+    return row('below floor', `the model puts it at ${T.level(modelLevel)} dBFS, under the floor ${T.level(measurement.floor)} dBFS`);
   const crowd = crowdedBy(setting, measurement);
   if (crowd !== null) return row('crowded', crowd);
-  if (measured === null || binError === null) return row('missing', `no peak within ${SEARCH_BINS} bins of bin ${predictedBin.toFixed(2)}`);
-  if (Math.abs(binError) > 1) return row('off position', `peak ${binError.toFixed(2)} bins from the prediction`);
+  if (measured === null || binError === null)
+    return row('missing', `no peak within ${SEARCH_BINS} bins of bin ${T.number(predictedBin, 7)}`);
+  if (Math.abs(binError) > 1) return row('off position', `peak ${T.number(binError, 3)} bins from the prediction`);
   if (insidePlan === false)
     return row(
       'outside plan segments',
-      `measured at ${formatFrequency(measured.frequency)}, outside the plan's aliased segments of ${check.label}`,
+      `measured at ${T.frequency(measured.frequency)}, outside the plan's aliased segments of ${check.label}`,
     );
   if (modelLevel < measurement.floor + JUDGE_ABOVE_FLOOR)
-    return row('found', `level not judged: less than ${JUDGE_ABOVE_FLOOR} dB above the floor`);
+    return row('found', `level not judged: less than ${T.decibels(JUDGE_ABOVE_FLOOR)} dB above the floor`);
   const error = measured.level - check.level;
   if (setting.basis === 'plan') {
-    return Math.abs(error) > measurement.tolerance ? row('off level', `${signed(error)} dB from the plan's level`) : row('agrees', '');
+    return Math.abs(error) > measurement.tolerance
+      ? row('off level', `${T.signedDecibels(error)} dB from the plan's level`)
+      : row('agrees', '');
   }
   if (error > measurement.tolerance && measured.level > measurement.threshold)
-    return row('above plan level', `${signed(error)} dB above the plan's level, and above the threshold`);
-  return row('agrees', `the plan's level is a bound here; measured ${signed(error)} dB from it`);
+    return row('above plan level', `${T.signedDecibels(error)} dB above the plan's level, and above the threshold`);
+  return row('agrees', `the plan's level is a bound here; measured ${T.signedDecibels(error)} dB from it`);
 }
 
 function nearestPeak(measurement: Measurement, predictedBin: number, samples: number): number | null {
@@ -138,8 +144,4 @@ function crowdedBy(setting: LineSetting, measurement: Measurement): string | nul
 
 function inSegments(frequency: number, segments: ReadonlyArray<readonly [number, number]>, slack: number): boolean {
   return segments.some(([low, high]) => frequency >= low - slack && frequency <= high + slack);
-}
-
-function signed(value: number): string {
-  return `${value >= 0 ? '+' : '−'}${Math.abs(value).toFixed(2)}`;
 }

@@ -1,5 +1,5 @@
 import { db, hz, ppm, type Db, type Hz } from '../units/quantities.js';
-import { formatFrequency } from '../units/format-frequency.js';
+import { quantityText } from '../text/quantity-text.js';
 import type { Scenario } from '../scenario/scenario.js';
 import { contextFromScenario } from '../solve/context-from-scenario.js';
 import { evaluateRate, type CheckResult } from '../solve/evaluate-rate.js';
@@ -23,6 +23,9 @@ import { imageKey, modelComponents, type ModelComponent } from '../capture/model
 import { chooseLayout, type ComponentTemplate } from '../capture/tone-layout.js';
 import { blackmanHarris } from '../capture/window.js';
 import { CONTRADICTING, type PeakRow, type PredictionRow, type ToneRow, type UnderFloor, type VerifyResult } from './verify-result.js';
+
+/** The result's words (notes, contradictions, what was compared) are read in the terminal and the JSON: written as the terminal writes numbers. */
+const T = quantityText('terminal');
 
 /** How one capture is taken. */
 export interface CaptureSettings {
@@ -302,7 +305,7 @@ function contradictionWords(
       .filter((u) => u.level > threshold && !(u.explainedBy ?? '').startsWith('window overlap'))
       .map(
         (u) =>
-          `${formatFrequency(u.frequency, 7)} at ${u.level.toFixed(1)} dBFS, above the threshold ${threshold.toFixed(1)} dBFS: ${u.explainedBy ?? 'unexplained'}; missed by the plan`,
+          `${T.frequency(u.frequency)} at ${T.level(u.level)} dBFS, above the threshold ${T.level(threshold)} dBFS: ${u.explainedBy ?? 'unexplained'}; missed by the plan`,
       ),
     // An intrusion confirms a failing plan when it is a line of a check the plan itself fails at this rate.
     ...peaks.intrusions
@@ -311,8 +314,8 @@ function contradictionWords(
         const where =
           u.distance === 0
             ? 'lies inside the wanted image'
-            : `lies ${formatFrequency(u.distance, 4)} from the wanted image, inside the ${formatFrequency(marginAt(u.bin))} margin`;
-        return `${formatFrequency(u.frequency, 7)} at ${u.level.toFixed(1)} dBFS (${u.explainedBy ?? lineName(predictions, u.bin)}) ${where}: the rate is not clean`;
+            : `lies ${T.frequency(u.distance)} from the wanted image, inside the ${T.frequency(marginAt(u.bin))} margin`;
+        return `${T.frequency(u.frequency)} at ${T.level(u.level)} dBFS (${u.explainedBy ?? lineName(predictions, u.bin)}) ${where}: the rate is not clean`;
       }),
   ];
 }
@@ -450,14 +453,14 @@ function comparedText(
         ]
       : []),
     ...(wantedTones === 1 ? ['With one wanted tone the differences inside the wanted band make no line: a tone less itself is DC.'] : []),
-    `Positions must agree within one bin. Levels are judged ${tolerance} dB either way where the plan's level is the level the capture put there (stated spurs, neighbours, and with one wanted tone its harmonics and images); where the plan's level is a band's worst case or an extrapolation (neighbour harmonics, intermodulation, several wanted tones), the measurement must not exceed it by more than ${tolerance} dB when above the threshold.`,
-    `Peaks above ${floor.toFixed(1)} dBFS count; any above the threshold ${threshold.toFixed(1)} dBFS that no line of the plan explains, or that lands inside the wanted image or within the margin its interferer must keep from it (unless it is a line of a check the plan fails at this rate, which confirms the plan's failure), contradicts the plan.`,
+    `Positions must agree within one bin. Levels are judged ${T.decibels(tolerance)} dB either way where the plan's level is the level the capture put there (stated spurs, neighbours, and with one wanted tone its harmonics and images); where the plan's level is a band's worst case or an extrapolation (neighbour harmonics, intermodulation, several wanted tones), the measurement must not exceed it by more than ${T.decibels(tolerance)} dB when above the threshold.`,
+    `Peaks above ${T.level(floor)} dBFS count; any above the threshold ${T.level(threshold)} dBFS that no line of the plan explains, or that lands inside the wanted image or within the margin its interferer must keep from it (unless it is a line of a check the plan fails at this rate, which confirms the plan's failure), contradicts the plan.`,
   ];
   if (!complete)
     lines.push(
       "The list of the model's products was cut short at its budget: an unexplained peak may be a product of high order the list does not name.",
     );
   if (floor > threshold)
-    lines.push(`The floor is above the threshold: spurs between ${threshold.toFixed(1)} and ${floor.toFixed(1)} dBFS are not seen.`);
+    lines.push(`The floor is above the threshold: spurs between ${T.level(threshold)} and ${T.level(floor)} dBFS are not seen.`);
   return lines.join(' ');
 }

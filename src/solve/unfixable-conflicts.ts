@@ -1,8 +1,7 @@
 import { db, hz, type Db, type Hz } from '../units/quantities.js';
-import { formatFrequency } from '../units/format-frequency.js';
+import { quantityText } from '../text/quantity-text.js';
 import type { Band } from '../math/band.js';
 import type { Interferer } from '../interferers/interferer.js';
-import { dbText } from '../interferers/words.js';
 import { imageMargin, normalisedExtent } from './fold-images.js';
 import { channelPlans, hasChannels, type PlanContext } from './plan-context.js';
 import { channelCheckLabel } from './limited-by.js';
@@ -87,14 +86,15 @@ function stillDistance(interferer: Interferer, band: Band): number {
   return Math.min(...([1, -1] as const).map((side) => imageMargin(extent, band, { j: extent.rateMultiple, side, slope: 0 }, hz(0))));
 }
 
+/** The sentence is printed in the terminal (and carried in the JSON): written as the terminal writes numbers. */
+const T = quantityText('terminal');
+
 function conflictSentence(interferer: Interferer, distance: number, excess: number, channel: string | null): string {
   const band = channel === null ? 'the wanted band' : `channel ${channel}`;
   const where =
-    distance < 0
-      ? `lies inside ${band} (${formatFrequency(-distance)} from its nearer edge)`
-      : `lies ${formatFrequency(distance)} from ${band}`;
-  const required = `where ${formatFrequency(interferer.requiredMargin)} is required`;
-  const weaker = `${dbText(excess, 'dB')} less level would make it harmless`;
+    distance < 0 ? `lies inside ${band} (${T.frequency(-distance)} from its nearer edge)` : `lies ${T.frequency(distance)} from ${band}`;
+  const required = `where ${T.frequency(interferer.requiredMargin)} is required`;
+  const weaker = `${T.decibels(excess)} dB less level would make it harmless`;
   const fixes = {
     neighbour: `more anti-alias filter rejection of it (${weaker}), a different channel plan, or a smaller required margin for it (its "margin") can`,
     spur: `better isolation or filtering of it (${weaker}), moving the spur, or a smaller required margin for it (its "margin") can`,

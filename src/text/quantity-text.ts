@@ -68,6 +68,14 @@ export interface QuantityText {
   readonly settings: (settings: Settings | null) => string;
   /** A value with an explicit sign (+, the medium's minus, or none for 0). */
   readonly signedFrequency: (value: number) => string;
+  /** A level difference in dB to 0.1 dB with an explicit sign: "+2.2", "−17.3" ("0.0" for 0). */
+  readonly signedDecibels: (value: number) => string;
+  /** A frequency an NCO word gives or aims at, to 0.1 mHz: its error from the target is a fraction of a hertz. */
+  readonly tuned: (value: number) => string;
+  /** A dimensionless number in e-notation to `digits` significant digits, the medium's minus in the mantissa and the exponent. */
+  readonly scientific: (value: number, digits: number) => string;
+  /** Tick labels of an axis: each value with just the decimals the whole set needs (at most 6), the medium's minus. */
+  readonly ticks: (values: readonly number[]) => string[];
 }
 
 /**
@@ -140,6 +148,31 @@ export function quantityText(medium: Medium): QuantityText {
     driftRoom: (down, up) => `${drift(-Math.abs(down))} / ${drift(Math.abs(up), true)}`,
     settings: settingsText,
     signedFrequency: (value) => (value > 0 ? `+${frequency(value)}` : frequency(value)),
+    signedDecibels: (value) => {
+      const text = decibels(value);
+      return value > 0 && text !== '0.0' ? `+${text}` : text;
+    },
+    tuned: (value) => {
+      const [scale, unit] = prefixOf(value);
+      // 0.1 mHz is 1e-4 Hz: decimals of the prefix's unit that reach it.
+      const decimals = Math.max(0, Math.round(Math.log10(scale)) + 4);
+      return `${withMinus(String(Number((value / scale).toFixed(decimals))))} ${unit}`;
+    },
+    scientific: (value, digits) =>
+      value
+        .toExponential(digits - 1)
+        .replace(/-/g, minus)
+        .replace('e+', 'e'),
+    ticks: (values) => {
+      let decimals = 0;
+      while (
+        decimals < 6 &&
+        values.some((v) => Math.abs(v * 10 ** decimals - Math.round(v * 10 ** decimals)) > 1e-9 * Math.max(1, Math.abs(v * 10 ** decimals)))
+      )
+        decimals++;
+      // One count of decimals for the whole axis, so that its labels line up (−20.0, −19.5); no "−0".
+      return values.map((v) => withMinus(v.toFixed(decimals).replace(/^-(?=0(?:\.0*)?$)/, '')));
+    },
   };
 }
 

@@ -48,7 +48,8 @@ function check(name: string, scenario: Scenario): { texts: string[]; stops: numb
   return { texts: textsOf(document), stops, bands: mask.bands.length, tightest: mask.worst!.marginDb };
 }
 
-const marginLabel = (margin: number) => `${margin >= 0 ? '+' : '−'}${Number(Math.abs(margin).toPrecision(3))} dB`;
+// Margin labels as the text layer writes dB: to 0.1 dB, signed, with the true minus.
+const marginLabel = (margin: number) => `${margin >= 0 ? '+' : '−'}${Math.abs(margin).toFixed(1)} dB`;
 
 describe('filter-mask picture', () => {
   it('a Butterworth filter: one stop region per alias band, the tightest margin labelled, the heading says reported only', () => {
@@ -58,7 +59,7 @@ describe('filter-mask picture', () => {
     expect(stops).toBe(bands);
     expect(texts).toContain(marginLabel(tightest));
     expect(texts.join('\n')).toMatch(/out-of-band level not stated: full scale assumed, reported only/);
-    expect(texts).toContain("the scenario's filter (drawn up to 160 dB)");
+    expect(texts).toContain("the scenario's filter (drawn up to 160.0 dB)");
   });
 
   it('a stated level and a table filter: the level in the heading, a shortfall labelled', () => {
@@ -72,7 +73,7 @@ describe('filter-mask picture', () => {
       ],
     } as const;
     const { texts, tightest } = check('filter-mask-table', withLevel({ ...heronBoardScenario(), filter: table }, -10));
-    expect(texts.join('\n')).toContain('out-of-band level −10 dBFS (stated)');
+    expect(texts.join('\n')).toContain('out-of-band level −10.0 dBFS (stated)');
     expect(tightest).toBeLessThan(0);
     expect(texts).toContain(marginLabel(tightest));
   });

@@ -119,3 +119,36 @@ function readRange(text: string): [number, number] {
   const unit = scale[within[3]!]!;
   return [Number(within[1]) * unit, Number(within[2] ?? within[1]) * unit];
 }
+
+// Expected texts written by hand from the rules: dB to 0.1 with an explicit sign; an NCO's frequency to 0.1 mHz
+// (its error is a fraction of a hertz); e-notation to the digits asked; tick labels with the decimals the axis needs.
+describe('quantityText: signed dB, NCO frequencies, e-notation, tick labels', () => {
+  it('signed dB to 0.1 dB, no sign on a figure that reads 0.0', () => {
+    expect(terminal.signedDecibels(-17.34)).toBe('-17.3');
+    expect(svg.signedDecibels(-17.34)).toBe('\u221217.3');
+    expect(terminal.signedDecibels(2.24)).toBe('+2.2');
+    expect(terminal.signedDecibels(0.04)).toBe('0.0');
+    expect(terminal.signedDecibels(-0.04)).toBe('0.0');
+  });
+
+  it('an NCO frequency to 0.1 mHz, trailing zeros dropped', () => {
+    expect(terminal.tuned(46663555.6635)).toBe('46.6635556635 MHz');
+    expect(terminal.tuned(46663555.64)).toBe('46.66355564 MHz');
+    expect(html.tuned(-46663555.6422)).toBe('\u221246.6635556422 MHz');
+    expect(terminal.tuned(12.5)).toBe('12.5 Hz');
+  });
+
+  it('e-notation with the medium minus in the mantissa and the exponent', () => {
+    expect(terminal.scientific(-7.5641e-4, 4)).toBe('-7.564e-4');
+    expect(svg.scientific(-7.5641e-4, 4)).toBe('\u22127.564e\u22124');
+    expect(terminal.scientific(1234, 3)).toBe('1.23e3');
+  });
+
+  it('tick labels: one count of decimals for the whole axis, no −0', () => {
+    expect(svg.ticks([-100, -80, 0])).toEqual(['\u2212100', '\u221280', '0']);
+    expect(svg.ticks([-1, -0.5, 0, 0.5])).toEqual(['\u22121.0', '\u22120.5', '0.0', '0.5']);
+    // 0.1 + 0.2 is not 0.3 in binary: the label still reads 0.3.
+    expect(terminal.ticks([0.1, 0.2, 0.1 + 0.2])).toEqual(['0.1', '0.2', '0.3']);
+    expect(terminal.ticks([122.88, 130])).toEqual(['122.88', '130.00']);
+  });
+});
