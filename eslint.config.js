@@ -31,4 +31,10 @@ export default tseslint.config(
     files: ['test/**', 'bin/**', '*.js', '*.mjs'],
     rules: { 'no-console': 'off' },
   },
+  // bin/ is CommonJS (bin/package.json): the command's entry point skips Node's ES module loader.
+  {
+    files: ['bin/**/*.js'],
+    languageOptions: { sourceType: 'commonjs', globals: { require: 'readonly', module: 'writable', __dirname: 'readonly' } },
+    rules: { '@typescript-eslint/no-require-imports': 'off' },
+  },
 );

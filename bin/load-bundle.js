@@ -4,23 +4,24 @@
 // code instead of parsing and compiling it. The cache is read, never written,
 // here: nothing is left in the user's directories. It is used only when its
 // key (the SHA-256 of the bundle) matches the bundle; V8 itself refuses it when
-// its version or flags differ. Either way the bundle is compiled from source
-// as if there were no cache, and runs the same.
-import { createHash } from 'node:crypto';
-import { readFileSync } from 'node:fs';
-import Module, { createRequire } from 'node:module';
-import { dirname } from 'node:path';
-import { fileURLToPath } from 'node:url';
-import { Script, constants } from 'node:vm';
+// its version or flags differ; either way the bundle is then compiled from
+// source and runs the same, only slower to start. CommonJS, like bin/ifzone
+// (bin/package.json).
+'use strict';
+const { createHash } = require('node:crypto');
+const { readFileSync } = require('node:fs');
+const Module = require('node:module');
+const { dirname, join } = require('node:path');
+const { Script, constants } = require('node:vm');
 
 /** The bundle: one CommonJS file, each lazily imported command a module run on first use. */
-export const BUNDLE = fileURLToPath(new URL('../dist/bundle/cli/ifzone.cjs', import.meta.url));
+const BUNDLE = join(__dirname, '..', 'dist', 'bundle', 'cli', 'ifzone.cjs');
 /** The code cache: the key (SHA-256 of the bundle, 32 bytes), then V8's cached data. */
-export const CODE_CACHE = `${BUNDLE}.cache`;
+const CODE_CACHE = `${BUNDLE}.cache`;
 const KEY_BYTES = 32;
 
 /** The key of a bundle's bytes: their SHA-256. */
-export function codeCacheKey(bytes) {
+function codeCacheKey(bytes) {
   return createHash('sha256').update(bytes).digest();
 }
 
@@ -28,7 +29,7 @@ export function codeCacheKey(bytes) {
  * Compiles and runs the bundle. Returns its exports (`runCli`), the compiled
  * script (the build asks it for the cached data), and whether V8 took a cache.
  */
-export function loadBundle({ useCache = true } = {}) {
+function loadBundle({ useCache = true } = {}) {
   const bytes = readFileSync(BUNDLE);
   const cachedData = useCache ? matchingCache(bytes) : undefined;
   const script = new Script(Module.wrap(bytes.toString('utf8')), {
@@ -38,7 +39,7 @@ export function loadBundle({ useCache = true } = {}) {
     importModuleDynamically: constants?.USE_MAIN_CONTEXT_DEFAULT_LOADER,
   });
   const module = { exports: {} };
-  script.runInThisContext()(module.exports, createRequire(BUNDLE), module, BUNDLE, dirname(BUNDLE));
+  script.runInThisContext()(module.exports, Module.createRequire(BUNDLE), module, BUNDLE, dirname(BUNDLE));
   return { exports: module.exports, script, cacheUsed: cachedData !== undefined && !script.cachedDataRejected };
 }
 
@@ -52,3 +53,5 @@ function matchingCache(bytes) {
   }
   return cache.length > KEY_BYTES && cache.subarray(0, KEY_BYTES).equals(codeCacheKey(bytes)) ? cache.subarray(KEY_BYTES) : undefined;
 }
+
+module.exports = { BUNDLE, CODE_CACHE, codeCacheKey, loadBundle };

@@ -30,7 +30,7 @@ function copyInstall(name: string, edit: (source: string) => string): string {
   const root = join(dir, name);
   mkdirSync(join(root, 'bin'), { recursive: true });
   mkdirSync(join(root, 'dist', 'bundle', 'cli'), { recursive: true });
-  for (const file of ['ifzone', 'load-bundle.js']) copyFileSync(join(ROOT, 'bin', file), join(root, 'bin', file));
+  for (const file of ['ifzone', 'load-bundle.js', 'package.json']) copyFileSync(join(ROOT, 'bin', file), join(root, 'bin', file));
   writeFileSync(join(root, 'package.json'), '{ "type": "module" }');
   writeFileSync(join(root, 'dist', 'bundle', 'cli', 'ifzone.cjs'), edit(readFileSync(BUNDLE, 'utf8')));
   copyFileSync(`${BUNDLE}.cache`, join(root, 'dist', 'bundle', 'cli', 'ifzone.cjs.cache'));
