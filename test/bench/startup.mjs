@@ -26,6 +26,13 @@ function median(values) {
   return sorted.length % 2 ? sorted[mid] : (sorted[mid - 1] + sorted[mid]) / 2;
 }
 
+/** The middle half of the times, as text: their spread (other work on the machine widens it). */
+function quartiles(values) {
+  const sorted = [...values].sort((a, b) => a - b);
+  const at = (p) => sorted[Math.round(p * (sorted.length - 1))];
+  return `${at(0.25).toFixed(0)}–${at(0.75).toFixed(0)}`;
+}
+
 /** The demo's best rate, from `solve --json`. */
 function bestRate() {
   const run = spawnSync(process.execPath, ['bin/ifzone', 'solve', FAMILY[0], '--json'], {
@@ -54,7 +61,7 @@ export default async function startup() {
     }
   }
   const bareMedian = median(bare.times);
-  console.log(`${bare.name.padEnd(26)} median ${bareMedian.toFixed(1)} ms over ${ROUNDS} runs`);
+  console.log(`${bare.name.padEnd(26)} median ${bareMedian.toFixed(1)} ms (quartiles ${quartiles(bare.times)}) over ${ROUNDS} runs`);
   let ok = true;
   for (const c of commands) {
     const ms = median(c.times);
@@ -62,7 +69,7 @@ export default async function startup() {
     const within = ratio <= c.limit;
     ok &&= within;
     console.log(
-      `${c.name.padEnd(26)} median ${ms.toFixed(1)} ms, ${ratio.toFixed(2)}× node -e 0 (limit ${c.limit}×)${within ? '' : ' — LIMIT MISSED'}`,
+      `${c.name.padEnd(26)} median ${ms.toFixed(1)} ms (quartiles ${quartiles(c.times)}), ${ratio.toFixed(2)}× node -e 0 (limit ${c.limit}×)${within ? '' : ' — LIMIT MISSED'}`,
     );
   }
   return ok;
