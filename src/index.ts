@@ -15,7 +15,7 @@ export type { Scenario, ClockPart, Converter, Goal } from './scenario/scenario.j
 
 // The plan of a scenario, of a family of variants, and at one rate.
 export { planScenario, planAtRate, type PlanOptions } from './plan/plan-scenario.js';
-export { planFamily, type FamilyPlan, type FamilyVariant } from './plan/plan-family.js';
+export { compareFamily, planFamily, type FamilyPlan, type FamilyVariant } from './plan/plan-family.js';
 export type { PlanReport, ReportedCandidate, ReportedCheck, ReportedFeasible } from './plan/plan-report.js';
 export type { ShiftReport, ReportedShift } from './plan/shift-report.js';
 export type { CompareReport, ComparedPart, VariantVerdict } from './plan/compare-report.js';

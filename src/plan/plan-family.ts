@@ -1,7 +1,9 @@
 import type { ClockPart, Scenario } from '../scenario/scenario.js';
 import { compareReport, type CompareReport } from './compare-report.js';
 import type { PlanReport } from './plan-report.js';
-import { solveScenario, type PlanOptions } from './plan-scenario.js';
+import { solveCandidates, solveScenario, type PlanOptions } from './plan-scenario.js';
+import type { PlanContext } from '../solve/plan-context.js';
+import type { PlanResult } from './solve-plan.js';
 import { afterRateInputs } from '../after-rate/after-rate.js';
 
 /** One variant of a family: its scenario and where it came from (a file name, used to tell apart two variants of one name). */
@@ -34,13 +36,53 @@ export function planFamily(
   options: Pick<PlanOptions, 'goal'> = {},
   onVariant?: (index: number, count: number, name: string) => void,
 ): FamilyPlan {
+  const plans: PlanReport[] = [];
+  const comparison = compareVariants(
+    variants,
+    (scenario, planOptions) => {
+      const solved = solveScenario(scenario, { ...options, ...planOptions });
+      plans.push(solved.report);
+      return solved;
+    },
+    onVariant,
+  );
+  return { plans, comparison };
+}
+
+/**
+ * The comparison of planFamily alone: every variant's clock parts planned
+ * with the union of the catalogues and compared, without the IF-shift search
+ * and the plan reports, which the comparison does not read (`ifzone compare`
+ * writes only the comparison unless it draws the rate maps).
+ *
+ * @param variants the scenarios, each with its source
+ * @param options the goal for every variant (default: each scenario's own)
+ * @param onVariant called before each variant is planned (index from 0, count, name)
+ * @returns the comparison, the same as planFamily's
+ * @throws Error as planScenario
+ * @example compareFamily([{ scenario: heronBase, source: 'heron-base.json' }]).variants // ['Heron-4 base']
+ */
+export function compareFamily(
+  variants: readonly FamilyVariant[],
+  options: Pick<PlanOptions, 'goal'> = {},
+  onVariant?: (index: number, count: number, name: string) => void,
+): CompareReport {
+  return compareVariants(variants, (scenario, planOptions) => solveCandidates(scenario, { ...options, ...planOptions }), onVariant);
+}
+
+/** Plans each variant with `solve` (the union catalogue, a unique name) and compares the parts. */
+function compareVariants(
+  variants: readonly FamilyVariant[],
+  solve: (scenario: Scenario, options: Pick<PlanOptions, 'clocks' | 'name'>) => { context: PlanContext; result: PlanResult },
+  onVariant?: (index: number, count: number, name: string) => void,
+): CompareReport {
   const clocks = unionCatalogue(variants.map((v) => v.scenario));
   const names = distinctNames(variants);
   const solved = variants.map((v, index) => {
     onVariant?.(index, variants.length, names[index]!);
-    return solveScenario(v.scenario, { ...options, clocks, name: names[index]! });
+    return solve(v.scenario, { clocks, name: names[index]! });
   });
-  const comparison = compareReport(
+  return compareReport(
     solved.map((s, index) => ({
       name: names[index]!,
       plans: s.result.parts,
@@ -48,7 +90,6 @@ export function planFamily(
       afterRate: afterRateInputs(variants[index]!.scenario, s.context.goal),
     })),
   );
-  return { plans: solved.map((s) => s.report), comparison };
 }
 
 /** Every part of every variant, by label; the first variant to define a label defines the part. */

@@ -59,15 +59,34 @@ export function planScenario(scenario: Scenario, options: PlanOptions = {}): Pla
  * @example solveScenario(heronBase).result.parts.length // 7 (the clock parts with a rate in range)
  */
 export function solveScenario(scenario: Scenario, options: PlanOptions = {}): SolvedScenario {
-  const planned = { ...scenario, goal: options.goal ?? scenario.goal, clocks: options.clocks ?? scenario.clocks };
-  options.onStage?.('deriving the interferers');
-  const context = contextFromScenario(planned);
-  options.onStage?.('finding the feasible rates and planning the clock parts');
-  const result = solvePlan(context);
+  const { planned, context, result } = solveCandidates(scenario, options);
   if (planned.ifShift) options.onStage?.('searching the best IF shift and rate');
   const shift = planned.ifShift ? bestShiftAndRate(planned) : null;
   const report = planReport(options.name ?? scenario.name, context, result, shift, afterRateInputs(planned, planned.goal));
   return { context, result, shift, report };
+}
+
+/**
+ * The first half of solveScenario: the scenario with the options applied,
+ * the solver's view of it and the candidates (the feasible set, each clock
+ * part at its best rate, the best rate of each feasible interval), without
+ * the IF-shift search or the report. What the family comparison reads.
+ *
+ * @param scenario a validated scenario
+ * @param options as planScenario
+ * @returns the scenario planned (goal and clocks applied), the context and the solver's result
+ * @throws Error as planScenario
+ * @example solveCandidates(heronBase).result.parts.length // 7 (the clock parts with a rate in range)
+ */
+export function solveCandidates(
+  scenario: Scenario,
+  options: PlanOptions = {},
+): { readonly planned: Scenario; readonly context: PlanContext; readonly result: PlanResult } {
+  const planned = { ...scenario, goal: options.goal ?? scenario.goal, clocks: options.clocks ?? scenario.clocks };
+  options.onStage?.('deriving the interferers');
+  const context = contextFromScenario(planned);
+  options.onStage?.('finding the feasible rates and planning the clock parts');
+  return { planned, context, result: solvePlan(context) };
 }
 
 /**

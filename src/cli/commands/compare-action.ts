@@ -19,7 +19,8 @@ export function runCompare(files: readonly string[], options: CompareOptions, io
   const width = layoutWidth(options, io);
   const outputs = [options.svg, options.output].filter((path): path is string => path !== undefined);
   const force = options.force === true;
-  const { plans, comparison: report, inputs } = planVariants(files, io, { paths: outputs, force });
+  // The plans themselves (IF-shift search, reports) only for the rate maps of --svg: the comparison does not read them.
+  const { plans, comparison: report, inputs } = planVariants(files, io, { paths: outputs, force }, options.svg !== undefined);
   // Standard output takes the JSON in pieces; a file gets it whole (the safe write swaps in complete files).
   const text =
     options.json && options.output === undefined
@@ -39,6 +40,6 @@ export function runCompare(files: readonly string[], options: CompareOptions, io
   writeFilesSafely(written, { force, inputs });
   if (text === null) writeJson(report, io.out);
   else if (options.output === undefined) io.out(text);
-  const answered = plans.length > 1 ? report.family.length > 0 : report.parts.some((p) => p.passesAll);
+  const answered = files.length > 1 ? report.family.length > 0 : report.parts.some((p) => p.passesAll);
   return answered ? EXIT.answered : EXIT.noAnswer;
 }
