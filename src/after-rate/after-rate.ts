@@ -2,6 +2,7 @@ import { db, hz, type Db, type Hz, type Ppm } from '../units/quantities.js';
 import type { Band } from '../math/band.js';
 import type { AfterRateSettings, AntiAliasFilter, Scenario } from '../scenario/scenario.js';
 import { levelThreshold } from '../interferers/level-threshold.js';
+import { channelView } from '../scenario/channel-view.js';
 import { driftRange } from '../solve/drift.js';
 import type { Goal } from '../scenario/scenario.js';
 import { aliasBands, nearestAliasBands } from './alias-bands.js';
@@ -24,10 +25,13 @@ export interface AfterRateInputs {
   readonly settings: AfterRateSettings;
   /** Output rate of the down-converter: stated, else the decimation goal's; null when neither. */
   readonly outputRate: Hz | null;
+  /** With several channels, each channel's own inputs in order (the fields above are the first one's); absent for one band. */
+  readonly channels?: readonly AfterRateInputs[];
 }
 
 /**
- * The after-rate inputs of a scenario.
+ * The after-rate inputs of a scenario; with several channels, each
+ * channel's too (its band, margin and threshold, through channelView).
  *
  * @param scenario the validated scenario
  * @param goal the goal in force (a command-line goal may replace the scenario's): its output rate stands in for an unstated one
@@ -35,6 +39,14 @@ export interface AfterRateInputs {
  * @example afterRateInputs(s).threshold // -100 (weakest wanted level −60 dBFS less the 40 dB rejection)
  */
 export function afterRateInputs(scenario: Scenario, goal: Goal = scenario.goal): AfterRateInputs {
+  if (scenario.channels.length > 1) {
+    const channels = scenario.channels.map((_, i) => oneBandInputs(channelView(scenario, i), goal));
+    return { ...channels[0]!, channels };
+  }
+  return oneBandInputs(scenario, goal);
+}
+
+function oneBandInputs(scenario: Scenario, goal: Goal): AfterRateInputs {
   const stated = scenario.afterRate.downConverter.outputRate;
   return {
     band: { low: scenario.wanted.low, high: scenario.wanted.high },

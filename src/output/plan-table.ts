@@ -38,9 +38,13 @@ export function planTable(report: PlanReport, width = 100): string {
   for (const focus of typed ? report.candidates : report.candidates.slice(0, 1)) {
     sections.push(checksSection(focus, width));
     if (focus.afterRate) {
+      // Several channels: what the rate asks for each channel (its mask, filter, noise and NCO word).
       if (report.channels.length > 1)
-        sections.push(wrapProse(`(The figures after the rate are the first channel's, ${report.channels[0]!.label}.)`, width));
-      sections.push(afterRateSection(focus, false, width));
+        for (const channel of focus.channels)
+          sections.push(
+            afterRateSection({ ...focus, label: `${focus.label}, channel ${channel.label}`, afterRate: channel.afterRate }, false, width),
+          );
+      else sections.push(afterRateSection(focus, false, width));
     }
   }
   if (report.ifShift) sections.push(shiftSection(report.ifShift, width));

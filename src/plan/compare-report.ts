@@ -148,6 +148,7 @@ function unplanned(variant: string): VariantVerdict {
 function verdict(variant: string, plan: PartPlan, inputs: AfterRateInputs | null): VariantVerdict {
   const e = plan.evaluation;
   const after = inputs === null ? null : afterRate(inputs, plan.rate, e.tolerancePpm, e.center, e.inverted);
+  const masks = channelMasks(inputs, plan);
   return {
     variant,
     rate: plan.rate,
@@ -163,10 +164,11 @@ function verdict(variant: string, plan: PartPlan, inputs: AfterRateInputs | null
     channelSnrDb: plan.snr.channelSnrDb,
     filterOrders: after ? after.design.orders : null,
     maskMarginDb: after?.mask.worst ? after.mask.worst.marginDb : null,
-    pass: plan.pass && (after === null || after.mask.pass),
+    // Several channels: every channel's mask must hold too.
+    pass: plan.pass && (after === null || after.mask.pass) && (masks?.every((m) => m) ?? true),
     ...(e.channels
       ? {
-          channels: e.channels.map((c) => ({
+          channels: e.channels.map((c, i) => ({
             label: c.label,
             zone: c.zone,
             inverted: c.inverted,
@@ -174,9 +176,16 @@ function verdict(variant: string, plan: PartPlan, inputs: AfterRateInputs | null
             worstMargin: c.worstMargin,
             limitedBy: limitText(c.limitedBy),
             limitedByKind: c.limitedBy.kind,
-            pass: c.pass,
+            pass: c.pass && (masks?.[i] ?? true),
           })),
         }
       : {}),
   };
+}
+
+/** With several channels, whether each channel's own anti-alias mask holds at the part's rate; null for one band. */
+function channelMasks(inputs: AfterRateInputs | null, plan: PartPlan): boolean[] | null {
+  const e = plan.evaluation;
+  if (!inputs?.channels || !e.channels) return null;
+  return e.channels.map((c, i) => afterRate(inputs.channels![i]!, plan.rate, e.tolerancePpm, c.center, c.inverted).mask.pass);
 }

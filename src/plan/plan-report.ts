@@ -69,10 +69,16 @@ export interface ReportedChannelResult {
   /** The check with the least slack against this channel: an interferer's label (as in checks) or "zone edge". */
   readonly limitedBy: string;
   readonly limitedByKind: LimitKind;
-  /** Every check against this channel passes (the anti-alias mask is the candidate's, see pass there). */
+  /** Every check against this channel passes, and its anti-alias mask where an out-of-band level is stated. */
   readonly pass: boolean;
   /** The checks against this channel, labelled as its own interferers are (listed as the candidate's checks are). */
   readonly checks: readonly ReportedCheck[];
+  /**
+   * What the rate asks for this channel: its anti-alias mask, filter orders,
+   * noise folding and NCO word (for one band, the candidate's own afterRate);
+   * null when the report was built without them.
+   */
+  readonly afterRate: AfterRate | null;
 }
 
 export interface ReportedCandidate {
@@ -274,10 +280,15 @@ function reportedCandidate(
   const listed = listedChecks(e.checks, e.checkScope === 'all', e.limitedBy, listing);
   // A candidate not shown in full lists its mask's worst alias band only: with a thousand parts the bands alone are megabytes.
   const inFull = e.checkScope === 'all' || listing === 'all';
-  const shownAfter =
-    atRate === null || inFull
-      ? atRate
-      : { ...atRate, mask: { ...atRate.mask, bands: atRate.mask.worst === null ? [] : [atRate.mask.worst] } };
+  const shown = (full: AfterRate | null): AfterRate | null =>
+    full === null || inFull ? full : { ...full, mask: { ...full.mask, bands: full.mask.worst === null ? [] : [full.mask.worst] } };
+  const shownAfter = shown(atRate);
+  // Several channels: each channel's own figures after the rate; every channel's mask must hold.
+  const channelAfter =
+    after?.channels && e.channels
+      ? e.channels.map((c, i) => afterRate(after.channels![i]!, e.rate, e.tolerancePpm, c.center, c.inverted))
+      : [atRate];
+  const masksPass = channelAfter.every((a) => a === null || a.mask.pass);
   return {
     label: candidate.label,
     origin: candidate.origin,
@@ -294,7 +305,7 @@ function reportedCandidate(
     limitedBy: limitText(e.limitedBy),
     limitedByKind: e.limitedBy.kind,
     worstSlack: e.worstSlack,
-    pass: e.pass && (atRate === null || atRate.mask.pass),
+    pass: e.pass && masksPass,
     settings: candidate.settings ? { N: candidate.settings.N, M: candidate.settings.M, D: candidate.settings.D } : null,
     headroomPpm: candidate.headroom ? { down: candidate.headroom.downPpm, up: candidate.headroom.upPpm } : null,
     headroomLimitedBy: candidate.headroom
@@ -315,15 +326,21 @@ function reportedCandidate(
     next: nextLimit(e, context.band.high - context.band.low),
     decimationFactor: context.goal.kind === 'decimation' ? e.rate / context.goal.outputRate : null,
     quarterRateOffset: e.zone === null ? null : quarterRateOffset((context.band.low + context.band.high) / 2, e.rate),
-    channels: channelResults(context, e, listing),
+    channels: channelResults(context, e, listing, channelAfter.map(shown)),
   };
 }
 
 /** Each channel's result at the candidate's rate (the evaluation itself, labelled "wanted", for one band). */
-function channelResults(context: PlanContext, e: RateEvaluation, listing: Listing): ReportedChannelResult[] {
-  if (!e.channels) return [reportedChannelResult({ ...e, label: context.channels?.[0]?.label ?? 'wanted' }, context, listing)];
+function channelResults(
+  context: PlanContext,
+  e: RateEvaluation,
+  listing: Listing,
+  after: readonly (AfterRate | null)[],
+): ReportedChannelResult[] {
+  if (!e.channels)
+    return [reportedChannelResult({ ...e, label: context.channels?.[0]?.label ?? 'wanted' }, context, listing, after[0] ?? null)];
   const plans = channelPlans(context);
-  return e.channels.map((c, i) => reportedChannelResult(c, plans[i]!, listing));
+  return e.channels.map((c, i) => reportedChannelResult(c, plans[i]!, listing, after[i] ?? null));
 }
 
 /** One check with the interferer's input frequencies at the rate. */
@@ -335,7 +352,7 @@ function reportedCheck(check: CheckResult, byLabel: ReadonlyMap<string, Interfer
 }
 
 /** A channel's own result at a candidate's rate, its checks listed as the candidate's are. */
-function reportedChannelResult(c: ChannelEvaluation, plan: PlanContext, listing: Listing): ReportedChannelResult {
+function reportedChannelResult(c: ChannelEvaluation, plan: PlanContext, listing: Listing, after: AfterRate | null): ReportedChannelResult {
   const byLabel = labelsOf(plan.interferers);
   const listed = listedChecks(c.checks, c.checkScope === 'all', c.limitedBy, listing);
   return {
@@ -351,8 +368,9 @@ function reportedChannelResult(c: ChannelEvaluation, plan: PlanContext, listing:
     worstSlack: c.worstSlack,
     limitedBy: limitText(c.limitedBy),
     limitedByKind: c.limitedBy.kind,
-    pass: c.pass,
+    pass: c.pass && (after === null || after.mask.pass),
     checks: listed.checks.map((check) => reportedCheck(check, byLabel, c.rate)),
+    afterRate: after,
   };
 }
 

@@ -143,6 +143,16 @@ describe('two channels worked on paper (Vaughan–Scott–White windows, Akos / 
       ['A', 1, 11e6, false],
       ['B', 2, 6e6, true],
     ]);
+    // Each channel's NCO word at 32 MHz, 32 bits, round(f·2^32 / rate) (tuning words worked by hand, common practice):
+    // A at 11 MHz: 11/32 = 0.34375 → 1476395008; B at 6 MHz: 6/32 = 0.1875 → 805306368, inverted: 2^32 − 805306368 = 3489660928.
+    const words = planScenario({
+      ...twoChannels,
+      afterRate: { ...twoChannels.afterRate, downConverter: { ...twoChannels.afterRate.downConverter, ncoBits: 32 } },
+    }).candidates[0]!.channels.map((c) => c.afterRate?.downConverter.nco);
+    expect(words.map((n) => [n?.word, n?.inverted, n?.negativeWord])).toEqual([
+      [1476395008, false, 2 ** 32 - 1476395008],
+      [805306368, true, 3489660928],
+    ]);
     expect(report.channels.map((c) => [c.label, c.low, c.high, c.guard])).toEqual([
       ['A', 10e6, 12e6, { below: 0, above: 0 }],
       ['B', 25e6, 27e6, { below: 0, above: 0 }],
