@@ -2,7 +2,7 @@ import type { ClockPart } from '../scenario/scenario.js';
 import { blockingInterferers, evaluateRate, type RateEvaluation } from '../solve/evaluate-rate.js';
 import { hz, type Hz, type Ppm } from '../units/quantities.js';
 import { planRates, type FeasibleInterval, type FeasibleSet } from '../solve/feasible-set.js';
-import type { PlanContext } from '../solve/plan-context.js';
+import { channelPlans, type PlanContext } from '../solve/plan-context.js';
 import { driftHeadroom, driftReach, driftSafeRange } from '../solve/drift.js';
 import { planSlacks, type LinearSlack } from '../solve/linear-slacks.js';
 import { maximiseWorstSlack } from '../solve/widest-margin.js';
@@ -118,7 +118,7 @@ export function planPart(plan: PlanContext, set: FeasibleSet, part: ClockPart, o
     settings: chosen.settings,
     evaluation: chosen.evaluation,
     headroom: driftHeadroom(set, plan.limits, rate),
-    snr: clockSnr(context.band, rate, part.jitter, context.clocking.apertureJitter, context.clocking.bits),
+    snr: planSnr(context, rate, part),
     pass: chosen.evaluation.pass,
     search,
     ratesJudged: chosen.ratesJudged,
@@ -434,4 +434,16 @@ function anchorRates(context: PlanContext, set: FeasibleSet, most: number): numb
   // Every (edges / room)-th edge, from indices computed once each (no accumulated step).
   for (let k = 0; k < room; k++) chosen.push(edges[Math.floor((k * edges.length) / room)]!);
   return chosen;
+}
+
+/**
+ * The SNR a part allows for the plan's band; with several channels, the
+ * figures of the channel whose channel SNR is least (its jitter, width and
+ * the rate decide it).
+ */
+function planSnr(context: PlanContext, rate: Hz, part: ClockPart): PartPlan['snr'] {
+  const { apertureJitter, bits } = context.clocking;
+  return channelPlans(context)
+    .map((plan) => clockSnr(plan.band, rate, part.jitter, apertureJitter, bits))
+    .reduce((worst, next) => (next.channelSnrDb < worst.channelSnrDb ? next : worst));
 }
