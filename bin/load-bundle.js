@@ -2,13 +2,14 @@
 // `npm run build`) with V8's code cache: the build runs the common commands
 // once and saves the compiled code beside the bundle, so a start deserialises
 // code instead of parsing and compiling it. The cache is read, never written,
-// here: nothing is left in the user's directories. It is used only when its
-// key (the SHA-256 of the bundle) matches the bundle; V8 itself refuses it when
-// its version or flags differ; either way the bundle is then compiled from
-// source and runs the same, only slower to start. CommonJS, like bin/ifzone
-// (bin/package.json).
+// here: nothing is left in the user's directories. It is used only when the
+// copy of the bundle it holds matches the bundle byte for byte (a memory
+// compare: hashing would load node:crypto, several milliseconds of every
+// start); V8 itself refuses it when its version or flags differ. Either way
+// the bundle is then compiled from source and runs the same, only slower to
+// start. CommonJS, like bin/ifzone (bin/package.json).
 'use strict';
-const { createHash } = require('node:crypto');
+const { Buffer } = require('node:buffer');
 const { readFileSync } = require('node:fs');
 const Module = require('node:module');
 const { dirname, join } = require('node:path');
@@ -16,13 +17,14 @@ const { Script, constants } = require('node:vm');
 
 /** The bundle: one CommonJS file, each lazily imported command a module run on first use. */
 const BUNDLE = join(__dirname, '..', 'dist', 'bundle', 'cli', 'ifzone.cjs');
-/** The code cache: the key (SHA-256 of the bundle, 32 bytes), then V8's cached data. */
+/** The code cache: the bundle's length n (4 bytes, little-endian), the n bytes of the bundle it was made from, then V8's cached data. */
 const CODE_CACHE = `${BUNDLE}.cache`;
-const KEY_BYTES = 32;
 
-/** The key of a bundle's bytes: their SHA-256. */
-function codeCacheKey(bytes) {
-  return createHash('sha256').update(bytes).digest();
+/** The code cache file's contents for a bundle's bytes and V8's cached data of it. */
+function codeCacheFile(bytes, cachedData) {
+  const length = Buffer.alloc(4);
+  length.writeUInt32LE(bytes.length);
+  return Buffer.concat([length, bytes, cachedData]);
 }
 
 /**
@@ -51,7 +53,8 @@ function matchingCache(bytes) {
   } catch {
     return undefined;
   }
-  return cache.length > KEY_BYTES && cache.subarray(0, KEY_BYTES).equals(codeCacheKey(bytes)) ? cache.subarray(KEY_BYTES) : undefined;
+  if (cache.length < 4 || cache.readUInt32LE(0) !== bytes.length || cache.length <= 4 + bytes.length) return undefined;
+  return cache.subarray(4, 4 + bytes.length).equals(bytes) ? cache.subarray(4 + bytes.length) : undefined;
 }
 
-module.exports = { BUNDLE, CODE_CACHE, codeCacheKey, loadBundle };
+module.exports = { BUNDLE, CODE_CACHE, codeCacheFile, loadBundle };

@@ -1,11 +1,10 @@
 // Primes the code cache of the bundle (bin/load-bundle.js): loads the bundle
 // without a cache, runs the commands people run most on the demo scenarios
 // with their output discarded, so that V8 compiles the functions they call,
-// then writes the key of the bundle and V8's cached data of every function
+// then writes a copy of the bundle and V8's cached data of every function
 // compiled so far beside the bundle. Run by scripts/bundle-cli.mjs.
-import { Buffer } from 'node:buffer';
 import { readFileSync, writeFileSync } from 'node:fs';
-import { BUNDLE, CODE_CACHE, codeCacheKey, loadBundle } from '../bin/load-bundle.js';
+import { BUNDLE, CODE_CACHE, codeCacheFile, loadBundle } from '../bin/load-bundle.js';
 
 const FAMILY = ['scenarios/heron-base.json', 'scenarios/heron-lowif.json', 'scenarios/heron-narrow.json', 'scenarios/heron-wide.json'];
 const { exports: cli, script } = loadBundle({ useCache: false });
@@ -22,4 +21,4 @@ const report = JSON.parse(best);
 const rate = report.candidates.find((c) => c.label === report.best).rate;
 await cli.runCli(['verify', FAMILY[0], '--rate', String(rate)], quiet);
 
-writeFileSync(CODE_CACHE, Buffer.concat([codeCacheKey(readFileSync(BUNDLE)), script.createCachedData()]));
+writeFileSync(CODE_CACHE, codeCacheFile(readFileSync(BUNDLE), script.createCachedData()));

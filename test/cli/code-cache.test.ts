@@ -10,7 +10,8 @@ import { ensureBuilt, ROOT } from '../helpers/run-bin.js';
  * was made from the bundle, ignored when the bundle changed, never written at
  * run time. V8's own check of cached data compares the source length and its
  * flags only (V8's SerializedCodeData sanity check, v8/src/snapshot/code-serializer.cc),
- * so the key is what keeps a same-length edit from running stale code.
+ * so the copy of the bundle the cache holds is what keeps a same-length edit
+ * from running stale code.
  */
 const dir = mkdtempSync(join(tmpdir(), 'ifzone-code-cache-'));
 const BUNDLE = join(ROOT, 'dist', 'bundle', 'cli', 'ifzone.cjs');
