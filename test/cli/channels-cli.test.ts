@@ -1,4 +1,6 @@
 import { beforeAll, describe, expect, it } from 'vitest';
+import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { ensureBuilt, expectRefusal, runBin } from '../helpers/run-bin.js';
 
@@ -131,6 +133,25 @@ describe('compare with a variant of two channels', () => {
     const run = runBin('compare', BASE, DUAL);
     expect(run.stdout).toContain("Each channel at each part's rate");
     for (const line of run.stdout.split('\n')) expect([...line].length, line).toBeLessThanOrEqual(100);
+  });
+});
+
+describe('a list of one channel', () => {
+  it('plans exactly as the single wanted object does', () => {
+    const dir = mkdtempSync(join(tmpdir(), 'ifzone-one-channel-'));
+    writeFileSync(join(dir, 'heron-base.json'), readFileSync(BASE, 'utf8'));
+    const one = {
+      extends: 'heron-base.json',
+      name: 'Heron-4 base',
+      wanted: [{ label: 'L1', center: '140M', width: '20M', weakestLevel: -70 }],
+    };
+    writeFileSync(join(dir, 'one.json'), JSON.stringify(one));
+    const listed = runBin('solve', join(dir, 'one.json'));
+    const object = runBin('solve', BASE);
+    expect(listed.status).toBe(0);
+    expect(listed.stdout).toBe(object.stdout);
+    const json = JSON.parse(runBin('solve', join(dir, 'one.json'), '--json').stdout);
+    expect(json.channels.map((c: { label: string }) => c.label)).toEqual(['L1']);
   });
 });
 

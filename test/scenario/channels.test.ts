@@ -85,6 +85,13 @@ describe('a wanted list of channels', () => {
       'wanted[1].high: a frequency (with low)',
     ]);
     expect(issuesOf({ name: 'x', wanted: [] })).toEqual(['wanted: a list of at least one channel']);
+    const many = Array.from({ length: 17 }, (_, i) => ({
+      label: `C${i}`,
+      low: 130e6 + i * 1e6,
+      high: 130.5e6 + i * 1e6,
+      weakestLevel: -60,
+    }));
+    expect(issuesOf({ name: 'x', filter: null, wanted: many })).toEqual(['wanted: a list of at most 16 channels']);
     expect(issuesOf({ name: 'x', wanted: 'L1' })).toEqual([
       'wanted: the wanted band as an object, or a list of channels each with a label',
     ]);
