@@ -1,7 +1,7 @@
 import { element, px, textElement } from './svg-element.js';
-import { textWidth } from './label-packing.js';
 import type { Scale } from './scale.js';
 import { quantityText } from '../text/quantity-text.js';
+import { textWidth } from './typography.js';
 
 /** One tick: where it sits in data units and what it reads. */
 export interface Tick {
@@ -31,7 +31,18 @@ export function horizontalAxis(scale: Scale, ticks: readonly Tick[], y: number, 
   for (const tick of ticks) {
     const x = scale.at(tick.value);
     if (gridTop !== undefined)
-      parts.push(element('line', { x1: x, y1: gridTop, x2: x, y2: y, stroke: '#c8c8c8', 'stroke-width': 0.5, 'stroke-dasharray': '2 3' }));
+      parts.push(
+        element('line', {
+          class: 'grid',
+          x1: x,
+          y1: gridTop,
+          x2: x,
+          y2: y,
+          stroke: '#c8c8c8',
+          'stroke-width': 0.5,
+          'stroke-dasharray': '2 3',
+        }),
+      );
     parts.push(element('line', { x1: x, y1: y, x2: x, y2: y + TICK, stroke: '#000', 'stroke-width': 1 }));
     const half = textWidth(tick.label, AXIS_FONT) / 2;
     if (x - half < lastRight + 6) continue;
@@ -63,7 +74,16 @@ export function verticalAxis(scale: Scale, ticks: readonly Tick[], x: number, ti
     const y = scale.at(tick.value);
     if (gridRight !== undefined)
       parts.push(
-        element('line', { x1: x, y1: y, x2: gridRight, y2: y, stroke: '#c8c8c8', 'stroke-width': 0.5, 'stroke-dasharray': '2 3' }),
+        element('line', {
+          class: 'grid',
+          x1: x,
+          y1: y,
+          x2: gridRight,
+          y2: y,
+          stroke: '#c8c8c8',
+          'stroke-width': 0.5,
+          'stroke-dasharray': '2 3',
+        }),
       );
     parts.push(element('line', { x1: x - TICK, y1: y, x2: x, y2: y, stroke: '#000', 'stroke-width': 1 }));
     if (y + AXIS_FONT / 2 > lastTop - 2) continue;

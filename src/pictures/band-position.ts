@@ -3,7 +3,8 @@ import { quantityText } from '../text/quantity-text.js';
 
 const T = quantityText('svg');
 import { horizontalAxis, numberTicks, verticalAxis } from './axis.js';
-import { spreadApart, textWidth } from './label-packing.js';
+import { spreadApart, wrapPhrases } from './label-packing.js';
+import { textWidth } from './typography.js';
 import { boxSwatch, legendRows } from './legend.js';
 import { candidateMarker, failMarker, passMarker } from './markers.js';
 import { coveringTicks, linearTicks } from './nice-ticks.js';
@@ -12,14 +13,19 @@ import { linearScale, type Scale } from './scale.js';
 import { findCandidate } from './spectrum.js';
 import { element, pointList, textElement } from './svg-element.js';
 import { svgDocument, type Figure } from './svg-document.js';
+import { textOnWhite } from './text-on-white.js';
 import { allowedWedges, type Wedge } from './wedges.js';
 
-const WIDTH = 900;
+const WIDTH = 960;
 const LEFT = 78;
 const PLOT_RIGHT = 540;
-const TOP = 64;
-const BOTTOM = 520;
+/** Plot height, px. */
+const PLOT_HEIGHT = 456;
 const SMALL = 9.5;
+const HEADING_FONT = 10.5;
+const HEADING_LINE = 14;
+/** Least room kept at the picture's right edge, px. */
+const MARGIN = 12;
 /** Most candidates labelled beside the design line, best first; the rest are marked only. */
 const MOST_LABELS = 16;
 
@@ -34,7 +40,7 @@ const MOST_LABELS = 16;
  *
  * @param report the solved plan
  * @param candidateLabel mark only this candidate (the others drawn small), or all when absent
- * @returns the figure, 900 px wide, about 600 px high
+ * @returns the figure, 960 px wide, about 620 px high
  * @throws InputError when candidateLabel names no candidate
  */
 export function bandPositionFigure(report: PlanReport, candidateLabel?: string): Figure {
@@ -48,12 +54,24 @@ export function bandPositionFigure(report: PlanReport, candidateLabel?: string):
   const xMax = xTicks.values[xTicks.values.length - 1]!;
   const yTicks = coveringTicks(0, Math.max(4, 2.2 * design, ...rates.map((r) => r * 1.08)), 8);
   const yMax = yTicks.values[yTicks.values.length - 1]!;
+  const head = heading(report, fL, fH, design);
+  const top = head.bottom + 22;
+  const bottom = top + PLOT_HEIGHT;
   const x = linearScale([1, xMax], [LEFT, PLOT_RIGHT]);
-  const y = linearScale([0, yMax], [BOTTOM, TOP]);
+  const y = linearScale([0, yMax], [bottom, top]);
 
-  const parts: string[] = [heading(report, fL, fH, design)];
+  const parts: string[] = [head.markup];
   parts.push(
-    element('rect', { x: LEFT, y: TOP, width: PLOT_RIGHT - LEFT, height: BOTTOM - TOP, fill: '#fff', stroke: '#000', 'stroke-width': 0.8 }),
+    element('rect', {
+      class: 'plot-edge',
+      x: LEFT,
+      y: top,
+      width: PLOT_RIGHT - LEFT,
+      height: bottom - top,
+      fill: '#fff',
+      stroke: '#000',
+      'stroke-width': 0.8,
+    }),
   );
   const wedges = allowedWedges(xMax, yMax);
   // Many wedges crowd towards (fH/B, 2): thinner outlines keep them apart.
@@ -67,21 +85,19 @@ export function bandPositionFigure(report: PlanReport, candidateLabel?: string):
         'stroke-width': outline,
       }),
     );
-  parts.push(zoneNumbers(wedges, x, y, xMax, yMax));
-  parts.push(searchLines(report, B, x, y, yMax));
   parts.push(
     element('line', {
       x1: x.at(design),
-      y1: TOP,
+      y1: top,
       x2: x.at(design),
-      y2: BOTTOM,
+      y2: bottom,
       stroke: '#000',
       'stroke-width': 1.4,
       'stroke-dasharray': '7 3',
     }),
   );
   parts.push(
-    textElement(x.at(design), TOP - 6, `this design: fH/B = ${T.number(design, 4)}`, {
+    textElement(x.at(design), top - 6, `this design: fH/B = ${T.number(design, 4)}`, {
       'text-anchor': design > (1 + xMax) / 2 ? 'end' : 'start',
       'font-size': SMALL,
       'font-weight': 'bold',
@@ -89,24 +105,27 @@ export function bandPositionFigure(report: PlanReport, candidateLabel?: string):
   );
   const marked = markedCandidates(report, focus, B, yMax);
   parts.push(candidatePoints(report, marked, focus, B, design, x, y));
+  // Drawn over the candidates' leader lines, on white: a leader passes behind a zone number or a search line's name.
+  parts.push(zoneNumbers(wedges, x, y, xMax, yMax));
+  parts.push(searchLines(report, B, x, y, yMax));
   parts.push(verticalAxis(y, numberTicks(yTicks.values), LEFT, 'sampling rate / bandwidth, fs/B', PLOT_RIGHT));
-  parts.push(horizontalAxis(x, numberTicks(linearTicks(1, xMax, 8).values), BOTTOM, 'upper band edge / bandwidth, fH/B'));
+  parts.push(horizontalAxis(x, numberTicks(linearTicks(1, xMax, 8).values), bottom, 'upper band edge / bandwidth, fH/B'));
   const legend = legendRows(
     [
       { swatch: boxSwatch('#dcdcdc'), text: 'allowed, upright zone', drawn: wedges.some((w) => !w.inverted) },
       { swatch: boxSwatch(FILL.inverted), text: 'allowed, inverted zone', drawn: wedges.some((w) => w.inverted) },
       { swatch: boxSwatch('#fff'), text: 'aliasing' },
-      { swatch: (a, b) => passMarker(a, b), text: 'candidate passes', drawn: marked.some((c) => c.pass) },
-      { swatch: (a, b) => failMarker(a, b), text: 'candidate fails', drawn: marked.some((c) => !c.pass) },
+      { swatch: (a, b) => passMarker(a, b), text: 'candidate passes', drawn: marked.some((c) => c.pass), marker: true },
+      { swatch: (a, b) => failMarker(a, b), text: 'candidate fails', drawn: marked.some((c) => !c.pass), marker: true },
     ],
     24,
-    BOTTOM + 56,
+    bottom + 56,
     WIDTH - 20,
   );
   parts.push(legend.markup);
   return {
     width: WIDTH,
-    height: Math.ceil(BOTTOM + 56 + legend.height + 12),
+    height: Math.ceil(bottom + 56 + legend.height + 12),
     title: `Band-position chart: ${report.scenario}`,
     body: parts.join(''),
   };
@@ -124,17 +143,24 @@ export function bandPositionSvg(report: PlanReport, candidateLabel?: string): st
   return svgDocument(bandPositionFigure(report, candidateLabel));
 }
 
-function heading(report: PlanReport, fL: number, fH: number, design: number): string {
+/** The title and the chart's rule, wrapped to the picture's width; returns the markup and the last baseline, px. */
+function heading(report: PlanReport, fL: number, fH: number, design: number): { markup: string; bottom: number } {
   const B = fH - fL;
-  return (
-    textElement(24, 22, `Band-position chart: ${report.scenario}`, { 'font-size': 14, 'font-weight': 'bold' }) +
-    textElement(
-      24,
-      40,
-      `zone n allows 2·fH/n ≤ fs ≤ 2·(fH − B)/(n − 1) (Vaughan, Scott & White 1991); guarded band ${T.extent(fL, fH)}, B = ${T.frequency(B)} (the guarded width: fs/B and fH/B divide by it), fH/B = ${T.number(design, 4)}`,
-      { 'font-size': 10.5 },
-    )
+  const lines = wrapPhrases(
+    [
+      'zone n allows 2·fH/n ≤ fs ≤ 2·(fH − B)/(n − 1) (Vaughan, Scott & White 1991);',
+      `guarded band ${T.extent(fL, fH)}, B = ${T.frequency(B)}`,
+      '(the guarded width: fs/B and fH/B divide by it),',
+      `fH/B = ${T.number(design, 4)}`,
+    ],
+    WIDTH - 24 - MARGIN,
+    HEADING_FONT,
+    ' ',
   );
+  const markup =
+    textElement(24, 22, `Band-position chart: ${report.scenario}`, { 'font-size': 14, 'font-weight': 'bold' }) +
+    lines.map((line, i) => textElement(24, 40 + i * HEADING_LINE, line, { 'font-size': HEADING_FONT })).join('');
+  return { markup, bottom: 40 + (lines.length - 1) * HEADING_LINE };
 }
 
 /** Zone numbers in the gutter right of the plot, each beside its wedge's right end; crowded ones thinned. */
@@ -147,7 +173,7 @@ function zoneNumbers(wedges: readonly Wedge[], x: Scale, y: Scale, xMax: number,
     const high = w.zone === 1 ? yMax : Math.min((2 * (xMax - 1)) / (w.zone - 1), yMax);
     if (low >= yMax) {
       const inside = w.points.reduce((sum, [a]) => sum + a, 0) / w.points.length;
-      parts.push(textElement(x.at(inside), y.at(yMax) + 12, zoneName(w, wedges.length), { 'text-anchor': 'middle', 'font-size': SMALL }));
+      parts.push(textOnWhite(x.at(inside), y.at(yMax) + 12, zoneName(w, wedges.length), SMALL, 'middle'));
       continue;
     }
     // Zones step down the page as n grows: keep a number only when clear of the one above.
@@ -156,7 +182,7 @@ function zoneNumbers(wedges: readonly Wedge[], x: Scale, y: Scale, xMax: number,
     lastY = at;
     const name = zoneName(w, wedges.length);
     parts.push(element('line', { x1: x.at(xMax), y1: at, x2: x.at(xMax) + 5, y2: at, stroke: '#000', 'stroke-width': 0.6 }));
-    parts.push(textElement(x.at(xMax) + 7, at + 3.5, name, { 'font-size': SMALL }));
+    parts.push(textOnWhite(x.at(xMax) + 7, at + 3.5, name, SMALL));
   }
   return element('g', { class: 'zones' }, parts.join(''));
 }
@@ -175,7 +201,6 @@ function searchLines(report: PlanReport, B: number, x: Scale, y: Scale, yMax: nu
   ] as const) {
     const at = rate / B;
     if (at <= 0 || at > yMax) continue;
-    const top = below ? y.at(at) + 1 : y.at(at) - 12;
     parts.push(
       element('line', {
         x1: x.range[0],
@@ -187,8 +212,7 @@ function searchLines(report: PlanReport, B: number, x: Scale, y: Scale, yMax: nu
         'stroke-dasharray': '2 2',
       }),
     );
-    parts.push(element('rect', { x: x.range[0] + 3, y: top, width: textWidth(text, 8.5) + 4, height: 11, fill: '#fff', opacity: 0.85 }));
-    parts.push(textElement(x.range[0] + 5, top + 9, text, { 'font-size': 8.5, 'font-style': 'italic' }));
+    parts.push(textOnWhite(x.range[0] + 5, below ? y.at(at) + 10 : y.at(at) - 4, text, 8.5, 'start', { italic: true }));
   }
   return element('g', { class: 'search' }, parts.join(''));
 }
@@ -216,10 +240,18 @@ function candidatePoints(
   }
   const labelled = marked.slice(0, MOST_LABELS).sort((a, b) => b.rate - a.rate);
   const wanted = labelled.map((c) => y.at(c.rate / B));
-  const placed = spreadApart(wanted, 12, TOP + 6, BOTTOM - 4);
+  const [bottom, top] = y.range;
+  const placed = spreadApart(wanted, 12, top + 6, bottom - 4);
   const labelX = Math.max(at, x.range[1]) + 76;
+  const textOf = new Map<ReportedCandidate, string>();
   labelled.forEach((c, i) => {
-    const text = `${c.label}: ${T.rate(c.rate)} = ${T.number(c.rate / B, 4)}·B`;
+    const bold = c.label === report.best;
+    const text = fitted(
+      [`${c.label}: ${T.rate(c.rate)} = ${T.number(c.rate / B, 4)}·B`, `${c.label}: ${T.rate(c.rate)}`, c.label],
+      WIDTH - MARGIN - labelX,
+      bold,
+    );
+    textOf.set(c, text);
     parts.push(
       element('path', {
         d: `M${at + 6} ${wanted[i]}L${labelX - 36} ${wanted[i]}L${labelX - 4} ${placed[i]}`,
@@ -228,18 +260,28 @@ function candidatePoints(
         'stroke-width': 0.5,
       }),
     );
-    parts.push(
-      textElement(labelX, placed[i]! + 3.5, text, { 'font-size': SMALL, 'font-weight': c.label === report.best ? 'bold' : undefined }),
-    );
+    parts.push(textElement(labelX, placed[i]! + 3.5, text, { 'font-size': SMALL, 'font-weight': bold ? 'bold' : undefined }));
   });
-  for (const c of marked) parts.push(candidateMarker(c.pass, at, y.at(c.rate / B)));
+  // A marker past MOST_LABELS is keyed by its kind's legend entry (the note under the chart counts them).
+  for (const c of marked)
+    parts.push(candidateMarker(c.pass, at, y.at(c.rate / B), textOf.get(c) ?? (c.pass ? 'candidate passes' : 'candidate fails')));
   const unlabelled = marked.length - labelled.length;
   if (unlabelled > 0)
     parts.push(
-      textElement(labelX, BOTTOM + 12, `+${unlabelled} more candidates marked, not labelled`, {
+      textElement(labelX, bottom + 12, `+${unlabelled} more candidates marked, not labelled`, {
         'font-size': SMALL,
         'font-style': 'italic',
       }),
     );
   return element('g', { class: 'candidates' }, parts.join(''));
+}
+
+/** The first text that fits `room` px, else the last one cut with an ellipsis to fit. */
+function fitted(texts: readonly string[], room: number, bold: boolean): string {
+  const fits = (t: string) => textWidth(t, SMALL, { bold }) <= room;
+  const found = texts.find(fits);
+  if (found !== undefined) return found;
+  const chars = [...texts[texts.length - 1]!];
+  while (chars.length > 1 && !fits(chars.join('') + '…')) chars.pop();
+  return chars.join('') + '…';
 }

@@ -5,15 +5,15 @@ import { quantityText } from '../text/quantity-text.js';
 const T = quantityText('svg');
 import { horizontalAxis, numberTicks, verticalAxis } from './axis.js';
 import { frequencyUnit, inUnit } from './frequency-unit.js';
-import { packLabels, textWidth } from './label-packing.js';
+import { packLabels } from './label-packing.js';
 import { boxSwatch, legendRows, type LegendEntry } from './legend.js';
-import { failMarker } from './markers.js';
+import { failMarker, markerGroup } from './markers.js';
 import { maxHoldColumns } from './max-hold-columns.js';
 import { coveringTicks, linearTicks } from './nice-ticks.js';
 import { FILL } from './patterns.js';
 import { linearScale, type Scale } from './scale.js';
 import { element, pointList, textElement } from './svg-element.js';
-import { withMinus } from './typography.js';
+import { TEXT_DESCENT, textWidth, withMinus } from './typography.js';
 import { svgDocument, type Figure } from './svg-document.js';
 
 const WIDTH = 960;
@@ -27,6 +27,8 @@ const SMALL = 9.5;
 const HEAD = 80;
 /** The level axis reaches this far below the noise median, dB, so the noise band shows as a band. */
 const BELOW_NOISE = 10;
+/** Half the width of a marker with its outline, px. */
+const MARKER_REACH = 5.5;
 /** Peaks listed in words under the legend; the rest are counted. */
 const LISTED_PEAKS = 8;
 
@@ -65,7 +67,10 @@ export function captureFigure(result: VerifyResult, levels: ArrayLike<number>): 
   // Labels above the plot: contradicting lines first, then by plan level.
   const order = [...result.predictions].sort((a, b) => Number(contradicts(b)) - Number(contradicts(a)) || b.planLevel - a.planLevel);
   const placed = packLabels(
-    order.map((p) => ({ x: x.at(p.predicted.frequency), text: p.check, item: p })),
+    order.map((p) => {
+      const at = Math.min(Math.max(x.at(p.predicted.frequency), plotX[0] + MARKER_REACH), plotX[1] - MARKER_REACH);
+      return { x: at, text: p.check, leader: at, bold: contradicts(p), item: p };
+    }),
     LABEL_ROWS,
     plotX,
     SMALL,
@@ -76,7 +81,8 @@ export function captureFigure(result: VerifyResult, levels: ArrayLike<number>): 
   const y = linearScale([bottom, top], [plotBottom, plotTop]);
 
   const parts: string[] = [heading(result)];
-  parts.push(wantedImage(result, x, plotTop, plotBottom));
+  const wanted = wantedImage(result, x, plotTop, plotBottom);
+  parts.push(wanted.fill);
   parts.push(verticalAxis(y, numberTicks(levelTicks.values), LEFT, 'level (dBFS)', WIDTH - RIGHT));
   const binWidth = result.binWidth;
   const points = columns.map((c) => [x.at(((c.first + c.last) / 2) * binWidth), y.at(clamp(c.level))] as const);
@@ -90,44 +96,56 @@ export function captureFigure(result: VerifyResult, levels: ArrayLike<number>): 
       'stroke-linejoin': 'round',
     }),
   );
-  parts.push(levelLine(y.at(threshold), `threshold ${T.level(threshold)} dBFS`, '8 3 2 3', 'end'));
-  parts.push(
-    levelLine(y.at(floor), `peak floor ${T.level(floor)} dBFS (noise median + ${T.decibels(floor - noiseMedian)} dB)`, '4 3', 'start'),
-  );
-
+  // Markers sit wholly inside the plot (one at DC or at R/2 moves in by its half-width, 5 px).
+  const markerX = (f: number) => Math.min(Math.max(x.at(f), plotX[0] + MARKER_REACH), plotX[1] - MARKER_REACH);
+  const markerY = (level: number) => Math.min(Math.max(y.at(clamp(level)), plotTop + MARKER_REACH), plotBottom - MARKER_REACH);
   for (const p of placed) {
-    const baseline = HEAD + (p.row + 1) * LABEL_ROW - 2;
-    const at = x.at(p.item.predicted.frequency);
+    const at = markerX(p.item.predicted.frequency);
+    const from = labelBaseline(p.row) + TEXT_DESCENT * SMALL + 1;
+    const to = markerY(p.item.planLevel) - MARKER_REACH;
+    if (to > from)
+      parts.push(element('line', { x1: at, y1: from, x2: at, y2: to, stroke: '#555', 'stroke-width': 0.5, 'stroke-dasharray': '1 2' }));
+  }
+  const intrusionBins = new Set(result.intrusions.map((r) => r.bin));
+  // The level lines' names keep clear of every marker and of each other.
+  const taken: Box[] = [
+    ...result.predictions.map((p) => markerBox(markerX(p.predicted.frequency), markerY(p.planLevel))),
+    ...result.unlisted.map((u) => markerBox(markerX(u.frequency), markerY(u.level))),
+  ];
+  const thresholdLine = levelLine(y.at(threshold), `threshold ${T.level(threshold)} dBFS`, '8 3 2 3', 'end', taken);
+  taken.push(thresholdLine.box);
+  const floorLine = levelLine(y.at(floor), `peak floor ${T.level(floor)} dBFS`, '4 3', 'start', taken);
+  // Lines first, then the names on white over them, so no line runs through a name.
+  parts.push(thresholdLine.line, floorLine.line, wanted.outline, wanted.label, thresholdLine.name, floorLine.name);
+  for (const p of placed)
     parts.push(
-      element('line', {
-        x1: at,
-        y1: baseline + 2,
-        x2: at,
-        y2: y.at(clamp(p.item.planLevel)) - 6,
-        stroke: '#555',
-        'stroke-width': 0.5,
-        'stroke-dasharray': '1 2',
-      }),
-    );
-    parts.push(
-      textElement(p.x, baseline, p.text, {
+      textElement(p.x, labelBaseline(p.row), p.text, {
         'text-anchor': 'middle',
         'font-size': SMALL,
         'font-weight': contradicts(p.item) ? 'bold' : undefined,
       }),
     );
-  }
-  for (const p of result.predictions) parts.push(predictionMarker(contradicts(p), x.at(p.predicted.frequency), y.at(clamp(p.planLevel))));
-  const intrusionBins = new Set(result.intrusions.map((r) => r.bin));
-  for (const u of result.unlisted) if (!intrusionBins.has(u.bin)) parts.push(unlistedMarker(x.at(u.frequency), y.at(clamp(u.level))));
-  for (const u of result.intrusions) parts.push(failMarker(x.at(u.frequency), y.at(clamp(u.level))));
+  const entries = legendEntries(result, intrusionBins);
+  const keyed = (kind: Kind) => entries.find((e) => e.kind === kind)!.text;
+  // A predicted line is named by its label, or, when thinned out, keyed by its kind in the legend; peaks by their kind.
+  const labelOf = new Map(placed.map((p) => [p.item, p.text]));
+  for (const p of result.predictions)
+    parts.push(
+      markerGroup(
+        labelOf.get(p) ?? keyed(contradicts(p) ? 'contradicting' : 'predicted'),
+        predictionMarker(contradicts(p), markerX(p.predicted.frequency), markerY(p.planLevel)),
+      ),
+    );
+  for (const u of result.unlisted)
+    if (!intrusionBins.has(u.bin)) parts.push(markerGroup(keyed('unlisted'), unlistedMarker(markerX(u.frequency), markerY(u.level))));
+  for (const u of result.intrusions) parts.push(markerGroup(keyed('intrusion'), failMarker(markerX(u.frequency), markerY(u.level))));
 
   const unit = frequencyUnit(half);
   const freqTicks = linearTicks(0, half, 8).values.map((v) => ({ value: v, label: inUnit(v, unit) }));
   parts.push(horizontalAxis(x, freqTicks, plotBottom, `frequency after sampling (${unit.unit})`));
 
   let cursor = plotBottom + 56;
-  const legend = legendRows(legendEntries(result, intrusionBins), 24, cursor, WIDTH - RIGHT);
+  const legend = legendRows(entries, 24, cursor, WIDTH - RIGHT);
   parts.push(legend.markup);
   cursor += legend.height + 8;
   const list = peakList(result, intrusionBins, 24, cursor);
@@ -182,24 +200,17 @@ function heading(r: VerifyResult): string {
 }
 
 /** The wanted image (shaded, outlined, named) and its margin either side (hatched), under the spectrum. */
-function wantedImage(r: VerifyResult, x: Scale, top: number, bottom: number): string {
+function wantedImage(r: VerifyResult, x: Scale, top: number, bottom: number): { fill: string; outline: string; label: string } {
   const half = r.rate / 2;
-  const parts: string[] = [];
+  const fills: string[] = [];
+  const outlines: string[] = [];
   const box = (a: number, b: number, fill: string, outline: boolean) => {
     const lo = Math.max(0, a);
     const hi = Math.min(half, b);
     if (!(hi > lo)) return;
-    parts.push(
-      element('rect', {
-        x: x.at(lo),
-        y: top,
-        width: Math.max(x.at(hi) - x.at(lo), 1.5),
-        height: bottom - top,
-        fill,
-        stroke: outline ? '#1f4e79' : undefined,
-        'stroke-width': outline ? 1.2 : undefined,
-      }),
-    );
+    const shape = { x: x.at(lo), y: top, width: Math.max(x.at(hi) - x.at(lo), 1.5), height: bottom - top };
+    fills.push(element('rect', { ...shape, fill }));
+    if (outline) outlines.push(element('rect', { ...shape, fill: 'none', stroke: '#1f4e79', 'stroke-width': 1.2 }));
   };
   for (const [low, high] of r.wantedImage) {
     box(low - r.margin, low, FILL.guard, false);
@@ -207,29 +218,75 @@ function wantedImage(r: VerifyResult, x: Scale, top: number, bottom: number): st
   }
   for (const [low, high] of r.wantedImage) box(low, high, FILL.wanted, true);
   const first = r.wantedImage[0];
+  let label = '';
   if (first) {
     const text = 'wanted image';
-    const w = textWidth(text, SMALL) + 8;
+    const w = textWidth(text, SMALL, { bold: true }) + 8;
     const centre = Math.min(Math.max(x.at((first[0] + first[1]) / 2), x.range[0] + w / 2), x.range[1] - w / 2);
-    parts.push(
-      element('rect', { x: centre - w / 2, y: bottom - 20, width: w, height: 14, fill: '#fff', stroke: '#1f4e79', 'stroke-width': 0.8 }),
-    );
-    parts.push(textElement(centre, bottom - 9, text, { 'text-anchor': 'middle', 'font-size': SMALL, 'font-weight': 'bold' }));
+    label =
+      element('rect', { x: centre - w / 2, y: bottom - 20, width: w, height: 14, fill: '#fff', stroke: '#1f4e79', 'stroke-width': 0.8 }) +
+      textElement(centre, bottom - 9, text, { 'text-anchor': 'middle', 'font-size': SMALL, 'font-weight': 'bold' });
   }
-  return element('g', { class: 'wanted' }, parts.join(''));
+  return {
+    fill: element('g', { class: 'wanted' }, fills.join('')),
+    outline: element('g', { class: 'wanted-outline' }, outlines.join('')),
+    label: element('g', { class: 'wanted-label' }, label),
+  };
 }
 
-/** A dashed horizontal line across the plot with its words on a white box at one end, just under it. */
-function levelLine(at: number, text: string, dash: string, end: 'start' | 'end'): string {
+interface Box {
+  readonly left: number;
+  readonly top: number;
+  readonly right: number;
+  readonly bottom: number;
+}
+
+const overlaps = (a: Box, b: Box) => a.left < b.right && b.left < a.right && a.top < b.bottom && b.top < a.bottom;
+const markerBox = (cx: number, cy: number): Box => ({
+  left: cx - MARKER_REACH,
+  top: cy - MARKER_REACH,
+  right: cx + MARKER_REACH,
+  bottom: cy + MARKER_REACH,
+});
+
+/**
+ * A dashed horizontal line across the plot, and its words on a white box
+ * (drawn later, over every line): under the line (by a marker's half-width) at the preferred end when
+ * that keeps clear of `taken`, else the first clear place stepping along the
+ * line under it, then over it; the preferred place when none is clear.
+ */
+function levelLine(
+  at: number,
+  text: string,
+  dash: string,
+  end: 'start' | 'end',
+  taken: readonly Box[],
+): { line: string; name: string; box: Box } {
   const label = withMinus(text);
   const w = textWidth(label, SMALL) + 6;
-  const left = end === 'end' ? WIDTH - RIGHT - 2 - w : LEFT + 2;
-  return (
-    element('line', { x1: LEFT, y1: at, x2: WIDTH - RIGHT, y2: at, stroke: '#000', 'stroke-width': 1, 'stroke-dasharray': dash }) +
-    element('rect', { x: left, y: at + 2, width: w, height: 12, fill: '#fff', opacity: 0.9 }) +
-    textElement(left + w / 2, at + 11, label, { 'text-anchor': 'middle', 'font-size': SMALL })
+  const [first, last] = [LEFT + 2, WIDTH - RIGHT - 2 - w];
+  const steps = Math.max(1, Math.floor((last - first) / 24));
+  const lefts = Array.from({ length: steps + 1 }, (_, i) =>
+    end === 'end' ? last - ((last - first) * i) / steps : first + ((last - first) * i) / steps,
   );
+  // Under the line, clear of a marker sitting on it (peaks lie above the floor, so their markers too).
+  const places = [at + MARKER_REACH + 1, at - 14].flatMap((top) =>
+    lefts.map((left): Box => ({ left, top, right: left + w, bottom: top + 12 })),
+  );
+  const box = places.find((b) => !taken.some((t) => overlaps(b, t))) ?? places[0]!;
+  return {
+    line: element('line', { x1: LEFT, y1: at, x2: WIDTH - RIGHT, y2: at, stroke: '#000', 'stroke-width': 1, 'stroke-dasharray': dash }),
+    name:
+      element('rect', { x: box.left, y: box.top, width: w, height: 12, fill: '#fff', opacity: 0.9 }) +
+      textElement(box.left + w / 2, box.top + 9, label, { 'text-anchor': 'middle', 'font-size': SMALL }),
+    box,
+  };
 }
+
+const labelBaseline = (row: number) => HEAD + (row + 1) * LABEL_ROW - 2;
+
+/** The kinds of marker the legend keys. */
+type Kind = 'predicted' | 'contradicting' | 'unlisted' | 'intrusion';
 
 /** A predicted line: a triangle pointing down at the plan level, open when its judgement agrees, filled when it contradicts. */
 function predictionMarker(filled: boolean, cx: number, cy: number): string {
@@ -253,7 +310,7 @@ function unlistedMarker(cx: number, cy: number): string {
   });
 }
 
-function legendEntries(r: VerifyResult, intrusionBins: ReadonlySet<number>): LegendEntry[] {
+function legendEntries(r: VerifyResult, intrusionBins: ReadonlySet<number>): Array<LegendEntry & { kind?: Kind }> {
   const line = (dash: string | undefined, width: number) => (cx: number, cy: number) =>
     element('line', { x1: cx - 11, y1: cy, x2: cx + 11, y2: cy, stroke: '#000', 'stroke-width': width, 'stroke-dasharray': dash });
   const unlisted = r.unlisted.filter((u) => !intrusionBins.has(u.bin)).length;
@@ -263,19 +320,29 @@ function legendEntries(r: VerifyResult, intrusionBins: ReadonlySet<number>): Leg
     { swatch: boxSwatch(FILL.wanted), text: 'wanted image', drawn: r.wantedImage.length > 0 },
     { swatch: boxSwatch(FILL.guard), text: `margin ${T.frequency(r.margin)}`, drawn: r.wantedImage.length > 0 && r.margin > 0 },
     { swatch: line('8 3 2 3', 1), text: 'threshold' },
-    { swatch: line('4 3', 1), text: 'peak floor' },
+    { swatch: line('4 3', 1), text: `peak floor (noise median + ${T.decibels(r.levels.floor - r.levels.noiseMedian)} dB)` },
     {
       swatch: (cx, cy) => predictionMarker(false, cx, cy),
       text: `predicted line (${r.predictions.length})`,
       drawn: r.predictions.some((p) => !contradicts(p)),
+      marker: true,
+      kind: 'predicted',
     },
     {
       swatch: (cx, cy) => predictionMarker(true, cx, cy),
       text: `predicted, contradicts the plan (${contradicting})`,
       drawn: contradicting > 0,
+      marker: true,
+      kind: 'contradicting',
     },
-    { swatch: unlistedMarker, text: `unlisted peak (${unlisted})`, drawn: unlisted > 0 },
-    { swatch: failMarker, text: `intrusion into the margin (${r.intrusions.length})`, drawn: r.intrusions.length > 0 },
+    { swatch: unlistedMarker, text: `unlisted peak (${unlisted})`, drawn: unlisted > 0, marker: true, kind: 'unlisted' },
+    {
+      swatch: failMarker,
+      text: `intrusion into the margin (${r.intrusions.length})`,
+      drawn: r.intrusions.length > 0,
+      marker: true,
+      kind: 'intrusion',
+    },
   ];
 }
 
@@ -294,13 +361,13 @@ function peakList(r: VerifyResult, intrusionBins: ReadonlySet<number>, left: num
   const shown = rows.slice(0, LISTED_PEAKS);
   shown.forEach(({ row, intrusion }, i) => {
     const cy = top + i * step + 6;
-    parts.push(intrusion ? failMarker(left + 6, cy) : unlistedMarker(left + 6, cy));
+    const shape = intrusion ? failMarker(left + 6, cy) : unlistedMarker(left + 6, cy);
     const where = row.distance === 0 ? 'inside the wanted image' : `${T.frequency(row.distance)} from the wanted image`;
     // A peak a predicted line was measured on carries no explanation of its own: name that line, as the verdict does.
     const line = r.predictions.find((p) => p.measured?.bin === row.bin);
     const what = row.explainedBy ?? (line ? `${line.check}, ${line.line}` : 'unexplained');
     const text = `${T.frequency(row.frequency)}, ${T.level(row.level)} dBFS, ${intrusion ? 'intrusion, ' : ''}${where}: ${what}`;
-    parts.push(textElement(left + 18, cy + 3.5, withMinus(text), { 'font-size': SMALL }));
+    parts.push(markerGroup(withMinus(text), shape), textElement(left + 18, cy + 3.5, withMinus(text), { 'font-size': SMALL }));
   });
   let height = shown.length * step;
   if (rows.length > shown.length) {

@@ -5,14 +5,14 @@ import { quantityText } from '../text/quantity-text.js';
 import { hz } from '../units/quantities.js';
 import { horizontalAxis, numberTicks, verticalAxis } from './axis.js';
 import { frequencyUnit, inUnit } from './frequency-unit.js';
-import { packLabels, textWidth } from './label-packing.js';
+import { packLabels } from './label-packing.js';
 import { boxSwatch, legendRows } from './legend.js';
 import { coveringTicks, linearTicks } from './nice-ticks.js';
 import { FILL } from './patterns.js';
 import { linearScale, type Scale } from './scale.js';
 import { findCandidate } from './spectrum.js';
 import { element, pointList, textElement } from './svg-element.js';
-import { withMinus } from './typography.js';
+import { TEXT_DESCENT, textWidth, withMinus } from './typography.js';
 import { svgDocument, type Figure } from './svg-document.js';
 
 const T = quantityText('svg');
@@ -57,7 +57,13 @@ export function filterMaskFigure(report: PlanReport, candidateLabel: string): Fi
 
   const ordered = [...mask.bands].sort((a, b) => a.marginDb - b.marginDb);
   const placed = packLabels(
-    ordered.map((band) => ({ x: x.at((band.low + band.high) / 2), text: marginText(band), item: band })),
+    ordered.map((band) => ({
+      x: x.at((band.low + band.high) / 2),
+      text: withMinus(marginText(band)),
+      leader: x.at((band.low + band.high) / 2),
+      bold: band.marginDb < 0,
+      item: band,
+    })),
     LABEL_ROWS,
     plotX,
     SMALL,
@@ -122,7 +128,7 @@ export function filterMaskFigure(report: PlanReport, candidateLabel: string): Fi
     labels.push(
       element('line', {
         x1: at,
-        y1: baseline + 2,
+        y1: baseline + TEXT_DESCENT * SMALL + 1,
         x2: at,
         y2: Math.min(clampY(p.item.givenDb), clampY(p.item.requiredDb)) - 2,
         stroke: '#555',
@@ -131,7 +137,7 @@ export function filterMaskFigure(report: PlanReport, candidateLabel: string): Fi
       }),
     );
     labels.push(
-      textElement(p.x, baseline, withMinus(p.text), {
+      textElement(p.x, baseline, p.text, {
         'text-anchor': 'middle',
         'font-size': SMALL,
         'font-weight': p.item.marginDb < 0 ? 'bold' : undefined,

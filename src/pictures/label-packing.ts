@@ -1,3 +1,5 @@
+import { textWidth } from './typography.js';
+
 /** A label to place on one of a few rows, centred on `x` when it can be. */
 export interface LabelRequest<T> {
   readonly x: number;
@@ -6,6 +8,14 @@ export interface LabelRequest<T> {
   readonly short?: string;
   /** Drawn extents that share the label's row (brackets), px: kept free too. */
   readonly spans?: ReadonlyArray<readonly [number, number]>;
+  /**
+   * Where a leader line leaves the label for what it names, px: it runs down
+   * through every later row (row + 1 … rows − 1) to the plot, so no text of
+   * those rows may sit on it, and it may sit on none.
+   */
+  readonly leader?: number;
+  /** Set in bold (wider). */
+  readonly bold?: boolean;
   /** What the label stands for, handed back with its placement. */
   readonly item: T;
 }
@@ -19,25 +29,16 @@ export interface PlacedLabel<T> {
   readonly width: number;
 }
 
-/** Average advance of a sans-serif glyph, in em; generous so estimates err wide. */
-const EM_PER_CHAR = 0.62;
 const GAP = 4;
-
-/**
- * Estimated width of a line of sans-serif text, px.
- *
- * @param text the words
- * @param fontSize px
- * @example textWidth('zone 2', 10) // 37.2
- */
-export function textWidth(text: string, fontSize: number): number {
-  return [...text].length * fontSize * EM_PER_CHAR;
-}
+/** Least room between a leader line and a text, px. */
+const LEADER_GAP = 2;
 
 /**
  * Places labels on up to `rows` rows without overlap, in the order given
  * (put the most important first): each takes the first row with room for
  * its full text, else for its short text; a label with no room is left out.
+ * Rows count from the one farthest from the plot: a label's leader crosses
+ * the rows after its own, and is kept clear of their texts (both ways).
  *
  * @param requests labels, most important first
  * @param rows number of rows available (≥ 1)
@@ -52,19 +53,29 @@ export function packLabels<T>(
   fontSize: number,
 ): PlacedLabel<T>[] {
   const taken: Array<Array<readonly [number, number]>> = Array.from({ length: rows }, () => []);
+  // The x of every leader that crosses each row.
+  const leaders: number[][] = Array.from({ length: rows }, () => []);
   const placed: PlacedLabel<T>[] = [];
   for (const request of requests) {
     const texts = request.short === undefined ? [request.text] : [request.text, request.short];
     let done = false;
     for (const text of texts) {
-      const width = textWidth(text, fontSize);
+      const width = textWidth(text, fontSize, { bold: request.bold });
       const half = width / 2;
       const x = Math.min(Math.max(request.x, bounds[0] + half), bounds[1] - half);
       const needs: Array<readonly [number, number]> = [[x - half, x + half], ...(request.spans ?? [])];
+      const leader = request.leader;
       for (let row = 0; row < rows && !done; row++) {
         const spans = taken[row]!;
         if (needs.some(([left, right]) => spans.some(([a, b]) => left < b + GAP && right > a - GAP))) continue;
+        if (leaders[row]!.some((at) => at > x - half - LEADER_GAP && at < x + half + LEADER_GAP)) continue;
+        if (
+          leader !== undefined &&
+          taken.slice(row + 1).some((later) => later.some(([a, b]) => leader > a - LEADER_GAP && leader < b + LEADER_GAP))
+        )
+          continue;
         spans.push(...needs);
+        if (leader !== undefined) for (let below = row + 1; below < rows; below++) leaders[below]!.push(leader);
         placed.push({ item: request.item, text, x, row, width });
         done = true;
       }

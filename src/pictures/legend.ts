@@ -1,5 +1,6 @@
 import { element, textElement } from './svg-element.js';
-import { textWidth } from './label-packing.js';
+import { markerGroup } from './markers.js';
+import { textWidth } from './typography.js';
 
 /** A legend entry: a swatch drawn centred on (x, y) and its words. */
 export interface LegendEntry {
@@ -7,6 +8,8 @@ export interface LegendEntry {
   readonly text: string;
   /** False when the picture draws nothing of this kind: the entry is left out. */
   readonly drawn?: boolean;
+  /** The swatch is a marker of the plot: grouped as one that this entry keys (markerGroup). */
+  readonly marker?: boolean;
 }
 
 export const LEGEND_FONT = 10.5;
@@ -35,7 +38,8 @@ export function legendRows(all: readonly LegendEntry[], left: number, top: numbe
       x = left;
       y += ROW;
     }
-    parts.push(entry.swatch(x + SWATCH / 2, y));
+    const swatch = entry.swatch(x + SWATCH / 2, y);
+    parts.push(entry.marker ? markerGroup(entry.text, swatch) : swatch);
     parts.push(textElement(x + SWATCH + 6, y + LEGEND_FONT * 0.35, entry.text, { 'font-size': LEGEND_FONT }));
     x += width;
   }

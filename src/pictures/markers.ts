@@ -29,11 +29,26 @@ export function failMarker(x: number, y: number): string {
 }
 
 /**
- * The marker for a candidate's verdict.
+ * A marker's shapes as one group that names the text labelling it (the
+ * label beside it, its key number, or the legend entry of its kind), so
+ * that a reader of the SVG, and the picture tests, can tell every marker
+ * is labelled or keyed.
+ *
+ * @param label the words drawn elsewhere in the picture that label this marker
+ * @param shapes the marker's markup
+ * @example markerGroup('3', '') // '<g class="marker" data-label="3"></g>'
+ */
+export function markerGroup(label: string, shapes: string): string {
+  return element('g', { class: 'marker', 'data-label': label }, shapes);
+}
+
+/**
+ * The marker for a candidate's verdict, naming its label.
  *
  * @param pass whether the candidate passes
  * @param x, y centre, px
+ * @param label the text that labels it (see markerGroup)
  */
-export function candidateMarker(pass: boolean, x: number, y: number): string {
-  return pass ? passMarker(x, y) : failMarker(x, y);
+export function candidateMarker(pass: boolean, x: number, y: number, label: string): string {
+  return markerGroup(label, pass ? passMarker(x, y) : failMarker(x, y));
 }

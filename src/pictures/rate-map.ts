@@ -5,7 +5,8 @@ const T = quantityText('svg');
 import type { RateWindow } from '../windows/rate-window.js';
 import { horizontalAxis } from './axis.js';
 import { frequencyUnit, inUnit } from './frequency-unit.js';
-import { packLabels, textWidth, wrapPhrases, type PlacedLabel } from './label-packing.js';
+import { packLabels, wrapPhrases, type PlacedLabel } from './label-packing.js';
+import { TEXT_DESCENT, textWidth } from './typography.js';
 import { boxSwatch, legendRows, LEGEND_FONT } from './legend.js';
 import { candidateMarker, failMarker, passMarker } from './markers.js';
 import { linearTicks, logTicks } from './nice-ticks.js';
@@ -21,10 +22,11 @@ const LEFT = 132;
 const RIGHT = 24;
 const TOP = 60;
 const BODY = 16;
-const CANDIDATE_ROWS = 3;
+const CANDIDATE_ROWS = 4;
 const CANDIDATE_ROW = 12;
 const BLOCKED_ROWS = 4;
-const BLOCKED_ROW = 13;
+/** A bracket (3 px) over its label's text, clear of the row above's descenders. */
+const BLOCKED_ROW = 15;
 const SMALL = 9.5;
 
 interface Lane {
@@ -103,8 +105,8 @@ export function rateMapFigure(report: PlanReport): Figure {
       { swatch: boxSwatch(FILL.inverted), text: 'window, inverted zone (inv)', drawn: view.windows.some((w) => w.inverted) },
       { swatch: boxSwatch(FILL.blocked), text: 'blocked', drawn: report.blocked.some((r) => drawnZones.has(r.zone)) },
       { swatch: boxSwatch(FILL.feasible), text: 'feasible', drawn: report.feasible.some((r) => drawnZones.has(r.zone)) },
-      { swatch: (x, yy) => passMarker(x, yy), text: 'candidate passes', drawn: markers.some((c) => c.pass) },
-      { swatch: (x, yy) => failMarker(x, yy), text: 'candidate fails', drawn: markers.some((c) => !c.pass) },
+      { swatch: (x, yy) => passMarker(x, yy), text: 'candidate passes', drawn: markers.some((c) => c.pass), marker: true },
+      { swatch: (x, yy) => failMarker(x, yy), text: 'candidate fails', drawn: markers.some((c) => !c.pass), marker: true },
     ],
     LEFT - 100,
     y,
@@ -152,7 +154,14 @@ function lane(
   const plot = scale.range;
   const placedCandidates = packLabels(
     // A label with no room falls back to the candidate's rank, the number every table gives it; the notes list them.
-    candidates.map((c) => ({ x: scale.at(c.rate), text: c.label, short: String(report.candidates.indexOf(c) + 1), item: c })),
+    candidates.map((c) => ({
+      x: scale.at(c.rate),
+      text: c.label,
+      short: String(report.candidates.indexOf(c) + 1),
+      leader: scale.at(c.rate),
+      bold: c.label === report.best,
+      item: c,
+    })),
     CANDIDATE_ROWS,
     plot,
     SMALL,
@@ -240,13 +249,18 @@ function drawLane(l: Lane, top: number, scale: Scale, report: PlanReport, index:
     const baseline = bodyTop - 3 - (candidateRows - 1 - p.row) * CANDIDATE_ROW;
     const x = scale.at(p.item.rate);
     if (Math.abs(p.x - x) > 1 || p.row < candidateRows - 1)
-      parts.push(element('line', { x1: x, y1: baseline + 1, x2: x, y2: mid - 4, stroke: '#000', 'stroke-width': 0.6 }));
+      parts.push(
+        element('line', { x1: x, y1: baseline + TEXT_DESCENT * SMALL + 1, x2: x, y2: mid - 4, stroke: '#000', 'stroke-width': 0.6 }),
+      );
     const best = p.item.label === report.best;
     parts.push(
       textElement(p.x, baseline - 1, p.text, { 'text-anchor': 'middle', 'font-size': SMALL, 'font-weight': best ? 'bold' : undefined }),
     );
   }
-  for (const c of l.markers) parts.push(candidateMarker(c.pass, scale.at(c.rate), mid));
+  // Each marker names its label, or its kind's legend entry when even its number found no room (the notes list it by rank).
+  const labelOf = new Map(l.candidates.map((p) => [p.item, p.text]));
+  for (const c of l.markers)
+    parts.push(candidateMarker(c.pass, scale.at(c.rate), mid, labelOf.get(c) ?? (c.pass ? 'candidate passes' : 'candidate fails')));
   return element('g', { class: 'lane' }, parts.join(''));
 }
 

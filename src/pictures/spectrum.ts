@@ -7,7 +7,8 @@ import { InputError } from '../units/input-error.js';
 import { horizontalAxis, numberTicks, verticalAxis } from './axis.js';
 import { checkTable } from './check-table.js';
 import { frequencyUnit, inUnit } from './frequency-unit.js';
-import { packLabels, textWidth } from './label-packing.js';
+import { packLabels } from './label-packing.js';
+import { TEXT_DESCENT, textWidth } from './typography.js';
 import { boxSwatch, legendRows } from './legend.js';
 import { coveringTicks, linearTicks } from './nice-ticks.js';
 import { FILL } from './patterns.js';
@@ -58,10 +59,11 @@ export function spectrumFigure(report: PlanReport, candidateLabel: string): Figu
   // Strongest first, so a weaker bar over a stronger one stays in sight.
   const drawOrder = checks.map((c, i) => ({ c, key: i + 1 })).sort((a, b) => b.c.level - a.c.level);
   for (const { c } of drawOrder) parts.push(bars(c, x, y, bottom));
-  parts.push(wanted.outline);
-  parts.push(levelLines(threshold, report.weakestLevel, candidate, x, y, plotTop));
-  parts.push(marks(candidate, x, plotTop, plotBottom));
-  parts.push(labelLeaders(placed, x, y, bottom, top));
+  // Every line first, then the names inside the plot on white boxes over them, so no line runs through a name.
+  const levels = levelLines(threshold, report.weakestLevel, candidate, x, y, plotTop);
+  const markings = marks(candidate, x, plotTop, plotBottom);
+  parts.push(labelLeaders(placed, x, y, bottom, top), markings.lines, levels.lines, wanted.outline);
+  parts.push(wanted.label, levels.names, markings.names, labelTexts(placed));
   parts.push(verticalAxis(y, numberTicks(levelTicks.values), LEFT, 'level (dBFS)', WIDTH - RIGHT));
   const unit = frequencyUnit(half);
   const freqTicks = linearTicks(0, half, 8).values.map((v) => ({ value: v, label: inUnit(v, unit) }));
@@ -110,6 +112,8 @@ function checkLabels(checks: ReportedCandidate['checks'], x: Scale, plotX: reado
           x: x.at((widest[0] + widest[1]) / 2),
           text: `${key} ${c.label}, ${T.level(c.level)} dBFS, ${T.frequency(c.margin)}`,
           short: String(key),
+          leader: x.at((widest[0] + widest[1]) / 2),
+          bold: !c.pass,
           item: { c, key, at: (widest[0] + widest[1]) / 2 },
         },
       ];
@@ -137,8 +141,16 @@ const overlaps = (a: Box, b: Box) => a.left < b.right && b.left < a.right && a.t
  * keeps clear of the threshold's name and of the DC, fs/4 and fs/2 marks'
  * names (the weakest level lies at or above the threshold, by the rejection).
  */
-function levelLines(threshold: number | null, weakest: number | null, c: ReportedCandidate, x: Scale, y: Scale, plotTop: number): string {
-  const parts: string[] = [];
+function levelLines(
+  threshold: number | null,
+  weakest: number | null,
+  c: ReportedCandidate,
+  x: Scale,
+  y: Scale,
+  plotTop: number,
+): { lines: string; names: string } {
+  const lines: string[] = [];
+  const names: string[] = [];
   const taken: Box[] = markBoxes(c, x, plotTop);
   const named = (level: number, text: string, stroke: string, dash: string, places: ReadonlyArray<readonly ['left' | 'right', -1 | 1]>) => {
     const at = y.at(level);
@@ -150,9 +162,9 @@ function levelLines(threshold: number | null, weakest: number | null, c: Reporte
     };
     const box = places.map(boxAt).find((b) => !taken.some((t) => overlaps(b, t))) ?? boxAt(places[0]!);
     taken.push(box);
-    parts.push(
-      element('line', { x1: LEFT, y1: at, x2: WIDTH - RIGHT, y2: at, stroke, 'stroke-width': 1, 'stroke-dasharray': dash }) +
-        element('rect', { x: box.left, y: box.top, width: w, height: 12, fill: '#fff', opacity: 0.9 }) +
+    lines.push(element('line', { x1: LEFT, y1: at, x2: WIDTH - RIGHT, y2: at, stroke, 'stroke-width': 1, 'stroke-dasharray': dash }));
+    names.push(
+      element('rect', { x: box.left, y: box.top, width: w, height: 12, fill: '#fff', opacity: 0.9 }) +
         textElement(box.left + w / 2, box.top + 9, text, {
           'text-anchor': 'middle',
           'font-size': SMALL,
@@ -168,25 +180,33 @@ function levelLines(threshold: number | null, weakest: number | null, c: Reporte
       ['left', -1],
       ['left', 1],
     ]);
-  return element('g', { class: 'levels' }, parts.join(''));
+  return { lines: element('g', { class: 'levels' }, lines.join('')), names: element('g', { class: 'level-names' }, names.join('')) };
 }
 
-/** Each placed label in its row, with a dotted leader down to the top of its bar (failing checks in bold). */
+const labelBaseline = (row: number) => 64 + (row + 1) * LABEL_ROW - 2;
+
+/** A dotted leader from under each placed label down to the top of its bar. */
 function labelLeaders(placed: ReturnType<typeof checkLabels>, x: Scale, y: Scale, bottom: number, top: number): string {
   return placed
     .map((p) => {
-      const baseline = 64 + (p.row + 1) * LABEL_ROW - 2;
       const barTop = y.at(Math.max(Math.min(p.item.c.level, top), bottom));
       const at = x.at(p.item.at);
-      return (
-        element('line', { x1: at, y1: baseline + 2, x2: at, y2: barTop, stroke: '#555', 'stroke-width': 0.5, 'stroke-dasharray': '1 2' }) +
-        textElement(p.x, baseline, p.text, {
-          'text-anchor': 'middle',
-          'font-size': SMALL,
-          'font-weight': p.item.c.pass ? undefined : 'bold',
-        })
-      );
+      const from = labelBaseline(p.row) + TEXT_DESCENT * SMALL + 1;
+      return element('line', { x1: at, y1: from, x2: at, y2: barTop, stroke: '#555', 'stroke-width': 0.5, 'stroke-dasharray': '1 2' });
     })
+    .join('');
+}
+
+/** Each placed label in its row above the plot (failing checks in bold). */
+function labelTexts(placed: ReturnType<typeof checkLabels>): string {
+  return placed
+    .map((p) =>
+      textElement(p.x, labelBaseline(p.row), p.text, {
+        'text-anchor': 'middle',
+        'font-size': SMALL,
+        'font-weight': p.item.c.pass ? undefined : 'bold',
+      }),
+    )
     .join('');
 }
 
@@ -264,10 +284,11 @@ function wantedImage(
   x: ReturnType<typeof linearScale>,
   top: number,
   bottom: number,
-): { fill: string; outline: string; guarded: boolean } {
+): { fill: string; outline: string; label: string; guarded: boolean } {
   const half = c.rate / 2;
   const fills: string[] = [];
   const outlines: string[] = [];
+  const names: string[] = [];
   let guarded = false;
   const box = (a: number, b: number, fill: string) => {
     if (fill === FILL.guard) guarded = true;
@@ -276,12 +297,12 @@ function wantedImage(
     outlines.push(element('rect', { ...shape, fill: 'none', stroke: '#1f4e79', 'stroke-width': 1.2 }));
   };
   const label = (at: number, text: string) => {
-    const w = textWidth(text, SMALL) + 8;
+    const w = textWidth(text, SMALL, { bold: true }) + 8;
     const centre = Math.min(Math.max(at, x.range[0] + w / 2), x.range[1] - w / 2);
-    outlines.push(
+    names.push(
       element('rect', { x: centre - w / 2, y: bottom - 20, width: w, height: 14, fill: '#fff', stroke: '#1f4e79', 'stroke-width': 0.8 }),
     );
-    outlines.push(textElement(centre, bottom - 9, text, { 'text-anchor': 'middle', 'font-size': SMALL, 'font-weight': 'bold' }));
+    names.push(textElement(centre, bottom - 9, text, { 'text-anchor': 'middle', 'font-size': SMALL, 'font-weight': 'bold' }));
   };
   if (c.image) {
     const below = c.inverted ? report.guard.high : report.guard.low;
@@ -297,6 +318,7 @@ function wantedImage(
   return {
     fill: element('g', { class: 'wanted' }, fills.join('')),
     outline: element('g', { class: 'wanted-outline' }, outlines.join('')),
+    label: element('g', { class: 'wanted-label' }, names.join('')),
     guarded,
   };
 }
@@ -341,17 +363,16 @@ function markBoxes(c: ReportedCandidate, x: Scale, top: number): Box[] {
   return markPlaces(c, x, top).map((p) => p.box);
 }
 
-function marks(c: ReportedCandidate, x: Scale, top: number, bottom: number): string {
-  return element(
-    'g',
-    { class: 'marks' },
-    markPlaces(c, x, top)
-      .map(
-        ({ at, text, box }) =>
-          element('line', { x1: at, y1: top, x2: at, y2: bottom, stroke: '#000', 'stroke-width': 1, 'stroke-dasharray': '6 2 1 2' }) +
-          element('rect', { x: box.left, y: box.top, width: box.right - box.left, height: 13, fill: '#fff', opacity: 0.9 }) +
-          textElement((box.left + box.right) / 2, top + 12, text, { 'text-anchor': 'middle', 'font-size': SMALL }),
-      )
-      .join(''),
+/** The DC, fs/4 and fs/2 lines, and their names on white boxes (drawn later, over every line). */
+function marks(c: ReportedCandidate, x: Scale, top: number, bottom: number): { lines: string; names: string } {
+  const places = markPlaces(c, x, top);
+  const lines = places.map(({ at }) =>
+    element('line', { x1: at, y1: top, x2: at, y2: bottom, stroke: '#000', 'stroke-width': 1, 'stroke-dasharray': '6 2 1 2' }),
   );
+  const names = places.map(
+    ({ text, box }) =>
+      element('rect', { x: box.left, y: box.top, width: box.right - box.left, height: 13, fill: '#fff', opacity: 0.9 }) +
+      textElement((box.left + box.right) / 2, top + 12, text, { 'text-anchor': 'middle', 'font-size': SMALL }),
+  );
+  return { lines: element('g', { class: 'marks' }, lines.join('')), names: element('g', { class: 'mark-names' }, names.join('')) };
 }

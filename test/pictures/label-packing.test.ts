@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { packLabels, spreadApart, textWidth, wrapPhrases } from '../../src/pictures/label-packing.js';
+import { packLabels, spreadApart, wrapPhrases } from '../../src/pictures/label-packing.js';
+import { textWidth } from '../../src/pictures/typography.js';
 import { escapeXml } from '../../src/pictures/escape-xml.js';
 import { withMinus } from '../../src/pictures/typography.js';
 import { parseSvg, textsOf } from './svg-check.js';
@@ -69,8 +70,10 @@ describe('packLabels', () => {
     expect(wide.map((p) => p.text)).toEqual([long, 'k']);
   });
 
-  it('estimates text width from the character count', () => {
-    expect(textWidth('zone 2', 10)).toBeCloseTo(37.2, 9);
+  it('estimates text width by character class: thin, lower case and figures, capitals, widest', () => {
+    // z o n e, space, 2: four lower-case letters and a figure at 0.65 em, a space at 0.4 em (10 px font).
+    expect(textWidth('zone 2', 10)).toBeCloseTo(36.5, 9);
+    expect(textWidth('mW', 10, { bold: true })).toBeCloseTo(22, 9);
   });
 });
 

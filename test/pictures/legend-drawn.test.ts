@@ -11,7 +11,7 @@ import { spectrumSvg } from '../../src/pictures/spectrum.js';
 import { bandPositionSvg } from '../../src/pictures/band-position.js';
 import { filterMaskSvg } from '../../src/pictures/filter-mask.js';
 import { captureSvg } from '../../src/pictures/capture-picture.js';
-import { textWidth } from '../../src/pictures/label-packing.js';
+import { textWidth } from '../../src/pictures/typography.js';
 import { verifyCaptureWithSpectrum } from '../../src/report/verify-capture.js';
 import { badRate, passingRates } from '../capture/plan-rates.js';
 import { heronLowPassScenario } from './picture-plan.js';
