@@ -38,7 +38,9 @@ const LEADER_GAP = 2;
  * (put the most important first): each takes the first row with room for
  * its full text, else for its short text; a label with no room is left out.
  * Rows count from the one farthest from the plot: a label's leader crosses
- * the rows after its own, and is kept clear of their texts (both ways).
+ * the rows after its own, and is kept clear of their texts (both ways); a
+ * label with a leader that finds no room centred on it may sit just beside
+ * its leader, on either side.
  *
  * @param requests labels, most important first
  * @param rows number of rows available (≥ 1)
@@ -62,22 +64,25 @@ export function packLabels<T>(
     for (const text of texts) {
       const width = textWidth(text, fontSize, { bold: request.bold });
       const half = width / 2;
-      const x = Math.min(Math.max(request.x, bounds[0] + half), bounds[1] - half);
-      const needs: Array<readonly [number, number]> = [[x - half, x + half], ...(request.spans ?? [])];
       const leader = request.leader;
+      // Centred on its point; with a leader, also just beside it on either side (the leader then runs past the text).
+      const wanted = leader === undefined ? [request.x] : [request.x, leader + half + LEADER_GAP + 1, leader - half - LEADER_GAP - 1];
+      const xs = [...new Set(wanted.map((x) => Math.min(Math.max(x, bounds[0] + half), bounds[1] - half)))];
       for (let row = 0; row < rows && !done; row++) {
-        const spans = taken[row]!;
-        if (needs.some(([left, right]) => spans.some(([a, b]) => left < b + GAP && right > a - GAP))) continue;
-        if (leaders[row]!.some((at) => at > x - half - LEADER_GAP && at < x + half + LEADER_GAP)) continue;
-        if (
-          leader !== undefined &&
-          taken.slice(row + 1).some((later) => later.some(([a, b]) => leader > a - LEADER_GAP && leader < b + LEADER_GAP))
-        )
-          continue;
-        spans.push(...needs);
-        if (leader !== undefined) for (let below = row + 1; below < rows; below++) leaders[below]!.push(leader);
-        placed.push({ item: request.item, text, x, row, width });
-        done = true;
+        for (const x of xs) {
+          const needs: Array<readonly [number, number]> = [[x - half, x + half], ...(request.spans ?? [])];
+          const spans = taken[row]!;
+          if (needs.some(([left, right]) => spans.some(([a, b]) => left < b + GAP && right > a - GAP))) continue;
+          if (leaders[row]!.some((at) => at > x - half - LEADER_GAP && at < x + half + LEADER_GAP)) continue;
+          const below = taken.slice(row + 1);
+          if (leader !== undefined && below.some((later) => later.some(([a, b]) => leader > a - LEADER_GAP && leader < b + LEADER_GAP)))
+            continue;
+          spans.push(...needs);
+          if (leader !== undefined) for (let later = row + 1; later < rows; later++) leaders[later]!.push(leader);
+          placed.push({ item: request.item, text, x, row, width });
+          done = true;
+          break;
+        }
       }
       if (done) break;
     }
