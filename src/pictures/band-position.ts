@@ -4,7 +4,7 @@ import { quantityText } from '../text/quantity-text.js';
 const T = quantityText('svg');
 import { horizontalAxis, numberTicks, verticalAxis } from './axis.js';
 import { spreadApart, wrapPhrases } from './label-packing.js';
-import { textWidth } from './typography.js';
+import { clipped, textWidth } from './typography.js';
 import { boxSwatch, legendRows } from './legend.js';
 import { candidateMarker, failMarker, passMarker } from './markers.js';
 import { coveringTicks, linearTicks } from './nice-ticks.js';
@@ -136,7 +136,7 @@ export function bandPositionFigure(report: PlanReport, candidateLabel?: string):
  *
  * @param report the solved plan
  * @param candidateLabel mark only this candidate, or all when absent
- * @returns SVG text, 900 px wide
+ * @returns SVG text, 960 px wide
  * @example bandPositionSvg(report).includes('fs/B') // true
  */
 export function bandPositionSvg(report: PlanReport, candidateLabel?: string): string {
@@ -158,8 +158,10 @@ function heading(report: PlanReport, fL: number, fH: number, design: number): { 
     ' ',
   );
   const markup =
-    textElement(24, 22, `Band-position chart: ${report.scenario}`, { 'font-size': 14, 'font-weight': 'bold' }) +
-    lines.map((line, i) => textElement(24, 40 + i * HEADING_LINE, line, { 'font-size': HEADING_FONT })).join('');
+    textElement(24, 22, clipped(`Band-position chart: ${report.scenario}`, WIDTH - 24 - MARGIN, 14, { bold: true }), {
+      'font-size': 14,
+      'font-weight': 'bold',
+    }) + lines.map((line, i) => textElement(24, 40 + i * HEADING_LINE, line, { 'font-size': HEADING_FONT })).join('');
   return { markup, bottom: 40 + (lines.length - 1) * HEADING_LINE };
 }
 

@@ -13,7 +13,7 @@ import { coveringTicks, linearTicks } from './nice-ticks.js';
 import { FILL } from './patterns.js';
 import { linearScale, type Scale } from './scale.js';
 import { element, pointList, textElement } from './svg-element.js';
-import { TEXT_DESCENT, textWidth, withMinus } from './typography.js';
+import { clipped, TEXT_DESCENT, textWidth, withMinus } from './typography.js';
 import { svgDocument, type Figure } from './svg-document.js';
 
 const WIDTH = 960;
@@ -23,6 +23,8 @@ const LABEL_ROWS = 4;
 const LABEL_ROW = 12;
 const PLOT_HEIGHT = 300;
 const SMALL = 9.5;
+/** Width a heading line may take, px. */
+const ROOM = WIDTH - 24 - 12;
 /** Bottom of the heading, px: the label rows start here. */
 const HEAD = 80;
 /** The level axis reaches this far below the noise median, dB, so the noise band shows as a band. */
@@ -113,7 +115,7 @@ export function captureFigure(result: VerifyResult, levels: ArrayLike<number>): 
     ...result.unlisted.map((u) => markerBox(markerX(u.frequency), markerY(u.level))),
   ];
   const thresholdLine = levelLine(y.at(threshold), `threshold ${T.level(threshold)} dBFS`, '8 3 2 3', 'end', taken);
-  taken.push(thresholdLine.box);
+  if (thresholdLine.box) taken.push(thresholdLine.box);
   const floorLine = levelLine(y.at(floor), `peak floor ${T.level(floor)} dBFS`, '4 3', 'start', taken);
   // Lines first, then the names on white over them, so no line runs through a name.
   parts.push(thresholdLine.line, floorLine.line, wanted.outline, wanted.label, thresholdLine.name, floorLine.name);
@@ -184,14 +186,20 @@ function heading(r: VerifyResult): string {
     : `the capture CONTRADICTS the plan (${plan}; ${reasons} reason${reasons === 1 ? '' : 's'})`;
   const tones = `${r.wantedTones} wanted tone${r.wantedTones === 1 ? '' : 's'}`;
   return (
-    textElement(24, 22, `Simulated capture at ${T.rate(r.rate)}: ${r.scenario}`, { 'font-size': 14, 'font-weight': 'bold' }) +
+    textElement(24, 22, clipped(`Simulated capture at ${T.rate(r.rate)}: ${r.scenario}`, ROOM, 14, { bold: true }), {
+      'font-size': 14,
+      'font-weight': 'bold',
+    }) +
     textElement(
       24,
       40,
       `rate ${T.rate(r.rate)}; ${r.samples} samples, bin width ${T.frequency(r.binWidth)}; ${r.window.name} window; ${tones}`,
       { 'font-size': 11 },
     ) +
-    textElement(24, 56, `Verdict: ${verdict}.`, { 'font-size': 11, 'font-weight': r.consistent ? undefined : 'bold' }) +
+    textElement(24, 56, clipped(`Verdict: ${verdict}.`, ROOM, 11, { bold: !r.consistent }), {
+      'font-size': 11,
+      'font-weight': r.consistent ? undefined : 'bold',
+    }) +
     textElement(24, 72, 'Labels: the check of the plan each predicted line belongs to, over its marker at the plan level.', {
       'font-size': SMALL,
       'font-style': 'italic',
@@ -251,9 +259,10 @@ const markerBox = (cx: number, cy: number): Box => ({
 
 /**
  * A dashed horizontal line across the plot, and its words on a white box
- * (drawn later, over every line): under the line (by a marker's half-width) at the preferred end when
- * that keeps clear of `taken`, else the first clear place stepping along the
- * line under it, then over it; the preferred place when none is clear.
+ * (drawn later, over every line): under the line (by a marker's half-width)
+ * at the preferred end when that keeps clear of `taken`, else the first
+ * clear place stepping along the line under it, then over it; no words when
+ * none is clear (the legend names the line and its level).
  */
 function levelLine(
   at: number,
@@ -261,7 +270,7 @@ function levelLine(
   dash: string,
   end: 'start' | 'end',
   taken: readonly Box[],
-): { line: string; name: string; box: Box } {
+): { line: string; name: string; box: Box | null } {
   const label = withMinus(text);
   const w = textWidth(label, SMALL) + 6;
   const [first, last] = [LEFT + 2, WIDTH - RIGHT - 2 - w];
@@ -273,9 +282,19 @@ function levelLine(
   const places = [at + MARKER_REACH + 1, at - 14].flatMap((top) =>
     lefts.map((left): Box => ({ left, top, right: left + w, bottom: top + 12 })),
   );
-  const box = places.find((b) => !taken.some((t) => overlaps(b, t))) ?? places[0]!;
+  const box = places.find((b) => !taken.some((t) => overlaps(b, t))) ?? null;
+  const line = element('line', {
+    x1: LEFT,
+    y1: at,
+    x2: WIDTH - RIGHT,
+    y2: at,
+    stroke: '#000',
+    'stroke-width': 1,
+    'stroke-dasharray': dash,
+  });
+  if (box === null) return { line, name: '', box };
   return {
-    line: element('line', { x1: LEFT, y1: at, x2: WIDTH - RIGHT, y2: at, stroke: '#000', 'stroke-width': 1, 'stroke-dasharray': dash }),
+    line,
     name:
       element('rect', { x: box.left, y: box.top, width: w, height: 12, fill: '#fff', opacity: 0.9 }) +
       textElement(box.left + w / 2, box.top + 9, label, { 'text-anchor': 'middle', 'font-size': SMALL }),
@@ -319,8 +338,13 @@ function legendEntries(r: VerifyResult, intrusionBins: ReadonlySet<number>): Arr
     { swatch: line(undefined, 0.8), text: 'measured (max-hold, one column per pixel)' },
     { swatch: boxSwatch(FILL.wanted), text: 'wanted image', drawn: r.wantedImage.length > 0 },
     { swatch: boxSwatch(FILL.guard), text: `margin ${T.frequency(r.margin)}`, drawn: r.wantedImage.length > 0 && r.margin > 0 },
-    { swatch: line('8 3 2 3', 1), text: 'threshold' },
-    { swatch: line('4 3', 1), text: `peak floor (noise median + ${T.decibels(r.levels.floor - r.levels.noiseMedian)} dB)` },
+    { swatch: line('8 3 2 3', 1), text: withMinus(`threshold ${T.level(r.levels.threshold)} dBFS`) },
+    {
+      swatch: line('4 3', 1),
+      text: withMinus(
+        `peak floor ${T.level(r.levels.floor)} dBFS (noise median + ${T.decibels(r.levels.floor - r.levels.noiseMedian)} dB)`,
+      ),
+    },
     {
       swatch: (cx, cy) => predictionMarker(false, cx, cy),
       text: `predicted line (${r.predictions.length})`,
@@ -367,7 +391,8 @@ function peakList(r: VerifyResult, intrusionBins: ReadonlySet<number>, left: num
     const line = r.predictions.find((p) => p.measured?.bin === row.bin);
     const what = row.explainedBy ?? (line ? `${line.check}, ${line.line}` : 'unexplained');
     const text = `${T.frequency(row.frequency)}, ${T.level(row.level)} dBFS, ${intrusion ? 'intrusion, ' : ''}${where}: ${what}`;
-    parts.push(markerGroup(withMinus(text), shape), textElement(left + 18, cy + 3.5, withMinus(text), { 'font-size': SMALL }));
+    const shown = clipped(withMinus(text), WIDTH - left - 18 - 12, SMALL);
+    parts.push(markerGroup(shown, shape), textElement(left + 18, cy + 3.5, shown, { 'font-size': SMALL }));
   });
   let height = shown.length * step;
   if (rows.length > shown.length) {

@@ -3,6 +3,7 @@ import { quantityText } from '../text/quantity-text.js';
 
 const T = quantityText('svg');
 import { element, textElement } from './svg-element.js';
+import { clipped } from './typography.js';
 
 const FONT = 10;
 const ROW = 14;
@@ -26,8 +27,8 @@ const COLUMNS: readonly Column[] = [
   { title: 'verdict', at: 872, align: 'end', cell: (c) => (c.pass ? 'pass' : 'FAIL') },
 ];
 
-/** Longest cell text kept in the 'check' and 'aliased to' columns (the JSON has the rest). */
-const CLIP = { check: 36, alias: 58 } as const;
+/** Widest cell text kept in the 'check' and 'aliased to' columns, px: to the next column, less room for its widest figures (the JSON has the rest). */
+const CLIP = { check: 262 - 32 - 8, alias: 612 - 262 - 62 } as const;
 
 /**
  * The checks of one candidate as a table drawn in SVG text: key number,
@@ -55,16 +56,11 @@ export function checkTable(checks: readonly ReportedCheck[], left: number, top: 
   parts.push(line(top + ROW - 1));
   checks.forEach((check, index) => {
     const cells = COLUMNS.map((col) => col.cell(check, index + 1));
-    cells[1] = clip(cells[1]!, CLIP.check);
-    cells[2] = clip(cells[2]!, CLIP.alias);
+    cells[1] = clipped(cells[1]!, CLIP.check, FONT, { bold: !check.pass });
+    cells[2] = clipped(cells[2]!, CLIP.alias, FONT, { bold: !check.pass });
     row(top + (index + 2) * ROW - 3, cells, !check.pass);
   });
   const height = (checks.length + 1) * ROW + 4;
   parts.push(line(top + height - 2));
   return { markup: element('g', { class: 'checks' }, parts.join('')), height };
-}
-
-function clip(text: string, most: number): string {
-  const chars = [...text];
-  return chars.length <= most ? text : chars.slice(0, most - 1).join('') + '…';
 }

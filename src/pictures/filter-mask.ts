@@ -12,7 +12,7 @@ import { FILL } from './patterns.js';
 import { linearScale, type Scale } from './scale.js';
 import { findCandidate } from './spectrum.js';
 import { element, pointList, textElement } from './svg-element.js';
-import { TEXT_DESCENT, textWidth, withMinus } from './typography.js';
+import { clipped, TEXT_DESCENT, textWidth, withMinus } from './typography.js';
 import { svgDocument, type Figure } from './svg-document.js';
 
 const T = quantityText('svg');
@@ -23,6 +23,8 @@ const LABEL_ROWS = 4;
 const LABEL_ROW = 12;
 const PLOT_HEIGHT = 280;
 const SMALL = 9.5;
+/** Width a heading line may take, px. */
+const ROOM = WIDTH - 24 - 12;
 /** Samples of the filter curve per pixel of plot width. */
 const SAMPLES_PER_PX = 2;
 
@@ -208,11 +210,11 @@ function heading(report: PlanReport, c: ReportedCandidate): string {
     : 'out-of-band level not stated: full scale assumed, reported only';
   const worst = mask.worst ? `; least margin ${T.decibels(mask.worst.marginDb)} dB at ${T.extent(mask.worst.low, mask.worst.high)}` : '';
   return (
-    textElement(24, 22, `Anti-alias filter mask at ${c.label} (${T.rate(c.rate)}): ${report.scenario}`, {
+    textElement(24, 22, clipped(`Anti-alias filter mask at ${c.label} (${T.rate(c.rate)}): ${report.scenario}`, ROOM, 14, { bold: true }), {
       'font-size': 14,
       'font-weight': 'bold',
     }) +
-    textElement(24, 40, `${level}; threshold ${T.level(mask.threshold)} dBFS${worst}`, { 'font-size': 11 }) +
+    textElement(24, 40, clipped(`${level}; threshold ${T.level(mask.threshold)} dBFS${worst}`, ROOM, 11), { 'font-size': 11 }) +
     textElement(
       24,
       56,

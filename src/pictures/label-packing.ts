@@ -1,4 +1,4 @@
-import { textWidth } from './typography.js';
+import { textWidth, type TextStyle } from './typography.js';
 
 /** A label to place on one of a few rows, centred on `x` when it can be. */
 export interface LabelRequest<T> {
@@ -63,6 +63,8 @@ export function packLabels<T>(
     let done = false;
     for (const text of texts) {
       const width = textWidth(text, fontSize, { bold: request.bold });
+      // A text wider than the room is never placed: its short text is tried instead.
+      if (width > bounds[1] - bounds[0]) continue;
       const half = width / 2;
       const leader = request.leader;
       // Centred on its point; with a leader, also just beside it on either side (the leader then runs past the text).
@@ -98,14 +100,21 @@ export function packLabels<T>(
  * @param width px
  * @param fontSize px
  * @param separator put between phrases on one line
+ * @param style bold, italic (wider)
  * @example wrapPhrases(['1 H2 wanted', '2 LO leak'], 500, 10, '   ') // ['1 H2 wanted   2 LO leak']
  */
-export function wrapPhrases(phrases: readonly string[], width: number, fontSize: number, separator: string): string[] {
+export function wrapPhrases(
+  phrases: readonly string[],
+  width: number,
+  fontSize: number,
+  separator: string,
+  style: TextStyle = {},
+): string[] {
   const lines: string[] = [];
   let line = '';
   for (const phrase of phrases) {
     const joined = line === '' ? phrase : line + separator + phrase;
-    if (line !== '' && textWidth(joined, fontSize) > width) {
+    if (line !== '' && textWidth(joined, fontSize, style) > width) {
       lines.push(line);
       line = phrase;
     } else line = joined;

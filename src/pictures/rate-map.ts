@@ -6,7 +6,7 @@ import type { RateWindow } from '../windows/rate-window.js';
 import { horizontalAxis } from './axis.js';
 import { frequencyUnit, inUnit } from './frequency-unit.js';
 import { packLabels, wrapPhrases, type PlacedLabel } from './label-packing.js';
-import { TEXT_DESCENT, textWidth } from './typography.js';
+import { clipped, TEXT_DESCENT, textWidth } from './typography.js';
 import { boxSwatch, legendRows, LEGEND_FONT } from './legend.js';
 import { candidateMarker, failMarker, passMarker } from './markers.js';
 import { linearTicks, logTicks } from './nice-ticks.js';
@@ -28,6 +28,9 @@ const BLOCKED_ROWS = 4;
 /** A bracket (3 px) over its label's text, clear of the row above's descenders. */
 const BLOCKED_ROW = 15;
 const SMALL = 9.5;
+/** The lane's "not marked" note under its title. */
+const NOTE_FONT = 8.5;
+const NOTE_LINE = 10;
 
 interface Lane {
   readonly title: string;
@@ -35,8 +38,8 @@ interface Lane {
   readonly candidates: readonly PlacedLabel<ReportedCandidate>[];
   readonly markers: readonly ReportedCandidate[];
   readonly blocked: readonly PlacedLabel<BlockedGroup>[];
-  /** Key numbers of the checks whose brackets found no row. */
-  readonly thinned: readonly number[];
+  /** "not marked: …" naming the key numbers of the checks whose brackets found no row, wrapped to the title column. */
+  readonly thinned: readonly string[];
   readonly height: number;
 }
 
@@ -138,8 +141,10 @@ function heading(report: PlanReport): string {
   const { band, guard, search } = report;
   const sub = `wanted ${T.extent(band.low, band.high)}, guards ${T.frequency(guard.low)} below / ${T.frequency(guard.high)} above; rates searched ${T.extent(search.minRate, search.maxRate)}`;
   return (
-    textElement(LEFT - 100, 22, `Sampling-rate map: ${report.scenario}`, { 'font-size': 14, 'font-weight': 'bold' }) +
-    textElement(LEFT - 100, 40, sub, { 'font-size': 11 })
+    textElement(LEFT - 100, 22, clipped(`Sampling-rate map: ${report.scenario}`, WIDTH - LEFT + 100 - 12, 14, { bold: true }), {
+      'font-size': 14,
+      'font-weight': 'bold',
+    }) + textElement(LEFT - 100, 40, clipped(sub, WIDTH - LEFT + 100 - 12, 11), { 'font-size': 11 })
   );
 }
 
@@ -178,17 +183,29 @@ function lane(
   );
   const candidateRows = rowsUsed(placedCandidates);
   const blockedRows = rowsUsed(placedBlocked);
+  const unmarked = groups
+    .filter((g) => !placedBlocked.some((p) => p.item === g))
+    .flatMap((g) => g.keys)
+    .sort((a, b) => a - b);
+  const thinned =
+    unmarked.length === 0
+      ? []
+      : wrapPhrases(['not marked:', ...unmarked.map((k, i) => `${k}${i < unmarked.length - 1 ? ',' : ''}`)], LEFT - 18, NOTE_FONT, ' ', {
+          italic: true,
+        });
   return {
     title,
     window,
     candidates: placedCandidates,
     markers: candidates,
     blocked: placedBlocked,
-    thinned: groups
-      .filter((g) => !placedBlocked.some((p) => p.item === g))
-      .flatMap((g) => g.keys)
-      .sort((a, b) => a - b),
-    height: Math.max(candidateRows * CANDIDATE_ROW + BODY + blockedRows * BLOCKED_ROW + 10, 34),
+    thinned,
+    // Room for the blocked rows, and for the lines of "not marked" under the lane's title.
+    height: Math.max(
+      candidateRows * CANDIDATE_ROW + BODY + blockedRows * BLOCKED_ROW + 10,
+      34,
+      candidateRows * CANDIDATE_ROW + 4 + BODY / 2 + 16 + thinned.length * NOTE_LINE,
+    ),
   };
 }
 
@@ -203,14 +220,11 @@ function drawLane(l: Lane, top: number, scale: Scale, report: PlanReport, index:
   const bodyTop = top + 4 + candidateRows * CANDIDATE_ROW;
   const mid = bodyTop + BODY / 2;
   parts.push(textElement(LEFT - 10, mid + 4, l.title, { 'text-anchor': 'end', 'font-size': 11, 'font-weight': 'bold' }));
-  if (l.thinned.length > 0)
+  l.thinned.forEach((line, i) =>
     parts.push(
-      textElement(LEFT - 10, mid + 16, `not marked: ${l.thinned.join(', ')}`, {
-        'text-anchor': 'end',
-        'font-size': 8.5,
-        'font-style': 'italic',
-      }),
-    );
+      textElement(LEFT - 10, mid + 16 + i * NOTE_LINE, line, { 'text-anchor': 'end', 'font-size': NOTE_FONT, 'font-style': 'italic' }),
+    ),
+  );
   const w = l.window;
   if (w) {
     const [a, b] = [scale.at(w.minRate), scale.at(Math.min(w.maxRate, report.search.maxRate))];

@@ -8,7 +8,7 @@ import { horizontalAxis, numberTicks, verticalAxis } from './axis.js';
 import { checkTable } from './check-table.js';
 import { frequencyUnit, inUnit } from './frequency-unit.js';
 import { packLabels } from './label-packing.js';
-import { TEXT_DESCENT, textWidth } from './typography.js';
+import { clipped, TEXT_DESCENT, textWidth } from './typography.js';
 import { boxSwatch, legendRows } from './legend.js';
 import { coveringTicks, linearTicks } from './nice-ticks.js';
 import { FILL } from './patterns.js';
@@ -23,6 +23,8 @@ const LABEL_ROWS = 5;
 const LABEL_ROW = 12;
 const PLOT_HEIGHT = 260;
 const SMALL = 9.5;
+/** Width a heading line may take, px. */
+const ROOM = WIDTH - 24 - 12;
 
 /**
  * The spectrum after sampling at one candidate's nominal rate, over
@@ -271,8 +273,13 @@ function heading(report: PlanReport, c: ReportedCandidate): string {
     ? `passes; worst margin ${T.frequency(c.worstMargin)} (${c.limitedBy})`
     : `FAILS; limited by ${c.limitedBy}, margin ${T.frequency(c.worstMargin)}`;
   return (
-    textElement(24, 22, `Spectrum after sampling at ${c.label}: ${report.scenario}`, { 'font-size': 14, 'font-weight': 'bold' }) +
-    textElement(24, 40, `rate ${T.rate(c.rate)} ${T.tolerance(c.tolerancePpm)}; ${zone}; ${verdict}`, { 'font-size': 11 }) +
+    textElement(24, 22, clipped(`Spectrum after sampling at ${c.label}: ${report.scenario}`, ROOM, 14, { bold: true }), {
+      'font-size': 14,
+      'font-weight': 'bold',
+    }) +
+    textElement(24, 40, clipped(`rate ${T.rate(c.rate)} ${T.tolerance(c.tolerancePpm)}; ${zone}; ${verdict}`, ROOM, 11), {
+      'font-size': 11,
+    }) +
     textElement(24, 56, 'Labels: key, check, level, margin to the wanted image.', { 'font-size': SMALL, 'font-style': 'italic' })
   );
 }

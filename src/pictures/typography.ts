@@ -27,7 +27,7 @@ export interface TextStyle {
 const CLASSES: ReadonlyArray<readonly [RegExp, number, number]> = [
   [/[ '.,:;·!|/()[\]ijlIfrt-]/u, 0.4, 0.5],
   [/[a-kn-vx-z0-9"*°–_?µJLFT]/u, 0.65, 0.74],
-  [/[A-Z&Ω]/u, 0.8, 0.87],
+  [/[A-LN-VX-Z&Ω]/u, 0.8, 0.87],
 ];
 /** Every other character (m, w, M, W, %, −, ±, ×, ≤, …, → and anything unmeasured), em. */
 const WIDEST: readonly [number, number] = [1.0, 1.1];
@@ -35,8 +35,13 @@ const WIDEST: readonly [number, number] = [1.0, 1.1];
 /** Tallest ink above the baseline (capitals, parentheses, the bar) and deepest below it (g, p, y, parentheses), em. */
 export const TEXT_ASCENT = 0.8;
 export const TEXT_DESCENT = 0.25;
-/** How far an oblique face leans past the last advance at the ascent, em. */
+/** Ascent of a text holding a character outside the measured set (an accented capital reaches about 0.93 em). */
+const TALL_ASCENT = 1.0;
+/** Characters whose advance and height were measured: printable ASCII and the symbols the pictures write. */
+const MEASURED = /^[\x20-\x7e−±×÷≤≥…→·–—°µΩ]*$/u;
+/** How far an oblique face leans past the last advance at the ascent, and before the origin at the descent, em. */
 const ITALIC_LEAN = 0.2;
+const ITALIC_BACK = 0.1;
 
 /**
  * Width a line of sans-serif text may ink, px: the sum of its characters'
@@ -65,7 +70,9 @@ export interface TextBox {
 
 /**
  * The box a <text> may ink, from its anchor point, anchor and size: its
- * textWidth across, TEXT_ASCENT above the baseline and TEXT_DESCENT below.
+ * textWidth across (an italic face also leans a little before its origin),
+ * TEXT_ASCENT above the baseline (more for a character outside the measured
+ * set, such as an accented capital) and TEXT_DESCENT below.
  *
  * @param x, y the anchor point, px (y is the baseline)
  * @param text the words
@@ -84,5 +91,25 @@ export function textBox(
 ): TextBox {
   const width = textWidth(text, fontSize, style);
   const left = anchor === 'start' ? x : anchor === 'middle' ? x - width / 2 : x - width;
-  return { left, top: y - TEXT_ASCENT * fontSize, right: left + width, bottom: y + TEXT_DESCENT * fontSize };
+  const ascent = MEASURED.test(text) ? TEXT_ASCENT : TALL_ASCENT;
+  const back = style.italic ? ITALIC_BACK * fontSize : 0;
+  return { left: left - back, top: y - ascent * fontSize, right: left + width, bottom: y + TEXT_DESCENT * fontSize };
+}
+
+/**
+ * The text as it fits `width` px: whole when it does, else cut at a
+ * character and ended with an ellipsis (the tables and the JSON keep the
+ * whole text).
+ *
+ * @param text the words
+ * @param width px available
+ * @param fontSize px
+ * @param style bold, italic
+ * @example clipped('Sampling-rate map: Heron-4 base', 100, 10) // 'Sampling-rate …'
+ */
+export function clipped(text: string, width: number, fontSize: number, style: TextStyle = {}): string {
+  if (textWidth(text, fontSize, style) <= width) return text;
+  const chars = [...text];
+  while (chars.length > 0 && textWidth(chars.join('') + '…', fontSize, style) > width) chars.pop();
+  return chars.join('') + '…';
 }

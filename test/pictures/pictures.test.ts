@@ -136,7 +136,7 @@ describe('spectrum after sampling', () => {
 
 describe('band-position chart', () => {
   it('labels the axes, the zones, the design line and every candidate', () => {
-    const texts = checkPicture('band-position-board', bandPositionSvg(board), 900);
+    const texts = checkPicture('band-position-board', bandPositionSvg(board), 960);
     expect(texts).toContain('upper band edge / bandwidth, fH/B');
     expect(texts).toContain('sampling rate / bandwidth, fs/B');
     // Guarded band 63–77 MHz: fH/B = 77/14 = 5.5 (picture-plan.ts).
@@ -150,7 +150,7 @@ describe('band-position chart', () => {
     const document = parseSvg(svg);
     // fH/B = 1411/12 = 117.58; the x axis ends at the next 20 (140): zones 1..139.
     expect(document.getElementsByTagName('polygon').length).toBe(139);
-    const texts = checkPicture('band-position-high-if-one', svg, 900);
+    const texts = checkPicture('band-position-high-if-one', svg, 960);
     expect(texts.filter((t) => /^(best in|centre of|[A-Z]+-)[^:]*: /.test(t))).toEqual([
       `${high.best!}: ${texts.find((t) => t.startsWith(`${high.best!}: `))!.slice(high.best!.length + 2)}`,
     ]);
@@ -172,7 +172,7 @@ describe('edge cases', () => {
     const report = reportOf(heronLowPassScenario());
     expect(report.windows.map((w) => w.zone)).toEqual([1]);
     // Guarded band 0–12 MHz: fH/B = 1.
-    expect(checkPicture('band-position-low-pass', bandPositionSvg(report), 900)).toContain('this design: fH/B = 1');
+    expect(checkPicture('band-position-low-pass', bandPositionSvg(report), 960)).toContain('this design: fH/B = 1');
     expect(checkPicture('rate-map-low-pass', rateMapSvg(report), 960)).toContain('zone 1');
   });
 });

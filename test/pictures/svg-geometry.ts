@@ -1,6 +1,6 @@
-import type { Element } from '@xmldom/xmldom';
+import { DOMParser, onWarningStopParsing, type Element } from '@xmldom/xmldom';
 import { textBox, type TextBox } from '../../src/pictures/typography.js';
-import { parseSvg, rootOf } from './svg-check.js';
+import { rootOf } from './svg-check.js';
 
 /**
  * Reads any SVG the tool writes back into geometry, with no knowledge of
@@ -17,6 +17,10 @@ export type Box = TextBox;
 export interface PlacedText {
   readonly text: string;
   readonly box: Box;
+  /** How it is set: px, weight, slant. */
+  readonly size: number;
+  readonly bold: boolean;
+  readonly italic: boolean;
   /** Position in document (drawing) order. */
   readonly order: number;
 }
@@ -47,6 +51,8 @@ export interface Geometry {
   readonly width: number;
   readonly height: number;
   readonly texts: readonly PlacedText[];
+  /** Each text's words and setting (for the ink check of the model). */
+  readonly settings: ReadonlyArray<{ text: string; size: number; bold: boolean; italic: boolean }>;
   readonly segments: readonly Segment[];
   /** White rectangles that hide what was drawn before them. */
   readonly plates: ReadonlyArray<{ readonly box: Box; readonly order: number }>;
@@ -182,7 +188,8 @@ const isWhite = (fill: string | null) => fill === '#fff' || fill === '#ffffff' |
  * @returns texts, segments, plates and markers in the root's user units
  */
 export function geometryOf(svg: string): Geometry {
-  const root = rootOf(parseSvg(svg));
+  // Well-formedness is checked by the picture tests (parseSvg, two parsers); here @xmldom/xmldom alone reads the tree.
+  const root = rootOf(new DOMParser({ onError: onWarningStopParsing }).parseFromString(svg, 'image/svg+xml'));
   const texts: PlacedText[] = [];
   const segments: Segment[] = [];
   const plates: Array<{ box: Box; order: number }> = [];
@@ -261,7 +268,7 @@ export function geometryOf(svg: string): Geometry {
           [local.left, local.bottom],
           [local.right, local.top],
         ]);
-        texts.push({ text: content, box, order: here });
+        texts.push({ text: content, box, order: here, size: state.fontSize, bold: state.bold, italic: state.italic });
         return;
       }
       case 'line':
@@ -331,7 +338,8 @@ export function geometryOf(svg: string): Geometry {
     classes: [],
     marker: null,
   });
-  return { width, height, texts, segments, plates, markers, strayMarks };
+  const settings = texts.map(({ text, size, bold, italic }) => ({ text, size, bold, italic }));
+  return { width, height, texts, settings, segments, plates, markers, strayMarks };
 }
 
 /** Overlap tolerance, px: boxes or a stroke may touch or graze by this much (anti-aliasing, rounding to 0.01 px). */
@@ -343,16 +351,19 @@ function overlap(a: Box, b: Box): boolean {
 
 /** The part of a segment inside a box (Liang–Barsky), or null when it misses. */
 function clipToBox(s: Segment, box: Box): [number, number, number, number] | null {
+  if (Math.max(s.x1, s.x2) <= box.left || Math.min(s.x1, s.x2) >= box.right) return null;
+  if (Math.max(s.y1, s.y2) <= box.top || Math.min(s.y1, s.y2) >= box.bottom) return null;
   const dx = s.x2 - s.x1;
   const dy = s.y2 - s.y1;
   let t0 = 0;
   let t1 = 1;
-  for (const [p, q] of [
+  const edges: ReadonlyArray<readonly [number, number]> = [
     [-dx, s.x1 - box.left],
     [dx, box.right - s.x1],
     [-dy, s.y1 - box.top],
     [dy, box.bottom - s.y1],
-  ] as const) {
+  ];
+  for (const [p, q] of edges) {
     if (p === 0) {
       if (q <= 0) return null;
     } else {
@@ -379,11 +390,11 @@ const shown = (b: Box) => `[${b.left.toFixed(1)}, ${b.top.toFixed(1)} – ${b.ri
  * text, marker or segment outside the viewBox; a marker that names no label
  * drawn in the picture, or a round mark outside any marker group.
  *
- * @param svg SVG text
+ * @param svg SVG text, or its geometry
  * @returns the collisions, described
  */
-export function collisions(svg: string): string[] {
-  const g = geometryOf(svg);
+export function collisions(svg: string | Geometry): string[] {
+  const g = typeof svg === 'string' ? geometryOf(svg) : svg;
   const out: string[] = [];
   const view: Box = { left: 0, top: 0, right: g.width, bottom: g.height };
   for (const t of g.texts) if (!inside(t.box, view)) out.push(`text outside the picture: "${t.text}" ${shown(t.box)}`);
@@ -400,7 +411,7 @@ export function collisions(svg: string): string[] {
   for (const s of g.segments) {
     if (s.grid) continue;
     for (const t of g.texts) {
-      const part = clipToBox({ ...s }, grow(t.box, s.halfWidth - GRAZE));
+      const part = clipToBox(s, grow(t.box, s.halfWidth - GRAZE));
       if (!part) continue;
       const hidden = g.plates.some(
         (p) =>
