@@ -105,7 +105,7 @@ export function textBox(
  * @param width px available
  * @param fontSize px
  * @param style bold, italic
- * @example clipped('Sampling-rate map: Heron-4 base', 100, 10) // 'Sampling-rate …'
+ * @example [...clipped('Sampling-rate map: Heron-4 base', 100, 10)].length // 15 (14 characters and the ellipsis)
  */
 export function clipped(text: string, width: number, fontSize: number, style: TextStyle = {}): string {
   if (textWidth(text, fontSize, style) <= width) return text;
