@@ -1,12 +1,14 @@
 import type { Hz, Ppm } from '../units/quantities.js';
 import type { ClockPart, Goal, Scenario } from '../scenario/scenario.js';
 import { contextFromScenario } from '../solve/context-from-scenario.js';
-import { evaluateRate, type RateEvaluation } from '../solve/evaluate-rate.js';
 import type { PlanContext } from '../solve/plan-context.js';
 import { bestShiftAndRate, type ShiftSearch } from '../solve/if-shift/best-shift-and-rate.js';
 import { planReport, type PlanReport } from './plan-report.js';
 import { judgeRates, solvePlan, type PlanResult } from './solve-plan.js';
 import { afterRateInputs } from '../after-rate/after-rate.js';
+
+// planAtRate lives apart so that `verify` judging one rate loads neither the candidate search nor the LP solver.
+export { planAtRate } from './plan-at-rate.js';
 
 /** What a caller may change about a scenario's plan without editing the scenario. */
 export interface PlanOptions {
@@ -87,20 +89,6 @@ export function solveCandidates(
   const context = contextFromScenario(planned);
   options.onStage?.('finding the feasible rates and planning the clock parts');
   return { planned, context, result: solvePlan(context) };
-}
-
-/**
- * The plan's exact verdict at one rate: every check judged over the given
- * drift, as the candidates of planScenario are judged.
- *
- * @param scenario a validated scenario
- * @param rate the sampling rate, Hz
- * @param tolerancePpm ± drift of that rate, ppm (0: the nominal rate only)
- * @returns the evaluation: zone, inversion, image, every check, worst margin and pass
- * @example planAtRate(heronBase, hz(184.32e6), ppm(0)).pass // true
- */
-export function planAtRate(scenario: Scenario, rate: Hz, tolerancePpm: Ppm): RateEvaluation {
-  return evaluateRate(contextFromScenario(scenario), rate, tolerancePpm);
 }
 
 /**

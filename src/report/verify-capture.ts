@@ -7,7 +7,7 @@ import type { Interferer } from '../interferers/interferer.js';
 import { levelThreshold } from '../interferers/level-threshold.js';
 import { foldExtent } from '../math/fold-extent.js';
 import { PAPER_DESIGN_CAUTION } from '../plan/caution.js';
-import { planAtRate } from '../plan/plan-scenario.js';
+import { planAtRate } from '../plan/plan-at-rate.js';
 import { limitText } from '../solve/limited-by.js';
 import { binDistance, foldCycles } from '../capture/coherent-bins.js';
 import { captureTones, movedScenario, type CaptureRecord, type CaptureTone } from '../capture/capture-tones.js';
