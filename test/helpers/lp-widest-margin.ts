@@ -9,9 +9,17 @@ import { lpSolver } from '../../src/solve/lp-solver.js';
  * then, lexicographically, holding every varying slack at t* or above, the
  * worst varying slack. The model is scaled (r = low + x·width, t in units of
  * `unit`) because that solver rounds its answers to 1e-8. Returns null when the
- * solver calls the model infeasible.
+ * solver calls the model infeasible. `breaksItsModel` is true when the solver's
+ * own answer violates a constraint of its model by more than its rounding
+ * (javascript-lp-solver 1.0.3 does so on some near-degenerate models, e.g. a
+ * constant slack of 0 beside a line crossing 0 within 1e-8 units of the range's
+ * low end): such an answer is no reference.
  */
-export function lpWidestMargin(slacks: readonly LinearSlack[], range: Interval, unit: number): { rate: number; worstSlack: number } | null {
+export function lpWidestMargin(
+  slacks: readonly LinearSlack[],
+  range: Interval,
+  unit: number,
+): { rate: number; worstSlack: number; breaksItsModel: boolean } | null {
   const first = solveStage(slacks, [], range, unit);
   if (!first) return null;
   const varying = slacks.filter((s) => Math.abs(s.slope * (range.high - range.low)) > 1e-9 * unit);
@@ -25,7 +33,7 @@ export function lpWidestMargin(slacks: readonly LinearSlack[], range: Interval, 
           unit,
         )
       : null;
-  return { rate: second ? second.rate : first.rate, worstSlack: first.worstSlack };
+  return { rate: second ? second.rate : first.rate, worstSlack: first.worstSlack, breaksItsModel: first.breaksItsModel };
 }
 
 /**
@@ -53,5 +61,9 @@ function solveStage(bounds: readonly LinearSlack[], held: readonly LinearSlack[]
   const solution = lpSolver.Solve({ optimize: 't', opType: 'max', constraints, variables: { t, x } }) as Record<string, unknown>;
   if (solution['feasible'] !== true) return null;
   const fraction = Math.min(Math.max(Number(solution['x'] ?? 0), 0), 1);
-  return { rate: range.low + fraction * width, worstSlack: (Number(solution['t'] ?? 0) - shift) * unit };
+  const rate = range.low + fraction * width;
+  const worstSlack = (Number(solution['t'] ?? 0) - shift) * unit;
+  // The model's own rows at the answer, in units (its rounding is 1e-8 units; ten times that allowed).
+  const breaksItsModel = bounds.some((s) => worstSlack / unit > (s.slope * rate + s.offset) / unit + 1e-7);
+  return { rate, worstSlack, breaksItsModel };
 }

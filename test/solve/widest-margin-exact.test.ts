@@ -92,7 +92,7 @@ describe('widest margin against independent references (fast-check)', () => {
         expect(Math.abs(answer.worstSlack - best)).toBeLessThanOrEqual(1e-12 * scale);
         expect(Math.abs(worst(slacks, answer.rate) - best)).toBeLessThanOrEqual(1e-12 * scale);
       }),
-      { numRuns: 400 },
+      { numRuns: 400, seed: 1031031731 },
     );
   });
 
@@ -102,6 +102,7 @@ describe('widest margin against independent references (fast-check)', () => {
         const exact = maximiseWorstSlack(slacks, range, hz(unit))!;
         const lp = lpWidestMargin(slacks, range, unit);
         expect(lp).not.toBeNull();
+        fc.pre(!lp!.breaksItsModel); // an answer that violates the reference's own model is no reference
         // The LP rounds its variables to about 1e-8: x (the rate as a fraction of the width) costs S·1e-8·width of
         // slack at the steepest slope S, and t itself 1e-8 units; ten times both.
         const steepest = Math.max(...slacks.map((s) => Math.abs(s.slope)));
@@ -111,7 +112,7 @@ describe('widest margin against independent references (fast-check)', () => {
         const varying = slacks.filter((s) => Math.abs(s.slope * (range.high - range.low)) > 1e-9 * unit);
         if (varying.length > 0) expect(worst(varying, exact.rate)).toBeGreaterThanOrEqual(worst(varying, lp!.rate) - allowance);
       }),
-      { numRuns: 300 },
+      { numRuns: 300, seed: 1031031731 }, // this seed meets a model the reference breaks (discarded above),
     );
   });
 });
