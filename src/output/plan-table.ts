@@ -42,7 +42,11 @@ export function planTable(report: PlanReport, width = 100): string {
       if (report.channels.length > 1)
         for (const channel of focus.channels)
           sections.push(
-            afterRateSection({ ...focus, label: `${focus.label}, channel ${channel.label}`, afterRate: channel.afterRate }, false, width),
+            afterRateSection(
+              { ...focus, label: `${focus.label}, channel ${channel.label}`, afterRate: channel.afterRate ?? null },
+              false,
+              width,
+            ),
           );
       else sections.push(afterRateSection(focus, false, width));
     }

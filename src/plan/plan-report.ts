@@ -71,14 +71,20 @@ export interface ReportedChannelResult {
   readonly limitedByKind: LimitKind;
   /** Every check against this channel passes, and its anti-alias mask where an out-of-band level is stated. */
   readonly pass: boolean;
-  /** The checks against this channel, labelled as its own interferers are (listed as the candidate's checks are). */
-  readonly checks: readonly ReportedCheck[];
   /**
-   * What the rate asks for this channel: its anti-alias mask, filter orders,
-   * noise folding and NCO word (for one band, the candidate's own afterRate);
-   * null when the report was built without them.
+   * With several channels, the checks against this channel, labelled as its
+   * own interferers are (listed as the candidate's checks are). Absent for a
+   * single wanted band: they are the candidate's own `checks`, not written
+   * twice (with a thousand clock parts the copy alone was megabytes).
    */
-  readonly afterRate: AfterRate | null;
+  readonly checks?: readonly ReportedCheck[];
+  /**
+   * With several channels, what the rate asks for this channel: its
+   * anti-alias mask, filter orders, noise folding and NCO word; null when the
+   * report was built without them. Absent for a single wanted band: it is the
+   * candidate's own `afterRate`.
+   */
+  readonly afterRate?: AfterRate | null;
 }
 
 export interface ReportedCandidate {
@@ -337,8 +343,7 @@ function channelResults(
   listing: Listing,
   after: readonly (AfterRate | null)[],
 ): ReportedChannelResult[] {
-  if (!e.channels)
-    return [reportedChannelResult({ ...e, label: context.channels?.[0]?.label ?? 'wanted' }, context, listing, after[0] ?? null)];
+  if (!e.channels) return [channelSummary({ ...e, label: context.channels?.[0]?.label ?? 'wanted' }, after[0] ?? null)];
   const plans = channelPlans(context);
   return e.channels.map((c, i) => reportedChannelResult(c, plans[i]!, listing, after[i] ?? null));
 }
@@ -356,6 +361,15 @@ function reportedChannelResult(c: ChannelEvaluation, plan: PlanContext, listing:
   const byLabel = labelsOf(plan.interferers);
   const listed = listedChecks(c.checks, c.checkScope === 'all', c.limitedBy, listing);
   return {
+    ...channelSummary(c, after),
+    checks: listed.checks.map((check) => reportedCheck(check, byLabel, c.rate)),
+    afterRate: after,
+  };
+}
+
+/** A channel's zone, centre, margins and verdict at a candidate's rate, without its checks and figures after the rate. */
+function channelSummary(c: ChannelEvaluation, after: AfterRate | null): ReportedChannelResult {
+  return {
     label: c.label,
     zone: c.zone,
     inverted: c.inverted,
@@ -369,8 +383,6 @@ function reportedChannelResult(c: ChannelEvaluation, plan: PlanContext, listing:
     limitedBy: limitText(c.limitedBy),
     limitedByKind: c.limitedBy.kind,
     pass: c.pass && (after === null || after.mask.pass),
-    checks: listed.checks.map((check) => reportedCheck(check, byLabel, c.rate)),
-    afterRate: after,
   };
 }
 
