@@ -331,9 +331,10 @@ function nearestFailing(
   const { minRate, maxRate } = context.limits;
   const tie = TIE * (context.band.high - context.band.low);
   let screened = 0;
+  const memory = { index: 0 };
   const slackOf = (settings: RateSettings, floor: number) => {
     screened++;
-    return worstSlackAt(context, blocking, rateOf(part.frequency, settings), part.tolerancePpm, floor);
+    return worstSlackAt(context, blocking, rateOf(part.frequency, settings), part.tolerancePpm, floor, memory);
   };
   let best: { settings: RateSettings; slack: number } | undefined;
   // The CLIMBED largest slacks screened so far, ascending: a rate below the smallest cannot start a climb or win.
