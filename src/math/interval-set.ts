@@ -24,35 +24,6 @@ export function mergeIntervals(intervals: readonly Interval[]): Interval[] {
   return merged;
 }
 
-/**
- * A closed interval minus a union of open intervals: the closed pieces left.
- * A piece narrower than the edge tolerance is floating-point residue between
- * two open intervals that meet exactly in theory, and is dropped, unless the
- * closed interval itself is a single point.
- *
- * @param closed the interval kept from, low ≤ high
- * @param open removed open intervals (low, high), any order
- * @returns disjoint closed pieces in ascending order
- * @example subtractOpen({low: 0, high: 10}, [{low: 2, high: 4}]) // [{low: 0, high: 2}, {low: 4, high: 10}]
- */
-export function subtractOpen(closed: Interval, open: readonly Interval[]): Interval[] {
-  const pieces: Interval[] = [];
-  let start = closed.low;
-  for (const hole of mergeIntervals(open)) {
-    if (hole.high <= start) continue;
-    if (hole.low >= closed.high) break;
-    if (hole.low < start) {
-      start = hole.high;
-      continue;
-    }
-    pieces.push({ low: start, high: hole.low });
-    start = hole.high;
-  }
-  if (start <= closed.high) pieces.push({ low: start, high: closed.high });
-  const point = closed.low === closed.high;
-  return pieces.filter((p) => point || !sameEdge(p.low, p.high));
-}
-
 /** Whether a closed range meets one of the open intervals. */
 export function meetsOpen(range: Interval, open: readonly Interval[]): boolean {
   return open.some((o) => range.high > o.low && range.low < o.high);
@@ -65,9 +36,10 @@ export function meetsOpen(range: Interval, open: readonly Interval[]): boolean {
  * exactly at a closed edge leaves that edge. Edges within the edge tolerance
  * of each other count as one edge, whichever way the rounding fell, so a
  * point that exact arithmetic keeps is neither lost (holes overlapping by
- * noise) nor widened into a sliver (holes apart by noise). Used where a
- * single exact rate is an answer (several bands together); `subtractOpen`
- * keeps its own rule for one band.
+ * noise) nor widened into a sliver (holes apart by noise). The one rule of
+ * every feasible set (one band, several channels, several bands): a single
+ * valid rate is an answer (at 0 ppm the exact minimum can be one; with a
+ * tolerance the drift analysis judges it).
  *
  * @param closed the interval kept from, low ≤ high
  * @param open removed open intervals (low, high), any order
@@ -90,8 +62,17 @@ export function subtractOpenKeepingPoints(closed: Interval, open: readonly Inter
   return pieces;
 }
 
-/** Sorted open intervals, merged only where they overlap by more than the edge tolerance (touching ones stay apart). */
-function mergeOverlapping(intervals: readonly Interval[]): Interval[] {
+/**
+ * Sorts open intervals and merges those that overlap by more than the edge
+ * tolerance; touching ones, (a, p) and (p, b), stay apart, since the point p
+ * between them belongs to neither (mergeIntervals, for closed pieces, would
+ * join them and lose it).
+ *
+ * @param intervals open intervals (low, high), any order
+ * @returns disjoint open intervals in ascending order
+ * @example mergeOverlapping([{low: 4, high: 6}, {low: 2, high: 4}, {low: 5, high: 7}]) // [{low: 2, high: 4}, {low: 4, high: 7}]
+ */
+export function mergeOverlapping(intervals: readonly Interval[]): Interval[] {
   const sorted = [...intervals].sort((a, b) => a.low - b.low);
   const merged: Interval[] = [];
   for (const next of sorted) {

@@ -1,7 +1,7 @@
 import type { Hz } from '../units/quantities.js';
 import { hz } from '../units/quantities.js';
 import type { Band } from '../math/band.js';
-import { subtractOpen, subtractOpenKeepingPoints, type Interval } from '../math/interval-set.js';
+import { subtractOpenKeepingPoints, type Interval } from '../math/interval-set.js';
 import { commonWindows } from '../windows/common-windows.js';
 import { channelCheckLabel } from './limited-by.js';
 import type { RateLimits, RateWindow } from '../windows/rate-window.js';
@@ -39,7 +39,9 @@ export interface FeasibleSet {
 
 /**
  * The exact feasible set: the legal windows minus every blocking
- * interferer's forbidden rates.
+ * interferer's forbidden rates. A rate left alone between two forbidden
+ * (open) intervals, or between one and a window edge, is kept as a single
+ * point (subtractOpenKeepingPoints), the same rule as for several channels.
  *
  * @param windows legal windows with finite edges, Hz
  * @param interferers all interferers; only blocking ones remove rates
@@ -64,7 +66,7 @@ export function feasibleSet(windows: readonly RateWindow[], interferers: readonl
         });
       }
     }
-    for (const piece of subtractOpen({ low: window.minRate, high: window.maxRate }, holes)) {
+    for (const piece of subtractOpenKeepingPoints({ low: window.minRate, high: window.maxRate }, holes)) {
       feasible.push({ zone: window.zone, inverted: window.inverted, minRate: hz(piece.low), maxRate: hz(piece.high) });
     }
   }

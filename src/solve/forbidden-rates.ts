@@ -1,6 +1,6 @@
 import type { Hz } from '../units/quantities.js';
 import type { Band } from '../math/band.js';
-import { mergeIntervals, type Interval } from '../math/interval-set.js';
+import { mergeOverlapping, type Interval } from '../math/interval-set.js';
 import { closeRates, nearbyImages, normalisedExtent, type NormalisedExtent } from './fold-images.js';
 import type { Interferer } from '../interferers/interferer.js';
 
@@ -26,7 +26,8 @@ export function forbiddenRates(interferer: Interferer, band: Band, minRate: Hz, 
 /**
  * The rates inside [minRate, maxRate] at which an extent comes closer than
  * `reach` to the band's alias: one open interval per image j·r ± band
- * (`closeRates`), merged. The algebra of `forbiddenRates`, for any extent:
+ * (`closeRates`), merged where they overlap (two that only touch stay apart:
+ * the rate between them is valid, the margin there exactly the reach). The algebra of `forbiddenRates`, for any extent:
  * another channel's band is one too (rate multiple 0, the inter-channel
  * spacing as its reach).
  *
@@ -43,5 +44,5 @@ export function closeImageRates(extent: NormalisedExtent, reach: Hz, band: Band,
     const close = closeRates(extent, band, term, reach);
     if (close && close.high > minRate && close.low < maxRate) found.push(close);
   }
-  return mergeIntervals(found);
+  return mergeOverlapping(found);
 }
