@@ -2,9 +2,10 @@ import { db, type Db } from '../units/quantities.js';
 import type { AntiAliasFilter } from '../scenario/scenario.js';
 import { leastAttenuation } from '../filter/filter-attenuation.js';
 import type { AliasBand } from './alias-bands.js';
+import { ANTI_ALIAS_MASK, limitInChannel, limitText, type Limit } from '../solve/limited-by.js';
 
-/** The label the mask check carries when it blocks a rate. */
-export const MASK_CHECK = 'anti-alias mask';
+/** The label the mask check carries when it blocks a rate: the text of its limit. */
+export const MASK_CHECK: string = limitText(ANTI_ALIAS_MASK);
 
 /** One alias band with what the filter must give there and what it gives. */
 export interface MaskBand extends AliasBand {
@@ -70,4 +71,34 @@ export function filterMask(
     worst,
     pass: !levelStated || worst === null || worst.marginDb >= 0,
   };
+}
+
+/** One channel's mask at a rate, with the channel's label (null for a single wanted band). */
+export interface ChannelMask {
+  readonly channel: string | null;
+  /** Null when the after-rate figures were not computed. */
+  readonly mask: FilterMask | null;
+}
+
+/**
+ * What limits a rate once its anti-alias masks are judged: while a frequency
+ * check or the zone edge fails, the checks' own limit; when they all pass
+ * but a mask falls short, the anti-alias mask (of the channel that falls
+ * shortest, named when it is one of several); else the checks' limit.
+ *
+ * @param limit what limits the frequency checks (the evaluation's limitedBy)
+ * @param checksPass whether every frequency check and the zone edge pass (the evaluation's pass)
+ * @param masks each channel's mask (one entry with channel null for one wanted band)
+ * @returns the limit to show
+ * @example limitWithMasks({ kind: 'zone edge' }, true, [{ channel: null, mask: filterMask([{ multiple: 1, sense: 'mirrored', low: hz(15e6), high: hz(19e6) }], null, db(-20), db(-80)) }]) // { kind: 'anti-alias mask' }
+ */
+export function limitWithMasks(limit: Limit, checksPass: boolean, masks: readonly ChannelMask[]): Limit {
+  if (!checksPass) return limit;
+  let shortest: { channel: string | null; marginDb: number } | null = null;
+  for (const { channel, mask } of masks) {
+    if (mask === null || mask.pass || mask.worst === null) continue;
+    if (shortest === null || mask.worst.marginDb < shortest.marginDb) shortest = { channel, marginDb: mask.worst.marginDb };
+  }
+  if (shortest === null) return limit;
+  return shortest.channel === null ? ANTI_ALIAS_MASK : limitInChannel(ANTI_ALIAS_MASK, shortest.channel);
 }

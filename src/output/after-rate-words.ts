@@ -3,6 +3,7 @@ import type { AfterRate } from '../after-rate/after-rate.js';
 import { MASK_CHECK, type MaskBand } from '../after-rate/filter-mask.js';
 import type { ReportedCandidate } from '../plan/plan-report.js';
 import type { VariantVerdict } from '../plan/compare-report.js';
+import { channelCheckLabel } from '../solve/limited-by.js';
 
 /*
  * The after-rate figures in words and table rows, shared by the text table
@@ -173,16 +174,23 @@ export function wrapText(text: string, width = 100): string {
 }
 
 /**
- * Why the mask fails a candidate, in words; null when it does not (no level
- * stated, or every alias band holds).
+ * Why the mask fails a candidate, in words (with several channels, the
+ * channel whose mask falls shortest, named as limitedBy names it); null when
+ * no mask fails (no level stated, or every alias band holds).
  *
  * @example maskShortfall(candidate) // null (the mask holds at the best rate)
  */
 export function maskShortfall(candidate: ReportedCandidate, text: QuantityText = TERMINAL): string | null {
-  const mask = candidate.afterRate?.mask;
-  if (!mask || mask.pass || mask.worst === null) return null;
-  const w = mask.worst;
-  return `${MASK_CHECK}: the filter gives ${text.decibels(w.givenDb)} dB at ${text.extent(w.low, w.high)} where ${text.decibels(w.requiredDb)} dB is needed (short by ${text.decibels(-w.marginDb)} dB)`;
+  let shortest: { label: string; worst: MaskBand } | null = null;
+  for (const channel of candidate.channels) {
+    const mask = channel.afterRate?.mask;
+    if (!mask || mask.pass || mask.worst === null) continue;
+    if (shortest === null || mask.worst.marginDb < shortest.worst.marginDb) shortest = { label: channel.label, worst: mask.worst };
+  }
+  if (shortest === null) return null;
+  const w = shortest.worst;
+  const check = candidate.channels.length > 1 ? channelCheckLabel(shortest.label, MASK_CHECK) : MASK_CHECK;
+  return `${check}: the filter gives ${text.decibels(w.givenDb)} dB at ${text.extent(w.low, w.high)} where ${text.decibels(w.requiredDb)} dB is needed (short by ${text.decibels(-w.marginDb)} dB)`;
 }
 
 /**
@@ -201,14 +209,14 @@ export function filterOrdersText(v: Pick<VariantVerdict, 'rate' | 'filterOrders'
 /**
  * A candidate's verdict in a word or three: "pass", "FAIL", "FAIL: mask"
  * when only the anti-alias mask fails it (a stated out-of-band level the
- * filter cannot hold back), "FAIL, mask too" when the mask fails besides.
+ * filter cannot hold back: limitedByKind 'anti-alias mask'), "FAIL, mask
+ * too" when a mask fails besides.
  *
  * @example candidateVerdict(candidate) // 'pass' (the demo's best rate; 'FAIL: mask' where only the anti-alias mask fails)
  */
 export function candidateVerdict(candidate: ReportedCandidate): string {
   if (candidate.pass) return 'pass';
-  const mask = candidate.afterRate?.mask;
-  if (!mask || mask.pass) return 'FAIL';
-  const restPasses = candidate.zone !== null && candidate.zoneEdgeMargin >= 0 && candidate.checks.every((c) => c.pass);
-  return restPasses ? 'FAIL: mask' : 'FAIL, mask too';
+  if (candidate.limitedByKind === 'anti-alias mask') return 'FAIL: mask';
+  const maskFails = candidate.channels.some((c) => c.afterRate !== null && !c.afterRate.mask.pass);
+  return maskFails ? 'FAIL, mask too' : 'FAIL';
 }

@@ -334,7 +334,7 @@ function verdict(report: PlanReport): string {
   const failing = nearest.checks.filter((c) => !c.pass).sort((a, b) => a.margin - a.requiredMargin - (b.margin - b.requiredMargin))[0];
   const shortfall = maskShortfall(nearest);
   const cause =
-    shortfall !== null && failing === undefined && nearest.zoneEdgeMargin >= 0
+    shortfall !== null && nearest.limitedByKind === 'anti-alias mask'
       ? shortfall
       : failing
         ? `${failing.label} lands ${T.frequency(failing.margin)} from the band where ${T.frequency(failing.requiredMargin)} is required (short by ${T.frequency(failing.requiredMargin - failing.margin)})`

@@ -4,6 +4,7 @@ import type { PartPlan, RateSettings } from '../clocks/part-plan.js';
 import { limitText, type LimitKind } from '../solve/limited-by.js';
 import { PAPER_DESIGN_CAUTION } from './caution.js';
 import { afterRate, type AfterRateInputs } from '../after-rate/after-rate.js';
+import { limitWithMasks, type FilterMask } from '../after-rate/filter-mask.js';
 import type { PrototypeOrders } from '../after-rate/prototype-order.js';
 
 /** Why a part has no verdict on a variant. */
@@ -20,7 +21,7 @@ export interface VariantVerdict {
   /** Margin minus requirement of the limiting check, Hz: what parts are ranked by. */
   readonly worstSlack: Hz;
   readonly limitedBy: string;
-  /** What limitedBy names: 'interferer', 'zone edge', or 'not planned' for a part the variant cannot plan. */
+  /** What limitedBy names: 'interferer', 'zone edge', 'anti-alias mask' (every frequency check passes, the mask fails), or 'not planned' for a part the variant cannot plan. */
   readonly limitedByKind: LimitKind | 'not planned';
   /** Null when the nominal rate fails. */
   readonly headroomPpm: { readonly down: Ppm; readonly up: Ppm } | null;
@@ -149,6 +150,14 @@ function verdict(variant: string, plan: PartPlan, inputs: AfterRateInputs | null
   const e = plan.evaluation;
   const after = inputs === null ? null : afterRate(inputs, plan.rate, e.tolerancePpm, e.center, e.inverted);
   const masks = channelMasks(inputs, plan);
+  // Every frequency check passing and a mask failing: the mask limits the rate.
+  const limit = limitWithMasks(
+    e.limitedBy,
+    plan.pass,
+    e.channels && masks
+      ? e.channels.map((c, i) => ({ channel: c.label, mask: masks[i]! }))
+      : [{ channel: null, mask: after?.mask ?? null }],
+  );
   return {
     variant,
     rate: plan.rate,
@@ -157,35 +166,38 @@ function verdict(variant: string, plan: PartPlan, inputs: AfterRateInputs | null
     inverted: e.inverted,
     worstMargin: e.worstMargin,
     worstSlack: e.worstSlack,
-    limitedBy: limitText(e.limitedBy),
-    limitedByKind: e.limitedBy.kind,
+    limitedBy: limitText(limit),
+    limitedByKind: limit.kind,
     headroomPpm: plan.headroom ? { down: plan.headroom.downPpm, up: plan.headroom.upPpm } : null,
     jitterSnrDb: plan.snr.jitterSnrDb,
     channelSnrDb: plan.snr.channelSnrDb,
     filterOrders: after ? after.design.orders : null,
     maskMarginDb: after?.mask.worst ? after.mask.worst.marginDb : null,
     // Several channels: every channel's mask must hold too.
-    pass: plan.pass && (after === null || after.mask.pass) && (masks?.every((m) => m) ?? true),
+    pass: plan.pass && (after === null || after.mask.pass) && (masks?.every((m) => m.pass) ?? true),
     ...(e.channels
       ? {
-          channels: e.channels.map((c, i) => ({
-            label: c.label,
-            zone: c.zone,
-            inverted: c.inverted,
-            nco: c.center,
-            worstMargin: c.worstMargin,
-            limitedBy: limitText(c.limitedBy),
-            limitedByKind: c.limitedBy.kind,
-            pass: c.pass && (masks?.[i] ?? true),
-          })),
+          channels: e.channels.map((c, i) => {
+            const channelLimit = limitWithMasks(c.limitedBy, c.pass, [{ channel: null, mask: masks?.[i] ?? null }]);
+            return {
+              label: c.label,
+              zone: c.zone,
+              inverted: c.inverted,
+              nco: c.center,
+              worstMargin: c.worstMargin,
+              limitedBy: limitText(channelLimit),
+              limitedByKind: channelLimit.kind,
+              pass: c.pass && (masks?.[i]?.pass ?? true),
+            };
+          }),
         }
       : {}),
   };
 }
 
-/** With several channels, whether each channel's own anti-alias mask holds at the part's rate; null for one band. */
-function channelMasks(inputs: AfterRateInputs | null, plan: PartPlan): boolean[] | null {
+/** With several channels, each channel's own anti-alias mask at the part's rate; null for one band. */
+function channelMasks(inputs: AfterRateInputs | null, plan: PartPlan): FilterMask[] | null {
   const e = plan.evaluation;
   if (!inputs?.channels || !e.channels) return null;
-  return e.channels.map((c, i) => afterRate(inputs.channels![i]!, plan.rate, e.tolerancePpm, c.center, c.inverted).mask.pass);
+  return e.channels.map((c, i) => afterRate(inputs.channels![i]!, plan.rate, e.tolerancePpm, c.center, c.inverted).mask);
 }

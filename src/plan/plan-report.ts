@@ -12,6 +12,7 @@ import { nextLimit, type NextLimit } from '../solve/next-limit.js';
 import { PAPER_DESIGN_CAUTION } from './caution.js';
 import { shiftReport, type ShiftReport } from './shift-report.js';
 import { afterRate, channelSnrWithDriver, type AfterRate, type AfterRateInputs } from '../after-rate/after-rate.js';
+import { limitWithMasks } from '../after-rate/filter-mask.js';
 import { unfixableConflicts, type Conflict } from '../solve/unfixable-conflicts.js';
 import type { DerivationSummary } from '../interferers/derive-interferers.js';
 import { listedChecks, listedInterferers, type ChecksListed, type Listing } from './listing.js';
@@ -66,7 +67,7 @@ export interface ReportedChannelResult {
   readonly zoneEdgeMargin: Hz;
   readonly worstMargin: Hz;
   readonly worstSlack: Hz;
-  /** The check with the least slack against this channel: an interferer's label (as in checks) or "zone edge". */
+  /** The check with the least slack against this channel: an interferer's label (as in checks), "zone edge", or "anti-alias mask" when only its mask fails. */
   readonly limitedBy: string;
   readonly limitedByKind: LimitKind;
   /** Every check against this channel passes, and its anti-alias mask where an out-of-band level is stated. */
@@ -103,9 +104,9 @@ export interface ReportedCandidate {
   readonly image: { readonly low: Hz; readonly high: Hz } | null;
   readonly zoneEdgeMargin: Hz;
   readonly worstMargin: Hz;
-  /** The limiting check in words: an interferer's label, "zone edge". */
+  /** The limiting check in words: an interferer's label, "zone edge", or "anti-alias mask" when every frequency check passes and the mask fails. */
   readonly limitedBy: string;
-  /** What kind of check limitedBy names: 'interferer' or 'zone edge' (so that a label reading "zone edge" is never the zone edge). */
+  /** What kind of check limitedBy names: 'interferer', 'zone edge' or 'anti-alias mask' (so that a label reading "zone edge" is never the zone edge). */
   readonly limitedByKind: LimitKind;
   readonly worstSlack: Hz;
   readonly pass: boolean;
@@ -295,6 +296,11 @@ function reportedCandidate(
       ? e.channels.map((c, i) => afterRate(after.channels![i]!, e.rate, e.tolerancePpm, c.center, c.inverted))
       : [atRate];
   const masksPass = channelAfter.every((a) => a === null || a.mask.pass);
+  // A rate every frequency check passes but a mask fails is limited by that mask.
+  const masks = e.channels
+    ? e.channels.map((c, i) => ({ channel: c.label, mask: channelAfter[i]?.mask ?? null }))
+    : [{ channel: null, mask: atRate?.mask ?? null }];
+  const limit = limitWithMasks(e.limitedBy, e.pass, masks);
   return {
     label: candidate.label,
     origin: candidate.origin,
@@ -308,8 +314,8 @@ function reportedCandidate(
     image: e.image,
     zoneEdgeMargin: e.zoneEdgeMargin,
     worstMargin: e.worstMargin,
-    limitedBy: limitText(e.limitedBy),
-    limitedByKind: e.limitedBy.kind,
+    limitedBy: limitText(limit),
+    limitedByKind: limit.kind,
     worstSlack: e.worstSlack,
     pass: e.pass && masksPass,
     settings: candidate.settings ? { N: candidate.settings.N, M: candidate.settings.M, D: candidate.settings.D } : null,
@@ -360,6 +366,7 @@ function reportedCheck(check: CheckResult, byLabel: ReadonlyMap<string, Interfer
 function reportedChannelResult(c: ChannelEvaluation, plan: PlanContext, listing: Listing, after: AfterRate | null): ReportedChannelResult {
   const byLabel = labelsOf(plan.interferers);
   const listed = listedChecks(c.checks, c.checkScope === 'all', c.limitedBy, listing);
+  const limit = limitWithMasks(c.limitedBy, c.pass, [{ channel: null, mask: after?.mask ?? null }]);
   return {
     ...channelSummary(c, after),
     checks: listed.checks.map((check) => reportedCheck(check, byLabel, c.rate)),
@@ -380,8 +387,8 @@ function channelSummary(c: ChannelEvaluation, after: AfterRate | null): Reported
     zoneEdgeMargin: c.zoneEdgeMargin,
     worstMargin: c.worstMargin,
     worstSlack: c.worstSlack,
-    limitedBy: limitText(c.limitedBy),
-    limitedByKind: c.limitedBy.kind,
+    limitedBy: limitText(limit),
+    limitedByKind: limit.kind,
     pass: c.pass && (after === null || after.mask.pass),
   };
 }

@@ -11,7 +11,13 @@ export type Limit =
   /** A feasible interval ends at the converter's slowest or fastest rate. */
   | { readonly kind: 'rate limit' }
   /** Under the decimation goal, a clock part none of whose rates is a whole multiple of the output rate. */
-  | { readonly kind: 'no whole multiple of the output rate' };
+  | { readonly kind: 'no whole multiple of the output rate' }
+  /**
+   * Every frequency check passes but the anti-alias filter falls short of the
+   * mask over an alias band (a stated out-of-band level); set after the rate
+   * (src/after-rate/), never by the solver. With several channels, the channel's label.
+   */
+  | { readonly kind: 'anti-alias mask'; readonly channel?: string };
 
 /** The kinds of limit, as the JSON's `…Kind` fields write them. */
 export type LimitKind = Limit['kind'];
@@ -19,6 +25,7 @@ export type LimitKind = Limit['kind'];
 export const ZONE_EDGE: Limit = { kind: 'zone edge' };
 export const RATE_LIMIT: Limit = { kind: 'rate limit' };
 export const NO_WHOLE_MULTIPLE: Limit = { kind: 'no whole multiple of the output rate' };
+export const ANTI_ALIAS_MASK: Limit = { kind: 'anti-alias mask' };
 
 /**
  * The limit set by one interferer.
@@ -39,10 +46,16 @@ export function interfererLimit(label: string): Limit {
  * @returns the text
  * @example limitText({ kind: 'zone edge' }) // 'zone edge'
  * @example limitText({ kind: 'zone edge', channel: 'L5' }) // 'L5: zone edge'
+ * @example limitText({ kind: 'anti-alias mask', channel: 'L5' }) // 'L5: anti-alias mask'
  */
 export function limitText(limit: Limit): string {
   if (limit.kind === 'interferer') return limit.label;
-  return limit.kind === 'zone edge' && limit.channel !== undefined ? `${limit.channel}: ${limit.kind}` : limit.kind;
+  return hasChannel(limit) && limit.channel !== undefined ? channelCheckLabel(limit.channel, limit.kind) : limit.kind;
+}
+
+/** The kinds of limit that belong to one channel of several. */
+function hasChannel(limit: Limit): limit is Extract<Limit, { channel?: string }> {
+  return limit.kind === 'zone edge' || limit.kind === 'anti-alias mask';
 }
 
 /**
@@ -61,7 +74,8 @@ export function channelCheckLabel(channel: string, label: string): string {
 
 /**
  * A channel's limit as the plan of several channels names it: an
- * interferer's label after the channel's, the zone edge with its channel.
+ * interferer's label after the channel's, the zone edge or the anti-alias
+ * mask with its channel.
  *
  * @param limit the limit within the channel
  * @param channel the channel's label
@@ -70,5 +84,5 @@ export function channelCheckLabel(channel: string, label: string): string {
  */
 export function limitInChannel(limit: Limit, channel: string): Limit {
   if (limit.kind === 'interferer') return interfererLimit(channelCheckLabel(channel, limit.label));
-  return limit.kind === 'zone edge' ? { kind: 'zone edge', channel } : limit;
+  return hasChannel(limit) ? { kind: limit.kind, channel } : limit;
 }

@@ -212,7 +212,8 @@ export const GLOSSARY: readonly GlossaryEntry[] = [
     kind: 'column',
     commands: PARTS,
     csv: ['limited_by', 'channel_limited_by'],
-    meaning: 'the check with the least margin beyond its requirement: an interferer\'s label, "zone edge" or "rate limit"',
+    meaning:
+      'the check with the least margin beyond its requirement: an interferer\'s label, "zone edge" or "rate limit"; "anti-alias mask" when every frequency check passes but the filter falls short of the mask (a stated out-of-band level)',
   },
   {
     term: 'verdict',

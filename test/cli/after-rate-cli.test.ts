@@ -1,4 +1,4 @@
-import { mkdtempSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
@@ -71,6 +71,54 @@ describe('after-rate outputs', () => {
     expect(run.status).toBe(1);
     // The verdict is prose wrapped to the width: read it as one line.
     expect(run.stdout.replace(/\s+/g, ' ')).toMatch(/No candidate passes\. Nearest: .*anti-alias mask: the filter gives/);
+  });
+
+  it('a candidate only the mask fails is limited by "anti-alias mask" in the JSON, the table, the CSV and the page', () => {
+    const weak = variant('weak-limit.json', {
+      filter: { kind: 'butterworth', order: 2, passLow: '128M', passHigh: '152M' },
+      filterMask: { outOfBandLevel: -20 },
+    });
+    type Json = {
+      label: string;
+      limitedBy: string;
+      limitedByKind: string;
+      pass: boolean;
+      zoneEdgeMargin: number;
+      worstSlack: number;
+      afterRate: { mask: { pass: boolean } };
+    };
+    const plan = JSON.parse(runBin('solve', weak, '--json').stdout) as { candidates: Json[] };
+    // Every frequency check and the zone edge pass (worst slack ≥ 0, inside the zone) but the mask fails: the mask limits.
+    const onlyMask = plan.candidates.filter((c) => c.worstSlack >= 0 && c.zoneEdgeMargin >= 0 && !c.afterRate.mask.pass);
+    expect(onlyMask.length).toBeGreaterThan(0);
+    for (const c of onlyMask) expect([c.limitedBy, c.limitedByKind, c.pass]).toEqual(['anti-alias mask', 'anti-alias mask', false]);
+    for (const c of plan.candidates.filter((c) => c.worstSlack < 0)) expect(c.limitedByKind).not.toBe('anti-alias mask');
+    // The terminal table: the row of such a candidate names the mask in "limited by".
+    const table = runBin('solve', weak, '--wide').stdout;
+    const row = table.split('\n').find((line) => line.includes(onlyMask[0]!.label) && line.includes('FAIL: mask'));
+    expect(row).toMatch(/anti-alias mask\s+FAIL: mask/);
+    // compare --csv: the limited_by column.
+    const [head, ...rows] = runBin('compare', weak, '--csv').stdout.trim().split(/\r?\n/);
+    const column = head!.split(',').indexOf('limited_by');
+    expect(rows.some((r) => r.split(',')[column] === 'anti-alias mask')).toBe(true);
+    // The review page: the candidates table's cell.
+    const page = join(dir, 'weak-limit.html');
+    expect(runBin('report', weak, '--html', page, '--force').status).toBe(1); // written; exit 1: no candidate passes
+    expect(readFileSync(page, 'utf8')).toContain('<td>anti-alias mask</td><td class="fail">FAIL: mask</td>');
+  });
+
+  it('several channels: the channel whose mask falls short is named, `channel: anti-alias mask`', () => {
+    const dual = variant('dual-limit.json', { extends: join(ROOT, 'scenarios/heron-dual.json'), filterMask: { outOfBandLevel: -20 } });
+    const plan = JSON.parse(runBin('solve', dual, '--json').stdout) as {
+      candidates: Array<{ limitedBy: string; limitedByKind: string; channels: Array<{ label: string; limitedByKind: string }> }>;
+    };
+    const limited = plan.candidates.filter((c) => c.limitedByKind === 'anti-alias mask');
+    expect(limited.length).toBeGreaterThan(0);
+    for (const c of limited) {
+      const channel = c.limitedBy.replace(/: anti-alias mask$/, '');
+      expect(c.channels.map((ch) => ch.label)).toContain(channel);
+      expect(c.channels.find((ch) => ch.label === channel)!.limitedByKind).toBe('anti-alias mask');
+    }
   });
 
   it("compare: the filter orders each part's rate needs", () => {

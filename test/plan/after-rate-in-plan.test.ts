@@ -4,6 +4,8 @@ import { solveScenario } from '../../src/plan/plan-scenario.js';
 import { planTable } from '../../src/output/plan-table.js';
 import { afterRateInputs, channelSnrWithDriver } from '../../src/after-rate/after-rate.js';
 import { scenarioFixture } from '../helpers/scenario-fixture.js';
+import { candidateVerdict } from '../../src/output/after-rate-words.js';
+import { limitText } from '../../src/solve/limited-by.js';
 
 /**
  * The after-rate figures inside the solved plan, on a scenario of our own (the invented Heron test fixture:
@@ -42,6 +44,29 @@ describe('after-rate figures in the plan report', () => {
     expect(planTable(report, 100).replace(/\s+/g, ' ')).toMatch(
       /No candidate passes\. Nearest: .*anti-alias mask: the filter gives 0\.0 dB at .* where 80\.0 dB is needed \(short by 80\.0 dB\)/,
     );
+  });
+
+  it('a candidate every frequency check passes but the mask fails is limited by the anti-alias mask; the others keep their check', () => {
+    // −20 dBFS out of band against the −100 dBFS threshold: 80 dB needed, 0 dB given with no filter (worked by hand).
+    const { result, report } = solved(withSettings({ outOfBandLevel: db(-20) }));
+    let maskLimited = 0;
+    for (const c of report.candidates) {
+      const solver = result.candidates.find((r) => r.label === c.label)!.evaluation;
+      expect(c.afterRate!.mask.worst!.marginDb).toBe(-80);
+      if (solver.pass) {
+        maskLimited++;
+        expect([c.limitedBy, c.limitedByKind]).toEqual(['anti-alias mask', 'anti-alias mask']);
+        expect([c.channels[0]!.limitedBy, c.channels[0]!.limitedByKind]).toEqual(['anti-alias mask', 'anti-alias mask']);
+        expect(candidateVerdict(c)).toBe('FAIL: mask');
+      } else {
+        expect([c.limitedBy, c.limitedByKind]).toEqual([limitText(solver.limitedBy), solver.limitedBy.kind]);
+        expect(candidateVerdict(c)).toBe('FAIL, mask too');
+      }
+    }
+    // Without the stated level the same candidates pass, limited by a frequency check.
+    expect(maskLimited).toBeGreaterThan(0);
+    const reportedOnly = solved(withSettings({})).report;
+    for (const c of reportedOnly.candidates) expect(c.limitedByKind).not.toBe('anti-alias mask');
   });
 
   it("a filter that holds the stated level keeps the solver's best; each candidate carries orders, noise and NCO settings", () => {
