@@ -2,6 +2,7 @@ import { db, hz, type Db, type Hz, type Ppm } from '../units/quantities.js';
 import type { Band } from '../math/band.js';
 import type { AfterRateSettings, AntiAliasFilter, Scenario } from '../scenario/scenario.js';
 import { levelThreshold } from '../interferers/level-threshold.js';
+import { requiredMarginOf } from '../interferers/interferer-draft.js';
 import { channelView } from '../scenario/channel-view.js';
 import { driftRange } from '../solve/drift.js';
 import type { Goal } from '../scenario/scenario.js';
@@ -16,7 +17,11 @@ import { decimationPlan, type DecimationPlan } from './decimation-plan.js';
 /** Everything the after-rate figures need from the scenario, fixed for every rate. */
 export interface AfterRateInputs {
   readonly band: Band;
-  /** Margin to keep from the wanted alias, Hz: the channel is widened by it for the mask. */
+  /**
+   * Margin to keep from the wanted alias, Hz: the channel is widened by it for the mask. The margin the solver
+   * requires of a signal at the filter input that states none of its own (an unlisted blocker, kind 'neighbour'):
+   * requirements.kindMargins.neighbour, else requirements.margin (maskMargin).
+   */
   readonly margin: Hz;
   readonly inputBandwidth: Hz;
   readonly filter: AntiAliasFilter | null;
@@ -50,13 +55,28 @@ function oneBandInputs(scenario: Scenario, goal: Goal): AfterRateInputs {
   const stated = scenario.afterRate.downConverter.outputRate;
   return {
     band: { low: scenario.wanted.low, high: scenario.wanted.high },
-    margin: scenario.requirements.margin,
+    margin: maskMargin(scenario),
     inputBandwidth: scenario.converter.inputBandwidth,
     filter: scenario.filter,
     threshold: levelThreshold(scenario),
     settings: scenario.afterRate,
     outputRate: stated ?? (goal.kind === 'decimation' ? goal.outputRate : null),
   };
+}
+
+/**
+ * The margin the anti-alias mask widens the channel by: the one the solver
+ * requires of the signals the mask holds back, a signal anywhere outside the
+ * channel at the filter input with no margin of its own, that is a blocker of
+ * kind 'neighbour' (requiredMarginOf: requirements.kindMargins.neighbour,
+ * else requirements.margin).
+ *
+ * @param scenario the validated scenario (or one channel's view of it)
+ * @returns Hz
+ * @example maskMargin(s) // 1e6 (no kind margins: the scenario's 1 MHz)
+ */
+export function maskMargin(scenario: Scenario): Hz {
+  return requiredMarginOf({ kind: 'neighbour', ownMargin: null }, scenario);
 }
 
 /** The filter orders a mask needs, for the channel and the nearest alias bands each side. */

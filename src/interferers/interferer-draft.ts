@@ -11,14 +11,16 @@ export type InterfererDraft = Omit<Interferer, 'requiredMargin' | 'blocking'> & 
 
 /**
  * The margin an interferer must keep, Hz: its signal's own where stated,
- * else its kind's (requirements.kindMargins), else the scenario's.
+ * else its kind's (requirements.kindMargins), else the scenario's. The one
+ * expression of a required margin: the solver's interferers and the
+ * anti-alias mask's alias bands (src/after-rate/) both take it from here.
  *
  * @param draft the draft (kind, ownMargin)
  * @param scenario the validated scenario
  * @returns Hz
  * @example requiredMarginOf({ kind: 'neighbour', ownMargin: hz(0) }, s) // 0 (its own margin wins over the scenario's)
  */
-export function requiredMarginOf(draft: InterfererDraft, scenario: Scenario): Hz {
+export function requiredMarginOf(draft: Pick<InterfererDraft, 'kind' | 'ownMargin'>, scenario: Scenario): Hz {
   const kindMargin = draft.kind === 'channel' ? undefined : scenario.requirements.kindMargins?.[draft.kind];
   return draft.ownMargin ?? kindMargin ?? scenario.requirements.margin;
 }
