@@ -182,7 +182,7 @@ export function wrapText(text: string, width = 100): string {
  */
 export function maskShortfall(candidate: ReportedCandidate, text: QuantityText = TERMINAL): string | null {
   let shortest: { label: string; worst: MaskBand } | null = null;
-  for (const channel of candidate.channels) {
+  for (const channel of channelFigures(candidate)) {
     const mask = channel.afterRate?.mask;
     if (!mask || mask.pass || mask.worst === null) continue;
     if (shortest === null || mask.worst.marginDb < shortest.worst.marginDb) shortest = { label: channel.label, worst: mask.worst };
@@ -217,6 +217,12 @@ export function filterOrdersText(v: Pick<VariantVerdict, 'rate' | 'filterOrders'
 export function candidateVerdict(candidate: ReportedCandidate): string {
   if (candidate.pass) return 'pass';
   if (candidate.limitedByKind === 'anti-alias mask') return 'FAIL: mask';
-  const maskFails = candidate.channels.some((c) => c.afterRate !== null && !c.afterRate.mask.pass);
+  const maskFails = channelFigures(candidate).some((c) => c.afterRate !== null && !c.afterRate.mask.pass);
   return maskFails ? 'FAIL, mask too' : 'FAIL';
+}
+
+/** Each channel's label with its figures after the rate: for a single wanted band, the candidate's own. */
+function channelFigures(candidate: ReportedCandidate): Array<{ label: string; afterRate: AfterRate | null }> {
+  if (candidate.channels.length <= 1) return [{ label: candidate.channels[0]?.label ?? 'wanted', afterRate: candidate.afterRate }];
+  return candidate.channels.map((c) => ({ label: c.label, afterRate: c.afterRate ?? null }));
 }

@@ -366,7 +366,6 @@ function reportedCheck(check: CheckResult, byLabel: ReadonlyMap<string, Interfer
 function reportedChannelResult(c: ChannelEvaluation, plan: PlanContext, listing: Listing, after: AfterRate | null): ReportedChannelResult {
   const byLabel = labelsOf(plan.interferers);
   const listed = listedChecks(c.checks, c.checkScope === 'all', c.limitedBy, listing);
-  const limit = limitWithMasks(c.limitedBy, c.pass, [{ channel: null, mask: after?.mask ?? null }]);
   return {
     ...channelSummary(c, after),
     checks: listed.checks.map((check) => reportedCheck(check, byLabel, c.rate)),
@@ -376,6 +375,8 @@ function reportedChannelResult(c: ChannelEvaluation, plan: PlanContext, listing:
 
 /** A channel's zone, centre, margins and verdict at a candidate's rate, without its checks and figures after the rate. */
 function channelSummary(c: ChannelEvaluation, after: AfterRate | null): ReportedChannelResult {
+  // Every frequency check against the channel passing and its mask failing: the mask limits it.
+  const limit = limitWithMasks(c.limitedBy, c.pass, [{ channel: null, mask: after?.mask ?? null }]);
   return {
     label: c.label,
     zone: c.zone,
