@@ -7,7 +7,8 @@ import { seededUniform } from './seeded-random.js';
 
 /** What a synthesised tone stands for. */
 export type ToneSource =
-  | { readonly kind: 'wanted'; readonly index: number }
+  /** The index-th tone of a channel's band (channel 0: the wanted band, or the first of several channels). */
+  | { readonly kind: 'wanted'; readonly index: number; readonly channel: number }
   | { readonly kind: 'neighbour'; readonly index: number }
   | { readonly kind: 'board spur'; readonly index: number; readonly harmonic: number }
   | { readonly kind: 'rate spur'; readonly numerator: number; readonly denominator: number }
@@ -35,6 +36,7 @@ export interface CaptureTone {
 
 /** Where the movable tones (inside bands) sit: whole-cycle offsets from their first place. */
 export interface ToneLayout {
+  /** Per wanted tone, channel by channel (the c-th channel's i-th tone at c·n + i for n tones per channel). */
   readonly wanted: readonly number[];
   readonly neighbours: readonly number[];
 }
@@ -43,7 +45,7 @@ export interface ToneLayout {
 export interface CaptureRecord {
   readonly rate: Hz;
   readonly samples: number;
-  /** Tones across the wanted band. */
+  /** Tones across the wanted band, or across each channel's band. */
   readonly wantedTones: number;
 }
 
@@ -59,19 +61,42 @@ export function wantedNominals(band: { readonly low: Hz; readonly high: Hz }, co
   return Array.from({ length: count }, (_, i) => hz(band.low + ((band.high - band.low) * (2 * i + 1)) / (2 * count)));
 }
 
+/** A band the capture puts wanted tones across: its band, strongest level and the prefix of its tones' labels. */
+export interface ToneBand {
+  readonly low: Hz;
+  readonly high: Hz;
+  readonly strongestLevel: Db;
+  /** `W` for the one wanted band (tones W1, W2, …); a channel's label and a dot for several channels (L1.1, L1.2, …). */
+  readonly prefix: string;
+}
+
+/**
+ * The bands the capture puts wanted tones across: the wanted band alone
+ * (tones W1, W2, …), or each channel of several (tones labelled by the
+ * channel: L1.1, L1.2, …, L5.1, …), in the scenario's order.
+ *
+ * @param scenario the validated scenario
+ * @returns one band per channel
+ * @example toneBands(s) // [{ low: 65e6, high: 75e6, prefix: 'W' }]
+ */
+export function toneBands(scenario: Scenario): ToneBand[] {
+  if (scenario.channels.length <= 1) return [{ ...scenario.wanted, prefix: 'W' }];
+  return scenario.channels.map((c) => ({ low: c.low, high: c.high, strongestLevel: c.strongestLevel, prefix: `${c.label}.` }));
+}
+
 /**
  * Each wanted tone's level: the strongest wanted level less 20·log10(n), so
  * that n tones in phase peak at the strongest level and the converter is not
  * overdriven (one tone: the strongest level itself). The per-tone back-off
  * is the usual one of multi-tone tests (common practice, no source).
  *
- * @param scenario the validated scenario (strongest wanted level, dBFS)
+ * @param band the wanted band or a channel (its strongest level, dBFS)
  * @param count number of wanted tones ≥ 1
  * @returns dBFS per tone
- * @example wantedToneLevel(s, 3) // -10.54 (−1 dBFS less 20·log10(3))
+ * @example wantedToneLevel(s.wanted, 3) // -10.54 (−1 dBFS less 20·log10(3))
  */
-export function wantedToneLevel(scenario: Scenario, count: number): Db {
-  return db(scenario.wanted.strongestLevel - 20 * Math.log10(count));
+export function wantedToneLevel(band: { readonly strongestLevel: Db }, count: number): Db {
+  return db(band.strongestLevel - 20 * Math.log10(count));
 }
 
 /**
@@ -98,7 +123,8 @@ export function movedScenario(scenario: Scenario, record: CaptureRecord): Scenar
  * Every tone of the capture, from the scenario as written (the moves are
  * made here, and reported as each tone's move):
  * - the wanted tones (wantedToneLevel), placed at whole cycles nearest their
- *   nominal places plus the layout's offsets;
+ *   nominal places plus the layout's offsets; with several channels, n
+ *   tones across each channel's band at that channel's level;
  * - each neighbour as a tone at its centre (plus its offset), at its level
  *   after the filter's least attenuation over the band (its strongest part,
  *   the level the plan uses);
@@ -139,9 +165,13 @@ export function captureTones(scenario: Scenario, record: CaptureRecord, layout: 
       phase: inPhase ? 0 : drawn,
     });
   };
-  const wantedLevel = wantedToneLevel(scenario, record.wantedTones);
-  wantedNominals(scenario.wanted, record.wantedTones).forEach((f, i) => {
-    add(`W${i + 1}`, { kind: 'wanted', index: i }, true, f, nearestCycles(f, rate, samples) + (layout.wanted[i] ?? 0), wantedLevel);
+  const n = record.wantedTones;
+  toneBands(scenario).forEach((band, channel) => {
+    const level = wantedToneLevel(band, n);
+    wantedNominals(band, n).forEach((f, i) => {
+      const cycles = nearestCycles(f, rate, samples) + (layout.wanted[channel * n + i] ?? 0);
+      add(`${band.prefix}${i + 1}`, { kind: 'wanted', index: i, channel }, true, f, cycles, level);
+    });
   });
   // A tone source is attenuated at the frequency it is synthesised at (where the re-derived plan puts it); a band over its extent.
   const at = (low: number, high: number, cycles: number) =>

@@ -44,7 +44,7 @@ export function inputIndex(tones: readonly CaptureTone[]): InputIndex {
 
 /**
  * The lines of one family (see LineFamily). For a mixing family, each term's
- * signal stands for its tones (the wanted band: every wanted tone; a
+ * signal stands for its tones (the wanted band or a channel: each of its tones; a
  * neighbour or a board spur harmonic: its one tone), and the term's plus
  * and minus picks are multisets of those tones: e.g. the 3rd harmonic of the
  * wanted band with tones W1, W2 gives 3·W1, 2·W1 + W2, W1 + 2·W2, 3·W2; the
@@ -108,7 +108,7 @@ function mixingLines(
       const s = t.source;
       const match =
         term.signal === 'wanted'
-          ? s.kind === 'wanted'
+          ? s.kind === 'wanted' && s.channel === term.index
           : term.signal === 'neighbour'
             ? s.kind === 'neighbour' && s.index === term.index
             : s.kind === 'board spur' && s.index === term.index && s.harmonic === term.harmonic;

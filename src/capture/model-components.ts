@@ -28,6 +28,8 @@ export interface ModelComponent {
   readonly amplitude: number;
   /** A wanted tone itself: the signal, not a spur. */
   readonly wanted: boolean;
+  /** For a wanted tone, the channel it belongs to (0: the wanted band, or the first channel). */
+  readonly channel?: number;
 }
 
 /** The model's components and whether the list is complete (see enumerateProducts). */
@@ -76,6 +78,7 @@ export function modelComponents(
       bin: foldCycles(cycles, samples),
       amplitude: p.amplitude,
       wanted: single >= 0 && tones[single]!.source.kind === 'wanted',
+      ...(single >= 0 && tones[single]!.source.kind === 'wanted' ? { channel: wantedChannel(tones[single]!) } : {}),
     };
   });
   const added = tones.flatMap((t, i) =>
@@ -101,4 +104,9 @@ export function modelComponents(
     });
   }
   return { components: [...products.filter((p) => p.amplitude >= cutoff), ...added, ...images], complete: list.complete };
+}
+
+/** The channel of a wanted tone. */
+function wantedChannel(tone: CaptureTone): number {
+  return tone.source.kind === 'wanted' ? tone.source.channel : 0;
 }

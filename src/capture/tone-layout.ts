@@ -1,6 +1,6 @@
 import type { Scenario } from '../scenario/scenario.js';
 import { binDistance, foldCycles } from './coherent-bins.js';
-import { captureTones, wantedNominals, type CaptureRecord, type ToneLayout } from './capture-tones.js';
+import { captureTones, toneBands, type CaptureRecord, type ToneLayout } from './capture-tones.js';
 
 /** How far a band's tone may be moved to find a clear place, whole cycles each way. */
 export const LAYOUT_SEARCH = 64;
@@ -53,13 +53,21 @@ export function chooseLayout(scenario: Scenario, record: CaptureRecord, componen
     least: Math.ceil((low * samples) / rate) - first,
     most: Math.floor((high * samples) / rate) - first,
   });
-  const layout = { wanted: wantedNominals(scenario.wanted, record.wantedTones).map(() => 0), neighbours: scenario.neighbours.map(() => 0) };
+  const bands = toneBands(scenario);
+  const layout = { wanted: new Array<number>(bands.length * record.wantedTones).fill(0), neighbours: scenario.neighbours.map(() => 0) };
   // Each movable tone and how far it may go.
   const movable = base.flatMap((t, i) => {
     const source = t.source;
     if (source.kind === 'wanted') {
+      // Each tone stays inside its own channel's band.
+      const band = bands[source.channel]!;
       return [
-        { offsets: layout.wanted, slot: source.index, tones: [i], allowed: range(scenario.wanted.low, scenario.wanted.high, t.cycles) },
+        {
+          offsets: layout.wanted,
+          slot: source.channel * record.wantedTones + source.index,
+          tones: [i],
+          allowed: range(band.low, band.high, t.cycles),
+        },
       ];
     }
     if (source.kind === 'neighbour') {

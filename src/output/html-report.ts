@@ -13,6 +13,7 @@ import { afterRateHtml } from './after-rate-html.js';
 import { candidateVerdict, filterOrdersText, maskShortfall } from './after-rate-words.js';
 import { filterMaskSvg } from '../pictures/filter-mask.js';
 import { glossarySection } from './html-glossary.js';
+import { channelReportView, severalChannels, type ChannelCandidate, type ChannelPlanReport } from '../pictures/channels.js';
 
 const T = quantityText('html');
 
@@ -110,19 +111,26 @@ function comparisonSection(report: CompareReport): string {
 
 function planSection(report: PlanReport): string {
   const focus = report.candidates.find((c) => c.label === report.best) ?? report.candidates[0];
+  const multi = severalChannels(report);
+  // With several channels, one band-position chart per channel (each its own band and verdicts).
+  const bandPositions = multi
+    ? multi.channels.map((_, i) => bandPositionSvg(channelReportView(multi, i), focus?.label))
+    : [bandPositionSvg(report, focus?.label)];
   const pictures = [
     rateMapSvg(report),
     focus ? spectrumSvg(report, focus.label) : '',
-    bandPositionSvg(report, focus?.label),
+    ...bandPositions,
     focus ? filterMaskSvg(report, focus.label) : '',
   ].filter((svg) => svg !== '');
   return [
     `<h2>${escapeXml(report.scenario)}</h2>`,
     inputsTables(report),
+    ...(multi ? [channelsTable(multi)] : []),
     windowsTable(report),
     feasibleTable(report),
     candidatesTable(report),
-    focus ? checksTable(focus) : '',
+    ...(multi ? [channelResultsTable(multi)] : []),
+    multi && focus ? channelChecksTables(focus as ChannelCandidate) : focus ? checksTable(focus) : '',
     report.ifShift ? shiftHtml(report.ifShift) : '',
     focus ? afterRateHtml(focus) : '',
     `<p><strong>${escapeXml(verdictLine(report, focus))}</strong></p>`,
@@ -226,7 +234,50 @@ function candidatesTable(report: PlanReport): string {
   return htmlTable(head, rows, "Candidates, best first (over each rate's whole tolerance)") + ties;
 }
 
-function checksTable(candidate: ReportedCandidate): string {
+/** The channels of a multi-channel plan: band, guards and levels of each. */
+function channelsTable(report: ChannelPlanReport): string {
+  return htmlTable(
+    ['channel', 'edges', 'guards', 'weakest level dBFS', 'strongest level dBFS'],
+    report.channels.map((c) => [
+      c.label,
+      T.extent(c.low, c.high),
+      `${T.frequency(c.guard.below)} below, ${T.frequency(c.guard.above)} above`,
+      c.weakestLevel === null ? '–' : T.level(c.weakestLevel),
+      c.strongestLevel === null ? '–' : T.level(c.strongestLevel),
+    ]),
+    `Channels (${report.channels.length}, digitised together by one converter)`,
+  );
+}
+
+/** Every candidate's result per channel: one row per candidate and channel, the candidate's rank and rate on its first row. */
+function channelResultsTable(report: ChannelPlanReport): string {
+  const rows = report.candidates.flatMap((c, i) =>
+    c.channels.map((ch, k) => [
+      k === 0 ? String(i + 1) : '',
+      k === 0 ? c.label : '',
+      k === 0 ? T.rate(c.rate) : '',
+      ch.label,
+      zoneText(ch),
+      ch.center === null ? '–' : T.rate(ch.center),
+      ch.nco === null ? '–' : `${T.rate(ch.nco)}${ch.conjugate ? ', conjugate' : ''}`,
+      T.frequency(ch.worstMargin),
+      ch.limitedBy,
+      verdictCell(ch.pass),
+    ]),
+  );
+  return htmlTable(
+    ['#', 'candidate', 'rate', 'channel', 'zone', 'centre after sampling', 'NCO', 'worst margin', 'limited by', 'verdict'],
+    rows,
+    'Each channel at each candidate (a candidate passes when every channel does)',
+  );
+}
+
+/** The checks of the candidate in focus, one table per channel (the checks against that channel). */
+function channelChecksTables(candidate: ChannelCandidate): string {
+  return candidate.channels.map((ch) => checksTable({ ...candidate, checks: ch.checks }, ` against channel ${ch.label}`)).join('\n');
+}
+
+function checksTable(candidate: ReportedCandidate, against = ''): string {
   const rows = orderedChecks(candidate.checks).map((c) => [
     c.label,
     c.kind,
@@ -241,7 +292,7 @@ function checksTable(candidate: ReportedCandidate): string {
   return htmlTable(
     ['check', 'kind', 'input at this rate', 'aliased to', 'margin', 'level dBFS', 'level margin dB', 'blocks', 'verdict'],
     rows,
-    `Checks at ${candidate.label} (${T.rate(candidate.rate)}), blocking checks first, tightest first`,
+    `Checks at ${candidate.label} (${T.rate(candidate.rate)})${against}, blocking checks first, tightest first`,
   );
 }
 

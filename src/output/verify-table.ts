@@ -10,7 +10,8 @@ const T = quantityText('terminal');
 
 /**
  * A simulated capture beside the plan, as text for people laid out for a
- * width: the record and converter model, the tones synthesised, every
+ * width: the record and converter model, the tones synthesised, with
+ * several channels each channel's plan beside its capture, every
  * predicted line with its measurement, the peaks the plan does not list,
  * the verdict, what was compared, and the caution.
  *
@@ -21,7 +22,9 @@ const T = quantityText('terminal');
  */
 export function verifyTable(result: VerifyResult, width = 100): string {
   const prose = (text: string) => wrapProse(text, width);
-  const sections = [heading(result, prose), tonesSection(result, width), linesSection(result, width)];
+  const sections = [heading(result, prose), tonesSection(result, width)];
+  if (result.channels.length > 1) sections.push(channelsSection(result, width));
+  sections.push(linesSection(result, width));
   const peaks = peaksSection(result.unlisted, width);
   if (peaks) sections.push(peaks);
   sections.push(prose(verdict(result)), prose(`What was compared: ${result.compared}`), prose(result.caution));
@@ -62,6 +65,40 @@ function tonesSection(r: VerifyResult, width: number): string {
     { head: 'level dBFS', align: 'right' },
   ];
   return wrapProse('Tones synthesised (moved to whole cycles of the record):', width) + '\n' + textTable(columns, rows, width);
+}
+
+/** Each channel: the plan's zone and image there beside where its tones show, the peaks on it, and its own verdict. */
+function channelsSection(r: VerifyResult, width: number): string {
+  const rows = r.channels.map((c) => [
+    c.label,
+    c.zone === null ? 'straddles' : `${c.zone}${c.inverted ? ' inv' : ''}`,
+    c.image.map(([low, high]) => T.extent(low, high)).join(', '),
+    c.tonesSeen === null ? '–' : `${c.tonesSeen} of ${r.wantedTones}`,
+    c.order ?? '–',
+    String(c.intrusions.length),
+    c.planPass ? 'pass' : 'FAIL',
+    c.consistent ? 'agrees' : 'contradicts',
+    T.level(c.threshold),
+  ]);
+  const columns: TextColumn[] = [
+    { head: 'channel', role: 'key', wrap: true },
+    { head: 'zone' },
+    { head: 'image (plan)', wrap: true },
+    { head: 'tones seen', align: 'right' },
+    { head: 'order seen' },
+    { head: 'peaks on it', align: 'right' },
+    { head: 'plan' },
+    { head: 'capture' },
+    { head: 'threshold dBFS', align: 'right', role: 'detail' },
+  ];
+  return (
+    wrapProse(
+      "Channels: the plan's zone and image of each beside where its tones show (rising: upright, falling: inverted) and the peaks above its threshold on it or within its margin:",
+      width,
+    ) +
+    '\n' +
+    textTable(columns, rows, width)
+  );
 }
 
 function linesSection(r: VerifyResult, width: number): string {
@@ -143,5 +180,17 @@ function verdict(r: VerifyResult): string {
     : '';
   const plan = r.plan.pass ? 'passes' : 'fails';
   if (r.consistent) return `Verdict: the capture agrees with the plan at ${T.rate(r.rate)} (the plan ${plan} there).${unsimulated}`;
+  // With several channels the verdict names each channel once: which agree, and each contradiction under its channel.
+  if (r.channels.length > 1) {
+    const agreeing = r.channels.filter((c) => c.consistent).map((c) => c.label);
+    const agree = agreeing.length > 0 ? `\nAgrees for ${agreeing.join(', ')}.` : '';
+    const own = new Set(r.channels.flatMap((c) => c.contradictions.map((w) => `${c.label}: ${w}`)));
+    const others = r.contradictions.filter((w) => !own.has(w));
+    const perChannel = r.channels
+      .filter((c) => !c.consistent)
+      .map((c) => `${c.label}:\n${c.contradictions.map((w) => `  - ${w}`).join('\n')}`);
+    const rest = others.length > 0 ? [`Peaks the plan does not list:\n${others.map((w) => `  - ${w}`).join('\n')}`] : [];
+    return `Verdict: the capture contradicts the plan at ${T.rate(r.rate)} (the plan ${plan} there):\n${[...perChannel, ...rest].join('\n')}${agree}${unsimulated}`;
+  }
   return `Verdict: the capture contradicts the plan at ${T.rate(r.rate)} (the plan ${plan} there):\n${r.contradictions.map((c) => `- ${c}`).join('\n')}${unsimulated}`;
 }

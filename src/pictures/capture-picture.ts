@@ -10,7 +10,7 @@ import { boxSwatch, legendRows, type LegendEntry } from './legend.js';
 import { failMarker, markerGroup } from './markers.js';
 import { maxHoldColumns } from './max-hold-columns.js';
 import { coveringTicks, linearTicks } from './nice-ticks.js';
-import { FILL } from './patterns.js';
+import { channelFill, FILL } from './patterns.js';
 import { linearScale, type Scale } from './scale.js';
 import { element, pointList, textElement } from './svg-element.js';
 import { clipped, TEXT_DESCENT, textWidth, withMinus } from './typography.js';
@@ -224,6 +224,38 @@ function wantedImage(r: VerifyResult, x: Scale, top: number, bottom: number): { 
     box(low - r.margin, low, FILL.guard, false);
     box(high, high + r.margin, FILL.guard, false);
   }
+  // With several channels: each channel's image in its own fill, named by its label (packed in rows at the plot's foot).
+  if (r.channels.length > 1) {
+    for (const [low, high] of r.channels.slice(1).flatMap((c) => c.image)) {
+      box(low - r.margin, low, FILL.guard, false);
+      box(high, high + r.margin, FILL.guard, false);
+    }
+    r.channels.forEach((c, i) => c.image.forEach(([low, high]) => box(low, high, channelFill(i), true)));
+    const names = packLabels(
+      r.channels.flatMap((c) => {
+        const widest = [...c.image].sort((p, q) => q[1] - q[0] - (p[1] - p[0]))[0];
+        return widest
+          ? [{ x: x.at((widest[0] + widest[1]) / 2), text: c.inverted ? `${c.label} (inverted)` : c.label, item: c, bold: true }]
+          : [];
+      }),
+      r.channels.length,
+      x.range,
+      SMALL,
+    );
+    const labels = names.map((p) => {
+      const w = p.width + 8;
+      const y0 = bottom - 20 - 16 * p.row;
+      return (
+        element('rect', { x: p.x - w / 2, y: y0, width: w, height: 14, fill: '#fff', stroke: '#1f4e79', 'stroke-width': 0.8 }) +
+        textElement(p.x, y0 + 11, p.text, { 'text-anchor': 'middle', 'font-size': SMALL, 'font-weight': 'bold' })
+      );
+    });
+    return {
+      fill: element('g', { class: 'wanted' }, fills.join('')),
+      outline: element('g', { class: 'wanted-outline' }, outlines.join('')),
+      label: element('g', { class: 'wanted-label' }, labels.join('')),
+    };
+  }
   for (const [low, high] of r.wantedImage) box(low, high, FILL.wanted, true);
   const first = r.wantedImage[0];
   let label = '';
@@ -336,7 +368,9 @@ function legendEntries(r: VerifyResult, intrusionBins: ReadonlySet<number>): Arr
   const contradicting = r.predictions.filter(contradicts).length;
   return [
     { swatch: line(undefined, 0.8), text: 'measured (max-hold, one column per pixel)' },
-    { swatch: boxSwatch(FILL.wanted), text: 'wanted image', drawn: r.wantedImage.length > 0 },
+    ...(r.channels.length > 1
+      ? r.channels.map((c, i) => ({ swatch: boxSwatch(channelFill(i)), text: `channel ${c.label}`, drawn: c.image.length > 0 }))
+      : [{ swatch: boxSwatch(FILL.wanted), text: 'wanted image', drawn: r.wantedImage.length > 0 }]),
     { swatch: boxSwatch(FILL.guard), text: `margin ${T.frequency(r.margin)}`, drawn: r.wantedImage.length > 0 && r.margin > 0 },
     { swatch: line('8 3 2 3', 1), text: withMinus(`threshold ${T.level(r.levels.threshold)} dBFS`) },
     {
@@ -372,21 +406,25 @@ function legendEntries(r: VerifyResult, intrusionBins: ReadonlySet<number>): Arr
 
 /** Intrusions, then the strongest unlisted peaks, one line each with their marker. */
 function peakList(r: VerifyResult, intrusionBins: ReadonlySet<number>, left: number, top: number): { markup: string; height: number } {
-  const rows: Array<{ row: PeakRow; intrusion: boolean }> = [
-    ...r.intrusions.map((row) => ({ row, intrusion: true })),
+  const several = r.channels.length > 1;
+  // With several channels each intrusion is named by the channel it lands on.
+  const rows: Array<{ row: PeakRow; intrusion: boolean; image: string }> = [
+    ...(several
+      ? r.channels.flatMap((c) => c.intrusions.map((row) => ({ row, intrusion: true, image: `the ${c.label} image` })))
+      : r.intrusions.map((row) => ({ row, intrusion: true, image: 'the wanted image' }))),
     ...r.unlisted
       .filter((u) => !intrusionBins.has(u.bin))
       .sort((a, b) => b.level - a.level)
-      .map((row) => ({ row, intrusion: false })),
+      .map((row) => ({ row, intrusion: false, image: several ? 'the nearest channel image' : 'the wanted image' })),
   ];
   if (rows.length === 0) return { markup: '', height: 0 };
   const step = 14;
   const parts: string[] = [];
   const shown = rows.slice(0, LISTED_PEAKS);
-  shown.forEach(({ row, intrusion }, i) => {
+  shown.forEach(({ row, intrusion, image }, i) => {
     const cy = top + i * step + 6;
     const shape = intrusion ? failMarker(left + 6, cy) : unlistedMarker(left + 6, cy);
-    const where = row.distance === 0 ? 'inside the wanted image' : `${T.frequency(row.distance)} from the wanted image`;
+    const where = row.distance === 0 ? `inside ${image}` : `${T.frequency(row.distance)} from ${image}`;
     // A peak a predicted line was measured on carries no explanation of its own: name that line, as the verdict does.
     const line = r.predictions.find((p) => p.measured?.bin === row.bin);
     const what = row.explainedBy ?? (line ? `${line.check}, ${line.line}` : 'unexplained');

@@ -4,13 +4,16 @@ import { rateMapFigure } from './rate-map.js';
 import { spectrumFigure } from './spectrum.js';
 import { filterMaskFigure } from './filter-mask.js';
 import { stackFigures, svgDocument } from './svg-document.js';
+import { channelReportView, severalChannels } from './channels.js';
 
 /**
  * The pictures of a solved plan in one SVG document, one under another:
  * the rate map, the spectrum after sampling at one candidate, the
  * band-position chart with that candidate marked, and that candidate's
  * anti-alias filter mask (when the report carries after-rate figures). This
- * is what `solve --svg FILE` writes.
+ * is what `solve --svg FILE` writes. With several channels the spectrum
+ * shows every channel's image and the band-position chart is drawn once per
+ * channel (each channel's own band and verdicts).
  *
  * @param report the solved plan
  * @param candidateLabel the candidate for the spectrum and the mask; default the best
@@ -23,7 +26,9 @@ export function planPicturesSvg(report: PlanReport, candidateLabel?: string): st
   const label = candidateLabel ?? report.best ?? report.candidates[0]?.label;
   const figures = [rateMapFigure(report)];
   if (label !== undefined) figures.push(spectrumFigure(report, label));
-  figures.push(bandPositionFigure(report, candidateLabel));
+  const multi = severalChannels(report);
+  if (multi) multi.channels.forEach((_, i) => figures.push(bandPositionFigure(channelReportView(multi, i), candidateLabel)));
+  else figures.push(bandPositionFigure(report, candidateLabel));
   const mask = label === undefined ? null : filterMaskFigure(report, label);
   if (mask) figures.push(mask);
   return svgDocument(stackFigures(figures, `Frequency plan pictures: ${report.scenario}`, 24));

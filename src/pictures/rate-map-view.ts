@@ -34,7 +34,6 @@ export interface RateMapView {
 export function rateMapView(report: PlanReport): RateMapView {
   const all = [...report.windows].sort((a, b) => a.zone - b.zone);
   const windows = laneRun(all, report);
-  const shownZones = new Set(windows.map((w) => w.zone));
   const inSearch = (r: number) => r >= report.search.minRate && r <= report.search.maxRate;
   const rates = [
     ...windows.flatMap((w) => [w.minRate, Math.min(w.maxRate, report.search.maxRate)]),
@@ -57,7 +56,7 @@ export function rateMapView(report: PlanReport): RateMapView {
     : [low - 0.03 * (high - low), high + 0.03 * (high - low)];
   return {
     windows,
-    hidden: all.length - shownZones.size,
+    hidden: all.length - windows.length,
     low: Math.max(paddedLow, report.search.minRate, 0),
     high: Math.min(paddedHigh, report.search.maxRate),
     log,

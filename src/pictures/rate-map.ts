@@ -16,6 +16,9 @@ import { linearScale, logScale, type Scale } from './scale.js';
 import { element, px, textElement } from './svg-element.js';
 import { svgDocument, type Figure } from './svg-document.js';
 import { blockingKeys, blockedGroups, type BlockedGroup } from './blocked-groups.js';
+import { severalChannels, type ChannelPlanReport } from './channels.js';
+import { channelLaneNotes, channelLanes } from './channel-lanes.js';
+import { COLLIDE_FILL } from './patterns.js';
 
 const WIDTH = 960;
 const LEFT = 132;
@@ -41,7 +44,14 @@ interface Lane {
   /** "not marked: …" naming the key numbers of the checks whose brackets found no row, wrapped to the title column. */
   readonly thinned: readonly string[];
   readonly height: number;
+  /** What the lane draws from: the report, or with several channels the part of it inside the lane's window. */
+  readonly scope: PlanReport;
+  /** The window's fill: its zone's (upright or inverted) for one band; one pale fill for the windows of all channels. */
+  readonly fill: string;
 }
+
+/** The fill of a window where every channel is whole (each channel's zone and inversion is in the lane's name). */
+const JOINT_FILL = '#e4ebf2';
 
 /**
  * The rate map as a figure: one lane per Nyquist-zone window (zone 1 at the
@@ -55,6 +65,10 @@ interface Lane {
  * rateMapView); the legend keys only the kinds drawn, and lists every
  * blocking label with its key.
  *
+ * With several channels, lanes above those show each channel's own windows
+ * and, for each pair of channels, the rates at which their aliases come too
+ * close (see channelLanes); the lanes below them are the channels together.
+ *
  * @param report the solved plan
  * @returns the figure (width 960 px, height from the lanes)
  */
@@ -65,25 +79,37 @@ export function rateMapFigure(report: PlanReport): Figure {
   const keys = blockingKeys(report);
   const inAxis = (rate: number) => rate >= view.low && rate <= view.high;
   const zonesWithWindow = new Set(report.windows.map((w) => w.zone));
-  const lanes: Lane[] = view.windows.map((w) =>
-    lane(
-      `zone ${w.zone}${w.inverted ? ' (inv)' : ''}`,
+  const multi = severalChannels(report);
+  // With several channels a zone of the first channel holds several windows: each lane draws what lies inside its own.
+  const lanes: Lane[] = view.windows.map((w) => {
+    const scope = multi ? windowScope(report, w) : report;
+    return lane(
+      multi ? jointTitle(w) : `zone ${w.zone}${w.inverted ? ' (inv)' : ''}`,
       w,
-      report.candidates.filter((c) => c.zone === w.zone && inAxis(c.rate)),
-      blockedGroups(report, w.zone, keys),
+      scope.candidates.filter((c) => c.zone === w.zone && inAxis(c.rate)),
+      blockedGroups(scope, w.zone, keys),
       scale,
       report,
-    ),
-  );
-  const others = report.candidates.filter((c) => (c.zone === null || !zonesWithWindow.has(c.zone)) && inAxis(c.rate));
-  if (others.length > 0) lanes.push(lane('outside windows', null, others, [], scale, report));
+      scope,
+      multi ? JOINT_FILL : w.inverted ? FILL.inverted : '#fff',
+    );
+  });
+  const outside = (c: ReportedCandidate) =>
+    multi ? !report.windows.some((w) => within(c.rate, w)) : c.zone === null || !zonesWithWindow.has(c.zone);
+  const others = report.candidates.filter((c) => outside(c) && inAxis(c.rate));
+  if (others.length > 0) lanes.push(lane('outside windows', null, others, [], scale, report, report, '#fff'));
   const markers = lanes.flatMap((l) => l.markers);
   const drawnCandidates = markers.length;
   // The zones whose windows are drawn: only their blocked and feasible ranges are.
   const drawnZones = new Set(view.windows.map((w) => w.zone));
 
-  const parts: string[] = [heading(report)];
+  const parts: string[] = [multi ? channelHeading(multi) : heading(report)];
   let y = TOP;
+  const own = multi ? channelLanes(multi, scale, y, view.low, view.high) : null;
+  if (own) {
+    parts.push(own.markup);
+    y += own.height + 6;
+  }
   for (const [index, l] of lanes.entries()) {
     parts.push(drawLane(l, y, scale, report, index));
     y += l.height;
@@ -104,9 +130,15 @@ export function rateMapFigure(report: PlanReport): Figure {
   y += 60;
   const legend = legendRows(
     [
-      { swatch: boxSwatch('#fff'), text: 'window, upright zone', drawn: view.windows.some((w) => !w.inverted) },
-      { swatch: boxSwatch(FILL.inverted), text: 'window, inverted zone (inv)', drawn: view.windows.some((w) => w.inverted) },
+      { swatch: boxSwatch('#fff'), text: 'window, upright zone', drawn: own ? own.drawn.upright : view.windows.some((w) => !w.inverted) },
+      {
+        swatch: boxSwatch(FILL.inverted),
+        text: 'window, inverted zone (inv)',
+        drawn: own ? own.drawn.inverted : view.windows.some((w) => w.inverted),
+      },
+      { swatch: boxSwatch(JOINT_FILL), text: 'every channel whole (zones in order)', drawn: own !== null && view.windows.length > 0 },
       { swatch: boxSwatch(FILL.blocked), text: 'blocked', drawn: report.blocked.some((r) => drawnZones.has(r.zone)) },
+      { swatch: boxSwatch(COLLIDE_FILL), text: "two channels' aliases too close", drawn: own?.drawn.collide ?? false },
       { swatch: boxSwatch(FILL.feasible), text: 'feasible', drawn: report.feasible.some((r) => drawnZones.has(r.zone)) },
       { swatch: (x, yy) => passMarker(x, yy), text: 'candidate passes', drawn: markers.some((c) => c.pass), marker: true },
       { swatch: (x, yy) => failMarker(x, yy), text: 'candidate fails', drawn: markers.some((c) => !c.pass), marker: true },
@@ -117,7 +149,12 @@ export function rateMapFigure(report: PlanReport): Figure {
   );
   parts.push(legend.markup);
   y += legend.height + 8;
-  const notes = [...candidateLines(report), ...keyLines(keys), ...viewNotes(view, report, drawnCandidates)];
+  const notes = [
+    ...candidateLines(report),
+    ...keyLines(keys),
+    ...(multi && own ? channelLaneNotes(multi, own.rates) : []),
+    ...viewNotes(view, report, drawnCandidates),
+  ];
   for (const line of notes) {
     const indent = line.startsWith('  ') ? 16 : 0;
     parts.push(textElement(LEFT - 100 + indent, y + LEGEND_FONT, line.trim(), { 'font-size': LEGEND_FONT }));
@@ -148,6 +185,35 @@ function heading(report: PlanReport): string {
   );
 }
 
+function channelHeading(report: ChannelPlanReport): string {
+  const channels = report.channels.map((c) => `${c.label} ${T.extent(c.low, c.high)}`).join(', ');
+  const sub = `${report.channels.length} channels: ${channels}; rates searched ${T.extent(report.search.minRate, report.search.maxRate)}`;
+  return (
+    textElement(LEFT - 100, 22, `Sampling-rate map: ${report.scenario}`, { 'font-size': 14, 'font-weight': 'bold' }) +
+    textElement(LEFT - 100, 40, sub, { 'font-size': 11 })
+  );
+}
+
+/** A lane of the channels together: each channel's zone in order, the inverted ones marked. */
+function jointTitle(w: RateWindow): string {
+  return `zones ${(w.channelZones ?? [w.zone]).map((z) => (z % 2 === 0 ? `${z}i` : String(z))).join(' / ')}`;
+}
+
+function within(rate: number, w: RateWindow): boolean {
+  return rate >= w.minRate && rate <= w.maxRate;
+}
+
+/** The part of a report inside one window: its blocked ranges, feasible intervals and candidates. */
+function windowScope(report: PlanReport, w: RateWindow): PlanReport {
+  const inside = (r: { readonly minRate: number; readonly maxRate: number }) => r.minRate >= w.minRate && r.maxRate <= w.maxRate;
+  return {
+    ...report,
+    blocked: report.blocked.filter((b) => b.zone === w.zone && inside(b)),
+    feasible: report.feasible.filter((f) => f.zone === w.zone && inside(f)),
+    candidates: report.candidates.filter((c) => within(c.rate, w)),
+  };
+}
+
 function lane(
   title: string,
   window: RateWindow | null,
@@ -155,6 +221,8 @@ function lane(
   groups: readonly BlockedGroup[],
   scale: Scale,
   report: PlanReport,
+  scope: PlanReport,
+  fill: string,
 ): Lane {
   const plot = scale.range;
   const placedCandidates = packLabels(
@@ -206,6 +274,8 @@ function lane(
       34,
       candidateRows * CANDIDATE_ROW + 4 + BODY / 2 + 16 + thinned.length * NOTE_LINE,
     ),
+    scope,
+    fill,
   };
 }
 
@@ -230,10 +300,10 @@ function drawLane(l: Lane, top: number, scale: Scale, report: PlanReport, index:
     const [a, b] = [scale.at(w.minRate), scale.at(Math.min(w.maxRate, report.search.maxRate))];
     const box = (x0: number, x1: number, fill: string) =>
       element('rect', { x: x0, y: bodyTop, width: Math.max(x1 - x0, 1.5), height: BODY, fill });
-    parts.push(box(a, b, w.inverted ? FILL.inverted : '#fff'));
-    for (const g of report.blocked.filter((r) => r.zone === w.zone))
+    parts.push(box(a, b, l.fill));
+    for (const g of l.scope.blocked.filter((r) => r.zone === w.zone))
       parts.push(box(scale.at(g.minRate), scale.at(g.maxRate), FILL.blocked));
-    for (const f of report.feasible.filter((r) => r.zone === w.zone))
+    for (const f of l.scope.feasible.filter((r) => r.zone === w.zone))
       parts.push(box(scale.at(f.minRate), scale.at(f.maxRate), FILL.feasible));
     parts.push(
       element('rect', { x: a, y: bodyTop, width: Math.max(b - a, 1.5), height: BODY, fill: 'none', stroke: '#000', 'stroke-width': 1 }),

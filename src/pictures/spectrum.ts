@@ -7,14 +7,15 @@ import { InputError } from '../units/input-error.js';
 import { horizontalAxis, numberTicks, verticalAxis } from './axis.js';
 import { checkTable } from './check-table.js';
 import { frequencyUnit, inUnit } from './frequency-unit.js';
-import { packLabels } from './label-packing.js';
+import { packLabels, wrapPhrases } from './label-packing.js';
 import { clipped, TEXT_DESCENT, textWidth } from './typography.js';
 import { boxSwatch, legendRows } from './legend.js';
 import { coveringTicks, linearTicks } from './nice-ticks.js';
-import { FILL } from './patterns.js';
+import { channelFill, FILL } from './patterns.js';
 import { linearScale, type Scale } from './scale.js';
 import { element, textElement } from './svg-element.js';
 import { svgDocument, type Figure } from './svg-document.js';
+import { severalChannels, type ChannelCandidate, type ChannelPlanReport } from './channels.js';
 
 const WIDTH = 960;
 const LEFT = 84;
@@ -37,6 +38,14 @@ const ROOM = WIDTH - 24 - 12;
  * level and margin above the plot where there is room, else their key
  * number; the table below lists every check by key.
  *
+ * With several channels, each channel's image is drawn with its guards in a
+ * fill of its own (all in the wanted image's blue) and named by its label;
+ * each interferer is drawn once, its label naming the channel it comes
+ * closest to (`H2 IF-A → IF-B`), its margin to that channel, and failing
+ * when it fails against any; the threshold and weakest level are the lowest
+ * over the channels, named by channel; the checks that keep two channels
+ * apart are listed in the table (the channels' own images are their bars).
+ *
  * @param report the solved plan
  * @param candidateLabel a label from report.candidates
  * @returns the figure, 960 px wide
@@ -44,33 +53,41 @@ const ROOM = WIDTH - 24 - 12;
  */
 export function spectrumFigure(report: PlanReport, candidateLabel: string): Figure {
   const candidate = findCandidate(report, candidateLabel);
+  const multi = severalChannels(report);
+  const channels = multi ? channelLevels(multi, candidate) : null;
   const half = candidate.rate / 2;
-  const checks = candidate.checks;
-  const { threshold, levelTicks, bottom, top } = levelAxis(checks);
+  const checks = channels ? channels.checks : candidate.checks;
+  const { threshold, levelTicks, bottom, top } = levelAxis(checks, channels?.threshold.level);
   const plotX: readonly [number, number] = [LEFT, WIDTH - RIGHT];
   const x = linearScale([0, half], plotX);
-  const placed = checkLabels(checks, x, plotX);
+  const placed = checkLabels(
+    checks.filter((c) => !channelKind(c)),
+    x,
+    plotX,
+  );
   const rows = placed.reduce((n, p) => Math.max(n, p.row + 1), 0);
-  const plotTop = 64 + rows * LABEL_ROW + 6;
+  const head = multi ? channelHeading(multi, candidate) : { markup: heading(report, candidate), height: 64 };
+  const plotTop = head.height + rows * LABEL_ROW + 6;
   const plotBottom = plotTop + PLOT_HEIGHT;
   const y = linearScale([bottom, top], [plotBottom, plotTop]);
 
-  const parts: string[] = [heading(report, candidate)];
-  const wanted = wantedImage(report, candidate, x, plotTop, plotBottom);
+  const parts: string[] = [head.markup];
+  const wanted = multi ? channelImages(multi, candidate, x, plotTop, plotBottom) : wantedImage(report, candidate, x, plotTop, plotBottom);
   parts.push(wanted.fill);
   // Strongest first, so a weaker bar over a stronger one stays in sight.
   const drawOrder = checks.map((c, i) => ({ c, key: i + 1 })).sort((a, b) => b.c.level - a.c.level);
-  for (const { c } of drawOrder) parts.push(bars(c, x, y, bottom));
+  for (const { c } of drawOrder) if (!channelKind(c)) parts.push(bars(c, x, y, bottom));
   // Every line first, then the names inside the plot on white boxes over them, so no line runs through a name.
-  const levels = levelLines(threshold, report.weakestLevel, candidate, x, y, plotTop);
+  const weakest = channels ? channels.weakest : { level: report.weakestLevel, channel: null };
+  const levels = levelLines(threshold, channels?.threshold.channel ?? null, weakest.level, weakest.channel, candidate, x, y, plotTop);
   const markings = marks(candidate, x, plotTop, plotBottom);
-  parts.push(labelLeaders(placed, x, y, bottom, top), markings.lines, levels.lines, wanted.outline);
-  parts.push(wanted.label, levels.names, markings.names, labelTexts(placed));
+  parts.push(labelLeaders(placed, x, y, bottom, top, head.height), markings.lines, levels.lines, wanted.outline);
+  parts.push(wanted.label, levels.names, markings.names, labelTexts(placed, head.height));
   parts.push(verticalAxis(y, numberTicks(levelTicks.values), LEFT, 'level (dBFS)', WIDTH - RIGHT));
   const unit = frequencyUnit(half);
   const freqTicks = linearTicks(0, half, 8).values.map((v) => ({ value: v, label: inUnit(v, unit) }));
   parts.push(horizontalAxis(x, freqTicks, plotBottom, `frequency after sampling (${unit.unit})`));
-  const below = legendAndTable(checks, wanted.guarded, plotBottom + 56);
+  const below = legendAndTable(checks, wanted.guarded, plotBottom + 56, multi ? channelSwatches(multi) : null);
   parts.push(below.markup);
   return {
     width: WIDTH,
@@ -87,13 +104,16 @@ export function spectrumFigure(report: PlanReport, candidateLabel: string): Figu
  * blockers can compute to −250 dBFS) only squash the levels that matter; they
  * are drawn as stubs on the floor and keep their figures in the table below.
  */
-function levelAxis(checks: ReportedCandidate['checks']): {
+function levelAxis(
+  checks: ReportedCandidate['checks'],
+  lowestThreshold?: number | null,
+): {
   threshold: number | null;
   levelTicks: ReturnType<typeof coveringTicks>;
   bottom: number;
   top: number;
 } {
-  const threshold = checks.length > 0 ? checks[0]!.level + checks[0]!.levelMargin : null;
+  const threshold = lowestThreshold !== undefined ? lowestThreshold : checks.length > 0 ? checks[0]!.level + checks[0]!.levelMargin : null;
   const levels = [...checks.map((c) => c.level).filter(Number.isFinite), ...(threshold === null ? [] : [threshold])];
   const floor = threshold === null ? -Infinity : threshold - 60;
   const levelTicks = coveringTicks(Math.max(Math.min(-100, ...levels) - 5, floor), Math.max(0, ...levels), 8);
@@ -145,12 +165,16 @@ const overlaps = (a: Box, b: Box) => a.left < b.right && b.left < a.right && a.t
  */
 function levelLines(
   threshold: number | null,
+  thresholdChannel: string | null,
   weakest: number | null,
+  weakestChannel: string | null,
   c: ReportedCandidate,
   x: Scale,
   y: Scale,
   plotTop: number,
 ): { lines: string; names: string } {
+  // With several channels the lines are the lowest over them, named by channel.
+  const of = (channel: string | null) => (channel === null ? '' : ` (${channel})`);
   const lines: string[] = [];
   const names: string[] = [];
   const taken: Box[] = markBoxes(c, x, plotTop);
@@ -174,9 +198,10 @@ function levelLines(
         }),
     );
   };
-  if (threshold !== null) named(threshold, `blocking threshold ${T.level(threshold)} dBFS`, '#000', '8 3 2 3', [['right', 1]]);
+  if (threshold !== null)
+    named(threshold, `blocking threshold${of(thresholdChannel)} ${T.level(threshold)} dBFS`, '#000', '8 3 2 3', [['right', 1]]);
   if (weakest !== null)
-    named(weakest, `weakest wanted level ${T.level(weakest)} dBFS`, '#1f4e79', '5 3', [
+    named(weakest, `weakest wanted level${of(weakestChannel)} ${T.level(weakest)} dBFS`, '#1f4e79', '5 3', [
       ['right', -1],
       ['right', 1],
       ['left', -1],
@@ -185,25 +210,26 @@ function levelLines(
   return { lines: element('g', { class: 'levels' }, lines.join('')), names: element('g', { class: 'level-names' }, names.join('')) };
 }
 
-const labelBaseline = (row: number) => 64 + (row + 1) * LABEL_ROW - 2;
+/** The baseline of a label row above the plot; the rows start under the heading (64 px, more with several channels). */
+const labelBaseline = (row: number, labelsTop: number) => labelsTop + (row + 1) * LABEL_ROW - 2;
 
 /** A dotted leader from under each placed label down to the top of its bar. */
-function labelLeaders(placed: ReturnType<typeof checkLabels>, x: Scale, y: Scale, bottom: number, top: number): string {
+function labelLeaders(placed: ReturnType<typeof checkLabels>, x: Scale, y: Scale, bottom: number, top: number, labelsTop: number): string {
   return placed
     .map((p) => {
       const barTop = y.at(Math.max(Math.min(p.item.c.level, top), bottom));
       const at = x.at(p.item.at);
-      const from = labelBaseline(p.row) + TEXT_DESCENT * SMALL + 1;
+      const from = labelBaseline(p.row, labelsTop) + TEXT_DESCENT * SMALL + 1;
       return element('line', { x1: at, y1: from, x2: at, y2: barTop, stroke: '#555', 'stroke-width': 0.5, 'stroke-dasharray': '1 2' });
     })
     .join('');
 }
 
 /** Each placed label in its row above the plot (failing checks in bold). */
-function labelTexts(placed: ReturnType<typeof checkLabels>): string {
+function labelTexts(placed: ReturnType<typeof checkLabels>, labelsTop: number): string {
   return placed
     .map((p) =>
-      textElement(p.x, labelBaseline(p.row), p.text, {
+      textElement(p.x, labelBaseline(p.row, labelsTop), p.text, {
         'text-anchor': 'middle',
         'font-size': SMALL,
         'font-weight': p.item.c.pass ? undefined : 'bold',
@@ -213,12 +239,17 @@ function labelTexts(placed: ReturnType<typeof checkLabels>): string {
 }
 
 /** The legend and the table of checks under the plot, from `top`; returns the markup and where it ends. */
-function legendAndTable(checks: ReportedCandidate['checks'], guarded: boolean, top: number): { markup: string; bottom: number } {
-  // A check is drawn when it has an aliased segment (bars draws one box per segment).
-  const drawn = checks.filter((c) => c.alias.length > 0);
+function legendAndTable(
+  checks: ReportedCandidate['checks'],
+  guarded: boolean,
+  top: number,
+  channels: ReturnType<typeof channelSwatches> | null,
+): { markup: string; bottom: number } {
+  // A check is drawn when it has an aliased segment (bars draws one box per segment); a channel's is its image.
+  const drawn = checks.filter((c) => c.alias.length > 0 && !channelKind(c));
   const legend = legendRows(
     [
-      { swatch: boxSwatch(FILL.wanted), text: 'wanted image' },
+      ...(channels ?? [{ swatch: boxSwatch(FILL.wanted), text: 'wanted image' }]),
       { swatch: boxSwatch(FILL.guard), text: 'guard', drawn: guarded },
       { swatch: boxSwatch(FILL.passing), text: 'blocking check, passes', drawn: drawn.some((c) => c.blocking && c.pass) },
       { swatch: boxSwatch(FILL.failing), text: 'blocking check, FAILS', drawn: drawn.some((c) => c.blocking && !c.pass) },
@@ -382,4 +413,134 @@ function marks(c: ReportedCandidate, x: Scale, top: number, bottom: number): { l
       textElement((box.left + box.right) / 2, top + 12, text, { 'text-anchor': 'middle', 'font-size': SMALL }),
   );
   return { lines: element('g', { class: 'marks' }, lines.join('')), names: element('g', { class: 'mark-names' }, names.join('')) };
+}
+
+/** A check that keeps two channels apart: its alias is the other channel's image, drawn as such. */
+function channelKind(c: ReportedCheck): boolean {
+  return (c.kind as string) === 'channel';
+}
+
+/**
+ * Every check of a candidate over all its channels, one per interferer: the
+ * one against the channel it comes closest to (least slack when it blocks,
+ * least margin when not), labelled `check → channel`, failing when it fails
+ * against any channel; and the lowest blocking threshold and weakest wanted
+ * level over the channels, with the channel each belongs to.
+ */
+function channelLevels(report: ChannelPlanReport, candidate: ChannelCandidate) {
+  const byLabel = new Map<string, { check: ReportedCheck; channel: string; pass: boolean }>();
+  const tightness = (c: ReportedCheck) => (c.blocking ? c.margin - c.requiredMargin : c.margin);
+  let threshold: { level: number | null; channel: string | null } = { level: null, channel: null };
+  for (const result of candidate.channels) {
+    const first = result.checks[0];
+    if (first && (threshold.level === null || first.level + first.levelMargin < threshold.level))
+      threshold = { level: first.level + first.levelMargin, channel: result.label };
+    for (const check of result.checks) {
+      const seen = byLabel.get(check.label);
+      if (!seen) byLabel.set(check.label, { check, channel: result.label, pass: check.pass });
+      else
+        byLabel.set(check.label, {
+          ...(tightness(check) < tightness(seen.check) ? { check, channel: result.label } : seen),
+          pass: seen.pass && check.pass,
+        });
+    }
+  }
+  const checks = [...byLabel.values()].map(({ check, channel, pass }) => ({ ...check, label: `${check.label} → ${channel}`, pass }));
+  let weakest: { level: number | null; channel: string | null } = { level: null, channel: null };
+  for (const channel of report.channels)
+    if (channel.weakestLevel !== null && (weakest.level === null || channel.weakestLevel < weakest.level))
+      weakest = { level: channel.weakestLevel, channel: channel.label };
+  return { checks, threshold, weakest };
+}
+
+/** The heading of a multi-channel spectrum: title, rate and verdict, then each channel's zone and centre (wrapped), then the label key. */
+function channelHeading(report: ChannelPlanReport, c: ChannelCandidate): { markup: string; height: number } {
+  const verdict = c.pass
+    ? `passes; worst margin ${T.frequency(c.worstMargin)} (${c.limitedBy})`
+    : `FAILS; limited by ${c.limitedBy}, margin ${T.frequency(c.worstMargin)}`;
+  const phrases = c.channels.map((ch) =>
+    ch.zone === null || ch.image === null
+      ? `${ch.label}: straddles a zone edge`
+      : `${ch.label}: zone ${ch.zone}${ch.inverted ? ' (inverted)' : ''}, centre ${T.rate(ch.center ?? 0)}, ${ch.pass ? 'passes' : 'FAILS'}`,
+  );
+  const lines = wrapPhrases(phrases, WIDTH - 48, 11, ';   ');
+  const parts = [
+    textElement(24, 22, `Spectrum after sampling at ${c.label}: ${report.scenario}`, { 'font-size': 14, 'font-weight': 'bold' }),
+    textElement(24, 40, `rate ${T.rate(c.rate)} ${T.tolerance(c.tolerancePpm)}; ${c.channels.length} channels; ${verdict}`, {
+      'font-size': 11,
+    }),
+    ...lines.map((line, i) => textElement(24, 56 + 15 * i, line, { 'font-size': 11 })),
+  ];
+  const keyLine = 56 + 15 * lines.length;
+  parts.push(
+    textElement(24, keyLine, 'Labels: key, check → the channel it comes closest to, level, margin to that channel.', {
+      'font-size': SMALL,
+      'font-style': 'italic',
+    }),
+  );
+  return { markup: parts.join(''), height: keyLine + 8 };
+}
+
+/** Each channel's image and guards in its own fill, outlined and named by its label (inverted ones say so). */
+function channelImages(
+  report: ChannelPlanReport,
+  c: ChannelCandidate,
+  x: Scale,
+  top: number,
+  bottom: number,
+): { fill: string; outline: string; label: string; guarded: boolean } {
+  const half = c.rate / 2;
+  const fills: string[] = [];
+  const outlines: string[] = [];
+  const labels: Array<{ at: number; text: string }> = [];
+  let guarded = false;
+  const box = (a: number, b: number, fill: string) => {
+    const shape = { x: x.at(a), y: top, width: Math.max(x.at(b) - x.at(a), 1.5), height: bottom - top };
+    fills.push(element('rect', { ...shape, fill }));
+    outlines.push(element('rect', { ...shape, fill: 'none', stroke: '#1f4e79', 'stroke-width': 1.2 }));
+  };
+  c.channels.forEach((ch, i) => {
+    const spec = report.channels[i]!;
+    const fill = channelFill(i);
+    if (ch.image) {
+      const below = ch.inverted ? spec.guard.above : spec.guard.below;
+      const above = ch.inverted ? spec.guard.below : spec.guard.above;
+      if (below > 0 || above > 0) guarded = true;
+      if (below > 0) box(Math.max(0, ch.image.low - below), ch.image.low, FILL.guard);
+      if (above > 0) box(ch.image.high, Math.min(half, ch.image.high + above), FILL.guard);
+      box(ch.image.low, ch.image.high, fill);
+      labels.push({ at: x.at((ch.image.low + ch.image.high) / 2), text: ch.inverted ? `${ch.label} (inverted)` : ch.label });
+    } else {
+      const segments = foldExtent(spec.low, spec.high, c.rate);
+      for (const s of segments) box(s.low, s.high, fill);
+      const widest = [...segments].sort((p, q) => q.high - q.low - (p.high - p.low))[0];
+      if (widest) labels.push({ at: x.at((widest.low + widest.high) / 2), text: `${ch.label} folds onto itself` });
+    }
+  });
+  // The names sit in rows under the DC, fs/4 and fs/2 names at the plot's top (clear of the level lines' names), packed so that close images keep both.
+  const placed = packLabels(
+    labels.map((l) => ({ x: l.at, text: l.text, item: l, bold: true })),
+    labels.length,
+    x.range,
+    SMALL,
+  );
+  const names = placed.map((p) => {
+    const w = p.width + 8;
+    const y0 = top + 18 + 16 * p.row;
+    return (
+      element('rect', { x: p.x - w / 2, y: y0, width: w, height: 14, fill: '#fff', stroke: '#1f4e79', 'stroke-width': 0.8 }) +
+      textElement(p.x, y0 + 11, p.text, { 'text-anchor': 'middle', 'font-size': SMALL, 'font-weight': 'bold' })
+    );
+  });
+  return {
+    fill: element('g', { class: 'wanted' }, fills.join('')),
+    outline: element('g', { class: 'wanted-outline' }, outlines.join('')),
+    label: element('g', { class: 'wanted-label' }, names.join('')),
+    guarded,
+  };
+}
+
+/** Legend entries: one per channel, its fill and its label. */
+function channelSwatches(report: ChannelPlanReport): Array<{ swatch: (x: number, y: number) => string; text: string }> {
+  return report.channels.map((ch, i) => ({ swatch: boxSwatch(channelFill(i)), text: `channel ${ch.label}` }));
 }

@@ -1,6 +1,6 @@
 import { element } from './svg-element.js';
 import { escapeXml } from './escape-xml.js';
-import { patternDefs } from './patterns.js';
+import { channelPatternDefs, patternDefs } from './patterns.js';
 
 /** A picture before it is wrapped: its size, its title and its markup. */
 export interface Figure {
@@ -18,7 +18,7 @@ const SVG_NAMESPACE = 'http://www.w3.org/2000/svg';
 /**
  * A standalone SVG document: stated width and height (px) with the same
  * viewBox, a generic sans-serif font, a white background, the shared fill
- * patterns, and no reference to anything outside itself. No XML declaration,
+ * patterns (and the channel fills the body uses), and no reference to anything outside itself. No XML declaration,
  * so the same text can be inlined in an HTML page.
  *
  * @param figure the picture
@@ -32,7 +32,7 @@ export function svgDocument(figure: Figure): string {
       'svg',
       { xmlns: SVG_NAMESPACE, width, height, viewBox: `0 0 ${width} ${height}`, 'font-family': 'sans-serif', 'font-size': 11, role: 'img' },
       `<title>${escapeXml(figure.title)}</title>` +
-        `<defs>${patternDefs()}</defs>` +
+        `<defs>${patternDefs()}${channelPatternDefs(figure.body)}</defs>` +
         element('rect', { x: 0, y: 0, width, height, fill: '#fff' }) +
         figure.body,
     ) + '\n'

@@ -2,13 +2,14 @@ import { db, hz, ppm, type Db, type Hz } from '../units/quantities.js';
 import { quantityText } from '../text/quantity-text.js';
 import type { Scenario } from '../scenario/scenario.js';
 import { contextFromScenario } from '../solve/context-from-scenario.js';
-import { evaluateRate, type CheckResult } from '../solve/evaluate-rate.js';
+import { evaluateRate, type CheckResult, type RateEvaluation } from '../solve/evaluate-rate.js';
+import { channelPlans } from '../solve/plan-context.js';
 import type { Interferer } from '../interferers/interferer.js';
 import { levelThreshold } from '../interferers/level-threshold.js';
 import { foldExtent } from '../math/fold-extent.js';
 import { PAPER_DESIGN_CAUTION } from '../plan/caution.js';
 import { planAtRate } from '../plan/plan-at-rate.js';
-import { limitText } from '../solve/limited-by.js';
+import { channelCheckLabel, limitText } from '../solve/limited-by.js';
 import { binDistance, foldCycles } from '../capture/coherent-bins.js';
 import { captureTones, movedScenario, type CaptureRecord, type CaptureTone } from '../capture/capture-tones.js';
 import { checkFamily, type LineFamily } from '../capture/check-families.js';
@@ -22,7 +23,15 @@ import { expectedNoiseLevel } from '../capture/noise-level.js';
 import { imageKey, modelComponents, type ModelComponent } from '../capture/model-components.js';
 import { chooseLayout, type ComponentTemplate } from '../capture/tone-layout.js';
 import { blackmanHarris } from '../capture/window.js';
-import { CONTRADICTING, type PeakRow, type PredictionRow, type ToneRow, type UnderFloor, type VerifyResult } from './verify-result.js';
+import {
+  CONTRADICTING,
+  type PeakRow,
+  type PredictionRow,
+  type ToneRow,
+  type UnderFloor,
+  type VerifiedChannel,
+  type VerifyResult,
+} from './verify-result.js';
 
 /** The result's words (notes, contradictions, what was compared) are read in the terminal and the JSON: written as the terminal writes numbers. */
 const T = quantityText('terminal');
@@ -100,9 +109,16 @@ export function verifyCaptureWithSpectrum(scenario: Scenario, settings: CaptureS
   const plan = planAtRate(scenario, rate, ppm(0));
   const movedContext = contextFromScenario(movedScenario(scenario, record));
   const checks = evaluateRate(movedContext, rate, ppm(0)).checks;
+  // With several channels every channel's checks, labelled `channel: check`, each against its own channel's threshold.
+  const sides = channelPlans(movedContext);
+  const interferers =
+    sides.length > 1
+      ? sides.flatMap((side) => side.interferers.map((i) => ({ ...i, label: channelCheckLabel(side.label ?? '', i.label) })))
+      : movedContext.interferers;
+  const thresholds = sides.length > 1 ? sides.flatMap((side) => side.interferers.map(() => side.levelThreshold as number)) : null;
   const claimed = new Set<number>();
   const firstTones = captureTones(scenario, record, { wanted: [], neighbours: [] });
-  const families = movedContext.interferers.map((i) => checkFamily(i, firstTones, samples, claimed));
+  const families = interferers.map((i) => checkFamily(i, firstTones, samples, claimed));
   const converter = { bits: scenario.converter.bits, coefficients: converterCoefficients(scenario), mismatch };
   const window = blackmanHarris(samples);
   const expectedNoise = expectedNoiseLevel(scenario.converter.bits, samples, window.noiseBandwidthBins, true);
@@ -117,7 +133,8 @@ export function verifyCaptureWithSpectrum(scenario: Scenario, settings: CaptureS
   const index = inputIndex(tones);
   const cutoff = 10 ** (Math.max(capture.spectrum.medianLevel - CUTOFF_BELOW_MEDIAN, -240) / 20);
   const model = modelComponents(tones, index, converter.coefficients, samples, cutoff, mismatch ? { mismatch, rate } : null);
-  const threshold = levelThreshold(scenario);
+  // The lowest threshold over the channels: an unexplained peak above it matters to one of them.
+  const threshold = sides.length > 1 ? db(Math.min(...sides.map((side) => side.levelThreshold))) : levelThreshold(scenario);
   const edgeKeys = new Set(
     tones.flatMap((t, i) => (!t.input && (t.cycles === 0 || foldCycles(t.cycles, samples) === samples / 2) ? [`t:${i}`] : [])),
   );
@@ -130,13 +147,49 @@ export function verifyCaptureWithSpectrum(scenario: Scenario, settings: CaptureS
     components: model.components,
     edgeKeys,
   };
-  const judged = judgeChecks({ checks, interferers: movedContext.interferers, families, tones, index, converter, record }, measurement);
-  const image = plan.image
-    ? [[plan.image.low, plan.image.high] as const]
-    : foldExtent(scenario.wanted.low, scenario.wanted.high, rate).map((s) => [hz(s.low), hz(s.high)] as const);
-  const marginAt = peakMargins(judged.predictions, checks, scenario.requirements.margin);
-  const peaks = sortPeaks(measurement, judged, image, record, marginAt);
-  const contradictions = contradictionWords(judged.predictions, peaks, threshold, marginAt, plan);
+  const judged = judgeChecks({ checks, interferers, families, tones, index, converter, record, thresholds }, measurement);
+  const channelSides = verifiedChannels(scenario, plan, sides, judged.predictions, checks, rate);
+  const image = channelSides[0]!.image;
+  const peaks = sortPeaks(measurement, judged, channelSides, record);
+  const several = channelSides.length > 1;
+  const judgedChannels = channelSides.map((side, c) => {
+    const own = (label: string) => !several || label.startsWith(`${side.label}: `);
+    const sidePlan = { pass: side.pass, checks: plan.checks.filter((k) => own(k.label)) };
+    const placement = several ? tonePlacement(side, c, tones, measurement, record) : null;
+    const prefix = `${side.label}: `;
+    // A channel's words name its checks without the channel (its own label heads them once, in the list of all).
+    const words = [
+      ...(placement?.contradiction ? [placement.contradiction] : []),
+      ...contradictionWords(
+        judged.predictions.filter((p) => own(p.check)),
+        { unlisted: [], intrusions: peaks.intrusions[c]! },
+        threshold,
+        side.marginAt,
+        sidePlan,
+        several ? `the ${side.label} image` : 'the wanted image',
+      ),
+    ].map((w) => (several && w.startsWith(prefix) ? w.slice(prefix.length) : w));
+    return { side, placement, words };
+  });
+  const unlistedWords = contradictionWords(
+    [],
+    { unlisted: peaks.unlisted, intrusions: [] },
+    threshold,
+    channelSides[0]!.marginAt,
+    plan,
+    '',
+  );
+  // One channel: its words in the order they always had (lines, unlisted peaks, intrusions); several: each channel's, then the unlisted peaks.
+  const contradictions = several
+    ? [...judgedChannels.flatMap((j) => j.words.map((w) => `${j.side.label}: ${w}`)), ...unlistedWords]
+    : contradictionWords(
+        judged.predictions,
+        { unlisted: peaks.unlisted, intrusions: peaks.intrusions[0]! },
+        threshold,
+        channelSides[0]!.marginAt,
+        plan,
+        'the wanted image',
+      );
   const result: VerifyResult = {
     scenario: scenario.name,
     rate,
@@ -157,13 +210,34 @@ export function verifyCaptureWithSpectrum(scenario: Scenario, settings: CaptureS
     predictions: judged.predictions,
     underFloor: judged.underFloor,
     unlisted: peaks.unlisted,
-    intrusions: peaks.intrusions,
+    intrusions: peaks.intrusions.flat(),
+    channels: judgedChannels.map(({ side, placement, words }) => ({
+      label: side.label,
+      zone: side.zone,
+      inverted: side.inverted,
+      image: side.image,
+      threshold: db(side.threshold),
+      planPass: side.pass,
+      tonesSeen: placement?.seen ?? null,
+      order: placement?.order ?? null,
+      intrusions: peaks.intrusions[judgedChannels.findIndex((j) => j.side === side)]!,
+      contradictions: words,
+      consistent: words.length === 0,
+    })),
     plan: { pass: plan.pass, limitedBy: limitText(plan.limitedBy), limitedByKind: plan.limitedBy.kind, worstMargin: plan.worstMargin },
     notSimulated: judged.notSimulated,
     contradictions,
     consistent: contradictions.length === 0,
     modelComplete: model.complete,
-    compared: comparedText(wantedTones, tolerance, capture.floor, threshold, model.complete, mismatch !== null),
+    compared: comparedText(
+      several ? channelSides.map((c) => c.label) : [],
+      wantedTones,
+      tolerance,
+      capture.floor,
+      threshold,
+      model.complete,
+      mismatch !== null,
+    ),
     caution: `${PAPER_DESIGN_CAUTION} A simulated capture is still a paper check: it is built from the same stated figures as the plan, so confirm the plan by measurement on hardware.`,
   };
   return { result, levels: capture.spectrum.levels };
@@ -178,6 +252,8 @@ interface PlanLines {
   readonly index: InputIndex;
   readonly converter: SimulatedConverter;
   readonly record: CaptureRecord;
+  /** Per check, the threshold of the channel it is judged against (several channels); null: the measurement's. */
+  readonly thresholds: readonly number[] | null;
 }
 
 /** Each check's lines judged against the capture, the lines under the floor summarised per check, and the checks nothing stands for. */
@@ -227,10 +303,11 @@ function judgeChecks(lines: PlanLines, measurement: Measurement): JudgedChecks {
       }
       const width = interferer.low === interferer.high ? 'tone' : 'band';
       const basis = levelBasis(family, record.wantedTones, mismatch);
+      const against = lines.thresholds ? { ...measurement, threshold: lines.thresholds[i]! } : measurement;
       judged.predictions.push(
         judgeLine(
           { check, line, width, basis, amplitude, samples, binWidth: rate / samples, bin: foldCycles(line.cycles, samples) },
-          measurement,
+          against,
         ),
       );
     }
@@ -257,27 +334,100 @@ function peakMargins(predictions: readonly PredictionRow[], checks: readonly Che
   };
 }
 
-/** Peaks no line accounts for, and peaks above the threshold inside the wanted image or within their margin of it. */
+/** One channel as the verdict sees it: the plan's zone, image and verdict there, its threshold and the margin a peak must keep from it. */
+interface ChannelSide {
+  readonly label: string;
+  readonly low: Hz;
+  readonly high: Hz;
+  readonly zone: number | null;
+  readonly inverted: boolean | null;
+  /** The channel after sampling, [low, high] segments, Hz (one segment unless it straddles a zone edge). */
+  readonly image: ReadonlyArray<readonly [Hz, Hz]>;
+  /** This channel's weakest level less its rejection, dBFS. */
+  readonly threshold: number;
+  readonly pass: boolean;
+  readonly marginAt: (bin: number) => Hz;
+}
+
+/** The wanted band, or each of several channels, as the plan puts it at this rate. */
+function verifiedChannels(
+  scenario: Scenario,
+  plan: RateEvaluation,
+  sides: ReadonlyArray<{ readonly levelThreshold: number }>,
+  predictions: readonly PredictionRow[],
+  checks: readonly CheckResult[],
+  rate: Hz,
+): ChannelSide[] {
+  const imageOf = (e: { readonly image: { readonly low: Hz; readonly high: Hz } | null }, band: { low: Hz; high: Hz }) =>
+    e.image ? [[e.image.low, e.image.high] as const] : foldExtent(band.low, band.high, rate).map((s) => [hz(s.low), hz(s.high)] as const);
+  if (!plan.channels || scenario.channels.length <= 1)
+    return [
+      {
+        label: 'wanted',
+        low: scenario.wanted.low,
+        high: scenario.wanted.high,
+        zone: plan.zone,
+        inverted: plan.inverted,
+        image: imageOf(plan, scenario.wanted),
+        threshold: levelThreshold(scenario),
+        pass: plan.pass,
+        marginAt: peakMargins(predictions, checks, scenario.requirements.margin),
+      },
+    ];
+  return plan.channels.map((e, c) => {
+    const channel = scenario.channels[c]!;
+    const own = (label: string) => label.startsWith(`${channel.label}: `);
+    return {
+      label: channel.label,
+      low: channel.low,
+      high: channel.high,
+      zone: e.zone,
+      inverted: e.inverted,
+      image: imageOf(e, channel),
+      threshold: sides[c]!.levelThreshold,
+      pass: e.pass,
+      marginAt: peakMargins(
+        predictions.filter((p) => own(p.check)),
+        checks.filter((k) => own(k.label)),
+        channel.requirements.margin,
+      ),
+    };
+  });
+}
+
+/**
+ * Peaks no line accounts for, and, per channel, peaks above its threshold
+ * inside its image or within their margin of it. A channel's own tones are
+ * its signal; another channel's tones are, to it, like any other peak.
+ */
 function sortPeaks(
   measurement: Measurement,
   judged: JudgedChecks,
-  image: ReadonlyArray<readonly [Hz, Hz]>,
+  channels: readonly ChannelSide[],
   record: CaptureRecord,
-  marginAt: (bin: number) => Hz,
-): { unlisted: PeakRow[]; intrusions: PeakRow[] } {
+): { unlisted: PeakRow[]; intrusions: PeakRow[][] } {
   const { samples } = record;
   const binWidth = record.rate / samples;
-  const distance = (f: number) => Math.min(...image.map(([low, high]) => (f < low ? low - f : f > high ? f - high : 0)));
+  const distanceTo = (image: ChannelSide['image'], f: number) =>
+    Math.min(...image.map(([low, high]) => (f < low ? low - f : f > high ? f - high : 0)));
   const matched = new Set(judged.predictions.flatMap((p) => (p.measured ? [p.measured.bin] : [])));
-  const strictlyInside = (f: number) => image.some(([low, high]) => f > low && f < high);
+  const strictlyInside = (image: ChannelSide['image'], f: number) => image.some(([low, high]) => f > low && f < high);
   const unlisted: PeakRow[] = [];
-  const intrusions: PeakRow[] = [];
+  const intrusions: PeakRow[][] = channels.map(() => []);
   for (const bin of measurement.peaks) {
     const level = db(measurement.levels[bin]!);
     const owner = strongestWithin(measurement.components, bin, 1, samples);
-    if (owner?.wanted) continue;
-    const row = { frequency: hz(bin * binWidth), bin, level, explainedBy: null as string | null, distance: hz(distance(bin * binWidth)) };
-    if (!matched.has(bin) && !(owner && judged.lineKeys.has(owner.key))) {
+    const ownChannel = owner?.wanted ? (owner.channel ?? 0) : null;
+    if (ownChannel !== null && channels.length === 1) continue;
+    const f = bin * binWidth;
+    const row = {
+      frequency: hz(f),
+      bin,
+      level,
+      explainedBy: null as string | null,
+      distance: hz(Math.min(...channels.map((c) => distanceTo(c.image, f)))),
+    };
+    if (ownChannel === null && !matched.has(bin) && !(owner && judged.lineKeys.has(owner.key))) {
       const beside = strongestWithin(measurement.components, bin, SEARCH_BINS, samples);
       row.explainedBy = owner
         ? `${owner.name} (order ${owner.order}), a product the plan does not list`
@@ -286,9 +436,64 @@ function sortPeaks(
           : null;
       unlisted.push(row);
     }
-    if (level > measurement.threshold && (row.distance < marginAt(bin) || strictlyInside(bin * binWidth))) intrusions.push(row);
+    channels.forEach((side, c) => {
+      if (c === ownChannel) return;
+      const distance = hz(distanceTo(side.image, f));
+      const explainedBy = ownChannel === null ? row.explainedBy : `${owner!.name}, a tone of channel ${channels[ownChannel]!.label}`;
+      if (level > side.threshold && (distance < side.marginAt(bin) || strictlyInside(side.image, f)))
+        intrusions[c]!.push(channels.length === 1 ? row : { ...row, distance, explainedBy });
+    });
   }
   return { unlisted, intrusions };
+}
+
+/**
+ * Where a channel's own tones show in the capture, set beside the plan's
+ * image of that channel: each tone's peak (its own whole-cycle fold, ±1
+ * bin) measured, and the order of the measured places against the order of
+ * the tones at the input (rising: upright; falling: inverted). Contradicts
+ * the plan when a tone the capture shows lies outside the plan's image, or
+ * the order says the other inversion. A channel straddling a zone edge (no
+ * single image) is only measured.
+ */
+function tonePlacement(
+  side: ChannelSide,
+  channel: number,
+  tones: readonly CaptureTone[],
+  measurement: Measurement,
+  record: CaptureRecord,
+): { seen: number; order: NonNullable<VerifiedChannel['order']>; contradiction: string | null } {
+  const { samples } = record;
+  const binWidth = record.rate / samples;
+  const own = tones.filter((t) => t.source.kind === 'wanted' && t.source.channel === channel).sort((a, b) => a.frequency - b.frequency);
+  const peaks = new Set(measurement.peaks);
+  const seen = own.flatMap((t) => {
+    const bin = foldCycles(t.cycles, samples);
+    const found = [bin, bin - 1, bin + 1].find((b) => peaks.has(b));
+    return found === undefined ? [] : [{ tone: t, bin: found }];
+  });
+  const rising = seen.every((p, i) => i === 0 || p.bin > seen[i - 1]!.bin);
+  const falling = seen.every((p, i) => i === 0 || p.bin < seen[i - 1]!.bin);
+  const order: NonNullable<VerifiedChannel['order']> =
+    seen.length === 0 ? 'unseen' : seen.length === 1 ? 'one tone' : rising ? 'upright' : falling ? 'inverted' : 'folded';
+  if (side.zone === null || side.image.length !== 1) return { seen: seen.length, order, contradiction: null };
+  const [[low, high]] = side.image as [readonly [Hz, Hz]];
+  const outside = seen.filter((p) => p.bin * binWidth < low - binWidth || p.bin * binWidth > high + binWidth);
+  if (outside.length > 0) {
+    const names = outside.map((p) => `${p.tone.label} at ${T.frequency(p.bin * binWidth)}`).join(', ');
+    return {
+      seen: seen.length,
+      order,
+      contradiction: `${names} outside the plan's image ${T.extent(low, high)} (zone ${side.zone})`,
+    };
+  }
+  if (seen.length > 1 && order !== (side.inverted ? 'inverted' : 'upright'))
+    return {
+      seen: seen.length,
+      order,
+      contradiction: `the tones show the channel ${order}, the plan says zone ${side.zone}${side.inverted ? ' (inverted)' : ''}`,
+    };
+  return { seen: seen.length, order, contradiction: null };
 }
 
 /** Each reason the capture contradicts the plan, in words. */
@@ -298,6 +503,7 @@ function contradictionWords(
   threshold: number,
   marginAt: (bin: number) => Hz,
   plan: { readonly pass: boolean; readonly checks: ReadonlyArray<{ readonly label: string; readonly pass: boolean }> },
+  imageName: string,
 ): string[] {
   return [
     ...predictions.filter((p) => CONTRADICTING.has(p.status)).map((p) => `${p.check} (${p.line}): ${p.status}: ${p.note}`),
@@ -313,8 +519,8 @@ function contradictionWords(
       .map((u) => {
         const where =
           u.distance === 0
-            ? 'lies inside the wanted image'
-            : `lies ${T.frequency(u.distance)} from the wanted image, inside the ${T.frequency(marginAt(u.bin))} margin`;
+            ? `lies inside ${imageName}`
+            : `lies ${T.frequency(u.distance)} from ${imageName}, inside the ${T.frequency(marginAt(u.bin))} margin`;
         return `${T.frequency(u.frequency)} at ${T.level(u.level)} dBFS (${u.explainedBy ?? lineName(predictions, u.bin)}) ${where}: the rate is not clean`;
       }),
   ];
@@ -432,6 +638,7 @@ function toneRow(tone: CaptureTone, samples: number): ToneRow {
 }
 
 function comparedText(
+  channels: readonly string[],
   wantedTones: number,
   tolerance: number,
   floor: number,
@@ -443,8 +650,12 @@ function comparedText(
     wantedTones === 1
       ? 'one tone at the strongest wanted level'
       : `${wantedTones} tones, each 20·log10(${wantedTones}) dB below the strongest wanted level`;
+  const represented =
+    channels.length > 1
+      ? `Each of the ${channels.length} channels (${channels.join(', ')}) is represented by ${wanted.replace('the strongest wanted level', "that channel's strongest level")}`
+      : `The wanted band is represented by ${wanted}`;
   const lines = [
-    `The plan at this rate (no drift) against a simulated capture. The wanted band is represented by ${wanted}, each band neighbour by one tone at its centre at its level after the filter.`,
+    `The plan at this rate (no drift) against a simulated capture. ${represented}, each band neighbour by one tone at its centre at its level after the filter.`,
     "Tone sources (board spurs and their harmonics, tone neighbours, rate-tied converter spurs) were moved to the nearest whole number of cycles in the record (moves listed) and the plan was re-derived there; for each, the plan's aliased position is compared with the measured peak.",
     "Band sources are represented by their tones: each mixing product the plan lists was formed from its recipe (every choice of the signals' tones with the listed plus and minus counts, e.g. 3·W1, W1 + W2 − B1) by whole-cycle arithmetic, checked against the plan's aliased segments, and measured.",
     ...(interleaved
@@ -453,6 +664,11 @@ function comparedText(
         ]
       : []),
     ...(wantedTones === 1 ? ['With one wanted tone the differences inside the wanted band make no line: a tone less itself is DC.'] : []),
+    ...(channels.length > 1
+      ? [
+          "Each channel's checks are judged against that channel's threshold. Where each channel's tones show must lie in the plan's image of that channel (within one bin), in rising order for an upright zone and falling for an inverted one; a peak above a channel's threshold inside its image or within its margin (another channel's tones included) contradicts the plan unless it is a line of a check the plan fails there.",
+        ]
+      : []),
     `Positions must agree within one bin. Levels are judged ${T.decibels(tolerance)} dB either way where the plan's level is the level the capture put there (stated spurs, neighbours, and with one wanted tone its harmonics and images); where the plan's level is a band's worst case or an extrapolation (neighbour harmonics, intermodulation, several wanted tones), the measurement must not exceed it by more than ${T.decibels(tolerance)} dB when above the threshold.`,
     `Peaks above ${T.level(floor)} dBFS count; any above the threshold ${T.level(threshold)} dBFS that no line of the plan explains, or that lands inside the wanted image or within the margin its interferer must keep from it (unless it is a line of a check the plan fails at this rate, which confirms the plan's failure), contradicts the plan.`,
   ];

@@ -42,8 +42,10 @@ export interface VerifyResult {
   readonly underFloor: readonly UnderFloor[];
   /** Measured peaks that no line of the plan accounts for. */
   readonly unlisted: readonly PeakRow[];
-  /** Peaks above the threshold inside the margin of the wanted image. */
+  /** Peaks above the threshold inside the margin of the wanted image (with several channels, of any channel's image, each under its channel). */
   readonly intrusions: readonly PeakRow[];
+  /** The wanted band (one entry, labelled "wanted"), or each of several channels: the plan there and what the capture shows of it. */
+  readonly channels: readonly VerifiedChannel[];
   /** The plan's own verdict at the nominal rate, no drift. */
   readonly plan: { readonly pass: boolean; readonly limitedBy: string; readonly limitedByKind: LimitKind; readonly worstMargin: Hz };
   /** Interferers of the plan that nothing in the capture stands for. */
@@ -56,6 +58,35 @@ export interface VerifyResult {
   /** What was compared with what, in words. */
   readonly compared: string;
   readonly caution: string;
+}
+
+/**
+ * One channel in a capture: the plan's zone, inversion, image and verdict
+ * for it, and what the capture shows. With several channels the capture
+ * places tones across each channel's band; their measured places must lie
+ * in the plan's image of that channel, in the order its inversion says, and
+ * no peak above the channel's threshold may land in its image or within the
+ * margin of it (another channel's tones included).
+ */
+export interface VerifiedChannel {
+  readonly label: string;
+  readonly zone: number | null;
+  readonly inverted: boolean | null;
+  /** The channel after sampling, [low, high] segments, Hz. */
+  readonly image: ReadonlyArray<readonly [Hz, Hz]>;
+  /** This channel's weakest level less its rejection, dBFS. */
+  readonly threshold: Db;
+  /** The plan's verdict for this channel at the nominal rate, no drift. */
+  readonly planPass: boolean;
+  /** How many of the channel's tones show as peaks (±1 bin of their fold); null for a single wanted band (not judged this way). */
+  readonly tonesSeen: number | null;
+  /** The order of those peaks against the tones' order at the input: upright (rising), inverted (falling), folded (neither), one tone (no order to see) or unseen; null for a single wanted band. */
+  readonly order: 'upright' | 'inverted' | 'folded' | 'one tone' | 'unseen' | null;
+  /** Peaks above this channel's threshold inside its image or within their margin of it. */
+  readonly intrusions: readonly PeakRow[];
+  /** Each reason the capture contradicts the plan for this channel, in words; empty when it agrees. */
+  readonly contradictions: readonly string[];
+  readonly consistent: boolean;
 }
 
 /** Lines of one check that the model puts under the floor. */

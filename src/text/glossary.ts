@@ -45,7 +45,7 @@ export const GLOSSARY: readonly GlossaryEntry[] = [
   {
     term: 'zone',
     kind: 'column',
-    commands: ['windows', 'alias', ...PARTS],
+    commands: ['windows', 'alias', ...PARTS, 'verify'],
     csv: ['zone'],
     meaning:
       'the Nyquist zone n the band (or tone) falls in: n·rate/2 is its upper edge; "2 inv": zone 2, inverted; "straddles": the band crosses a zone edge',
@@ -97,7 +97,13 @@ export const GLOSSARY: readonly GlossaryEntry[] = [
   },
   // Several bands through one converter (windows --band).
   { term: 'band', kind: 'column', commands: ['windows'], meaning: 'the number of the band, in the order the --band options give them' },
-  { term: 'edges', kind: 'column', commands: ['windows'], meaning: 'the band from its low to its high edge', unit: 'Hz' },
+  {
+    term: 'edges',
+    kind: 'column',
+    commands: ['windows', 'report'],
+    meaning: 'the band (or channel) from its low to its high edge',
+    unit: 'Hz',
+  },
   { term: 'guard below', kind: 'column', commands: ['windows'], meaning: "the guard band kept free under the band's low edge", unit: 'Hz' },
   { term: 'guard above', kind: 'column', commands: ['windows'], meaning: "the guard band kept free over the band's high edge", unit: 'Hz' },
   {
@@ -146,6 +152,67 @@ export const GLOSSARY: readonly GlossaryEntry[] = [
     commands: ['report'],
     meaning: 'the guard bands kept free below and above the wanted band, for the anti-alias filter',
     unit: 'Hz',
+  },
+  // Several channels through one converter.
+  {
+    term: 'weakest level dBFS',
+    kind: 'column',
+    commands: ['report'],
+    meaning: "the channel's weakest level, at which its requirements apply",
+    unit: 'dBFS',
+  },
+  { term: 'strongest level dBFS', kind: 'column', commands: ['report'], meaning: "the channel's strongest level", unit: 'dBFS' },
+  {
+    term: 'centre after sampling',
+    kind: 'column',
+    commands: ['report'],
+    meaning: "where the channel's centre shows after sampling, between 0 and rate/2",
+    unit: 'Hz',
+  },
+  {
+    term: 'image (plan)',
+    kind: 'column',
+    commands: ['verify'],
+    meaning: 'where the plan puts the channel after sampling, low to high edge',
+    unit: 'Hz',
+  },
+  {
+    term: 'tones seen',
+    kind: 'column',
+    commands: ['verify'],
+    meaning: "how many of the channel's tones show as peaks in the capture, of those synthesised",
+  },
+  {
+    term: 'order seen',
+    kind: 'column',
+    commands: ['verify'],
+    meaning:
+      "the order of those peaks against the tones' order at the input: upright (rising), inverted (falling), folded (neither), one tone (no order to see) or unseen",
+  },
+  {
+    term: 'peaks on it',
+    kind: 'column',
+    commands: ['verify'],
+    meaning: "measured peaks above the channel's threshold inside its image or within their margin of it",
+  },
+  {
+    term: 'plan',
+    kind: 'column',
+    commands: ['verify'],
+    meaning: "the plan's verdict for the channel at this rate, no drift: pass or FAIL",
+  },
+  {
+    term: 'capture',
+    kind: 'column',
+    commands: ['verify'],
+    meaning: 'whether the capture agrees with the plan for the channel, or contradicts it',
+  },
+  {
+    term: 'threshold dBFS',
+    kind: 'column',
+    commands: ['verify'],
+    meaning: "the channel's weakest level less its rejection: peaks above it must keep clear of the channel",
+    unit: 'dBFS',
   },
   { term: 'rates searched', kind: 'column', commands: ['report'], meaning: "the converter's range of sampling rates", unit: 'Hz' },
   {
@@ -248,7 +315,7 @@ export const GLOSSARY: readonly GlossaryEntry[] = [
   {
     term: 'channel',
     kind: 'column',
-    commands: PARTS,
+    commands: [...PARTS, 'verify'],
     csv: ['channels'],
     meaning: 'with a list of channels in the scenario\'s wanted, one channel by its label (CSV: every label, separated by ";")',
   },

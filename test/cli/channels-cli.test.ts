@@ -2,14 +2,14 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { ensureBuilt, expectRefusal, runBin } from '../helpers/run-bin.js';
+import { ensureBuilt, runBin } from '../helpers/run-bin.js';
 
 /**
  * Several channels end to end through the real bin/ifzone on the invented
  * Heron dual-band variant (scenarios/heron-dual.json): the JSON contract
  * (the report's and every candidate's channels, the worst over channels at
  * the top), the per-channel tables within 100 columns, the compare CSV's
- * channel columns, and verify's one-line refusal. Plumbing: the reference
+ * channel columns (verify of several channels: verify-channels-cli.test.ts). Plumbing: the reference
  * values of the algebra are in test/solve/channels-*.test.ts.
  */
 
@@ -152,11 +152,5 @@ describe('a list of one channel', () => {
     expect(listed.stdout).toBe(object.stdout);
     const json = JSON.parse(runBin('solve', join(dir, 'one.json'), '--json').stdout);
     expect(json.channels.map((c: { label: string }) => c.label)).toEqual(['L1']);
-  });
-});
-
-describe('verify on a scenario with two channels', () => {
-  it('refuses with one line naming wanted', () => {
-    expectRefusal(runBin('verify', DUAL, '--rate', '228M'), 'wanted', 'list of channels');
   });
 });

@@ -14,12 +14,13 @@ import { captureTones } from '../../src/capture/capture-tones.js';
 import { inputIndex } from '../../src/capture/family-lines.js';
 import { hz } from '../../src/units/quantities.js';
 import { verifyCaptureWithSpectrum } from '../../src/report/verify-capture.js';
+import { twoChannelReport } from '../helpers/channel-report.js';
 
 /**
  * The names a doc example may use besides its own module's exports: the
  * public API, and fixtures named in the examples (the demo scenarios, the
  * plan worked on paper in test/solve/hand-worked.test.ts, the test fixture
- * scenario `s`, the best candidate of the demo, its capture tones, a
+ * scenario `s`, a hand-made report of two channels, the best candidate of the demo, its capture tones, a
  * capturing `io`, a temporary directory).
  */
 export async function exampleScope(): Promise<Record<string, unknown>> {
@@ -54,6 +55,7 @@ export async function exampleScope(): Promise<Record<string, unknown>> {
     Command,
     narrowReport: planScenario(heronNarrow),
     handWorked,
+    twoChannels: twoChannelReport(),
     handWorkedSet: planRates(handWorked),
     blocking: handWorked.interferers.filter((i) => i.blocking),
     s: scenarioFixture(),

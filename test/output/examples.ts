@@ -27,6 +27,7 @@ export const TEXT_EXAMPLES: ReadonlyArray<readonly [string, readonly string[]]> 
   ['compare-dual.csv', ['compare', scenario('heron-base'), scenario('heron-dual'), '--csv']],
   ['verify-heron-base.txt', ['verify', scenario('heron-base'), '--rate', '184.32M']],
   ['verify-failing-rate.txt', ['verify', scenario('heron-base'), '--rate', '245.76M']],
+  ['verify-heron-dual.txt', ['verify', scenario('heron-dual'), '--rate', '184.32M', '--samples', '16384']],
 ];
 
 export const FILE_EXAMPLES: ReadonlyArray<readonly [string, readonly string[]]> = [

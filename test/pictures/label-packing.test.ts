@@ -18,6 +18,13 @@ describe('packLabels', () => {
     { maxLength: 40 },
   );
 
+  it('gives a text wider than the bounds its short form (a long list of checks on a lane), never a place past the edges', () => {
+    // 100 characters at 10 px and 0.62 em: 620 px, wider than the 400 px of room.
+    const placed = packLabels([{ x: 200, text: 'x'.repeat(100), short: '1,2,3', item: 0 }], 2, [0, 400], 10);
+    expect(placed.map((p) => p.text)).toEqual(['1,2,3']);
+    expect(packLabels([{ x: 200, text: 'x'.repeat(100), item: 0 }], 2, [0, 400], 10)).toEqual([]);
+  });
+
   it('never overlaps two labels, or a label and another bracket, in one row; stays inside the bounds', () => {
     fc.assert(
       fc.property(requests, fc.integer({ min: 1, max: 5 }), (raw, rows) => {

@@ -26,21 +26,13 @@ const MOST_TONES = 5;
  * @param options --rate, --tones, --samples, --json, --svg, --force as written
  * @param io where the table or JSON goes
  * @returns 0 when the capture agrees with the plan, 1 when it contradicts it
- * @throws InputError (exit 2) for a scenario with a list of channels, a rate outside the converter's range, a bad --tones or --samples, a band too narrow for the record, or an --svg path that exists (without --force) or is the scenario
+ * @throws InputError (exit 2) for a rate outside the converter's range, a bad --tones or --samples, a band (or a channel) too narrow for the record, or an --svg path that exists (without --force) or is the scenario
  * @example runVerify('scenarios/heron-base.json', { rate: '184.32M', tones: '1', samples: '65536' }, io) // 0
  */
 export function runVerify(file: string, options: VerifyOptions, io: Io): ExitCode {
   const progress = progressNotes(io);
   const width = layoutWidth(options, io);
   const { scenario, inputs } = readScenarioWithInputs(file);
-  if (scenario.channels.length > 1) {
-    // The capture synthesises one wanted band's tones; a list of channels is planned by solve, compare and report.
-    throw new InputError(
-      `${file}: wanted`,
-      'one wanted band: verify does not simulate a list of channels yet (solve, compare and report plan them)',
-      `${scenario.channels.length} channels`,
-    );
-  }
   const rate = positiveFrequency(options.rate, '--rate');
   const { minRate, maxRate } = scenario.converter;
   if (rate < minRate || rate > maxRate) {
@@ -53,13 +45,18 @@ export function runVerify(file: string, options: VerifyOptions, io: Io): ExitCod
   const wantedTones = wholeNumber(options.tones, '--tones', 1, MOST_TONES);
   const samples = wholeNumber(options.samples, '--samples', 1024, 1048576);
   if ((samples & (samples - 1)) !== 0) throw new InputError('--samples', 'a power of two, e.g. 65536', options.samples);
-  const bandBins = ((scenario.wanted.high - scenario.wanted.low) * samples) / rate;
-  if (bandBins < BINS_PER_TONE * wantedTones) {
-    throw new InputError(
-      '--samples',
-      `a record long enough for ${wantedTones} tone(s) in the wanted band (${BINS_PER_TONE} bins each; the band spans ${bandBins.toFixed(1)})`,
-      options.samples,
-    );
+  // Every channel's band must hold its tones apart (one channel: the wanted band).
+  const bands = scenario.channels.length > 1 ? scenario.channels : [{ ...scenario.wanted, label: 'wanted' }];
+  for (const band of bands) {
+    const bandBins = ((band.high - band.low) * samples) / rate;
+    if (bandBins < BINS_PER_TONE * wantedTones) {
+      const where = bands.length > 1 ? `channel ${band.label}` : 'the wanted band';
+      throw new InputError(
+        '--samples',
+        `a record long enough for ${wantedTones} tone(s) in ${where} (${BINS_PER_TONE} bins each; the band spans ${bandBins.toFixed(1)})`,
+        options.samples,
+      );
+    }
   }
   if (options.svg !== undefined) checkOutputPaths([options.svg], { force: options.force === true, inputs });
   const { result, levels } = verifyCaptureWithSpectrum(scenario, { rate, samples, wantedTones });
