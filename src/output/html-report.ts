@@ -274,7 +274,7 @@ function channelResultsTable(report: ChannelPlanReport): string {
 
 /** The checks of the candidate in focus, one table per channel (the checks against that channel). */
 function channelChecksTables(candidate: ChannelCandidate): string {
-  return candidate.channels.map((ch) => checksTable({ ...candidate, checks: ch.checks }, ` against channel ${ch.label}`)).join('\n');
+  return candidate.channels.map((ch) => checksTable({ ...candidate, checks: ch.checks ?? [] }, ` against channel ${ch.label}`)).join('\n');
 }
 
 function checksTable(candidate: ReportedCandidate, against = ''): string {

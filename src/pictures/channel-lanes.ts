@@ -26,7 +26,7 @@ const ZONE_FONT = 8.5;
 export function pairSpacing(report: ChannelPlanReport): (first: number, second: number) => Hz | null {
   const candidate = report.candidates[0];
   const required = (of: number, other: number): number | null => {
-    const check = candidate?.channels[of]?.checks.find(
+    const check = candidate?.channels[of]?.checks?.find(
       (c) => (c.kind as string) === 'channel' && c.label === report.channels[other]!.label,
     );
     return check && check.blocking ? check.requiredMargin : null;

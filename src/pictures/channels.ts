@@ -51,7 +51,7 @@ export function channelReportView(report: ChannelPlanReport, index: number): Pla
       limitedByKind: own.limitedByKind,
       worstSlack: own.worstSlack,
       pass: own.pass,
-      checks: own.checks,
+      checks: own.checks ?? c.checks,
       channels: [own],
     };
   });

@@ -432,10 +432,11 @@ function channelLevels(report: ChannelPlanReport, candidate: ChannelCandidate) {
   const tightness = (c: ReportedCheck) => (c.blocking ? c.margin - c.requiredMargin : c.margin);
   let threshold: { level: number | null; channel: string | null } = { level: null, channel: null };
   for (const result of candidate.channels) {
-    const first = result.checks[0];
+    const own = result.checks ?? [];
+    const first = own[0];
     if (first && (threshold.level === null || first.level + first.levelMargin < threshold.level))
       threshold = { level: first.level + first.levelMargin, channel: result.label };
-    for (const check of result.checks) {
+    for (const check of own) {
       const seen = byLabel.get(check.label);
       if (!seen) byLabel.set(check.label, { check, channel: result.label, pass: check.pass });
       else

@@ -108,14 +108,14 @@ describe('the spectrum of two channels', () => {
   it('lists every interferer of every channel once, against the channel it comes closest to', () => {
     const candidate = report.candidates[0]!;
     const texts = textsOf(parseSvg(spectrumSvg(asPlan, candidate.label)));
-    const labels = new Set(candidate.channels.flatMap((c) => c.checks.map((k) => k.label)));
+    const labels = new Set(candidate.channels.flatMap((c) => (c.checks ?? []).map((k) => k.label)));
     for (const label of labels) {
       const rows = texts.filter((t) => t.startsWith(`${label} → `));
       expect(rows, label).toHaveLength(1);
       const [, channel] = rows[0]!.split(' → ');
       // The named channel is the tightest: no other channel's check of this label has less slack.
       const slack = (c: (typeof candidate.channels)[number]) => {
-        const k = c.checks.find((x) => x.label === label);
+        const k = (c.checks ?? []).find((x) => x.label === label);
         return k === undefined ? Infinity : k.blocking ? k.margin - k.requiredMargin : k.margin;
       };
       const named = candidate.channels.find((c) => c.label === channel)!;
