@@ -21,11 +21,12 @@ const lazyChildProcess = {
   name: 'lazy-child-process',
   setup(build) {
     build.onResolve({ filter: /^(node:)?child_process$/ }, (args) =>
-      /[\\/]node_modules[\\/](commander|javascript-lp-solver)[\\/]/.test(args.importer) ? { path: 'child_process', namespace: 'lazy-builtin' } : undefined,
+      /[\\/]node_modules[\\/](commander|javascript-lp-solver)[\\/]/.test(args.importer)
+        ? { path: 'child_process', namespace: 'lazy-builtin' }
+        : undefined,
     );
     build.onLoad({ filter: /.*/, namespace: 'lazy-builtin' }, () => ({
-      contents:
-        "let real; module.exports = new Proxy({}, { get: (_, key) => (real ??= require('node:child_process'))[key] });",
+      contents: "let real; module.exports = new Proxy({}, { get: (_, key) => (real ??= require('node:child_process'))[key] });",
       loader: 'js',
     }));
   },

@@ -1,9 +1,13 @@
+import { phaseTable, type PhaseTable } from './phase-table.js';
+
 /**
  * A small radix-2 FFT, so that the capture does not depend at run time on a
  * test-only library. Forward transform X[k] = Σₙ x[n]·e^(−2πi·kn/N), no
- * scaling. Twiddles are computed from the index in one expression each
- * (cos(2π·j/N)), not by accumulated rotation, so every factor is as exact as
- * Math.cos allows.
+ * scaling. Twiddles are read from phaseTable, each computed from its index
+ * in one expression (cos(2π·j/N)), not by accumulated rotation, so every
+ * factor is as exact as Math.cos allows; a real transform of N samples and
+ * its complex one of N/2 read one table of N, which the capture's tones and
+ * window read too.
  */
 
 /**
@@ -28,28 +32,34 @@ export function fftInPlace(re: Float64Array, im: Float64Array): void {
   const n = re.length;
   if (im.length !== n || !isPowerOfTwo(n))
     throw new RangeError(`FFT needs two arrays of one power-of-two length, got ${re.length} and ${im.length}`);
+  transform(re, im, phaseTable(n));
+}
+
+/** fftInPlace on checked arrays, its twiddles read from a table of any power-of-two length L ≥ N (entry j·L/N). */
+function transform(re: Float64Array, im: Float64Array, table: PhaseTable): void {
+  const n = re.length;
   for (let i = 1, j = 0; i < n; i++) {
     let bit = n >> 1;
     for (; j & bit; bit >>= 1) j ^= bit;
     j ^= bit;
     if (i < j) {
-      [re[i], re[j]] = [re[j]!, re[i]!];
-      [im[i], im[j]] = [im[j]!, im[i]!];
+      const r = re[i]!;
+      re[i] = re[j]!;
+      re[j] = r;
+      const m = im[i]!;
+      im[i] = im[j]!;
+      im[j] = m;
     }
   }
-  const cos = new Float64Array(n >> 1);
-  const sin = new Float64Array(n >> 1);
-  for (let j = 0; j < n >> 1; j++) {
-    cos[j] = Math.cos((2 * Math.PI * j) / n);
-    sin[j] = -Math.sin((2 * Math.PI * j) / n);
-  }
+  const { cos, sin } = table;
+  const stride = cos.length / n;
   for (let size = 2; size <= n; size <<= 1) {
     const half = size >> 1;
-    const step = n / size;
+    const step = (n / size) * stride;
     for (let start = 0; start < n; start += size) {
       for (let k = 0; k < half; k++) {
         const wr = cos[k * step]!;
-        const wi = sin[k * step]!;
+        const wi = -sin[k * step]!;
         const a = start + k;
         const b = a + half;
         const tr = wr * re[b]! - wi * im[b]!;
@@ -91,7 +101,8 @@ export function realFft(samples: ArrayLike<number>): HalfSpectrum {
     zr[m] = samples[2 * m]!;
     zi[m] = samples[2 * m + 1]!;
   }
-  fftInPlace(zr, zi);
+  const table = phaseTable(n);
+  transform(zr, zi, table);
   const re = new Float64Array(half + 1);
   const im = new Float64Array(half + 1);
   for (let k = 0; k <= half; k++) {
@@ -101,8 +112,8 @@ export function realFft(samples: ArrayLike<number>): HalfSpectrum {
     const ei = (zi[a]! - zi[b]!) / 2;
     const or = (zi[a]! + zi[b]!) / 2;
     const oi = (zr[b]! - zr[a]!) / 2;
-    const c = Math.cos((2 * Math.PI * k) / n);
-    const s = -Math.sin((2 * Math.PI * k) / n);
+    const c = table.cos[k]!;
+    const s = -table.sin[k]!;
     re[k] = er + c * or - s * oi;
     im[k] = ei + c * oi + s * or;
   }

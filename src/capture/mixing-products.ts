@@ -43,17 +43,25 @@ export function productAmplitude(coefficients: Coefficients, amplitudes: readonl
   const highest = coefficients.length - 1;
   if (r === 0 || r > highest) return 0;
   const pairsMost = Math.floor((highest - r) / 2);
-  // series[j] = Σ over (j₁..j_T, Σ = j) of Πᵢ Aᵢ^(|nᵢ|+2jᵢ) / ((|nᵢ|+jᵢ)!·jᵢ!)
-  let series = [1];
+  // series[j] = Σ over (j₁..j_T, Σ = j) of Πᵢ Aᵢ^(|nᵢ|+2jᵢ) / ((|nᵢ|+jᵢ)!·jᵢ!); the enumeration calls this thousands of
+  // times in one verify, so the terms live in three small arrays reused across tones.
+  let series = new Float64Array(pairsMost + 1);
+  let next = new Float64Array(pairsMost + 1);
+  const own = new Float64Array(pairsMost + 1);
+  series[0] = 1;
+  let length = 1;
   for (let i = 0; i < net.length; i++) {
     const n = Math.abs(net[i]!);
     const a = amplitudes[i]!;
     // A tone outside the product enters only through pairs (+f, −f), each worth about a² (< 1e-6 here): left out.
     if (n === 0 && a < NEGLIGIBLE_PAIR_AMPLITUDE) continue;
-    const own = Array.from({ length: pairsMost + 1 }, (_, j) => a ** (n + 2 * j) / (factorial(n + j) * factorial(j)));
-    const next = new Array<number>(pairsMost + 1).fill(0);
-    for (let x = 0; x < series.length; x++) for (let y = 0; x + y <= pairsMost; y++) next[x + y]! += series[x]! * own[y]!;
-    series = next;
+    for (let j = 0; j <= pairsMost; j++) own[j] = a ** (n + 2 * j) / (factorial(n + j) * factorial(j));
+    next.fill(0);
+    for (let x = 0; x < length; x++) for (let y = 0; x + y <= pairsMost; y++) next[x + y]! += series[x]! * own[y]!;
+    const done = next;
+    next = series;
+    series = done;
+    length = pairsMost + 1;
   }
   let sum = 0;
   for (let j = 0; j <= pairsMost; j++) {

@@ -5,7 +5,8 @@ import { applyCoreGains, type CoreMismatch } from './interleave-mismatch.js';
 import { quantise } from './quantiser.js';
 import { seededUniform } from './seeded-random.js';
 import { findPeaks, levelSpectrum, type LevelSpectrum } from './capture-spectrum.js';
-import { addSkewedTones, addTones, phaseTable } from './tone-synthesis.js';
+import { phaseTable } from './phase-table.js';
+import { addSkewedTones, addTones } from './tone-synthesis.js';
 import type { SpectralWindow } from './window.js';
 
 /** Peaks count this far above the median bin, dB: noise bins (exponentially distributed power) pass it about once in 3·10⁹. */

@@ -116,25 +116,39 @@ export function crowding(
   inputs: readonly number[],
   samples: number,
 ): number {
-  const placed = components.map((c) => {
-    const total =
-      c.net === null ? cycles[c.tone!]! : c.net.reduce((sum, n, i) => (n === 0 ? sum : sum + n * cycles[inputs[i]!]!), c.offset ?? 0);
+  // Each component as one number, bin·4 + 2·watched + atEdge, so that a plain numeric sort orders them by bin
+  // (a layout search calls this hundreds of times: no object per component, no comparator).
+  const placed = new Float64Array(components.length);
+  for (let k = 0; k < components.length; k++) {
+    const c = components[k]!;
+    let total: number;
+    if (c.net === null) total = cycles[c.tone!]!;
+    else {
+      total = c.offset ?? 0;
+      for (let i = 0; i < c.net.length; i++) if (c.net[i] !== 0) total += c.net[i]! * cycles[inputs[i]!]!;
+    }
     const bin = foldCycles(total, samples);
-    return { bin, watched: c.watched, atEdge: c.net === null && (bin === 0 || bin === samples / 2) };
-  });
-  placed.sort((a, b) => a.bin - b.bin);
+    const atEdge = c.net === null && (bin === 0 || bin === samples / 2);
+    placed[k] = bin * 4 + (c.watched ? 2 : 0) + (atEdge ? 1 : 0);
+  }
+  placed.sort();
+  const binOf = (code: number) => Math.floor(code / 4);
+  const watchedOf = (code: number) => (code & 2) !== 0;
   let close = 0;
   for (let i = 0; i < placed.length; i++) {
     const a = placed[i]!;
-    for (let j = i + 1; j < placed.length && placed[j]!.bin - a.bin < CLEAR_BINS; j++) if (a.watched || placed[j]!.watched) close++;
+    const bin = binOf(a);
+    for (let j = i + 1; j < placed.length && binOf(placed[j]!) - bin < CLEAR_BINS; j++) if (watchedOf(a) || watchedOf(placed[j]!)) close++;
   }
-  const nearEdges = placed.filter((c) => c.bin < CLEAR_BINS || c.bin > samples / 2 - CLEAR_BINS);
+  const nearEdges = placed.filter((code) => binOf(code) < CLEAR_BINS || binOf(code) > samples / 2 - CLEAR_BINS);
   for (let i = 0; i < nearEdges.length; i++) {
     const a = nearEdges[i]!;
-    if (a.watched && !a.atEdge && Math.min(2 * a.bin, samples - 2 * a.bin) < CLEAR_BINS) close++;
+    const aBin = binOf(a);
+    if (watchedOf(a) && (a & 1) === 0 && Math.min(2 * aBin, samples - 2 * aBin) < CLEAR_BINS) close++;
     for (let j = i + 1; j < nearEdges.length; j++) {
       const b = nearEdges[j]!;
-      if ((a.watched || b.watched) && Math.abs(a.bin - b.bin) >= CLEAR_BINS && binDistance(a.bin, b.bin, samples) < CLEAR_BINS) close++;
+      const bBin = binOf(b);
+      if ((watchedOf(a) || watchedOf(b)) && Math.abs(aBin - bBin) >= CLEAR_BINS && binDistance(aBin, bBin, samples) < CLEAR_BINS) close++;
     }
   }
   return close;

@@ -1,31 +1,13 @@
+import { phaseTable, type PhaseTable } from './phase-table.js';
+
+export { phaseTable, type PhaseTable };
+
 /** A tone to synthesise: A·cos(2π·c·n/N + φ) with c whole cycles in the record. */
 export interface SampledTone {
   readonly cycles: number;
   readonly amplitude: number;
   /** Phase φ, radians. */
   readonly phase: number;
-}
-
-/** cos and sin of 2π·m/N for m = 0..N−1. */
-export interface PhaseTable {
-  readonly cos: Float64Array;
-  readonly sin: Float64Array;
-}
-
-/**
- * The table addTones reads phases from, computed once per record length.
- *
- * @param samples record length N
- * @example phaseTable(4).cos // [1, 0, −1, 0] (to rounding)
- */
-export function phaseTable(samples: number): PhaseTable {
-  const cos = new Float64Array(samples);
-  const sin = new Float64Array(samples);
-  for (let m = 0; m < samples; m++) {
-    cos[m] = Math.cos((2 * Math.PI * m) / samples);
-    sin[m] = Math.sin((2 * Math.PI * m) / samples);
-  }
-  return { cos, sin };
 }
 
 /**

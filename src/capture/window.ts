@@ -1,3 +1,5 @@
+import { phaseTable } from './phase-table.js';
+
 /**
  * The 4-term Blackman–Harris window (F. J. Harris, "On the use of windows for
  * harmonic analysis with the discrete Fourier transform", Proc. IEEE 66(1),
@@ -35,11 +37,12 @@ export interface SpectralWindow {
 export function blackmanHarris(length: number): SpectralWindow {
   const [a0, a1, a2, a3] = BLACKMAN_HARRIS_4;
   const weights = new Float64Array(length);
+  // cos(k·2πn/N) = cos(2π·(k·n mod N)/N): read from the table the capture's tones and FFT read too.
+  const { cos } = phaseTable(length);
   let sum = 0;
   let squares = 0;
   for (let n = 0; n < length; n++) {
-    const t = (2 * Math.PI * n) / length;
-    const w = a0 - a1 * Math.cos(t) + a2 * Math.cos(2 * t) - a3 * Math.cos(3 * t);
+    const w = a0 - a1 * cos[n]! + a2 * cos[(2 * n) % length]! - a3 * cos[(3 * n) % length]!;
     weights[n] = w;
     sum += w;
     squares += w * w;
