@@ -82,11 +82,18 @@ export function chooseLayout(scenario: Scenario, record: CaptureRecord, componen
   for (const { offsets, slot, tones, allowed } of movable) {
     let best = { offset: 0, cost: Infinity };
     const share = Math.max(8, Math.floor((LAYOUT_BUDGET - tried) / Math.max(1, movable.length))); // each tone gets a fair part of what is left
+    // Only this tone moves: each component's whole cycles are its total at offset 0 plus its multiple of the tone times the offset.
+    for (const j of tones) cycles[j] = base[j]!.cycles;
+    const still = componentTotals(components, cycles, inputs);
+    const multiple = components.map((c) =>
+      c.net === null ? (tones.includes(c.tone!) ? 1 : 0) : c.net.reduce((sum, n, i) => (tones.includes(inputs[i]!) ? sum + n : sum), 0),
+    );
+    const totals = new Float64Array(components.length);
     for (let step = 0, mine = 0; step <= 2 * LAYOUT_SEARCH && best.cost > 0 && mine < share; step++) {
       const offset = step % 2 === 1 ? (step + 1) / 2 : -step / 2;
       if (offset < allowed.least || offset > allowed.most) continue;
-      for (const j of tones) cycles[j] = base[j]!.cycles + offset;
-      const cost = crowding(components, cycles, inputs, samples);
+      for (let k = 0; k < totals.length; k++) totals[k] = still[k]! + multiple[k]! * offset;
+      const cost = crowdingOfTotals(components, totals, samples);
       tried++;
       mine++;
       if (cost < best.cost) best = { offset, cost };
@@ -116,18 +123,32 @@ export function crowding(
   inputs: readonly number[],
   samples: number,
 ): number {
+  return crowdingOfTotals(components, componentTotals(components, cycles, inputs), samples);
+}
+
+/** Each component's whole cycles: its tone's, or Σ nᵢ·cᵢ over the input tones plus its offset. */
+function componentTotals(components: readonly ComponentTemplate[], cycles: readonly number[], inputs: readonly number[]): Float64Array {
+  const totals = new Float64Array(components.length);
+  for (let k = 0; k < components.length; k++) {
+    const c = components[k]!;
+    if (c.net === null) totals[k] = cycles[c.tone!]!;
+    else {
+      let total = c.offset ?? 0;
+      for (let i = 0; i < c.net.length; i++) if (c.net[i] !== 0) total += c.net[i]! * cycles[inputs[i]!]!;
+      totals[k] = total;
+    }
+  }
+  return totals;
+}
+
+/** crowding, from each component's whole cycles. */
+function crowdingOfTotals(components: readonly ComponentTemplate[], totals: Float64Array, samples: number): number {
   // Each component as one number, bin·4 + 2·watched + atEdge, so that a plain numeric sort orders them by bin
   // (a layout search calls this hundreds of times: no object per component, no comparator).
   const placed = new Float64Array(components.length);
   for (let k = 0; k < components.length; k++) {
     const c = components[k]!;
-    let total: number;
-    if (c.net === null) total = cycles[c.tone!]!;
-    else {
-      total = c.offset ?? 0;
-      for (let i = 0; i < c.net.length; i++) if (c.net[i] !== 0) total += c.net[i]! * cycles[inputs[i]!]!;
-    }
-    const bin = foldCycles(total, samples);
+    const bin = foldCycles(totals[k]!, samples);
     const atEdge = c.net === null && (bin === 0 || bin === samples / 2);
     placed[k] = bin * 4 + (c.watched ? 2 : 0) + (atEdge ? 1 : 0);
   }
