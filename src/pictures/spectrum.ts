@@ -160,7 +160,7 @@ const overlaps = (a: Box, b: Box) => a.left < b.right && b.left < a.right && a.t
  * (blue, dashed) as lines across the plot, each named on a white box. The
  * threshold's name sits under its line at the right end; the weakest level's
  * takes the first of right-above, right-below, left-above, left-below that
- * keeps clear of the threshold's name and of the DC, fs/4 and fs/2 marks'
+ * keeps clear of the threshold's name and of the DC, rate/4 and rate/2 marks'
  * names (the weakest level lies at or above the threshold, by the rejection).
  */
 function levelLines(
@@ -382,12 +382,15 @@ function bars(c: ReportedCheck, x: ReturnType<typeof linearScale>, y: ReturnType
     .join('');
 }
 
-/** The DC, fs/4 and fs/2 marks: where each is and the box its name takes at the plot's top. */
+/**
+ * The DC, rate/4 and rate/2 marks: where each is and the box its name takes at the plot's top.
+ * Named and written as the checks of the converter's spurs there are in the table below ("rate/4", 4 digits).
+ */
 function markPlaces(c: ReportedCandidate, x: Scale, top: number): Array<{ at: number; text: string; box: Box }> {
   const places: ReadonlyArray<readonly [number, string, 'start' | 'middle' | 'end']> = [
     [0, 'DC', 'start'],
-    [c.rate / 4, `fs/4 = ${T.rate(c.rate / 4)}`, 'middle'],
-    [c.rate / 2, 'fs/2', 'end'],
+    [c.rate / 4, `rate/4 = ${T.frequency(c.rate / 4)}`, 'middle'],
+    [c.rate / 2, 'rate/2', 'end'],
   ];
   return places.map(([f, text, anchor]) => {
     const at = x.at(f);
@@ -401,7 +404,7 @@ function markBoxes(c: ReportedCandidate, x: Scale, top: number): Box[] {
   return markPlaces(c, x, top).map((p) => p.box);
 }
 
-/** The DC, fs/4 and fs/2 lines, and their names on white boxes (drawn later, over every line). */
+/** The DC, rate/4 and rate/2 lines, and their names on white boxes (drawn later, over every line). */
 function marks(c: ReportedCandidate, x: Scale, top: number, bottom: number): { lines: string; names: string } {
   const places = markPlaces(c, x, top);
   const lines = places.map(({ at }) =>

@@ -113,8 +113,15 @@ describe('spectrum after sampling', () => {
     const texts = checkPicture('spectrum-board-failing', spectrumSvg(board, candidate.label), 960);
     expect(texts).toContain('wanted (inverted)');
     expect(texts).toContain('DC');
-    expect(texts).toContain('fs/2');
-    expect(texts.some((t) => t.startsWith('fs/4 = '))).toBe(true);
+    // Named as the converter's spur checks are ("rate/2", "rate/4"), never "fs/…", and written as a frequency that is not
+    // programmed: 4 significant digits (the README's table of how each quantity is written; common practice).
+    expect(texts).toContain('rate/2');
+    expect(texts.some((t) => t.startsWith('fs/'))).toBe(false);
+    const quarter = texts.find((t) => t.startsWith('rate/4 = '))!;
+    const [, figure, unit] = /^rate\/4 = ([\d.]+) (kHz|MHz|GHz)$/.exec(quarter)!;
+    expect(figure!.replace('.', '').replace(/^0+/, '').length).toBeLessThanOrEqual(4);
+    const scale = { kHz: 1e3, MHz: 1e6, GHz: 1e9 }[unit as 'kHz' | 'MHz' | 'GHz'];
+    expect(Math.abs(Number(figure) * scale - candidate.rate / 4)).toBeLessThanOrEqual(5e-4 * (candidate.rate / 4));
     for (const check of candidate.checks) expect(texts).toContain(check.label);
     expect(texts).toContain('FAIL');
     expect(texts).toContain('level (dBFS)');
