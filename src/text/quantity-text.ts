@@ -1,4 +1,6 @@
 import { trimmed } from '../units/format-frequency.js';
+import { extentMagnitude } from '../math/fold-extent.js';
+import type { Hz } from '../units/quantities.js';
 
 /**
  * Where text goes. Each medium has one minus sign: the terminal (tables,
@@ -52,7 +54,7 @@ export interface QuantityText {
   readonly rateRange: (low: number, high: number) => string;
   /** The least rate of a range, rounded up to 4 significant digits (still inside it). */
   readonly leastRate: (value: number) => string;
-  /** An extent linear in the rate r (multiple·r + [low, high]) written as input frequencies, e.g. "r − 38–2 MHz". */
+  /** An extent linear in the rate r (multiple·r + [low, high]) written as input frequencies, e.g. "r − 38–2 MHz"; a fixed one reaching below 0 Hz at its magnitudes, "0–20 MHz". */
   readonly tiedExtent: (multiple: number, low: number, high: number) => string;
   /** A level in dBFS to 0.1 dB; below −200 dBFS "< −200". */
   readonly level: (value: number) => string;
@@ -70,6 +72,8 @@ export interface QuantityText {
   readonly signedFrequency: (value: number) => string;
   /** A level difference in dB to 0.1 dB with an explicit sign: "+2.2", "−17.3" ("0.0" for 0). */
   readonly signedDecibels: (value: number) => string;
+  /** A candidate by its label with its rate in brackets, or the label alone when it is that rate ("184.32 MHz"). */
+  readonly candidate: (label: string, rate: number) => string;
   /** A frequency an NCO word gives or aims at, to 0.1 mHz: its error from the target is a fraction of a hertz. */
   readonly tuned: (value: number) => string;
   /** A dimensionless number in e-notation to `digits` significant digits, the medium's minus in the mantissa and the exponent. */
@@ -114,7 +118,11 @@ export function quantityText(medium: Medium): QuantityText {
     return `${rate(low)} – ${rate(high)}`;
   };
   const tiedExtent = (multiple: number, low: number, high: number) => {
-    if (multiple === 0) return extent(low, high);
+    if (multiple === 0) {
+      // A fixed extent that reaches below 0 Hz (a difference product, −B…B) is at the frequencies |f|, as the checks write it.
+      const magnitude = extentMagnitude(low as Hz, high as Hz);
+      return extent(magnitude.low, magnitude.high);
+    }
     const r = rateTerm(multiple, minus);
     if (low === 0 && high === 0) return r;
     if (low >= 0) return `${r} + ${extent(low, high)}`;
@@ -147,6 +155,7 @@ export function quantityText(medium: Medium): QuantityText {
     tolerance: (value) => `±${drift(value)}`,
     driftRoom: (down, up) => `${drift(-Math.abs(down))} / ${drift(Math.abs(up), true)}`,
     settings: settingsText,
+    candidate: (label, value) => (label === rate(value) ? label : `${label} (${rate(value)})`),
     signedFrequency: (value) => (value > 0 ? `+${frequency(value)}` : frequency(value)),
     signedDecibels: (value) => {
       const text = decibels(value);
