@@ -23,7 +23,7 @@ export function afterRateHtml(candidate: ReportedCandidate): string {
   );
   const paragraphs = [designSentence(after, HTML), noiseSentence(after, candidate, HTML), ...downConverterSentences(after, HTML)];
   return (
-    `<h3>${escapeXml(`After the rate, at ${candidate.label} (${HTML.rate(candidate.rate)})`)}</h3>` +
+    `<h3>${escapeXml(`After the rate, at ${HTML.candidate(candidate.label, candidate.rate)}`)}</h3>` +
     `<p>${escapeXml(maskSentence(after, HTML))}</p>` +
     (rows.length > 0 ? htmlTable(MASK_HEAD, rows, 'Alias bands up to the input bandwidth, tightest first') : '') +
     paragraphs.map((p) => `<p>${escapeXml(p)}</p>`).join('')

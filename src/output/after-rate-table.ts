@@ -23,7 +23,7 @@ export function afterRateSection(candidate: ReportedCandidate, detail = false, w
   const rows = maskRows(after, detail ? Infinity : TIGHTEST_SHOWN);
   const more = after.mask.bands.length - rows.length;
   const lines = [
-    `After the rate, at ${candidate.label} (${quantityText('terminal').rate(candidate.rate)}):`,
+    `After the rate, at ${quantityText('terminal').candidate(candidate.label, candidate.rate)}:`,
     wrapText(maskSentence(after), width),
     rows.length > 0
       ? textTable(

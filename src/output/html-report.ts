@@ -292,7 +292,7 @@ function checksTable(candidate: ReportedCandidate, against = ''): string {
   return htmlTable(
     ['check', 'kind', 'input at this rate', 'aliased to', 'margin', 'level dBFS', 'level margin dB', 'blocks', 'verdict'],
     rows,
-    `Checks at ${candidate.label} (${T.rate(candidate.rate)})${against}, blocking checks first, tightest first`,
+    `Checks at ${T.candidate(candidate.label, candidate.rate)}${against}, blocking checks first, tightest first`,
   );
 }
 

@@ -272,7 +272,7 @@ function checksSection(candidate: ReportedCandidate, width: number): string {
   const inversion = candidate.conjugate
     ? '; the band arrives inverted: conjugate the complex output (or tune the NCO to the negative frequency)'
     : '';
-  const at = candidate.label === T.rate(candidate.rate) ? candidate.label : `${candidate.label} (${T.rate(candidate.rate)})`;
+  const at = T.candidate(candidate.label, candidate.rate);
   const title =
     candidate.channels.length > 1
       ? `Checks at ${at}, named channel: check; zone edge margin ${candidate.channels

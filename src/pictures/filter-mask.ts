@@ -210,7 +210,7 @@ function heading(report: PlanReport, c: ReportedCandidate): string {
     : 'out-of-band level not stated: full scale assumed, reported only';
   const worst = mask.worst ? `; least margin ${T.decibels(mask.worst.marginDb)} dB at ${T.extent(mask.worst.low, mask.worst.high)}` : '';
   return (
-    textElement(24, 22, clipped(`Anti-alias filter mask at ${c.label} (${T.rate(c.rate)}): ${report.scenario}`, ROOM, 14, { bold: true }), {
+    textElement(24, 22, clipped(`Anti-alias filter mask at ${T.candidate(c.label, c.rate)}: ${report.scenario}`, ROOM, 14, { bold: true }), {
       'font-size': 14,
       'font-weight': 'bold',
     }) +

@@ -303,6 +303,9 @@ describe('ifzone solve: exit statuses', () => {
     expect(fail.status).toBe(1);
     expect(fail.stdout).toMatch(/^245\.76 MHz: FAILS/m);
     expect(fail.stdout.match(/^Checks at /gm)).toHaveLength(2);
+    // A rate given by the user is its own label: the headings name it once (common practice), as "Checks at 184.32 MHz:" does.
+    expect(fail.stdout).toMatch(/^After the rate, at 184\.32 MHz:$/m);
+    expect(fail.stdout).not.toContain('184.32 MHz (184.32 MHz)');
   });
 
   it('puts every decimation candidate on an integer multiple of the output rate', () => {
