@@ -2,6 +2,7 @@ import { hz, type Db, type Hz, type Ppm, type Seconds } from '../units/quantitie
 import type { ClockPart } from '../scenario/scenario.js';
 import type { PartPlan, RateSettings } from '../clocks/part-plan.js';
 import { limitText, type LimitKind } from '../solve/limited-by.js';
+import { nextLimit, tieAllowance } from '../solve/next-limit.js';
 import { PAPER_DESIGN_CAUTION } from './caution.js';
 import { afterRate, type AfterRateInputs } from '../after-rate/after-rate.js';
 import { limitWithMasks, type FilterMask } from '../after-rate/filter-mask.js';
@@ -68,7 +69,7 @@ export interface ComparedPart {
 /** The answer to "which part, with which settings, for these variants?": the `compare` JSON contract. */
 export interface CompareReport {
   readonly variants: readonly string[];
-  /** Ranked: passing every variant first, then by the worst slack over the variants. */
+  /** Ranked: passing every variant first, then by the worst slack over the variants, ties by the next-tightest check (as solve ranks). */
   readonly parts: readonly ComparedPart[];
   /** Labels of the parts that pass every variant, best first. */
   readonly family: readonly string[];
@@ -82,6 +83,8 @@ export interface VariantPlans {
   readonly unplanned: readonly ClockPart[];
   /** The variant's after-rate inputs: each verdict then carries the filter orders its rate needs, and a stated out-of-band level can fail it. */
   readonly afterRate?: AfterRateInputs | null;
+  /** The wanted band's width, Hz: sets what counts as a tie on the worst slack (as `solve` ranks); without it no two slacks tie. */
+  readonly bandwidth?: Hz;
 }
 
 /**
@@ -96,14 +99,38 @@ export function compareReport(variants: readonly VariantPlans[]): CompareReport 
   for (const v of variants)
     for (const part of [...v.plans.map((p) => p.part), ...v.unplanned]) if (!parts.has(part.label)) parts.set(part.label, part);
   const compared = [...parts.values()].map((part) => comparedPart(part, variants));
-  const worstSlack = (c: ComparedPart) => Math.min(...c.perVariant.map((v) => v.worstSlack));
-  compared.sort((a, b) => Number(b.passesAll) - Number(a.passesAll) || worstSlack(b) - worstSlack(a));
+  const worstSlack = new Map(compared.map((c) => [c, Math.min(...c.perVariant.map((v) => v.worstSlack))]));
+  const tie = Math.max(0, ...variants.map((v) => tieAllowance(v.bandwidth ?? 0)));
+  // Parts that tie on the worst slack are ranked by the next-tightest check across the variants, as solve ranks its candidates.
+  const next = new Map(compared.map((c) => [c, nextSlack(c.label, worstSlack.get(c)!, tie, variants)]));
+  const bySlack = (a: ComparedPart, b: ComparedPart) => {
+    const difference = worstSlack.get(b)! - worstSlack.get(a)!;
+    return Math.abs(difference) <= tie ? 0 : difference;
+  };
+  compared.sort((a, b) => Number(b.passesAll) - Number(a.passesAll) || bySlack(a, b) || next.get(b)! - next.get(a)!);
   return {
     variants: variants.map((v) => v.name),
     parts: compared,
     family: compared.filter((c) => c.passesAll).map((c) => c.label),
     caution: PAPER_DESIGN_CAUTION,
   };
+}
+
+/**
+ * The slack of a part's tightest check beyond its worst over the variants, Hz: a variant whose own worst is beyond the
+ * part's worst (by more than the tie) counts with that worst, one that ties with it with its next-tightest check.
+ * Infinity when no check is beyond the worst (nothing left to rank by).
+ */
+function nextSlack(label: string, worst: number, tie: number, variants: readonly VariantPlans[]): number {
+  let least = Infinity;
+  for (const v of variants) {
+    const plan = v.plans.find((p) => p.part.label === label);
+    if (!plan) continue;
+    const e = plan.evaluation;
+    const slack = e.worstSlack > worst + tie ? e.worstSlack : (nextLimit(e, v.bandwidth ?? 0)?.slack ?? Infinity);
+    least = Math.min(least, slack);
+  }
+  return least;
 }
 
 function comparedPart(part: ClockPart, variants: readonly VariantPlans[]): ComparedPart {

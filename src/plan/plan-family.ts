@@ -1,3 +1,4 @@
+import { hz } from '../units/quantities.js';
 import type { ClockPart, Scenario } from '../scenario/scenario.js';
 import { compareReport, type CompareReport } from './compare-report.js';
 import type { PlanReport } from './plan-report.js';
@@ -88,6 +89,7 @@ function compareVariants(
       plans: s.result.parts,
       unplanned: s.context.clocks.filter((p) => s.result.unplannedParts.includes(p.label)),
       afterRate: afterRateInputs(variants[index]!.scenario, s.context.goal),
+      bandwidth: hz(s.context.band.high - s.context.band.low),
     })),
   );
 }

@@ -87,6 +87,19 @@ describe('ifzone compare --json: the contract', () => {
     });
   });
 
+  it('ranks the parts of one variant in the order ifzone solve ranks them, ties on the worst margin included', () => {
+    // One ranking rule across commands (common practice): heron-base has parts that tie on the worst margin
+    // (VCXO-C and SYN-1 at 5 MHz from the lower adjacent channel), which solve ranks by the next-tightest check.
+    for (const file of VARIANTS) {
+      const parts = JSON.parse(runBin('compare', file, '--json').stdout).parts.map((p: { label: string }) => p.label);
+      const plan = JSON.parse(runBin('solve', file, '--json').stdout);
+      const solved = plan.candidates
+        .filter((c: { origin: string; label: string }) => c.origin === 'clock' && parts.includes(c.label))
+        .map((c: { label: string }) => c.label);
+      expect(parts.filter((label: string) => solved.includes(label)), file).toEqual(solved);
+    }
+  });
+
   it('keeps the drift headroom of every passing verdict at or above the part tolerance', () => {
     const report = JSON.parse(runBin('compare', ...VARIANTS, '--json').stdout);
     for (const part of report.parts) {
