@@ -4,6 +4,7 @@ import { MASK_CHECK, type MaskBand } from '../after-rate/filter-mask.js';
 import type { ReportedCandidate } from '../plan/plan-report.js';
 import type { VariantVerdict } from '../plan/compare-report.js';
 import { channelCheckLabel } from '../solve/limited-by.js';
+import { wrapProse } from './wrap-prose.js';
 
 /*
  * The after-rate figures in words and table rows, shared by the text table
@@ -144,33 +145,17 @@ function stagesText(halfBand: number, remainder: number): string {
   return parts.length > 0 ? parts.join(' then ') : 'no decimation';
 }
 
-const UNIT_WORD = /^(?:[kMG]?Hz|dB|dBFS|dBFS\/Hz|dBc)[.,;:)]*$/;
-
 /**
  * Text broken at spaces into lines of at most `width` characters (a word
  * longer than that keeps its own line); a number stays on the line of its
- * unit.
+ * unit. The one wrapper of the terminal, wrapProse, for one paragraph.
  *
  * @param text one paragraph
  * @param width columns (default 100)
  * @example wrapText('aa bb cc', 5) // 'aa bb\ncc'
  */
 export function wrapText(text: string, width = 100): string {
-  const lines: string[] = [];
-  let line = '';
-  const words = text.split(' ').reduce<string[]>((kept, word) => {
-    if (UNIT_WORD.test(word) && kept.length > 0) kept[kept.length - 1] += ` ${word}`;
-    else kept.push(word);
-    return kept;
-  }, []);
-  for (const word of words) {
-    if (line !== '' && line.length + 1 + word.length > width) {
-      lines.push(line);
-      line = word;
-    } else line = line === '' ? word : `${line} ${word}`;
-  }
-  if (line !== '') lines.push(line);
-  return lines.join('\n');
+  return wrapProse(text, width);
 }
 
 /**

@@ -1,6 +1,6 @@
 import Table from 'cli-table3';
 import { displayWidth as length } from './display-width.js';
-import { wrapProse } from './wrap-prose.js';
+import { proseWords, wrapProse } from './wrap-prose.js';
 
 /** A column of a terminal table. */
 export interface TextColumn {
@@ -128,5 +128,5 @@ const BORDERLESS = {
 };
 
 function longestWord(text: string): number {
-  return Math.max(0, ...text.split(/ +/).map(length));
+  return Math.max(0, ...proseWords(text).map(length));
 }

@@ -1,15 +1,39 @@
 import { displayWidth as length } from './display-width.js';
 
+/** A unit written after its number ("184.32 MHz", "-76.0 dB", "±10 ppm"), with the punctuation that may follow it. */
+const UNIT_WORD = /^(?:[kMG]?Hz|dB|dBFS|dBFS\/Hz|dBc|ppm|%)[.,;:)]*$/;
+
 /**
- * Breaks prose into lines of at most `width` terminal columns at spaces; a word
- * longer than the width stands on its own line. Existing line breaks are
- * kept; a line's leading indent (spaces, or "- " for a list item) is
- * repeated on its continuation lines.
+ * The words a line may break between: runs of non-spaces, a unit kept with
+ * the number before it (a value is never split from its unit: SI Brochure,
+ * 9th ed., 5.4.3, writes a space between them, and typesetters keep it
+ * unbroken).
+ *
+ * @param text one line
+ * @returns the unbreakable words, in order
+ * @example proseWords('at 184.32 MHz, then') // ['at', '184.32 MHz,', 'then']
+ */
+export function proseWords(text: string): string[] {
+  return text
+    .split(/ +/)
+    .filter((w) => w !== '')
+    .reduce<string[]>((kept, word) => {
+      if (UNIT_WORD.test(word) && kept.length > 0) kept[kept.length - 1] += ` ${word}`;
+      else kept.push(word);
+      return kept;
+    }, []);
+}
+
+/**
+ * Breaks prose into lines of at most `width` terminal columns at spaces,
+ * never between a number and its unit; a word longer than the width stands on
+ * its own line. Existing line breaks are kept; a line's leading indent
+ * (spaces, or "- " for a list item) is repeated on its continuation lines.
  *
  * @param text one or more paragraphs
  * @param width characters per line (Infinity: no wrapping)
  * @returns the wrapped text
- * @example wrapProse('Best: VCXO-C at 184.32 MHz', 12) // 'Best: VCXO-C\nat 184.32\nMHz'
+ * @example wrapProse('Best: VCXO-C at 184.32 MHz', 12) // 'Best: VCXO-C\nat\n184.32 MHz'
  */
 export function wrapProse(text: string, width: number): string {
   return text
@@ -22,10 +46,7 @@ function wrapLine(line: string, width: number): string {
   if (length(line) <= width) return line;
   const indent = /^(\s*(?:- )?)/.exec(line)![1]!;
   const hanging = ' '.repeat(length(indent));
-  const words = line
-    .slice(indent.length)
-    .split(/ +/)
-    .filter((w) => w !== '');
+  const words = proseWords(line.slice(indent.length));
   const lines: string[] = [];
   let current = indent;
   for (const word of words) {

@@ -104,6 +104,21 @@ describe('ifzone windows --json', () => {
   });
 });
 
+describe('ifzone alias at 80 columns', () => {
+  it('wraps the look-alike list between values, never between a value and its unit', () => {
+    // Common practice (SI Brochure, 9th ed., 5.4.3: a space between number and unit, kept unbroken in print).
+    // 140 MHz at 122.88 MHz is 17.12 MHz in zone 3; k·122.88 ± 17.12 MHz gives the look-alikes (k = 1, 2).
+    const run = runBin('alias', '--rate', '122.88M', '140M', '10M', '280M', '--width', '80');
+    expect(run.status).toBe(0);
+    const lines = run.stdout.split('\n');
+    for (const line of lines) {
+      expect(line.length).toBeLessThanOrEqual(80);
+      expect(line.trimStart()).not.toMatch(/^(?:[kMG]?Hz|dB)\b/);
+    }
+    expect(run.stdout).toContain('262.88 MHz');
+  });
+});
+
 describe('ifzone alias --json', () => {
   it('keeps the contract: rate, tones[frequency, alias, zone, inverted]', () => {
     // Common practice, no source: 1 Hz at 7 Hz cannot be told from 6, 8, 13, 15 Hz; 1 Hz at 1.5 Hz shows at 0.5 Hz.

@@ -100,7 +100,10 @@ describe('quantityText: one way of writing each quantity', () => {
 
 describe('wrapProse', () => {
   it("breaks at spaces within the width and keeps a list item's hanging indent", () => {
-    expect(wrapProse('Best: VCXO-C at 184.32 MHz', 12)).toBe('Best: VCXO-C\nat 184.32\nMHz');
+    // A value is never split from its unit (SI Brochure, 9th ed., 5.4.3: one space between them, kept unbroken in print).
+    expect(wrapProse('Best: VCXO-C at 184.32 MHz', 12)).toBe('Best: VCXO-C\nat\n184.32 MHz');
+    expect(wrapProse('17.12 MHz, 105.76 MHz, 228.64 MHz, 262.88 MHz', 44)).toBe('17.12 MHz, 105.76 MHz, 228.64 MHz,\n262.88 MHz');
+    expect(wrapProse('drift -7.23 % / +5.52 %, tolerance ±10 ppm', 20)).toBe('drift -7.23 % /\n+5.52 %, tolerance\n±10 ppm');
     expect(wrapProse('- one two three four', 10)).toBe('- one two\n  three\n  four');
   });
 
