@@ -558,6 +558,7 @@ export const GLOSSARY: readonly GlossaryEntry[] = [
     kind: 'abbreviation',
     commands: ['windows', ...PARTS],
     matches: /\binv\b/,
+    avoid: ['`inv.`'],
     meaning: 'inverted: the band arrives mirrored (even zones); conjugate the complex output or tune the NCO to the negative frequency',
   },
   {
