@@ -210,10 +210,15 @@ function heading(report: PlanReport, c: ReportedCandidate): string {
     : 'out-of-band level not stated: full scale assumed, reported only';
   const worst = mask.worst ? `; least margin ${T.decibels(mask.worst.marginDb)} dB at ${T.extent(mask.worst.low, mask.worst.high)}` : '';
   return (
-    textElement(24, 22, clipped(`Anti-alias filter mask at ${T.candidate(c.label, c.rate)}: ${report.scenario}`, ROOM, 14, { bold: true }), {
-      'font-size': 14,
-      'font-weight': 'bold',
-    }) +
+    textElement(
+      24,
+      22,
+      clipped(`Anti-alias filter mask at ${T.candidate(c.label, c.rate)}: ${report.scenario}`, ROOM, 14, { bold: true }),
+      {
+        'font-size': 14,
+        'font-weight': 'bold',
+      },
+    ) +
     textElement(24, 40, clipped(`${level}; threshold ${T.level(mask.threshold)} dBFS${worst}`, ROOM, 11), { 'font-size': 11 }) +
     textElement(
       24,

@@ -96,7 +96,10 @@ describe('ifzone compare --json: the contract', () => {
       const solved = plan.candidates
         .filter((c: { origin: string; label: string }) => c.origin === 'clock' && parts.includes(c.label))
         .map((c: { label: string }) => c.label);
-      expect(parts.filter((label: string) => solved.includes(label)), file).toEqual(solved);
+      expect(
+        parts.filter((label: string) => solved.includes(label)),
+        file,
+      ).toEqual(solved);
     }
   });
 
