@@ -14,6 +14,7 @@ import { candidateVerdict, filterOrdersText, maskShortfall } from './after-rate-
 import { filterMaskSvg } from '../pictures/filter-mask.js';
 import { glossarySection } from './html-glossary.js';
 import { channelReportView, severalChannels, type ChannelCandidate, type ChannelPlanReport } from '../pictures/channels.js';
+import { extentMagnitude } from '../math/fold-extent.js';
 
 const T = quantityText('html');
 
@@ -158,7 +159,7 @@ function inputsTables(report: PlanReport): string {
       i.label,
       i.kind,
       i.source,
-      T.tiedExtent(i.rateMultiple, i.low, i.high),
+      inputFrequencies(i),
       T.level(i.level),
       T.frequency(i.requiredMargin),
       i.blocking ? 'yes' : 'no',
@@ -294,6 +295,16 @@ function checksTable(candidate: ReportedCandidate, against = ''): string {
     rows,
     `Checks at ${T.candidate(candidate.label, candidate.rate)}${against}, blocking checks first, tightest first`,
   );
+}
+
+/**
+ * An interferer's input frequencies, r the rate: a fixed extent reaching below 0 Hz (a difference product, −B…B) at the
+ * frequencies |f| where a real signal is, as the checks' "input at this rate" writes it.
+ */
+function inputFrequencies(i: PlanReport['interferers'][number]): string {
+  if (i.rateMultiple !== 0) return T.tiedExtent(i.rateMultiple, i.low, i.high);
+  const magnitude = extentMagnitude(i.low, i.high);
+  return T.extent(magnitude.low, magnitude.high);
 }
 
 function shiftHtml(shift: NonNullable<PlanReport['ifShift']>): string {

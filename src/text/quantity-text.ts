@@ -1,6 +1,4 @@
 import { trimmed } from '../units/format-frequency.js';
-import { extentMagnitude } from '../math/fold-extent.js';
-import type { Hz } from '../units/quantities.js';
 
 /**
  * Where text goes. Each medium has one minus sign: the terminal (tables,
@@ -54,7 +52,7 @@ export interface QuantityText {
   readonly rateRange: (low: number, high: number) => string;
   /** The least rate of a range, rounded up to 4 significant digits (still inside it). */
   readonly leastRate: (value: number) => string;
-  /** An extent linear in the rate r (multiple·r + [low, high]) written as input frequencies, e.g. "r − 38–2 MHz"; a fixed one reaching below 0 Hz at its magnitudes, "0–20 MHz". */
+  /** An extent linear in the rate r (multiple·r + [low, high]) written as input frequencies, e.g. "r − 38–2 MHz"; a fixed one as given (the caller passes its magnitudes). */
   readonly tiedExtent: (multiple: number, low: number, high: number) => string;
   /** A level in dBFS to 0.1 dB; below −200 dBFS "< −200". */
   readonly level: (value: number) => string;
@@ -118,11 +116,7 @@ export function quantityText(medium: Medium): QuantityText {
     return `${rate(low)} – ${rate(high)}`;
   };
   const tiedExtent = (multiple: number, low: number, high: number) => {
-    if (multiple === 0) {
-      // A fixed extent that reaches below 0 Hz (a difference product, −B…B) is at the frequencies |f|, as the checks write it.
-      const magnitude = extentMagnitude(low as Hz, high as Hz);
-      return extent(magnitude.low, magnitude.high);
-    }
+    if (multiple === 0) return extent(low, high);
     const r = rateTerm(multiple, minus);
     if (low === 0 && high === 0) return r;
     if (low >= 0) return `${r} + ${extent(low, high)}`;

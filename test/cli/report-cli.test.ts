@@ -34,6 +34,20 @@ describe('ifzone report --html', () => {
     expect(html).toMatch(/spur levels vary with the part, the input level, temperature and the clock/);
   });
 
+  it('writes a difference product at its real input frequencies, as the checks do (0–20 MHz, not −20–20 MHz)', () => {
+    // A real signal's spectrum is even (common practice): wanted − wanted of the 130–150 MHz band spans −20…20 MHz as a
+    // signed extent, i.e. 0–20 MHz at the converter input; the checks' "input at this rate" writes it so.
+    const out = join(dir, 'base.html');
+    expect(runBin('report', VARIANTS[0]!, '--html', out).status).toBe(0);
+    const html = readFileSync(out, 'utf8');
+    const rows = [...html.matchAll(/<tr><td>IM2 wanted difference<\/td>(.*?)<\/tr>/g)].map((m) => m[1]!);
+    expect(rows.length).toBeGreaterThanOrEqual(2); // the interferers table and the checks table
+    for (const row of rows) {
+      expect(row).toContain('>0–20 MHz<');
+      expect(row).not.toMatch(/>\u2212[\d.]+–[\d.]+ MHz</);
+    }
+  });
+
   it('refuses to overwrite without --force and never writes over an input', () => {
     const out = join(dir, 'kept.html');
     writeFileSync(out, 'keep');
