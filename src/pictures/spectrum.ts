@@ -521,7 +521,7 @@ function channelImages(
       if (widest) labels.push({ at: x.at((widest.low + widest.high) / 2), text: `${ch.label} folds onto itself` });
     }
   });
-  // The names sit in rows under the DC, fs/4 and fs/2 names at the plot's top (clear of the level lines' names), packed so that close images keep both.
+  // The names sit in rows under the DC, rate/4 and rate/2 names at the plot's top (clear of the level lines' names), packed so that close images keep both.
   const placed = packLabels(
     labels.map((l) => ({ x: l.at, text: l.text, item: l, bold: true })),
     labels.length,
