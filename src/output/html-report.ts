@@ -13,7 +13,7 @@ import { afterRateHtml } from './after-rate-html.js';
 import { candidateVerdict, filterOrdersText, maskShortfall } from './after-rate-words.js';
 import { filterMaskSvg } from '../pictures/filter-mask.js';
 import { glossarySection } from './html-glossary.js';
-import { channelReportView, severalChannels, type ChannelCandidate, type ChannelPlanReport } from '../pictures/channels.js';
+import { eachChannelView, severalChannels, type ChannelCandidate, type ChannelPlanReport } from '../pictures/channels.js';
 import { extentMagnitude } from '../math/fold-extent.js';
 
 const T = quantityText('html');
@@ -113,16 +113,21 @@ function comparisonSection(report: CompareReport): string {
 function planSection(report: PlanReport): string {
   const focus = report.candidates.find((c) => c.label === report.best) ?? report.candidates[0];
   const multi = severalChannels(report);
-  // With several channels, one band-position chart per channel (each its own band and verdicts).
-  const bandPositions = multi
-    ? multi.channels.map((_, i) => bandPositionSvg(channelReportView(multi, i), focus?.label))
-    : [bandPositionSvg(report, focus?.label)];
+  // With several channels, one band-position chart, filter mask and after-rate section per channel.
+  const views = eachChannelView(report);
   const pictures = [
     rateMapSvg(report),
     focus ? spectrumSvg(report, focus.label) : '',
-    ...bandPositions,
-    focus ? filterMaskSvg(report, focus.label) : '',
+    ...views.map((view) => bandPositionSvg(view, focus?.label)),
+    ...(focus ? views.map((view) => filterMaskSvg(view, focus.label)) : []),
   ].filter((svg) => svg !== '');
+  const afterRates = focus
+    ? multi
+      ? (focus as ChannelCandidate).channels.map((ch) =>
+          afterRateHtml({ ...focus, label: `${focus.label}, channel ${ch.label}`, afterRate: ch.afterRate ?? null }),
+        )
+      : [afterRateHtml(focus)]
+    : [];
   return [
     `<h2>${escapeXml(report.scenario)}</h2>`,
     inputsTables(report),
@@ -133,7 +138,7 @@ function planSection(report: PlanReport): string {
     ...(multi ? [channelResultsTable(multi)] : []),
     multi && focus ? channelChecksTables(focus as ChannelCandidate) : focus ? checksTable(focus) : '',
     report.ifShift ? shiftHtml(report.ifShift) : '',
-    focus ? afterRateHtml(focus) : '',
+    ...afterRates,
     `<p><strong>${escapeXml(verdictLine(report, focus))}</strong></p>`,
     ...pictures.map((svg) => `<figure>${svg}</figure>`),
   ].join('\n');

@@ -22,9 +22,9 @@ export function severalChannels(report: PlanReport): ChannelPlanReport | null {
 /**
  * One channel of a multi-channel report seen as a single-channel report:
  * that channel's band, guards and weakest level, and each candidate's zone,
- * image, margins, verdict and checks against that channel; its name says
- * which channel it is. The pictures of one band (the band-position chart)
- * draw it unchanged.
+ * image, margins, verdict, checks and figures after the rate against that
+ * channel; its name says which channel it is. The pictures of one band (the
+ * band-position chart, the filter mask) draw it unchanged.
  *
  * @param report a report of several channels
  * @param index the channel, 0-based
@@ -52,6 +52,7 @@ export function channelReportView(report: ChannelPlanReport, index: number): Pla
       worstSlack: own.worstSlack,
       pass: own.pass,
       checks: own.checks ?? c.checks,
+      afterRate: own.afterRate === undefined ? c.afterRate : own.afterRate,
       channels: [own],
     };
   });
@@ -64,4 +65,18 @@ export function channelReportView(report: ChannelPlanReport, index: number): Pla
     channels: [channel],
     candidates,
   };
+}
+
+/**
+ * The report once per channel for the pictures drawn one per channel: the
+ * report itself for a single channel, else each channel's view
+ * (channelReportView) in the scenario's order.
+ *
+ * @param report the solved plan
+ * @returns one report per picture
+ * @example eachChannelView(report).length // 1 (the demo plan has one channel)
+ */
+export function eachChannelView(report: PlanReport): PlanReport[] {
+  const multi = severalChannels(report);
+  return multi ? multi.channels.map((_, i) => channelReportView(multi, i)) : [report];
 }

@@ -4,7 +4,7 @@ import { rateMapFigure } from './rate-map.js';
 import { spectrumFigure } from './spectrum.js';
 import { filterMaskFigure } from './filter-mask.js';
 import { stackFigures, svgDocument } from './svg-document.js';
-import { channelReportView, severalChannels } from './channels.js';
+import { eachChannelView } from './channels.js';
 
 /**
  * The pictures of a solved plan in one SVG document, one under another:
@@ -12,8 +12,8 @@ import { channelReportView, severalChannels } from './channels.js';
  * band-position chart with that candidate marked, and that candidate's
  * anti-alias filter mask (when the report carries after-rate figures). This
  * is what `solve --svg FILE` writes. With several channels the spectrum
- * shows every channel's image and the band-position chart is drawn once per
- * channel (each channel's own band and verdicts).
+ * shows every channel's image, and the band-position chart and the filter
+ * mask are drawn once per channel (each channel's own band, verdicts and mask).
  *
  * @param report the solved plan
  * @param candidateLabel the candidate for the spectrum and the mask; default the best
@@ -26,10 +26,11 @@ export function planPicturesSvg(report: PlanReport, candidateLabel?: string): st
   const label = candidateLabel ?? report.best ?? report.candidates[0]?.label;
   const figures = [rateMapFigure(report)];
   if (label !== undefined) figures.push(spectrumFigure(report, label));
-  const multi = severalChannels(report);
-  if (multi) multi.channels.forEach((_, i) => figures.push(bandPositionFigure(channelReportView(multi, i), candidateLabel)));
-  else figures.push(bandPositionFigure(report, candidateLabel));
-  const mask = label === undefined ? null : filterMaskFigure(report, label);
-  if (mask) figures.push(mask);
+  const views = eachChannelView(report);
+  for (const view of views) figures.push(bandPositionFigure(view, candidateLabel));
+  for (const view of label === undefined ? [] : views) {
+    const mask = filterMaskFigure(view, label!);
+    if (mask) figures.push(mask);
+  }
   return svgDocument(stackFigures(figures, `Frequency plan pictures: ${report.scenario}`, 24));
 }

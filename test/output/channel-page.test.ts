@@ -34,6 +34,14 @@ describe('the review page of two channels', () => {
     expect(html).not.toMatch(/<script|<link|@import|url\((?!#)|src=/i);
   });
 
+  it('gives each channel its own figures after the rate and its own filter mask', () => {
+    const best = report.candidates.find((c) => c.label === report.best)!;
+    for (const channel of TWO_CHANNELS) {
+      expect(html).toContain(`After the rate, at ${best.label}, channel ${channel.label} (`);
+      expect(html).toMatch(new RegExp(`Anti-alias filter mask at ${best.label} \\([^)]*\\): [^<]*, channel ${channel.label}<`));
+    }
+  });
+
   it.skipIf(!hasChromium && !process.env['CI'])(
     'shows each channel, each candidate per channel, the checks per channel and a chart per channel',
     async () => {

@@ -4,6 +4,8 @@ import { hz } from '../../src/units/quantities.js';
 import { spectrumSvg } from '../../src/pictures/spectrum.js';
 import { rateMapSvg } from '../../src/pictures/rate-map.js';
 import { planPicturesSvg } from '../../src/pictures/plan-pictures.js';
+import { filterMaskSvg } from '../../src/pictures/filter-mask.js';
+import { channelReportView } from '../../src/pictures/channels.js';
 import { channelFill } from '../../src/pictures/patterns.js';
 import { jointFeasibleSet } from '../../src/solve/joint-feasible-set.js';
 import type { PlanReport } from '../../src/plan/plan-report.js';
@@ -196,5 +198,29 @@ describe('the pictures of a plan of two channels', () => {
       expect(texts).toContain(`this design: fH/B = ${Number(design.toPrecision(5))}`);
     }
     expect([77 / 14, 105 / 6]).toEqual([5.5, 17.5]);
+  });
+
+  it("hold one filter mask per channel, each with that channel's alias bands: input ranges that fold onto its image", () => {
+    const best = report.candidates.find((c) => c.label === report.best) ?? report.candidates[0]!;
+    const texts = textsOf(parseSvg(planPicturesSvg(asPlan)));
+    TWO_CHANNELS.forEach((channel, i) => {
+      const title = texts.filter((t) => t.startsWith(`Anti-alias filter mask at ${best.label} (`));
+      expect(title.filter((t) => t.endsWith(`: ${report.scenario}, channel ${channel.label}`))).toHaveLength(1);
+      const own = best.channels[i]!;
+      const bands = own.afterRate!.mask.bands;
+      expect(bands.length).toBeGreaterThan(0);
+      // Each alias band folds (at the rate, common practice) to within the required margin of the channel's image.
+      for (const band of bands) {
+        const shown = fold((band.low + band.high) / 2, best.rate);
+        expect(shown).toBeGreaterThanOrEqual(own.image!.low - (band.high - band.low));
+        expect(shown).toBeLessThanOrEqual(own.image!.high + (band.high - band.low));
+      }
+      // The picture of that channel draws one stop region per alias band.
+      const doc = parseSvg(filterMaskSvg(channelReportView(report, i), best.label));
+      const stops = elementsOf(doc).filter((el) => el.localName === 'rect' && inGroup(el, 'stop-regions'));
+      expect(stops.length).toBe(bands.length);
+    });
+    // The two channels' masks differ: each is its own channel's.
+    expect(best.channels[0]!.afterRate!.mask.bands).not.toEqual(best.channels[1]!.afterRate!.mask.bands);
   });
 });
