@@ -184,7 +184,8 @@ function heading(r: VerifyResult): string {
   const verdict = r.consistent
     ? `the capture agrees with the plan (${plan})`
     : `the capture CONTRADICTS the plan (${plan}; ${reasons} reason${reasons === 1 ? '' : 's'})`;
-  const tones = `${r.wantedTones} wanted tone${r.wantedTones === 1 ? '' : 's'}`;
+  const perChannel = `${r.wantedTones} wanted tone${r.wantedTones === 1 ? '' : 's'}`;
+  const tones = r.channels.length > 1 ? `${perChannel} in each of ${r.channels.length} channels` : perChannel;
   return (
     textElement(24, 22, clipped(`Simulated capture at ${T.rate(r.rate)}: ${r.scenario}`, ROOM, 14, { bold: true }), {
       'font-size': 14,

@@ -69,6 +69,8 @@ describe('ifzone verify with several channels', () => {
       expect(texts).toContain(`channel ${c.label}`);
       expect(texts.some((t) => t === c.label || t === `${c.label} (inverted)`)).toBe(true);
     }
+    // The heading counts the tones per channel (three by default, one set in each channel).
+    expect(texts.some((t) => t.includes(`3 wanted tones in each of ${failing.channels.length} channels`))).toBe(true);
   });
 
   it('refuses a record too short for the narrowest channel, naming it', () => {
