@@ -2,12 +2,14 @@ import { displayWidth as length } from './display-width.js';
 
 /** A unit written after its number ("184.32 MHz", "-76.0 dB", "±10 ppm"), with the punctuation that may follow it. */
 const UNIT_WORD = /^(?:[kMG]?Hz|dB|dBFS|dBFS\/Hz|dBc|ppm|%)[.,;:)]*$/;
+/** The inversion mark of a zone ("2 inv"), kept with the zone number before it. */
+const INVERTED_ZONE = /^inv[.,;:)"]*$/;
 
 /**
  * The words a line may break between: runs of non-spaces, a unit kept with
  * the number before it (a value is never split from its unit: SI Brochure,
  * 9th ed., 5.4.3, writes a space between them, and typesetters keep it
- * unbroken).
+ * unbroken), and a zone's "inv" with its number ("2 inv", one value).
  *
  * @param text one line
  * @returns the unbreakable words, in order
@@ -18,7 +20,9 @@ export function proseWords(text: string): string[] {
     .split(/ +/)
     .filter((w) => w !== '')
     .reduce<string[]>((kept, word) => {
-      if (UNIT_WORD.test(word) && kept.length > 0) kept[kept.length - 1] += ` ${word}`;
+      const previous = kept[kept.length - 1];
+      if (previous !== undefined && (UNIT_WORD.test(word) || (INVERTED_ZONE.test(word) && /\d$/.test(previous))))
+        kept[kept.length - 1] += ` ${word}`;
       else kept.push(word);
       return kept;
     }, []);

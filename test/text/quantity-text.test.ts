@@ -99,6 +99,9 @@ describe('wrapProse', () => {
     expect(wrapProse('Best: VCXO-C at 184.32 MHz', 12)).toBe('Best: VCXO-C\nat\n184.32 MHz');
     expect(wrapProse('17.12 MHz, 105.76 MHz, 228.64 MHz, 262.88 MHz', 44)).toBe('17.12 MHz, 105.76 MHz, 228.64 MHz,\n262.88 MHz');
     expect(wrapProse('drift -7.23 % / +5.52 %, tolerance ±10 ppm', 20)).toBe('drift -7.23 % /\n+5.52 %, tolerance\n±10 ppm');
+    // A zone and its inversion mark are one value ("2 inv", common practice of the tables); a lone "inv" is a word.
+    expect(wrapProse('best first (zone "2 inv": inverted)', 18)).toBe('best first (zone\n"2 inv": inverted)');
+    expect(wrapProse('"inv": spectrally inverted', 10)).toBe('"inv":\nspectrally\ninverted');
     expect(wrapProse('- one two three four', 10)).toBe('- one two\n  three\n  four');
   });
 
