@@ -37,7 +37,8 @@ const GAP = '  ';
 export function textTable(columns: readonly TextColumn[], rows: ReadonlyArray<readonly string[]>, width: number): string {
   // A detail column with nothing to say in any row ("–" throughout) is left out.
   const all = columns.map((_, i) => i).filter((i) => columns[i]!.role !== 'detail' || rows.some((r) => (r[i] ?? '–') !== '–'));
-  if (fits(natural(columns, rows, all), width)) return block(columns, rows, all, width);
+  const measure = columnMeasures(columns, rows);
+  if (fits(measure.natural(all), width)) return block(columns, rows, all, width, measure);
   const keys = all.filter((i) => columns[i]!.role === 'key');
   const main = all.filter((i) => (columns[i]!.role ?? 'main') === 'main');
   const detail = all.filter((i) => columns[i]!.role === 'detail');
@@ -52,38 +53,49 @@ export function textTable(columns: readonly TextColumn[], rows: ReadonlyArray<re
       const chosen: number[] = [];
       for (const i of left) {
         const trial = [...keys, ...chosen, i];
-        const widths = wrapOk ? narrowest(columns, rows, trial) : natural(columns, rows, trial);
+        const widths = wrapOk ? measure.narrowest(trial) : measure.natural(trial);
         if (chosen.length === 0 || fits(widths, width)) chosen.push(i);
       }
       blocks.push([...keys, ...chosen].sort((a, b) => a - b));
       left = left.filter((i) => !chosen.includes(i));
     }
   }
-  return blocks.map((b) => block(columns, rows, b, width)).join('\n\n');
+  return blocks.map((b) => block(columns, rows, b, width, measure)).join('\n\n');
 }
 
 function fits(widths: readonly number[], width: number): boolean {
   return widths.reduce((sum, w) => sum + w, 0) + GAP.length * (widths.length - 1) <= width;
 }
 
-/** The least width of each picked column: its longest unbreakable cell, and its header's longest word. */
-function narrowest(columns: readonly TextColumn[], rows: ReadonlyArray<readonly string[]>, picked: readonly number[]): number[] {
-  return picked.map((i) => {
-    const column = columns[i]!;
+/** The widths of the picked columns, as textTable weighs where each goes. */
+interface ColumnMeasures {
+  /** The least width of each picked column: its longest unbreakable cell, and its header's longest word. */
+  readonly narrowest: (picked: readonly number[]) => number[];
+  /** The width of each picked column with nothing wrapped. */
+  readonly natural: (picked: readonly number[]) => number[];
+}
+
+/** Both widths of every column, measured once (the layout tries many column sets; measuring a cell is not cheap). */
+function columnMeasures(columns: readonly TextColumn[], rows: ReadonlyArray<readonly string[]>): ColumnMeasures {
+  const least = columns.map((column, i) => {
     const cells = rows.map((r) => r[i] ?? '');
     const cellWidth = Math.max(0, ...cells.map((c) => (column.wrap ? longestWord(c) : length(c))));
     return Math.max(cellWidth, longestWord(column.head));
   });
-}
-
-function natural(columns: readonly TextColumn[], rows: ReadonlyArray<readonly string[]>, picked: readonly number[]): number[] {
-  return picked.map((i) => Math.max(length(columns[i]!.head), ...rows.map((r) => length(r[i] ?? ''))));
+  const whole = columns.map((column, i) => Math.max(length(column.head), ...rows.map((r) => length(r[i] ?? ''))));
+  return { narrowest: (picked) => picked.map((i) => least[i]!), natural: (picked) => picked.map((i) => whole[i]!) };
 }
 
 /** One block: widths from natural down towards the narrowest, widest columns shrunk first. */
-function block(columns: readonly TextColumn[], rows: ReadonlyArray<readonly string[]>, picked: readonly number[], width: number): string {
-  const least = narrowest(columns, rows, picked);
-  const widths = natural(columns, rows, picked);
+function block(
+  columns: readonly TextColumn[],
+  rows: ReadonlyArray<readonly string[]>,
+  picked: readonly number[],
+  width: number,
+  measure: ColumnMeasures,
+): string {
+  const least = measure.narrowest(picked);
+  const widths = measure.natural(picked);
   const total = () => widths.reduce((sum, w) => sum + w, 0) + GAP.length * (picked.length - 1);
   while (total() > width) {
     let widest = -1;
