@@ -70,16 +70,27 @@ function heading(report: PlanReport, prose: (text: string) => string): string {
       : `Wanted band ${T.extent(band.low, band.high)} (width ${T.frequency(band.high - band.low)}), guards ${T.frequency(guard.low)} below and ${T.frequency(guard.high)} above.`,
     `Rates searched ${T.extent(search.minRate, search.maxRate)}; goal: ${goalText(report)}.`,
     `${report.interferers.length} interferers derived, ${blocking} strong enough to block.`,
-    ...(report.derivation ? [derivationText(report.derivation)] : []),
+    ...derivationLines(report),
   ]
     .map(prose)
     .join('\n');
 }
 
-function derivationText(d: NonNullable<PlanReport['derivation']>): string {
+/** How the interferers were derived: one sentence, or with several channels one clause per channel (each has its own threshold). */
+function derivationLines(report: PlanReport): string[] {
+  const d = report.derivation;
+  if (!d) return [];
+  const orders = `Mixing products to order ${d.maxOrder} (harmonics to ${Math.max(d.maxOrder, d.harmonicOrder)})`;
+  const perChannel = report.channels.filter((c) => c.derivation !== null);
+  if (report.channels.length < 2 || perChannel.length < report.channels.length) return [`${orders}: ${derivationText(d, '; ')}.`];
+  return [`${orders}, against each channel: ${perChannel.map((c) => `${c.label}: ${derivationText(c.derivation!, ', ')}`).join('; ')}.`];
+}
+
+/** The counts and threshold of one derivation; `join` goes before the images clause. */
+function derivationText(d: NonNullable<PlanReport['derivation']>, join: string): string {
   const strongest = d.strongestPruned === null ? '' : ` (the strongest at ${T.level(d.strongestPruned)} dBFS)`;
-  const images = d.prunedImages > 0 ? `; ${d.prunedImages} interleaving images under it left out` : '';
-  return `Mixing products to order ${d.maxOrder} (harmonics to ${Math.max(d.maxOrder, d.harmonicOrder)}): ${d.products} listed, ${d.pruned} at or under the threshold ${T.level(d.threshold)} dBFS left out${strongest}${images}.`;
+  const images = d.prunedImages > 0 ? `${join}${d.prunedImages} interleaving images under it left out` : '';
+  return `${d.products} listed, ${d.pruned} at or under the threshold ${T.level(d.threshold)} dBFS left out${strongest}${images}`;
 }
 
 function conflictsSection(report: PlanReport, width: number): string {

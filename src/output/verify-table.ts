@@ -31,6 +31,12 @@ export function verifyTable(result: VerifyResult, width = 100): string {
   return sections.join('\n\n') + '\n';
 }
 
+/** The blocking threshold; with several channels each channel's own (its weakest level less its rejection). */
+function thresholdText(r: VerifyResult): string {
+  if (r.channels.length < 2) return `${T.level(r.levels.threshold)} dBFS`;
+  return r.channels.map((c) => `${T.level(c.threshold)} dBFS (${c.label})`).join(', ');
+}
+
 function heading(r: VerifyResult, prose: (text: string) => string): string {
   const coefficients = r.converter.coefficients.flatMap((a, k) => (k >= 2 ? [`a${k} = ${T.scientific(a, 4)}`] : [])).join(', ');
   const plan = r.plan.pass ? 'pass' : 'FAIL';
@@ -38,7 +44,7 @@ function heading(r: VerifyResult, prose: (text: string) => string): string {
     `Simulated capture: ${r.scenario} at ${T.rate(r.rate)}`,
     `Record ${r.samples} samples, bin width ${T.frequency(r.binWidth)}; ${r.window.name} window, coherent gain ${T.number(r.window.coherentGain, 4)}, noise bandwidth ${T.number(r.window.noiseBandwidthBins, 4)} bins.`,
     `Converter: ${r.converter.bits} bits; y = x + Σ a_k·x^k${coefficients ? ` with ${coefficients}` : ' (linear: no harmonic figures)'}; dither ${r.converter.dither}; ${r.converter.clippedSamples} samples clipped.`,
-    `Levels: threshold ${T.level(r.levels.threshold)} dBFS, peak floor ${T.level(r.levels.floor)} dBFS (median bin ${T.level(r.levels.noiseMedian)} dBFS), tolerance ${T.decibels(r.levels.tolerance)} dB.`,
+    `Levels: threshold ${thresholdText(r)}, peak floor ${T.level(r.levels.floor)} dBFS (median bin ${T.level(r.levels.noiseMedian)} dBFS), tolerance ${T.decibels(r.levels.tolerance)} dB.`,
     `The plan at this rate, no drift: ${plan}, limited by ${r.plan.limitedBy} (margin ${T.frequency(r.plan.worstMargin)}).`,
   ]
     .map(prose)

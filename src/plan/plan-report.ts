@@ -50,6 +50,12 @@ export interface ReportedChannel {
   readonly strongestLevel: Db | null;
   /** Its guard bands below and above, Hz. */
   readonly guard: { readonly below: Hz; readonly above: Hz };
+  /**
+   * How the interferers against this channel were derived (its own threshold,
+   * products listed and pruned); null for a plan built by hand. With one
+   * band it is the report's `derivation`.
+   */
+  readonly derivation: DerivationSummary | null;
 }
 
 /** One channel judged at a candidate's rate: its zone, image, NCO, worst check and the checks against it. */
@@ -250,6 +256,7 @@ export function planReport(
       weakestLevel: plan.weakestLevel ?? null,
       strongestLevel: plan.strongestLevel ?? null,
       guard: { below: plan.guard.low, above: plan.guard.high },
+      derivation: plan.derivation ?? null,
     })),
     weakestLevel: context.weakestLevel ?? null,
     search: { minRate: context.limits.minRate, maxRate: context.limits.maxRate },

@@ -43,7 +43,13 @@ interface Candidate {
 }
 
 let report: {
-  channels: { label: string; low: number; high: number; guard: { below: number; above: number } }[];
+  channels: {
+    label: string;
+    low: number;
+    high: number;
+    guard: { below: number; above: number };
+    derivation: { threshold: number; products: number } | null;
+  }[];
   feasible: { channelZones: number[]; minRate: number; maxRate: number }[];
   candidates: Candidate[];
   best: string | null;
@@ -58,7 +64,7 @@ beforeAll(() => {
 
 describe('solve on a scenario with two channels', () => {
   it('reports both channels and, on every candidate, each channel with the worst at the top', () => {
-    expect(report.channels).toEqual([
+    expect(report.channels.map(({ derivation: _derivation, ...c }) => c)).toEqual([
       { label: 'IF-A', low: 130e6, high: 150e6, weakestLevel: -70, strongestLevel: -1, guard: { below: 2e6, above: 2e6 } },
       { label: 'IF-B', low: 30e6, high: 40e6, weakestLevel: -60, strongestLevel: -20, guard: { below: 1e6, above: 1e6 } },
     ]);
@@ -75,6 +81,18 @@ describe('solve on a scenario with two channels', () => {
       if (c.checksListed === 'all')
         for (const ch of c.channels) for (const k of ch.checks) expect(c.checks.map((x) => x.label)).toContain(`${ch.label}: ${k.label}`);
     }
+  });
+
+  it("states each channel's own blocking threshold (its weakest level less the rejection) in the JSON, the heading and verify", () => {
+    // heron-dual.json: IF-A weakest -70 dBFS, IF-B -60 dBFS; heron-base.json: rejection 10 dB. The threshold is the
+    // weakest wanted level less the required rejection (common practice: a spur that far under the weakest signal is harmless).
+    const expected = { 'IF-A': -80, 'IF-B': -70 } as Record<string, number>;
+    for (const c of report.channels) expect(c.derivation?.threshold).toBe(expected[c.label]);
+    const text = runBin('solve', DUAL, '--width', '100').stdout.replace(/\s+/g, ' ');
+    expect(text).toMatch(/IF-A: \d+ listed, \d+ at or under the threshold -80\.0 dBFS/);
+    expect(text).toMatch(/IF-B: \d+ listed, \d+ at or under the threshold -70\.0 dBFS/);
+    const verify = runBin('verify', DUAL, '--rate', String(report.candidates[0]!.rate), '--samples', '8192');
+    expect(verify.stdout.replace(/\s+/g, ' ')).toContain('threshold -80.0 dBFS (IF-A), -70.0 dBFS (IF-B)');
   });
 
   it('puts each passing interval candidate inside a feasible interval with the same channel zones', () => {
