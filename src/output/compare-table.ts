@@ -4,7 +4,7 @@ import { NOT_PLANNED, type ComparedPart, type CompareReport } from '../plan/comp
 import { textTable, type TextColumn } from './text-table.js';
 import { toCsv } from './csv.js';
 import { filterOrdersText } from './after-rate-words.js';
-import { zoneText } from './plan-table.js';
+import { channelResultCells, zoneText } from './plan-table.js';
 
 const T = quantityText('terminal');
 
@@ -81,12 +81,7 @@ function channelsBlock(report: CompareReport, several: boolean, width: number): 
           first ? String(rank + 1) : '',
           first ? part.label : '',
           ...(several ? [k === 0 ? v.variant : ''] : []),
-          c.label,
-          zoneText(c),
-          c.nco === null ? '–' : T.rate(c.nco),
-          T.frequency(c.worstMargin),
-          c.limitedBy,
-          c.pass ? 'pass' : 'FAIL',
+          ...channelResultCells(c),
         ];
         first = false;
         return cells;

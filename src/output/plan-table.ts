@@ -1,6 +1,6 @@
 import { quantityText, type QuantityText } from '../text/quantity-text.js';
 import { wrapProse } from './wrap-prose.js';
-import type { PlanReport, ReportedCandidate, ReportedCheck } from '../plan/plan-report.js';
+import type { PlanReport, ReportedCandidate, ReportedChannelResult, ReportedCheck } from '../plan/plan-report.js';
 import { textTable, type TextColumn } from './text-table.js';
 import { shiftSection } from './shift-table.js';
 import { afterRateSection } from './after-rate-table.js';
@@ -170,17 +170,7 @@ function channelsSection(report: PlanReport, width: number): string {
     { head: 'limited by', wrap: true },
     { head: 'verdict' },
   ];
-  const rows = shown.flatMap((c, i) =>
-    c.channels.map((ch, k) => [
-      k === 0 ? String(i + 1) : '',
-      ch.label,
-      zoneText(ch),
-      ch.nco === null ? '–' : T.rate(ch.nco),
-      T.frequency(ch.worstMargin),
-      ch.limitedBy,
-      ch.pass ? 'pass' : 'FAIL',
-    ]),
-  );
+  const rows = shown.flatMap((c, i) => c.channels.map((ch, k) => [k === 0 ? String(i + 1) : '', ...channelResultCells(ch)]));
   const title =
     'Each channel at each candidate (# as above; NCO: the channel\'s centre after sampling, "inv": conjugate its output; the channel\'s own worst check):';
   return wrapProse(title, width) + '\n' + textTable(columns, rows, width);
@@ -250,6 +240,26 @@ export function candidateTailCells(c: ReportedCandidate, goal: string, text: Qua
     c.headroomPpm === null ? '–' : text.driftRoom(c.headroomPpm.down, c.headroomPpm.up),
     c.jitterSnrDb === null ? '–' : text.decibels(c.jitterSnrDb),
     c.channelSnrDb === null ? '–' : text.decibels(c.channelSnrDb),
+  ];
+}
+
+/**
+ * One channel at one rate as the terminal tables write it (solve's and compare's channel tables).
+ *
+ * @param ch a channel's result at a candidate's rate
+ * @returns channel, zone, NCO, worst margin, limited by, verdict
+ * @example channelResultCells(candidate.channels[0]) // ['wanted', '2 inv', '46.663556 MHz', '5 MHz', 'Lower adjacent channel', 'pass'] (NCO: 186.663556 − 140 MHz)
+ */
+export function channelResultCells(
+  ch: Pick<ReportedChannelResult, 'label' | 'zone' | 'inverted' | 'nco' | 'worstMargin' | 'limitedBy' | 'pass'>,
+): string[] {
+  return [
+    ch.label,
+    zoneText(ch),
+    ch.nco === null ? '–' : T.rate(ch.nco),
+    T.frequency(ch.worstMargin),
+    ch.limitedBy,
+    ch.pass ? 'pass' : 'FAIL',
   ];
 }
 

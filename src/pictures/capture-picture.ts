@@ -11,6 +11,7 @@ import { failMarker, markerGroup } from './markers.js';
 import { maxHoldColumns } from './max-hold-columns.js';
 import { coveringTicks, linearTicks } from './nice-ticks.js';
 import { channelFill, FILL } from './patterns.js';
+import { channelTag } from './text-on-white.js';
 import { linearScale, type Scale } from './scale.js';
 import { element, pointList, textElement } from './svg-element.js';
 import { clipped, TEXT_DESCENT, textWidth, withMinus } from './typography.js';
@@ -243,14 +244,7 @@ function wantedImage(r: VerifyResult, x: Scale, top: number, bottom: number): { 
       x.range,
       SMALL,
     );
-    const labels = names.map((p) => {
-      const w = p.width + 8;
-      const y0 = bottom - 20 - 16 * p.row;
-      return (
-        element('rect', { x: p.x - w / 2, y: y0, width: w, height: 14, fill: '#fff', stroke: '#1f4e79', 'stroke-width': 0.8 }) +
-        textElement(p.x, y0 + 11, p.text, { 'text-anchor': 'middle', 'font-size': SMALL, 'font-weight': 'bold' })
-      );
-    });
+    const labels = names.map((p) => channelTag(p.x, bottom - 20 - 16 * p.row, p.width, p.text, SMALL));
     return {
       fill: element('g', { class: 'wanted' }, fills.join('')),
       outline: element('g', { class: 'wanted-outline' }, outlines.join('')),

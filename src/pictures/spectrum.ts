@@ -12,6 +12,7 @@ import { clipped, TEXT_DESCENT, textWidth } from './typography.js';
 import { boxSwatch, legendRows } from './legend.js';
 import { coveringTicks, linearTicks } from './nice-ticks.js';
 import { channelFill, FILL } from './patterns.js';
+import { channelTag } from './text-on-white.js';
 import { linearScale, type Scale } from './scale.js';
 import { element, textElement } from './svg-element.js';
 import { svgDocument, type Figure } from './svg-document.js';
@@ -528,14 +529,7 @@ function channelImages(
     x.range,
     SMALL,
   );
-  const names = placed.map((p) => {
-    const w = p.width + 8;
-    const y0 = top + 18 + 16 * p.row;
-    return (
-      element('rect', { x: p.x - w / 2, y: y0, width: w, height: 14, fill: '#fff', stroke: '#1f4e79', 'stroke-width': 0.8 }) +
-      textElement(p.x, y0 + 11, p.text, { 'text-anchor': 'middle', 'font-size': SMALL, 'font-weight': 'bold' })
-    );
-  });
+  const names = placed.map((p) => channelTag(p.x, top + 18 + 16 * p.row, p.width, p.text, SMALL));
   return {
     fill: element('g', { class: 'wanted' }, fills.join('')),
     outline: element('g', { class: 'wanted-outline' }, outlines.join('')),

@@ -42,3 +42,24 @@ export function textOnWhite(
     })
   );
 }
+
+/**
+ * A channel's name in a framed white tag (the spectrum's and the capture's
+ * channel images): bold, centred on x, the frame 4 px wider than the text on
+ * each side.
+ *
+ * @param x centre, px
+ * @param top top of the tag, px (14 px tall)
+ * @param textWidth the name's width, px (as label packing measured it)
+ * @param text the name
+ * @param fontSize px
+ * @returns the frame and the name, as markup
+ * @example channelTag(100, 20, 30, 'IF-A', 9.5).startsWith('<rect x="81" y="20" width="38" height="14"') // true
+ */
+export function channelTag(x: number, top: number, textWidth: number, text: string, fontSize: number): string {
+  const w = textWidth + 8;
+  return (
+    element('rect', { x: x - w / 2, y: top, width: w, height: 14, fill: '#fff', stroke: '#1f4e79', 'stroke-width': 0.8 }) +
+    textElement(x, top + 11, text, { 'text-anchor': 'middle', 'font-size': fontSize, 'font-weight': 'bold' })
+  );
+}
