@@ -5,7 +5,7 @@ import { spectrumSvg } from '../pictures/spectrum.js';
 import { bandPositionSvg } from '../pictures/band-position.js';
 import type { PlanReport, ReportedCandidate } from '../plan/plan-report.js';
 import type { CompareReport } from '../plan/compare-report.js';
-import { candidateTailCells, goalText, zoneText } from './plan-table.js';
+import { candidateTailCells, channelZonesText, feasibleTitle, goalText, windowsTitle, zoneText } from './plan-table.js';
 import { orderedChecks, tiedGroups } from './plan-order.js';
 import { htmlTable } from './html-table.js';
 import { shiftParts } from './shift-table.js';
@@ -176,33 +176,30 @@ function inputsTables(report: PlanReport): string {
 
 function windowsTable(report: PlanReport): string {
   if (report.windows.length === 0) return '<p>No legal window inside the rate range.</p>';
-  const rows = report.windows.map((w) => [
-    String(w.zone),
-    w.inverted ? 'yes' : 'no',
-    T.rateRange(w.minRate, w.maxRate),
-    T.frequency(w.maxRate - w.minRate),
-  ]);
-  return htmlTable(
-    ['zone', 'inverted', 'legal rates', 'width'],
-    rows,
-    'Legal windows (band with guards whole in one zone; rates rounded inward)',
-  );
+  const several = report.channels.length > 1;
+  const rows = report.windows.map((w) => [...zoneCells(report, w), T.rateRange(w.minRate, w.maxRate), T.frequency(w.maxRate - w.minRate)]);
+  return htmlTable([...zoneHeads(several), 'legal rates', 'width'], rows, windowsTitle(several));
 }
 
 function feasibleTable(report: PlanReport): string {
   if (report.feasible.length === 0) return '<p>No feasible interval: every legal rate is blocked.</p>';
+  const several = report.channels.length > 1;
   const rows = report.feasible.map((f) => [
-    String(f.zone),
-    f.inverted ? 'yes' : 'no',
+    ...zoneCells(report, f),
     T.rateRange(f.minRate, f.maxRate),
     T.frequency(f.width),
     T.tolerance(f.widthPpm),
   ]);
-  return htmlTable(
-    ['zone', 'inverted', 'feasible rates', 'width', 'drift at centre'],
-    rows,
-    'Feasible intervals (nothing blocking lands near the band)',
-  );
+  return htmlTable([...zoneHeads(several), 'feasible rates', 'width', 'drift at centre'], rows, feasibleTitle(several));
+}
+
+/** A window's or interval's zone: zone and inversion for one band, every channel's zone for several (as the terminal writes them). */
+function zoneCells(report: PlanReport, w: { zone: number; inverted: boolean; channelZones?: readonly number[] }): string[] {
+  return report.channels.length > 1 ? [channelZonesText(report, w.channelZones)] : [String(w.zone), w.inverted ? 'yes' : 'no'];
+}
+
+function zoneHeads(several: boolean): string[] {
+  return several ? ['channel zones'] : ['zone', 'inverted'];
 }
 
 function candidatesTable(report: PlanReport): string {

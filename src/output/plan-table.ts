@@ -122,10 +122,7 @@ function windowsSection(report: PlanReport, width: number): string {
     { head: 'legal rates', align: 'right' },
     { head: 'width', align: 'right' },
   ];
-  const title = several
-    ? 'Legal windows (every channel with its guards whole in a zone; rates rounded inward):'
-    : 'Legal windows (band with guards whole in one zone; rates rounded inward):';
-  return wrapProse(title, width) + '\n' + textTable(columns, rows, width);
+  return wrapProse(`${windowsTitle(several)}:`, width) + '\n' + textTable(columns, rows, width);
 }
 
 function feasibleSection(report: PlanReport, width: number): string {
@@ -143,16 +140,35 @@ function feasibleSection(report: PlanReport, width: number): string {
     { head: 'width', align: 'right' },
     { head: 'drift at centre', align: 'right' },
   ];
-  const title = several
-    ? 'Feasible intervals (nothing blocking lands near any channel, no channel near another):'
-    : 'Feasible intervals (nothing blocking lands near the band):';
+  const title = `${feasibleTitle(several)}:`;
   return wrapProse(title, width) + '\n' + textTable(columns, rows, width);
 }
 
 const CHANNEL_ZONES: TextColumn = { head: 'channel zones', role: 'key', wrap: true };
 
-/** Each channel's zone at a window or interval, by label: "IF-A 2 inv, IF-B 3". */
-function channelZonesText(report: PlanReport, zones: readonly number[] | undefined): string {
+/** The legal windows' heading, the same in the terminal and on the page. */
+export function windowsTitle(severalChannels: boolean): string {
+  return severalChannels
+    ? 'Legal windows (every channel with its guards whole in a zone; rates rounded inward)'
+    : 'Legal windows (band with guards whole in one zone; rates rounded inward)';
+}
+
+/** The feasible intervals' heading, the same in the terminal and on the page. */
+export function feasibleTitle(severalChannels: boolean): string {
+  return severalChannels
+    ? 'Feasible intervals (nothing blocking lands near any channel, no channel near another)'
+    : 'Feasible intervals (nothing blocking lands near the band)';
+}
+
+/**
+ * Each channel's zone at a window or interval, by label.
+ *
+ * @param report the plan (its channels name the zones)
+ * @param zones each channel's zone, in the channels' order
+ * @returns e.g. "IF-A 2 inv, IF-B 3"
+ * @example channelZonesText(report, [2]) // 'wanted 2 inv'
+ */
+export function channelZonesText(report: PlanReport, zones: readonly number[] | undefined): string {
   return report.channels
     .map((c, i) => `${c.label} ${zoneText({ zone: zones?.[i] ?? null, inverted: (zones?.[i] ?? 1) % 2 === 0 })}`)
     .join(', ');

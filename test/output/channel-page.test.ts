@@ -34,6 +34,20 @@ describe('the review page of two channels', () => {
     expect(html).not.toMatch(/<script|<link|@import|url\((?!#)|src=/i);
   });
 
+  it("writes every channel's zone in the windows and feasible tables, by the zone rule at each interval's middle rate", () => {
+    const zoneAt = (f: number, r: number) => Math.floor((2 * f) / r) + 1;
+    for (const f of report.feasible) {
+      const mid = (f.minRate + f.maxRate) / 2;
+      const cell = TWO_CHANNELS.map((c) => {
+        const zone = zoneAt((c.low + c.high) / 2, mid);
+        return `${c.label} ${zone}${zone % 2 === 0 ? ' inv' : ''}`;
+      }).join(', ');
+      expect(html).toContain(`<td>${cell}</td>`);
+    }
+    expect(html).toContain('<th>channel zones</th>');
+    expect(html).not.toContain('Legal windows (band with guards whole in one zone');
+  });
+
   it('gives each channel its own figures after the rate and its own filter mask', () => {
     const best = report.candidates.find((c) => c.label === report.best)!;
     for (const channel of TWO_CHANNELS) {
